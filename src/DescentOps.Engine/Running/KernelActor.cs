@@ -1,0 +1,135 @@
+using Akka.Actor;
+using DescentOps.Primitives.Identity;
+
+namespace DescentOps.Engine.Running;
+
+/// <summary>
+/// The coordinator: a thin shell around <see cref="KernelCore"/> that sends each instant's events to the
+/// component actors and collects their acknowledgements. A component actor that dies outside its handler
+/// (which the host's own catch should make impossible) ends the run as a kernel fault instead of a hang.
+/// </summary>
+internal sealed class KernelActor : UntypedActor
+{
+    private readonly KernelSetup _setup;
+    private readonly TaskCompletionSource<RunResult> _completion;
+    private readonly Dictionary<ComponentId, IActorRef> _actors = [];
+    private readonly List<EventResult[]> _acks = [];
+    private KernelCore? _core;
+    private long _round;
+    private int _awaiting;
+
+    public KernelActor(KernelSetup setup, TaskCompletionSource<RunResult> completion)
+    {
+        _setup = setup;
+        _completion = completion;
+    }
+
+    protected override SupervisorStrategy SupervisorStrategy() =>
+        new OneForOneStrategy(_ => Directive.Stop);
+
+    protected override void PreStart()
+    {
+        try
+        {
+            _core = new KernelCore(_setup);
+            foreach (var component in _setup.Components)
+            {
+                var host = new ComponentHost(component, _setup.Seed);
+                var actor = Context.ActorOf(Props.Create(() => new ComponentActor(host)), "c-" + component.Id.Name);
+                Context.Watch(actor);
+                _actors.Add(component.Id, actor);
+            }
+        }
+#pragma warning disable CA1031 // Report every setup failure through the task instead of a dead actor.
+        catch (Exception exception)
+#pragma warning restore CA1031
+        {
+            _completion.TrySetException(exception);
+            Context.Stop(Self);
+            return;
+        }
+
+        Self.Tell(NextRound.Instance);
+    }
+
+    protected override void OnReceive(object message)
+    {
+        switch (message)
+        {
+            case NextRound:
+                BeginRound();
+                break;
+            case ComponentActor.BatchHandled handled when handled.Round == _round:
+                _acks.Add(handled.Results);
+                if (--_awaiting == 0) Commit();
+                break;
+            case Terminated terminated when _completion.Task.IsCompleted is false:
+                _core!.Abort(RunOutcomeKind.KernelFault, $"component actor {terminated.ActorRef.Path.Name} stopped outside its handler");
+                Complete();
+                break;
+            default:
+                Unhandled(message);
+                break;
+        }
+    }
+
+    private void BeginRound()
+    {
+        try
+        {
+            if (!_core!.TryBeginRound(out var batches))
+            {
+                Complete();
+                return;
+            }
+
+            _round++;
+            _acks.Clear();
+            _awaiting = batches.Count;
+            foreach (var (target, events) in batches)
+            {
+                _actors[target].Tell(new ComponentActor.DeliverBatch(_round, _core.Now, events));
+            }
+        }
+#pragma warning disable CA1031
+        catch (Exception exception)
+#pragma warning restore CA1031
+        {
+            Fail(exception);
+        }
+    }
+
+    private void Commit()
+    {
+        try
+        {
+            _core!.CommitRound(_acks);
+        }
+#pragma warning disable CA1031 // A journal that cannot be written ends the run; the caller sees the exception.
+        catch (Exception exception)
+#pragma warning restore CA1031
+        {
+            Fail(exception);
+            return;
+        }
+
+        Self.Tell(NextRound.Instance);
+    }
+
+    private void Complete()
+    {
+        _completion.TrySetResult(_core!.Result());
+        Context.Stop(Self);
+    }
+
+    private void Fail(Exception exception)
+    {
+        _completion.TrySetException(exception);
+        Context.Stop(Self);
+    }
+
+    private sealed record NextRound
+    {
+        public static NextRound Instance { get; } = new();
+    }
+}
