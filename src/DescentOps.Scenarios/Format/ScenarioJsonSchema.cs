@@ -1,6 +1,5 @@
 using System.Text.Json;
 using System.Text.Json.Nodes;
-using System.Text.RegularExpressions;
 
 namespace DescentOps.Scenarios.Format;
 
@@ -9,7 +8,7 @@ namespace DescentOps.Scenarios.Format;
 /// so editors that validate YAML against a JSON Schema complete and check scenario files. Quantities are
 /// strings "number unit"; the schema checks their shape, the loader checks dimension and range.
 /// </summary>
-public static partial class ScenarioJsonSchema
+public static class ScenarioJsonSchema
 {
     public static string Generate()
     {

@@ -113,6 +113,11 @@ public static class ScenarioLoader
             {
                 errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a power_dip needs a duration"));
             }
+
+            if (scenario.Faults[i].Kind == FaultKind.TetherBreak && scenario.Faults[i].DurationS is not null)
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a broken fibre does not heal: a tether_break takes no duration"));
+            }
         }
     }
 

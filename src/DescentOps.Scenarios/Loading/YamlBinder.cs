@@ -1,7 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
 using DescentOps.Scenarios.Format;
-using UnitsNet;
 using YamlDotNet.RepresentationModel;
 
 namespace DescentOps.Scenarios.Loading;
@@ -104,16 +103,12 @@ internal sealed partial class YamlBinder
     private object? BindQuantity(YamlNode node, QuantityField spec, string path)
     {
         if (Scalar(node, path, $"a quantity with a unit ({spec.Kind.ExampleUnits()})") is not { } text) return null;
-        if (!Quantity.TryParse(CultureInfo.InvariantCulture, spec.Kind.UnitsNetType(), text.Trim(), out IQuantity? quantity))
+        if (!QuantityParser.TryParseSi(spec.Kind, text, out var si, out var error))
         {
-            var hint = NumberOnly().IsMatch(text.Trim())
-                ? $"a unit is required, e.g. '{text.Trim()} {spec.Kind.ExampleUnits().Split(',')[0]}'"
-                : $"'{text}' is not a {spec.Kind.ToString().ToLowerInvariant()} (units: {spec.Kind.ExampleUnits()})";
-            Error(node, path, hint);
+            Error(node, path, error);
             return null;
         }
 
-        var si = ToSi(quantity);
         return CheckRange(node, path, si, spec.MinSi, spec.MaxSi, spec.MinExclusive, spec.Kind.SiSymbol()) ? si : null;
     }
 
@@ -184,12 +179,6 @@ internal sealed partial class YamlBinder
         return false;
     }
 
-    private static double ToSi(IQuantity quantity)
-    {
-        var baseUnit = quantity.QuantityInfo.BaseUnitInfo.Value;
-        return (double)UnitConverter.Convert(quantity.Value, quantity.Unit, baseUnit);
-    }
-
     private static bool IsNull(YamlNode node) =>
         node is YamlScalarNode { Style: YamlDotNet.Core.ScalarStyle.Plain, Value: null or "" or "~" or "null" };
 
@@ -208,9 +197,6 @@ internal sealed partial class YamlBinder
     private static string Join(string path, string name) => path.Length == 0 ? name : path + "." + name;
 
     private static string Format(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
-
-    [GeneratedRegex(@"^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$")]
-    private static partial Regex NumberOnly();
 
     [GeneratedRegex(TextField.IdentifierPattern)]
     private static partial Regex Identifier();
