@@ -12,17 +12,20 @@ namespace DescentOps.Mission.Vehicles;
 /// </summary>
 public sealed class VehicleComponent : SimComponent<VehicleState>
 {
+    /// <summary>Slowest leg speed as a share of the nominal one, so that a wild draw cannot stall a leg forever.</summary>
+    private const double MinimumSpeedShare = 0.2;
+
     private readonly VehicleModel _vehicle;
-    private readonly double _legSeconds;
-    private readonly double _legEnergyJ;
 
     public VehicleComponent(VehicleModel vehicle)
         : base(MissionIds.Vehicle(vehicle.Name), FailurePolicy.RestartFromLastState)
     {
         _vehicle = vehicle;
-        _legSeconds = vehicle.ProfileDepthM / vehicle.SpeedMPerS;
-        _legEnergyJ = (vehicle.HotelPowerW + vehicle.PropulsionPowerW) * _legSeconds;
+        NominalLegEnergyJ = (vehicle.HotelPowerW + vehicle.PropulsionPowerW) * vehicle.ProfileDepthM / vehicle.SpeedMPerS;
     }
+
+    /// <summary>Energy of one leg at the nominal speed: what the vehicle budgets before it starts a profile.</summary>
+    public double NominalLegEnergyJ { get; }
 
     public override VehicleState InitialState => new(false, false, false, _vehicle.BatteryEnergyJ, 0, 0.0);
 
@@ -62,7 +65,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     {
         var reserveJ = _vehicle.ReserveFraction * _vehicle.BatteryEnergyJ;
         // A profile is only started if both its legs fit above the reserve: the vehicle must be able to come back up.
-        var needed = state.Descending ? 2 * _legEnergyJ : _legEnergyJ;
+        var needed = state.Descending ? 2 * NominalLegEnergyJ : NominalLegEnergyJ;
         if (state.BatteryJ - needed < reserveJ)
         {
             context.Record("vehicle.task_complete", Severity.Notice,
@@ -74,7 +77,10 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             return state with { Finished = true };
         }
 
-        context.ScheduleSelf(SimDuration.FromSeconds(_legSeconds), new VehicleLegDone(_legEnergyJ), MissionPriority.Physics);
+        var speed = _vehicle.SpeedMPerS * Math.Max(MinimumSpeedShare, 1.0 + (_vehicle.SpeedVariation * context.Random.NextNormal(0.0, 1.0)));
+        var seconds = _vehicle.ProfileDepthM / speed;
+        var energy = (_vehicle.HotelPowerW + _vehicle.PropulsionPowerW) * seconds;
+        context.ScheduleSelf(SimDuration.FromSeconds(seconds), new VehicleLegDone(energy), MissionPriority.Physics);
         return state;
     }
 }

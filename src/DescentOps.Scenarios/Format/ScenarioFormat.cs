@@ -64,6 +64,7 @@ public static class ScenarioFormat
                 new QuantityField("propulsion_power", "Power drawn by propulsion while moving.", Power, 0, 1e5),
                 new QuantityField("speed", "Speed through the water while profiling.", Speed, 0, 10, MinExclusive: true),
                 new QuantityField("profile_depth", "Depth below the ice of each water-column profile.", Length, 0, 100_000, MinExclusive: true),
+                new NumberField("speed_variation", "Standard deviation of the speed made good over one leg, as a share of the speed (currents); 0 for none.", 0, 0.5, Required: false),
             ]), MinItems: 0, MaxItems: 16, Required: false),
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [

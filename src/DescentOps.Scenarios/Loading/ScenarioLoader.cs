@@ -32,14 +32,22 @@ public static class ScenarioLoader
     {
         var errors = new List<ScenarioError>();
         var stream = new YamlStream();
+        var parser = new Parser(new StringReader(text));
         try
         {
-            stream.Load(new StringReader(text));
+            stream.Load(parser);
         }
         catch (YamlException exception)
         {
             var message = exception.InnerException?.Message ?? exception.Message;
             throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)exception.Start.Line, (int)exception.Start.Column), "", $"YAML syntax: {Trim(message)}")]);
+        }
+        catch (InvalidOperationException exception)
+        {
+            // The YAML scanner throws this bare exception for some malformed flow collections; the parser's
+            // last good token is then the best location there is.
+            var mark = parser.Current?.End ?? Mark.Empty;
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", $"YAML syntax: {exception.Message}")]);
         }
 
         if (stream.Documents.Count != 1)
@@ -91,7 +99,8 @@ public static class ScenarioLoader
                 v.Quantity("hotel_power"),
                 v.Quantity("propulsion_power"),
                 v.Quantity("speed"),
-                v.Quantity("profile_depth")))],
+                v.Quantity("profile_depth"),
+                v.OptionalNumber("speed_variation") ?? 0.0))],
             [.. root.List("faults").Select(f => new FaultModel(
                 f.Text("name"),
                 ParseFaultKind(f.Text("kind")),

@@ -1,6 +1,10 @@
 namespace DescentOps.Scenarios.Model;
 
-/// <summary>A vehicle carried by the probe and released at breakthrough to profile the water column.</summary>
+/// <summary>
+/// A vehicle carried by the probe and released at breakthrough to profile the water column.
+/// <see cref="SpeedVariation"/> is the standard deviation, as a fraction of the speed, of the speed made good
+/// over one leg: currents under the ice help on some legs and hinder on others.
+/// </summary>
 public sealed record VehicleModel(
     string Name,
     double BatteryEnergyJ,
@@ -8,4 +12,5 @@ public sealed record VehicleModel(
     double HotelPowerW,
     double PropulsionPowerW,
     double SpeedMPerS,
-    double ProfileDepthM);
+    double ProfileDepthM,
+    double SpeedVariation);
