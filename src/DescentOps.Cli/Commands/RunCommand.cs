@@ -21,6 +21,14 @@ public static class RunCommand
             Description = "Scenario file, or the name of a built-in scenario; the built-in default when omitted.",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        // Without this, a mistyped option ("--sed") would be taken for a scenario file name.
+        scenarioArgument.Validators.Add(result =>
+        {
+            if (result.GetValueOrDefault<string?>() is { } value && value.StartsWith('-'))
+            {
+                result.AddError($"Unknown option '{value}'.");
+            }
+        });
         var seedOption = new Option<long?>("--seed") { Description = "Seed of the run's random streams (default: the scenario's run.seed)." };
         var untilOption = new Option<string?>("--until") { Description = "Simulated time limit with a unit, e.g. '120 d' (default: the scenario's run.until)." };
         var logOption = new Option<string?>("--log") { Description = "Where to write the event log (default: logs/<scenario>-seed<N>.jsonl)." };
@@ -43,6 +51,10 @@ public static class RunCommand
         return command;
     }
 
+    /// <summary>The manifest of a run: with the binary, all a rerun needs to reproduce the log byte for byte.</summary>
+    public static RunManifest ManifestFor(Scenario scenario, long seed, double untilS) =>
+        new(ToolInfo.Version, scenario.Name, scenario.SourceText, seed, untilS, RandomStream.AlgorithmName);
+
     private static async Task<int> ExecuteAsync(string? scenarioArgument, long? seedOverride, string? untilText, string? logPath, KernelChoice kernel)
     {
         var scenario = ScenarioSource.Load(scenarioArgument);
@@ -58,7 +70,7 @@ public static class RunCommand
 
         var path = Path.GetFullPath(logPath ?? Path.Combine("logs", $"{scenario.Name}-seed{seed}.jsonl"));
         Directory.CreateDirectory(Path.GetDirectoryName(path)!);
-        var manifest = new RunManifest(ToolInfo.Version, scenario.Name, scenario.SourceText, seed, untilS, RandomStream.AlgorithmName);
+        var manifest = ManifestFor(scenario, seed, untilS);
 
         Console.Out.WriteLine($"DescentOps {ToolInfo.Version}: scenario '{scenario.Name}' ({scenario.SourceName}), seed {seed}, until {untilS / 86400:0.###} d");
         var progress = new ProgressLine();

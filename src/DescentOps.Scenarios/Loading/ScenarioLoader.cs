@@ -42,12 +42,12 @@ public static class ScenarioLoader
             var message = exception.InnerException?.Message ?? exception.Message;
             throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)exception.Start.Line, (int)exception.Start.Column), "", $"YAML syntax: {Trim(message)}")]);
         }
-        catch (InvalidOperationException exception)
+        catch (InvalidOperationException)
         {
             // The YAML scanner throws this bare exception for some malformed flow collections; the parser's
             // last good token is then the best location there is.
             var mark = parser.Current?.End ?? Mark.Empty;
-            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", $"YAML syntax: {exception.Message}")]);
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", "YAML syntax: a flow collection ('[...]' or '{...}') is not closed or is malformed near here")]);
         }
 
         if (stream.Documents.Count != 1)
