@@ -28,4 +28,7 @@ public enum ExitCode
 
     /// <summary>A file could not be read or written.</summary>
     IoError = 7,
+
+    /// <summary><c>replay</c> (or <c>diff</c>) found the two runs different.</summary>
+    RunsDiffer = 8,
 }

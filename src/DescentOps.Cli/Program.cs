@@ -7,6 +7,7 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
 {
     RunCommand.Create(),
     VerifyCommand.Create(),
+    ReplayCommand.Create(),
     SchemaCommand.Create(),
 };
 
@@ -26,6 +27,11 @@ catch (ScenarioException exception)
 {
     foreach (var error in exception.Errors) Console.Error.WriteLine($"error: {error}");
     return (int)ExitCode.InvalidInput;
+}
+catch (LogIntegrityException exception)
+{
+    Console.Error.WriteLine($"descentops: {exception.Message}");
+    return (int)ExitCode.VerificationFailed;
 }
 catch (UsageException exception)
 {

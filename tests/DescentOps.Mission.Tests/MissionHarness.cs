@@ -1,4 +1,5 @@
 using DescentOps.Cli.Commands;
+using DescentOps.Cli.Running;
 using DescentOps.Journal;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
@@ -37,8 +38,7 @@ internal static class MissionHarness
         using var stream = new MemoryStream();
         using (var writer = JournalWriter.Create(stream, RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS)))
         {
-            var summary = await MissionRunner.RunAsync(scenario, seed, scenario.Run.UntilS, writer, kernel);
-            writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
+            await JournaledRun.RunAsync(scenario, RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS), writer, kernel);
         }
 
         return stream.ToArray();

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Diagnostics;
 using System.Globalization;
+using DescentOps.Cli.Running;
 using DescentOps.Cli.Terminal;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
@@ -80,13 +81,7 @@ public static class RunCommand
         {
             try
             {
-                summary = await MissionRunner.RunAsync(scenario, seed, untilS, writer, kernel, progress.Report).ConfigureAwait(false);
-                writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
-            }
-            catch
-            {
-                writer.Abandon();
-                throw;
+                summary = await JournaledRun.RunAsync(scenario, manifest, writer, kernel, progress.Report).ConfigureAwait(false);
             }
             finally
             {

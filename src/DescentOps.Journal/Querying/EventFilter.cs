@@ -1,0 +1,43 @@
+using DescentOps.Engine.Journaling;
+
+namespace DescentOps.Journal.Querying;
+
+/// <summary>
+/// Which events to keep. Kinds and sources match exactly, or by prefix when the pattern ends in '.' or '*'
+/// ("tether." keeps every tether event). Times are simulated seconds, inclusive. <see cref="Field"/> keeps
+/// events that carry that data field (a telemetry point such as depth_m).
+/// </summary>
+public sealed record EventFilter(
+    IReadOnlyList<string> Kinds,
+    IReadOnlyList<string> Sources,
+    Severity MinimumSeverity = Severity.Debug,
+    double FromS = double.NegativeInfinity,
+    double ToS = double.PositiveInfinity,
+    string? Field = null)
+{
+    public static EventFilter All { get; } = new([], []);
+
+    public bool Matches(EventEntry entry) =>
+        entry.Severity >= MinimumSeverity
+        && entry.TimeSeconds >= FromS
+        && entry.TimeSeconds <= ToS
+        && MatchesAny(Kinds, entry.Kind)
+        && MatchesAny(Sources, entry.Source)
+        && (Field is null || entry.Data.Any(f => f.Name == Field));
+
+    private static bool MatchesAny(IReadOnlyList<string> patterns, string value)
+    {
+        if (patterns.Count == 0) return true;
+        foreach (var pattern in patterns)
+        {
+            if (pattern.EndsWith('*') ? value.StartsWith(pattern[..^1], StringComparison.Ordinal)
+                : pattern.EndsWith('.') ? value.StartsWith(pattern, StringComparison.Ordinal)
+                : value == pattern)
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+}
