@@ -32,7 +32,8 @@ public static class IdealMeltRate
     /// Axial melt velocity, m/s, for head power in watts and radius in metres. Ice density at T∞, sensible heat
     /// h(Tm) − h(T∞) from IAPWS R10-06 and latent heat at Tm from <see cref="FusionLatentHeat"/>, all evaluated at the
     /// triple-point pressure, where every Tm up to 273.16 K is a valid ice state (the pressure effect on these
-    /// differences is below 1e-4 relative up to 1 MPa). Ice warmer than Tm needs no sensible heat.
+    /// differences is below 1e-4 relative up to 1 MPa). Ice warmer than Tm needs no sensible heat. Tm must lie in
+    /// [269, 273.16] K, the range of the latent-heat model; the efficiency in [0, 1].
     /// </summary>
     public static double VelocityMPerS(double headPowerW, double radiusM, double farFieldTemperatureK, double meltingTemperatureK, double efficiency)
     {
