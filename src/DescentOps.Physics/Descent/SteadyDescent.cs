@@ -1,0 +1,101 @@
+using DescentOps.Physics.Ice;
+using DescentOps.Physics.Water;
+
+namespace DescentOps.Physics.Descent;
+
+/// <summary>
+/// Steady descent of a cylindrical melt probe through ice at a far-field temperature (reference note §4):
+/// close-contact melting at the head (<see cref="CloseContactMelting"/>), conduction loss through the side wall of a
+/// moving cylinder (<see cref="LateralConduction"/>), and the stall limit (<see cref="StallLimit"/>).
+/// </summary>
+/// <remarks>
+/// Modelling choices and sources:
+/// <list type="bullet">
+/// <item>Ice: density, sensible heat h(T_m) − h(T∞) from IAPWS R10-06 at the given pressure; T_m from IAPWS R14-08
+/// (pure ice); L from <see cref="FusionLatentHeat"/> at that pressure.</item>
+/// <item>Conductivity for Φ: k = 651/T (Petrenko and Whitworth 1999), the closed form the reference note uses for the
+/// probe (MODEL; the fits differ by ±15 %).</item>
+/// <item>Efficiency: not a parameter. The head's loss is the film superheat (fraction ½ carried away, MODEL); the
+/// side's loss follows from the wall conduction. v/v0 is the head efficiency.</item>
+/// <item>Load on the film: weight less buoyancy of the displaced meltwater, F = (m − ρ_w πR²ℓ) g; tether tension zero
+/// (the tether pays out from the probe) (MODEL).</item>
+/// <item>Lateral loss with κ_eff = Φ/(ρ_i Δh_s) (MODEL). The wall is held at T_m by the film water's superheat plus the
+/// wall heaters; if they fall short, the wall takes only what they supply and the rest of it refreezes onto the
+/// probe: <see cref="DescentSolution.WallPowerSufficient"/> is false (MODEL).</item>
+/// <item>Stall: when head plus wall power is at most C·Φ (C the capacitance of the prolate spheroid with semi-axes
+/// ℓ/2 and R), the probe cannot hold its surface at T_m, does not move, and all power is conducted away (MODEL after
+/// Lorenz 2012). The transition between the two branches is not resolved.</item>
+/// </list>
+/// </remarks>
+public static class SteadyDescent
+{
+    private const string Model = "the steady descent model";
+
+    public static DescentSolution Solve(ProbeGeometry geometry, double headPowerW, double wallPowerW, double farFieldTemperatureK, double pressurePa, double gravityMPerS2)
+    {
+        ArgumentNullException.ThrowIfNull(geometry);
+        var radiusM = ValidRange.RequirePositive(geometry.RadiusM, nameof(geometry.RadiusM), "m", Model);
+        var lengthM = ValidRange.RequirePositive(geometry.LengthM, nameof(geometry.LengthM), "m", Model);
+        ValidRange.RequirePositive(geometry.MassKg, nameof(geometry.MassKg), "kg", Model);
+        ValidRange.Require(headPowerW, 0.0, 1e9, nameof(headPowerW), "W", Model);
+        ValidRange.Require(wallPowerW, 0.0, 1e9, nameof(wallPowerW), "W", Model);
+        ValidRange.Require(pressurePa, TriplePoint.PressurePa, FusionLatentHeat.MaximumPressurePa, nameof(pressurePa), "Pa", Model + " (liquid meltwater needs p ≥ p_t; latent heat trusted to 50 MPa)");
+        ValidRange.Require(gravityMPerS2, 1e-3, 30.0, nameof(gravityMPerS2), "m/s²", Model);
+
+        var meltingK = MeltingCurve.TemperatureK(pressurePa);
+        ValidRange.Require(farFieldTemperatureK, IceConductivity.MinimumTemperatureK(IceConductivityFit.PetrenkoWhitworth1999), meltingK, nameof(farFieldTemperatureK), "K", Model + " (ice below its melting point)");
+
+        var loadN = (geometry.MassKg - (LiquidWater.DensityKgPerM3 * geometry.VolumeM3)) * gravityMPerS2;
+        if (loadN <= 0)
+        {
+            throw new ArgumentOutOfRangeException(
+                nameof(geometry),
+                geometry,
+                FormattableString.Invariant($"The probe's net load {loadN:R} N is outside the valid range (0, +inf) N of {Model}: a probe lighter than the water it displaces floats off the ice."));
+        }
+
+        var iceDensity = IceIh.DensityKgPerM3(farFieldTemperatureK, pressurePa);
+        var sensiblePerKg = IceIh.SensibleHeatJPerKg(farFieldTemperatureK, meltingK, pressurePa);
+        var latentPerKg = FusionLatentHeat.AtPressureJPerKg(pressurePa);
+        var phi = IceConductivity.KirchhoffPotentialWPerM(farFieldTemperatureK, meltingK, IceConductivityFit.PetrenkoWhitworth1999);
+        var area = geometry.HeadAreaM2;
+        var idealVelocity = headPowerW / (area * iceDensity * (latentPerKg + sensiblePerKg));
+
+        var stallPower = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(radiusM, lengthM), phi);
+        var totalIn = headPowerW + wallPowerW;
+        if (headPowerW == 0 || totalIn <= stallPower)
+        {
+            return new DescentSolution(0.0, 0.0, 0.0, totalIn, headPowerW, wallPowerW, 0.0, false)
+            {
+                LateralDemandW = stallPower,
+                RequiredWallPowerW = headPowerW == 0 ? double.PositiveInfinity : Math.Max(0, stallPower - headPowerW),
+                IdealVelocityMPerS = idealVelocity,
+                Stalled = true,
+            };
+        }
+
+        var head = CloseContactMelting.AtConstantPower(headPowerW / area, radiusM, loadN, iceDensity, latentPerKg + sensiblePerKg);
+        var massRate = iceDensity * area * head.VelocityMPerS;
+        var sensibleW = massRate * sensiblePerKg;
+        var latentW = massRate * latentPerKg;
+        var filmW = massRate * CloseContactMelting.DefaultSuperheatFraction * LiquidWater.SpecificHeatJPerKgK * head.FilmSuperheatK;
+
+        var kappa = LateralConduction.EffectiveDiffusivityM2PerS(phi, iceDensity, sensiblePerKg);
+        var demand = LateralConduction.LossW(lengthM, head.VelocityMPerS, radiusM, phi, kappa);
+        var required = Math.Max(0.0, demand - filmW);
+        var sufficient = wallPowerW >= required;
+        var lateral = sufficient ? demand : filmW + wallPowerW;
+        var surplus = filmW + wallPowerW - lateral;
+
+        return new DescentSolution(head.VelocityMPerS, sensibleW, latentW, lateral, headPowerW, wallPowerW, head.FilmThicknessM, sufficient)
+        {
+            FilmSuperheatW = filmW,
+            WallSurplusW = surplus,
+            LateralDemandW = demand,
+            RequiredWallPowerW = required,
+            HeadSuperheatK = head.FilmSuperheatK,
+            IdealVelocityMPerS = idealVelocity,
+            Stalled = false,
+        };
+    }
+}

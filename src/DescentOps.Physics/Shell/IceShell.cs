@@ -1,0 +1,151 @@
+namespace DescentOps.Physics.Shell;
+
+/// <summary>
+/// A conductive ice shell for scenarios: surface temperature, thickness, the body's gravity, salty layers and debris
+/// bands. The base sits at the (saline) pressure-melting point of the pressure the shell itself exerts there; the
+/// temperature profile is the k = a/T flat lid between the two (<see cref="PlaneConductiveLid"/>). Base temperature
+/// and pressure depend on each other, so they are iterated to 1e-6 K (it converges in two or three passes).
+/// </summary>
+/// <remarks>
+/// MODEL: purely conductive, no internal (tidal) heating, no convecting sublayer; a salty layer changes the melting
+/// point, not the conductivity; debris changes nothing thermal here, it is carried for the probe's debris load.
+/// </remarks>
+public sealed class IceShell
+{
+    private const string Model = "the ice shell";
+    private readonly double[] pressureProfilePa;
+    private readonly IceLayer[] layers;
+    private readonly DebrisBand[] debrisBands;
+
+    public IceShell(
+        double surfaceTemperatureK,
+        double thicknessM,
+        double gravityMPerS2,
+        double surfacePressurePa = 0.0,
+        IReadOnlyList<IceLayer>? layers = null,
+        IReadOnlyList<DebrisBand>? debrisBands = null,
+        double conductivityCoefficientWPerM = Ice.IceConductivity.ReciprocalCoefficientWPerM,
+        int integrationSteps = HydrostaticPressure.DefaultSteps)
+    {
+        ThicknessM = ValidRange.RequirePositive(thicknessM, nameof(thicknessM), "m", Model);
+        GravityMPerS2 = ValidRange.RequirePositive(gravityMPerS2, nameof(gravityMPerS2), "m/s²", Model);
+        SurfacePressurePa = surfacePressurePa;
+        this.layers = CheckIntervals(layers ?? [], l => (l.TopDepthM, l.BottomDepthM), nameof(layers));
+        foreach (var l in this.layers) ValidRange.Require(l.SalinityGPerKg, 0.0, 40.0, nameof(IceLayer.SalinityGPerKg), "g/kg", Model);
+        this.debrisBands = CheckIntervals(debrisBands ?? [], b => (b.TopDepthM, b.BottomDepthM), nameof(debrisBands));
+        foreach (var b in this.debrisBands) ValidRange.Require(b.DebrisVolumeFraction, 0.0, 0.99, nameof(DebrisBand.DebrisVolumeFraction), "", Model);
+
+        var baseSalinity = SalinityGPerKg(thicknessM);
+        var meanDensityGuess = 920.0;
+        var baseK = SalineIce.MeltingTemperatureK(baseSalinity, HydrostaticPressure.ConstantDensityPa(meanDensityGuess, thicknessM, gravityMPerS2, surfacePressurePa));
+        PlaneConductiveLid lid;
+        double[] profile;
+        var iterations = 0;
+        while (true)
+        {
+            lid = new PlaneConductiveLid(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM);
+            profile = HydrostaticPressure.Profile(lid.TemperatureK, thicknessM, gravityMPerS2, surfacePressurePa, integrationSteps);
+            var next = SalineIce.MeltingTemperatureK(baseSalinity, profile[^1]);
+            var change = Math.Abs(next - baseK);
+            baseK = next;
+            if (change < 1e-6 || ++iterations >= 20) break;
+        }
+
+        Lid = new PlaneConductiveLid(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM);
+        pressureProfilePa = profile;
+    }
+
+    public double ThicknessM { get; }
+
+    public double GravityMPerS2 { get; }
+
+    public double SurfacePressurePa { get; }
+
+    public double SurfaceTemperatureK => Lid.SurfaceTemperatureK;
+
+    /// <summary>Pressure-melting temperature at the base, with the base layer's salt.</summary>
+    public double BaseTemperatureK => Lid.BaseTemperatureK;
+
+    public double BasePressurePa => pressureProfilePa[^1];
+
+    public double HeatFluxWPerM2 => Lid.HeatFluxWPerM2;
+
+    public PlaneConductiveLid Lid { get; }
+
+    public IReadOnlyList<IceLayer> Layers => layers;
+
+    public IReadOnlyList<DebrisBand> DebrisBands => debrisBands;
+
+    public double TemperatureK(double depthM) => Lid.TemperatureK(depthM);
+
+    /// <summary>Hydrostatic pressure, linear between the integration nodes.</summary>
+    public double PressurePa(double depthM)
+    {
+        ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
+        var x = depthM / ThicknessM * (pressureProfilePa.Length - 1);
+        var i = Math.Min((int)x, pressureProfilePa.Length - 2);
+        var f = x - i;
+        return (pressureProfilePa[i] * (1 - f)) + (pressureProfilePa[i + 1] * f);
+    }
+
+    /// <summary>Salinity of the layer at a depth; ice outside every layer is pure.</summary>
+    public double SalinityGPerKg(double depthM)
+    {
+        ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
+        foreach (var l in layers)
+        {
+            if (depthM >= l.TopDepthM && depthM <= l.BottomDepthM) return l.SalinityGPerKg;
+        }
+
+        return 0.0;
+    }
+
+    /// <summary>Melting temperature of the ice at a depth (saline, pressure-dependent). Needs liquid to be possible: p ≥ p_t.</summary>
+    public double MeltingTemperatureK(double depthM) => SalineIce.MeltingTemperatureK(SalinityGPerKg(depthM), PressurePa(depthM));
+
+    public double DebrisVolumeFraction(double depthM)
+    {
+        ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
+        foreach (var b in debrisBands)
+        {
+            if (depthM >= b.TopDepthM && depthM <= b.BottomDepthM) return b.DebrisVolumeFraction;
+        }
+
+        return 0.0;
+    }
+
+    /// <summary>
+    /// Thickness of the debris layer a probe collects on its head between two depths, h_d = ∫φ_d dz/(1 − n_p)
+    /// (RULE: all released debris settles in the melt pocket as a deposit of porosity n_p, default 0.4).
+    /// </summary>
+    public double AccumulatedDebrisThicknessM(double fromDepthM, double toDepthM, double depositPorosity = 0.4)
+    {
+        ValidRange.Require(fromDepthM, 0.0, ThicknessM, nameof(fromDepthM), "m", Model);
+        ValidRange.Require(toDepthM, fromDepthM, ThicknessM, nameof(toDepthM), "m", Model);
+        ValidRange.Require(depositPorosity, 0.0, 0.95, nameof(depositPorosity), "", Model);
+        var volume = 0.0;
+        foreach (var b in debrisBands)
+        {
+            var overlap = Math.Min(toDepthM, b.BottomDepthM) - Math.Max(fromDepthM, b.TopDepthM);
+            if (overlap > 0) volume += overlap * b.DebrisVolumeFraction;
+        }
+
+        return volume / (1.0 - depositPorosity);
+    }
+
+    private T[] CheckIntervals<T>(IReadOnlyList<T> items, Func<T, (double Top, double Bottom)> bounds, string name)
+    {
+        var sorted = items.OrderBy(i => bounds(i).Top).ToArray();
+        var previousBottom = double.NegativeInfinity;
+        foreach (var item in sorted)
+        {
+            var (top, bottom) = bounds(item);
+            ValidRange.Require(top, 0.0, ThicknessM, name + ".TopDepthM", "m", Model);
+            ValidRange.Require(bottom, top, ThicknessM, name + ".BottomDepthM", "m", Model);
+            if (top < previousBottom) throw new ArgumentException($"The intervals in {name} overlap.", name);
+            previousBottom = bottom;
+        }
+
+        return sorted;
+    }
+}
