@@ -8,6 +8,8 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     RunCommand.Create(),
     VerifyCommand.Create(),
     ReplayCommand.Create(),
+    DiffCommand.Create(),
+    EventsCommand.Create(),
     SchemaCommand.Create(),
 };
 

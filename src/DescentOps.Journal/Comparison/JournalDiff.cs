@@ -18,8 +18,7 @@ public sealed record JournalDiff(
     private static readonly string[] NameFields = ["fault", "rule"];
 
     public bool Identical =>
-        FirstEventDivergence is null && CountDifferences.Count == 0 && SummaryA?.Summary == SummaryB?.Summary
-        && SameData(SummaryA, SummaryB);
+        FirstEventDivergence is null && CountDifferences.Count == 0 && SameSummary(SummaryA, SummaryB);
 
     public static JournalDiff Compare(string pathA, string pathB)
     {
@@ -44,10 +43,14 @@ public sealed record JournalDiff(
         return new JournalDiff(divergence, a.Summary, b.Summary, differences);
     }
 
-    private static bool SameData(SummaryEntry? a, SummaryEntry? b) =>
+    /// <summary>Field by field: the record's own equality would compare the data lists by reference.</summary>
+    private static bool SameSummary(SummaryEntry? a, SummaryEntry? b) =>
         a is null || b is null
             ? a is null && b is null
-            : a.Summary.Data.Select(f => f.ToString()).SequenceEqual(b.Summary.Data.Select(f => f.ToString()));
+            : a.Summary.OutcomeKind == b.Summary.OutcomeKind
+              && a.Summary.Reason == b.Summary.Reason
+              && a.Summary.FinalTimeS.Equals(b.Summary.FinalTimeS)
+              && a.Summary.Data.Select(f => f.ToString()).SequenceEqual(b.Summary.Data.Select(f => f.ToString()));
 
     private static Loaded Load(string path)
     {
