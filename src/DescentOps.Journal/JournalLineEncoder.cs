@@ -68,14 +68,14 @@ internal sealed class JournalLineEncoder : IDisposable
     {
         BeginLine(Manifest);
         _json.WriteString(Format, FormatId);
-        _json.WriteString(ToolVersion, manifest.ToolVersion);
-        _json.WriteString(ScenarioName, manifest.ScenarioName);
+        _json.WriteString(ToolVersion, RequireWellFormed(manifest.ToolVersion));
+        _json.WriteString(ScenarioName, RequireWellFormed(manifest.ScenarioName));
         _json.WriteString(ScenarioSha256, manifest.ScenarioSha256);
-        _json.WriteString(ScenarioText, manifest.ScenarioText);
+        _json.WriteString(ScenarioText, RequireWellFormed(manifest.ScenarioText));
         _json.WriteNumber(Seed, manifest.Seed);
         _json.WritePropertyName(UntilS);
         WriteDoubleValue(manifest.UntilSeconds);
-        _json.WriteString(Random, manifest.RandomAlgorithm);
+        _json.WriteString(Random, RequireWellFormed(manifest.RandomAlgorithm));
         if (manifest.Extra.Count > 0)
         {
             WriteFields(Extra, manifest.Extra);
@@ -91,8 +91,8 @@ internal sealed class JournalLineEncoder : IDisposable
         _json.WriteNumber(Seq, EventCount + 1);
         _json.WritePropertyName(T);
         WriteDoubleValue(record.Time.SecondsSinceEpoch);
-        _json.WriteString(Source, record.Source.Name);
-        _json.WriteString(Kind, record.Kind);
+        _json.WriteString(Source, RequireWellFormed(record.Source.Name));
+        _json.WriteString(Kind, RequireWellFormed(record.Kind));
         _json.WriteString(SeverityName, JournalFormat.EncodedSeverity(record.Severity));
         WriteFields(Data, record.Fields);
         var line = EndLine();
@@ -106,8 +106,8 @@ internal sealed class JournalLineEncoder : IDisposable
     public ReadOnlySpan<byte> EncodeSummary(RunSummary summary)
     {
         BeginLine(Summary);
-        _json.WriteString(Outcome, summary.OutcomeKind);
-        _json.WriteString(Reason, summary.Reason);
+        _json.WriteString(Outcome, RequireWellFormed(summary.OutcomeKind));
+        _json.WriteString(Reason, RequireWellFormed(summary.Reason));
         _json.WritePropertyName(FinalT);
         WriteDoubleValue(summary.FinalTimeS);
         _json.WriteNumber(Events, EventCount);
@@ -145,7 +145,7 @@ internal sealed class JournalLineEncoder : IDisposable
         for (var i = 0; i < fields.Count; i++)
         {
             var field = fields[i];
-            _json.WritePropertyName(field.Name);
+            _json.WritePropertyName(RequireWellFormed(field.Name));
             switch (field.Kind)
             {
                 case RecordFieldKind.Number:
@@ -217,8 +217,33 @@ internal sealed class JournalLineEncoder : IDisposable
                 _json.WriteRawValue("\"\\u002DInfinity\""u8, skipInputValidation: true);
                 break;
             default:
-                _json.WriteStringValue(text);
+                _json.WriteStringValue(RequireWellFormed(text));
                 break;
         }
+    }
+
+    /// <summary>
+    /// Refuses a string with a lone surrogate. The JSON writer would quietly write U+FFFD in its place, and
+    /// the journal must fail loudly rather than record a value that differs from the one the run produced.
+    /// </summary>
+    private static string RequireWellFormed(string text)
+    {
+        var span = text.AsSpan();
+
+        // The vectorized scan clears almost every string; only text with surrogates is walked pair by pair.
+        var index = span.IndexOfAnyInRange('\uD800', '\uDFFF');
+        while (index >= 0)
+        {
+            if (!char.IsHighSurrogate(span[index]) || index + 1 >= span.Length || !char.IsLowSurrogate(span[index + 1]))
+            {
+                throw new ArgumentException($"Text contains a lone surrogate at index {index}; it has no UTF-8 form.", nameof(text));
+            }
+
+            index += 2;
+            var next = span[index..].IndexOfAnyInRange('\uD800', '\uDFFF');
+            index = next < 0 ? -1 : index + next;
+        }
+
+        return text;
     }
 }
