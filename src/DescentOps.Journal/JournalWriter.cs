@@ -157,7 +157,6 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     {
         if (_state != State.Open)
         {
-            _encoder.Dispose();
             return;
         }
 
@@ -173,8 +172,6 @@ public sealed class JournalWriter : IJournalSink, IDisposable
             {
                 _output.Dispose();
             }
-
-            _encoder.Dispose();
         }
     }
 

@@ -49,6 +49,15 @@ public sealed class SpecialValueTests
         Assert.Equal(text, field.Text);
     }
 
+    [Fact]
+    public void ControlCharactersAreEscapedAndOtherCharactersKeptAsUtf8()
+    {
+        var (line, data) = RoundTrip(RecordField.Of("v", "\u0001\u001f\b\f\r\n\t\"\\ é ж \u2028 /"));
+
+        Assert.Contains("\"v\":\"\\u0001\\u001f\\b\\f\\r\\n\\t\\\"\\\\ é ж \u2028 /\"", line);
+        Assert.Equal("\u0001\u001f\b\f\r\n\t\"\\ é ж \u2028 /", Assert.Single(data).Text);
+    }
+
     [Theory]
     [InlineData(long.MinValue)]
     [InlineData(long.MaxValue)]
