@@ -50,6 +50,9 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         Completed,
         Abandoned,
         Closed,
+
+        // An I/O error: what reached the file is unknown, so nothing more may be appended to it.
+        Faulted,
     }
 
     /// <summary>Where the finished journal will be; null for a stream journal.</summary>
@@ -120,18 +123,30 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         ThrowUnlessOpen();
         Append(_encoder.EncodeSummary(summary));
         FlushBuffer();
+        try
+        {
+            if (_ownsOutput)
+            {
+                ((FileStream)_output).Flush(flushToDisk: true);
+            }
+            else
+            {
+                _output.Flush();
+            }
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
+        }
+
+        // Completed before the rename: if the rename fails, the whole journal is still under the partial name.
+        _state = State.Completed;
         if (_ownsOutput)
         {
-            ((FileStream)_output).Flush(flushToDisk: true);
             _output.Dispose();
             File.Move(PartialPath!, FinalPath!, overwrite: true);
         }
-        else
-        {
-            _output.Flush();
-        }
-
-        _state = State.Completed;
     }
 
     /// <summary>
@@ -140,7 +155,7 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     /// </summary>
     public void Abandon()
     {
-        if (_state is State.Completed or State.Abandoned)
+        if (_state is State.Completed or State.Abandoned or State.Closed)
         {
             return;
         }
@@ -155,16 +170,20 @@ public sealed class JournalWriter : IJournalSink, IDisposable
 
     public void Dispose()
     {
-        if (_state != State.Open)
+        if (_state is State.Completed or State.Abandoned or State.Closed)
         {
             return;
         }
 
+        var flush = _state == State.Open;
         _state = State.Closed;
         try
         {
-            FlushBuffer();
-            _output.Flush();
+            if (flush)
+            {
+                FlushBuffer();
+                _output.Flush();
+            }
         }
         finally
         {
@@ -179,7 +198,15 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     {
         Append(_encoder.EncodeManifest(manifest));
         FlushBuffer();
-        _output.Flush();
+        try
+        {
+            _output.Flush();
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
+        }
     }
 
     private void Append(ReadOnlySpan<byte> line)
@@ -190,7 +217,7 @@ public sealed class JournalWriter : IJournalSink, IDisposable
             if (line.Length > _buffer.Length)
             {
                 // A line longer than the buffer (a large scenario text) goes straight through.
-                _output.Write(line);
+                WriteThrough(line);
                 return;
             }
         }
@@ -203,8 +230,21 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     {
         if (_buffered > 0)
         {
-            _output.Write(_buffer, 0, _buffered);
+            WriteThrough(_buffer.AsSpan(0, _buffered));
             _buffered = 0;
+        }
+    }
+
+    private void WriteThrough(ReadOnlySpan<byte> bytes)
+    {
+        try
+        {
+            _output.Write(bytes);
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
         }
     }
 

@@ -152,6 +152,27 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
+    public void AfterAnOutputFailureTheWriterRefusesMoreLinesAndStillDisposes()
+    {
+        // Room for the manifest (about 400 bytes) but not for a buffer's worth of events.
+        var stream = new FailingStream(acceptedBytes: 1_000);
+        var writer = JournalWriter.Create(stream, JournalSamples.Manifest());
+
+        Assert.Throws<IOException>(() =>
+        {
+            foreach (var record in JournalSamples.Events(2_000))
+            {
+                writer.Write(record);
+            }
+        });
+        Assert.Throws<InvalidOperationException>(() => writer.Write(JournalSamples.Events(1)[0]));
+        Assert.Throws<InvalidOperationException>(() => writer.Complete(JournalSamples.Summary()));
+        writer.Dispose();
+
+        Assert.Equal(VerificationFailure.TruncatedTail, JournalVerifier.Verify(new MemoryStream(stream.ToArray())).Failure);
+    }
+
+    [Fact]
     public void NoLineCanBeWrittenAfterComplete()
     {
         using var writer = JournalWriter.Create(new MemoryStream(), JournalSamples.Manifest());
