@@ -13,7 +13,8 @@ namespace DescentOps.Journal;
 /// truncated tail) and the cost per event is a small memory copy, not a system call.</para>
 /// <para>Disposing without <see cref="Complete"/> or <see cref="Abandon"/> hands over what is buffered and
 /// leaves the partial file in place, exactly as a crash would but with nothing lost: the evidence of a failed
-/// run stays, under a name nobody will take for a finished log.</para>
+/// run stays, under a name nobody will take for a finished log. After an I/O error the writer is faulted:
+/// it refuses further lines, since what reached the file is unknown, and disposing it only closes the file.</para>
 /// <para>Each line ends with a hash chain value; see <see cref="JournalVerifier"/> for what it proves and why
 /// the hash is not cryptographic.</para>
 /// </remarks>
@@ -22,8 +23,8 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     /// <summary>Appended to the final path while the run is in progress.</summary>
     public const string PartialSuffix = ".partial";
 
-    // 64 KiB: large enough that system calls are rare next to encoding (~150 bytes per event means one
-    // write per ~400 events), small enough that a crash loses little and the buffer stays in L2 cache.
+    // 64 KiB: large enough that system calls are rare next to encoding (a typical event line is ~220 bytes,
+    // so one write per ~300 events), small enough that a crash loses little and the buffer stays in L2 cache.
     private const int BufferSize = 64 * 1024;
 
     // A line buffer that fits the usual event several times over; the manifest may grow it once.

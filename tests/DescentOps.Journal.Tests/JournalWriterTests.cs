@@ -87,7 +87,7 @@ public sealed class JournalWriterTests
 
         using var writer = JournalWriter.Create(finalPath, JournalSamples.Manifest());
 
-        // About 150 bytes an event: 2,000 events overflow the 64 KiB buffer several times.
+        // About 220 bytes an event: 2,000 events are some 440 KB, several times the writer's 64 KiB buffer.
         foreach (var record in JournalSamples.Events(2_000))
         {
             writer.Write(record);
@@ -154,7 +154,7 @@ public sealed class JournalWriterTests
     [Fact]
     public void AfterAnOutputFailureTheWriterRefusesMoreLinesAndStillDisposes()
     {
-        // Room for the manifest (about 400 bytes) but not for a buffer's worth of events.
+        // Room for the sample manifest (460 bytes) but not for the first 64 KiB buffer of events.
         var stream = new FailingStream(acceptedBytes: 1_000);
         var writer = JournalWriter.Create(stream, JournalSamples.Manifest());
 
