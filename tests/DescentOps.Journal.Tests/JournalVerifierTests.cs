@@ -41,6 +41,16 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
+    public void AnEditedScenarioTextIsReportedAtTheManifest()
+    {
+        var lines = JournalSamples.SplitLines(JournalSamples.Standard());
+        var position = Encoding.UTF8.GetString(lines[0]).IndexOf("5000", StringComparison.Ordinal);
+        lines[0][position] = (byte)'9';
+
+        AssertFailure(Verify(JournalSamples.Join(lines)), VerificationFailure.ChainMismatch, line: 1);
+    }
+
+    [Fact]
     public void ADeletedLineIsReportedAtTheLineAfterTheGap()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
