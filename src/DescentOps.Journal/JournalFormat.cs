@@ -1,4 +1,4 @@
-using System.Text.Json;
+using System.Text;
 using DescentOps.Engine.Journaling;
 
 namespace DescentOps.Journal;
@@ -11,6 +11,8 @@ internal static class JournalFormat
 {
     /// <summary>Bumped whenever a line's layout or the chain rule changes meaning.</summary>
     public const string FormatId = "descentops-journal/1";
+
+    public static readonly byte[] Utf8FormatId = Encoding.UTF8.GetBytes(FormatId);
 
     /// <summary>What precedes the chain value; everything before it is what the chain hashes.</summary>
     public static ReadOnlySpan<byte> ChainSeparator => ",\"chain\":\""u8;
@@ -37,17 +39,18 @@ internal static class JournalFormat
 
     private static readonly string[] SeverityNames = ["debug", "info", "notice", "warning", "alarm", "critical"];
 
-    private static readonly JsonEncodedText[] EncodedSeverityNames = Array.ConvertAll(SeverityNames, name => JsonEncodedText.Encode(name));
+    private static readonly byte[][] Utf8SeverityNames = Array.ConvertAll(SeverityNames, Encoding.UTF8.GetBytes);
 
-    public static JsonEncodedText EncodedSeverity(Severity severity)
+    /// <summary>The severity's name as UTF-8; it needs no JSON escaping.</summary>
+    public static ReadOnlySpan<byte> Utf8Severity(Severity severity)
     {
         var index = (int)severity;
-        if ((uint)index >= (uint)EncodedSeverityNames.Length)
+        if ((uint)index >= (uint)Utf8SeverityNames.Length)
         {
             throw new ArgumentOutOfRangeException(nameof(severity), severity, "Not a defined severity.");
         }
 
-        return EncodedSeverityNames[index];
+        return Utf8SeverityNames[index];
     }
 
     public static Severity ParseSeverity(string name)

@@ -1,64 +1,26 @@
-using System.Buffers;
-using System.Globalization;
-using System.Text.Encodings.Web;
-using System.Text.Json;
 using DescentOps.Engine.Journaling;
 
 namespace DescentOps.Journal;
 
 /// <summary>
 /// Turns manifest, events and summary into chained journal lines, one at a time, in one reusable buffer.
-/// Each line is built whole before anyone sees it: a record that fails half way through (a lone surrogate in a
-/// text field, say) leaves no fragment behind and does not advance the chain, so the journal can still be
-/// finished with a summary that reports the failure.
+/// Each line is built whole before anyone sees it: a record that fails half way through (a lone surrogate in
+/// a text field, an undefined severity) leaves no fragment behind and does not advance the chain, so the
+/// journal can still be finished with a summary that reports the failure.
 /// </summary>
 /// <remarks>
-/// Byte-for-byte reproducibility rests on three choices: a fixed encoder (the relaxed one, so scenario text
-/// keeps its quotes and non-ASCII letters readable instead of turning into <c>\u</c> escapes), no indentation,
-/// and our own number spelling (see <see cref="WriteDoubleValue"/>).
+/// Members are written in a fixed order with no whitespace, and every value through
+/// <see cref="Utf8LineBuilder"/>, so the same input gives the same bytes in every process. The hot path,
+/// <see cref="EncodeEvent"/>, allocates nothing.
 /// </remarks>
-internal sealed class JournalLineEncoder : IDisposable
+internal sealed class JournalLineEncoder
 {
-    private static readonly JsonEncodedText Type = JsonEncodedText.Encode("type");
-    private static readonly JsonEncodedText Manifest = JsonEncodedText.Encode("manifest");
-    private static readonly JsonEncodedText Event = JsonEncodedText.Encode("event");
-    private static readonly JsonEncodedText Summary = JsonEncodedText.Encode("summary");
-    private static readonly JsonEncodedText Format = JsonEncodedText.Encode("format");
-    private static readonly JsonEncodedText FormatId = JsonEncodedText.Encode(JournalFormat.FormatId);
-    private static readonly JsonEncodedText ToolVersion = JsonEncodedText.Encode("tool_version");
-    private static readonly JsonEncodedText ScenarioName = JsonEncodedText.Encode("scenario_name");
-    private static readonly JsonEncodedText ScenarioSha256 = JsonEncodedText.Encode("scenario_sha256");
-    private static readonly JsonEncodedText ScenarioText = JsonEncodedText.Encode("scenario_text");
-    private static readonly JsonEncodedText Seed = JsonEncodedText.Encode("seed");
-    private static readonly JsonEncodedText UntilS = JsonEncodedText.Encode("until_s");
-    private static readonly JsonEncodedText Random = JsonEncodedText.Encode("random");
-    private static readonly JsonEncodedText Extra = JsonEncodedText.Encode("extra");
-    private static readonly JsonEncodedText Seq = JsonEncodedText.Encode("seq");
-    private static readonly JsonEncodedText T = JsonEncodedText.Encode("t");
-    private static readonly JsonEncodedText Source = JsonEncodedText.Encode("source");
-    private static readonly JsonEncodedText Kind = JsonEncodedText.Encode("kind");
-    private static readonly JsonEncodedText SeverityName = JsonEncodedText.Encode("severity");
-    private static readonly JsonEncodedText Data = JsonEncodedText.Encode("data");
-    private static readonly JsonEncodedText Outcome = JsonEncodedText.Encode("outcome");
-    private static readonly JsonEncodedText Reason = JsonEncodedText.Encode("reason");
-    private static readonly JsonEncodedText FinalT = JsonEncodedText.Encode("final_t");
-    private static readonly JsonEncodedText Events = JsonEncodedText.Encode("events");
-    private static readonly JsonEncodedText Chain = JsonEncodedText.Encode("chain");
-
-    private static readonly JsonWriterOptions WriterOptions = new()
-    {
-        Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
-        Indented = false,
-    };
-
-    private readonly ArrayBufferWriter<byte> _buffer;
-    private readonly Utf8JsonWriter _json;
+    private readonly Utf8LineBuilder _line;
     private readonly JournalChain _chain = new();
 
     public JournalLineEncoder(int initialCapacity)
     {
-        _buffer = new ArrayBufferWriter<byte>(initialCapacity);
-        _json = new Utf8JsonWriter(_buffer, WriterOptions);
+        _line = new Utf8LineBuilder(initialCapacity);
     }
 
     public long EventCount { get; private set; }
@@ -66,19 +28,27 @@ internal sealed class JournalLineEncoder : IDisposable
     /// <summary>Returns the complete line, newline included; valid until the next call.</summary>
     public ReadOnlySpan<byte> EncodeManifest(RunManifest manifest)
     {
-        BeginLine(Manifest);
-        _json.WriteString(Format, FormatId);
-        _json.WriteString(ToolVersion, manifest.ToolVersion);
-        _json.WriteString(ScenarioName, manifest.ScenarioName);
-        _json.WriteString(ScenarioSha256, manifest.ScenarioSha256);
-        _json.WriteString(ScenarioText, manifest.ScenarioText);
-        _json.WriteNumber(Seed, manifest.Seed);
-        _json.WritePropertyName(UntilS);
-        WriteDoubleValue(manifest.UntilSeconds);
-        _json.WriteString(Random, manifest.RandomAlgorithm);
+        _line.Clear();
+        _line.Append("{\"type\":\"manifest\",\"format\":\""u8);
+        _line.Append(JournalFormat.Utf8FormatId);
+        _line.Append("\",\"tool_version\":"u8);
+        _line.AppendString(manifest.ToolVersion);
+        _line.Append(",\"scenario_name\":"u8);
+        _line.AppendString(manifest.ScenarioName);
+        _line.Append(",\"scenario_sha256\":"u8);
+        _line.AppendString(manifest.ScenarioSha256);
+        _line.Append(",\"scenario_text\":"u8);
+        _line.AppendString(manifest.ScenarioText);
+        _line.Append(",\"seed\":"u8);
+        _line.AppendInteger(manifest.Seed);
+        _line.Append(",\"until_s\":"u8);
+        _line.AppendDouble(manifest.UntilSeconds);
+        _line.Append(",\"random\":"u8);
+        _line.AppendString(manifest.RandomAlgorithm);
         if (manifest.Extra.Count > 0)
         {
-            WriteFields(Extra, manifest.Extra);
+            _line.Append(",\"extra\":"u8);
+            AppendFields(manifest.Extra);
         }
 
         return EndLine();
@@ -87,14 +57,19 @@ internal sealed class JournalLineEncoder : IDisposable
     /// <summary>Returns the complete line, newline included; valid until the next call.</summary>
     public ReadOnlySpan<byte> EncodeEvent(JournalRecord record)
     {
-        BeginLine(Event);
-        _json.WriteNumber(Seq, EventCount + 1);
-        _json.WritePropertyName(T);
-        WriteDoubleValue(record.Time.SecondsSinceEpoch);
-        _json.WriteString(Source, record.Source.Name);
-        _json.WriteString(Kind, record.Kind);
-        _json.WriteString(SeverityName, JournalFormat.EncodedSeverity(record.Severity));
-        WriteFields(Data, record.Fields);
+        _line.Clear();
+        _line.Append("{\"type\":\"event\",\"seq\":"u8);
+        _line.AppendInteger(EventCount + 1);
+        _line.Append(",\"t\":"u8);
+        _line.AppendMicrosecondsAsSeconds(record.Time.Ticks);
+        _line.Append(",\"source\":"u8);
+        _line.AppendString(record.Source.Name);
+        _line.Append(",\"kind\":"u8);
+        _line.AppendString(record.Kind);
+        _line.Append(",\"severity\":\""u8);
+        _line.Append(JournalFormat.Utf8Severity(record.Severity));
+        _line.Append("\",\"data\":"u8);
+        AppendFields(record.Fields);
         var line = EndLine();
 
         // Counted only once the line is complete, so a record that fails to encode does not use up a number.
@@ -105,119 +80,86 @@ internal sealed class JournalLineEncoder : IDisposable
     /// <summary>Returns the complete line, newline included; valid until the next call.</summary>
     public ReadOnlySpan<byte> EncodeSummary(RunSummary summary)
     {
-        BeginLine(Summary);
-        _json.WriteString(Outcome, summary.OutcomeKind);
-        _json.WriteString(Reason, summary.Reason);
-        _json.WritePropertyName(FinalT);
-        WriteDoubleValue(summary.FinalTimeS);
-        _json.WriteNumber(Events, EventCount);
-        WriteFields(Data, summary.Data);
+        _line.Clear();
+        _line.Append("{\"type\":\"summary\",\"outcome\":"u8);
+        _line.AppendString(summary.OutcomeKind);
+        _line.Append(",\"reason\":"u8);
+        _line.AppendString(summary.Reason);
+        _line.Append(",\"final_t\":"u8);
+        _line.AppendDouble(summary.FinalTimeS);
+        _line.Append(",\"events\":"u8);
+        _line.AppendInteger(EventCount);
+        _line.Append(",\"data\":"u8);
+        AppendFields(summary.Data);
         return EndLine();
-    }
-
-    public void Dispose() => _json.Dispose();
-
-    private void BeginLine(JsonEncodedText type)
-    {
-        _buffer.ResetWrittenCount();
-        _json.Reset();
-        _json.WriteStartObject();
-        _json.WriteString(Type, type);
     }
 
     private ReadOnlySpan<byte> EndLine()
     {
-        _json.Flush();
-        _chain.Advance(_buffer.WrittenSpan);
-        _json.WriteString(Chain, _chain.CurrentHex);
-        _json.WriteEndObject();
-        _json.Flush();
-        _buffer.GetSpan(1)[0] = JournalFormat.NewLine;
-        _buffer.Advance(1);
-        return _buffer.WrittenSpan;
+        _chain.Advance(_line.Written);
+        _line.Append(JournalFormat.ChainSeparator);
+        _line.Append(_chain.CurrentHex);
+        _line.Append(JournalFormat.LineEnd);
+        _line.Append(JournalFormat.NewLine);
+        return _line.Written;
     }
 
-    private void WriteFields(JsonEncodedText name, IReadOnlyList<RecordField> fields)
+    private void AppendFields(IReadOnlyList<RecordField> fields)
     {
-        _json.WriteStartObject(name);
+        _line.Append((byte)'{');
 
         // An indexed loop: foreach over IReadOnlyList<T> would box the enumerator on every event.
         for (var i = 0; i < fields.Count; i++)
         {
             var field = fields[i];
-            _json.WritePropertyName(field.Name);
+            if (i > 0)
+            {
+                _line.Append((byte)',');
+            }
+
+            _line.AppendString(field.Name);
+            _line.Append((byte)':');
             switch (field.Kind)
             {
                 case RecordFieldKind.Number:
-                    WriteDoubleValue(field.Number);
+                    _line.AppendDouble(field.Number);
                     break;
                 case RecordFieldKind.Integer:
-                    _json.WriteNumberValue(field.Integer);
+                    _line.AppendInteger(field.Integer);
                     break;
                 case RecordFieldKind.Boolean:
-                    _json.WriteBooleanValue(field.Integer != 0);
+                    _line.AppendBoolean(field.Integer != 0);
                     break;
                 case RecordFieldKind.Text:
-                    WriteTextValue(field.Text ?? throw new ArgumentException($"Text field '{field.Name}' has no value."));
+                    AppendText(field.Text ?? throw new ArgumentException($"Text field '{field.Name}' has no value.", nameof(fields)));
                     break;
                 default:
                     throw new ArgumentOutOfRangeException(nameof(fields), field.Kind, $"Field '{field.Name}' has an unknown kind.");
             }
         }
 
-        _json.WriteEndObject();
-    }
-
-    /// <summary>
-    /// Shortest round-trip spelling, invariant culture, with ".0" added when that spelling has neither a point
-    /// nor an exponent: a reader can then tell a double from an integer by its text alone, so field kinds
-    /// survive the round trip (and -0.0 keeps its sign as "-0.0"). NaN and the infinities, which JSON cannot
-    /// spell as numbers, become the strings <see cref="JournalFormat.NaN"/> and friends.
-    /// </summary>
-    private void WriteDoubleValue(double value)
-    {
-        if (!double.IsFinite(value))
-        {
-            _json.WriteStringValue(double.IsNaN(value) ? JournalFormat.NaN
-                : value > 0 ? JournalFormat.PositiveInfinity : JournalFormat.NegativeInfinity);
-            return;
-        }
-
-        // The longest shortest-round-trip double is 24 characters ("-2.2250738585072014E-308"); 32 leaves room for ".0".
-        Span<byte> text = stackalloc byte[32];
-        if (!value.TryFormat(text, out var length, "R", CultureInfo.InvariantCulture))
-        {
-            throw new InvalidOperationException($"Could not format {value:R}.");
-        }
-
-        if (text[..length].IndexOfAny((byte)'.', (byte)'E', (byte)'e') < 0)
-        {
-            text[length++] = (byte)'.';
-            text[length++] = (byte)'0';
-        }
-
-        _json.WriteRawValue(text[..length], skipInputValidation: true);
+        _line.Append((byte)'}');
     }
 
     /// <summary>
     /// A text value that happens to spell NaN or an infinity is written with its first character escaped, so
     /// that the reader, which takes only unescaped spellings as doubles, still reads it back as text.
     /// </summary>
-    private void WriteTextValue(string text)
+    private void AppendText(string text)
     {
         switch (text)
         {
             case JournalFormat.NaN:
-                _json.WriteRawValue("\"\\u004EaN\""u8, skipInputValidation: true);
+                _line.Append("\"\\u004EaN\""u8);
                 break;
             case JournalFormat.PositiveInfinity:
-                _json.WriteRawValue("\"\\u0049nfinity\""u8, skipInputValidation: true);
+                _line.Append("\"\\u0049nfinity\""u8);
                 break;
             case JournalFormat.NegativeInfinity:
-                _json.WriteRawValue("\"\\u002DInfinity\""u8, skipInputValidation: true);
+                _line.Append("\"\\u002DInfinity\""u8);
                 break;
             default:
-                _json.WriteStringValue(text);
+                _line.AppendString(text);
                 break;
         }
     }

@@ -13,7 +13,8 @@ namespace DescentOps.Journal;
 /// truncated tail) and the cost per event is a small memory copy, not a system call.</para>
 /// <para>Disposing without <see cref="Complete"/> or <see cref="Abandon"/> hands over what is buffered and
 /// leaves the partial file in place, exactly as a crash would but with nothing lost: the evidence of a failed
-/// run stays, under a name nobody will take for a finished log.</para>
+/// run stays, under a name nobody will take for a finished log. After an I/O error the writer is faulted:
+/// it refuses further lines, since what reached the file is unknown, and disposing it only closes the file.</para>
 /// <para>Each line ends with a hash chain value; see <see cref="JournalVerifier"/> for what it proves and why
 /// the hash is not cryptographic.</para>
 /// </remarks>
@@ -22,8 +23,8 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     /// <summary>Appended to the final path while the run is in progress.</summary>
     public const string PartialSuffix = ".partial";
 
-    // 64 KiB: large enough that system calls are rare next to encoding (~150 bytes per event means one
-    // write per ~400 events), small enough that a crash loses little and the buffer stays in L2 cache.
+    // 64 KiB: large enough that system calls are rare next to encoding (a typical event line is ~220 bytes,
+    // so one write per ~300 events), small enough that a crash loses little and the buffer stays in L2 cache.
     private const int BufferSize = 64 * 1024;
 
     // A line buffer that fits the usual event several times over; the manifest may grow it once.
@@ -50,6 +51,9 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         Completed,
         Abandoned,
         Closed,
+
+        // An I/O error: what reached the file is unknown, so nothing more may be appended to it.
+        Faulted,
     }
 
     /// <summary>Where the finished journal will be; null for a stream journal.</summary>
@@ -120,18 +124,30 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         ThrowUnlessOpen();
         Append(_encoder.EncodeSummary(summary));
         FlushBuffer();
+        try
+        {
+            if (_ownsOutput)
+            {
+                ((FileStream)_output).Flush(flushToDisk: true);
+            }
+            else
+            {
+                _output.Flush();
+            }
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
+        }
+
+        // Completed before the rename: if the rename fails, the whole journal is still under the partial name.
+        _state = State.Completed;
         if (_ownsOutput)
         {
-            ((FileStream)_output).Flush(flushToDisk: true);
             _output.Dispose();
             File.Move(PartialPath!, FinalPath!, overwrite: true);
         }
-        else
-        {
-            _output.Flush();
-        }
-
-        _state = State.Completed;
     }
 
     /// <summary>
@@ -140,7 +156,7 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     /// </summary>
     public void Abandon()
     {
-        if (_state is State.Completed or State.Abandoned)
+        if (_state is State.Completed or State.Abandoned or State.Closed)
         {
             return;
         }
@@ -155,17 +171,20 @@ public sealed class JournalWriter : IJournalSink, IDisposable
 
     public void Dispose()
     {
-        if (_state != State.Open)
+        if (_state is State.Completed or State.Abandoned or State.Closed)
         {
-            _encoder.Dispose();
             return;
         }
 
+        var flush = _state == State.Open;
         _state = State.Closed;
         try
         {
-            FlushBuffer();
-            _output.Flush();
+            if (flush)
+            {
+                FlushBuffer();
+                _output.Flush();
+            }
         }
         finally
         {
@@ -173,8 +192,6 @@ public sealed class JournalWriter : IJournalSink, IDisposable
             {
                 _output.Dispose();
             }
-
-            _encoder.Dispose();
         }
     }
 
@@ -182,7 +199,15 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     {
         Append(_encoder.EncodeManifest(manifest));
         FlushBuffer();
-        _output.Flush();
+        try
+        {
+            _output.Flush();
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
+        }
     }
 
     private void Append(ReadOnlySpan<byte> line)
@@ -193,7 +218,7 @@ public sealed class JournalWriter : IJournalSink, IDisposable
             if (line.Length > _buffer.Length)
             {
                 // A line longer than the buffer (a large scenario text) goes straight through.
-                _output.Write(line);
+                WriteThrough(line);
                 return;
             }
         }
@@ -206,8 +231,21 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     {
         if (_buffered > 0)
         {
-            _output.Write(_buffer, 0, _buffered);
+            WriteThrough(_buffer.AsSpan(0, _buffered));
             _buffered = 0;
+        }
+    }
+
+    private void WriteThrough(ReadOnlySpan<byte> bytes)
+    {
+        try
+        {
+            _output.Write(bytes);
+        }
+        catch
+        {
+            _state = State.Faulted;
+            throw;
         }
     }
 
