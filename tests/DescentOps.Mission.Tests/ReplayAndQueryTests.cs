@@ -23,11 +23,13 @@ public sealed class ReplayAndQueryTests
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
 
         var logged = LoggedRun.Open(log);
-        var comparison = new LineComparingStream(File.OpenRead(log));
+        using var comparison = new LineComparingStream(File.OpenRead(log));
         using (var writer = JournalWriter.Create(comparison, logged.Manifest))
         {
             await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Actors);
         }
+
+        comparison.Finish();
 
         Assert.Null(comparison.Divergence);
         Assert.Equal(File.ReadLines(log).Count(), comparison.LinesMatched);
@@ -41,11 +43,13 @@ public sealed class ReplayAndQueryTests
         var scenario = BuiltInScenarios.Default();
         var log = await WriteLogAsync(manifestSeed: 1, runSeed: 2, scenario);
         var logged = LoggedRun.Open(log);
-        var comparison = new LineComparingStream(File.OpenRead(log));
+        using var comparison = new LineComparingStream(File.OpenRead(log));
         using (var writer = JournalWriter.Create(comparison, logged.Manifest))
         {
             await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Sequential);
         }
+
+        comparison.Finish();
 
         var divergence = Assert.IsType<JournalDivergence>(comparison.Divergence);
         Assert.Contains("vehicle", divergence.LineA + divergence.LineB);
@@ -76,11 +80,13 @@ public sealed class ReplayAndQueryTests
 
         var logged = LoggedRun.Open(log);
         Assert.True(logged.IsTruncated);
-        var comparison = new LineComparingStream(File.OpenRead(log), logged.IntactLines);
+        using var comparison = new LineComparingStream(File.OpenRead(log), logged.IntactLines);
         using (var writer = JournalWriter.Create(comparison, logged.Manifest))
         {
             await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Sequential);
         }
+
+        comparison.Finish();
 
         Assert.Null(comparison.Divergence);
         Assert.Equal(logged.IntactLines, comparison.LinesMatched);

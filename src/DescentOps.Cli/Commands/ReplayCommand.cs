@@ -38,11 +38,13 @@ public static class ReplayCommand
             Console.Out.WriteLine($"note: the log is truncated at line {logged.Integrity.FirstBadLine}; comparing its {logged.IntactLines} intact lines.");
         }
 
-        var comparison = new LineComparingStream(File.OpenRead(path), logged.IntactLines);
+        using var comparison = new LineComparingStream(File.OpenRead(path), logged.IntactLines);
         using (var writer = JournalWriter.Create(comparison, manifest))
         {
             await JournaledRun.RunAsync(logged.Scenario, manifest, writer, kernel).ConfigureAwait(false);
         }
+
+        comparison.Finish();
 
         if (comparison.Divergence is not { } divergence)
         {

@@ -54,8 +54,8 @@ public sealed class LineComparingStream : Stream
     }
 
     /// <summary>
-    /// Ends the comparison (disposing does it too, which is how a journal writer closes its stream): an
-    /// expected journal that goes on past the rerun's end is a divergence as well.
+    /// Ends the comparison once the rerun's journal is complete (disposing does it too): an expected journal
+    /// that goes on past the rerun's end is a divergence as well.
     /// </summary>
     public void Finish()
     {
