@@ -1,0 +1,99 @@
+using System.Diagnostics;
+using System.Globalization;
+using Akka.Actor;
+using Akka.Configuration;
+using DescentOps.Engine.Running;
+
+namespace DescentOps.Benchmarks.Phold;
+
+/// <summary>
+/// Runs PHOLD through the plain loop and both kernels in one process, interleaved repeat by repeat so that
+/// a noisy neighbour on the machine slows all of them alike, and prints medians and the ratios between them.
+/// </summary>
+public static class PholdBenchmark
+{
+    private static readonly Config Quiet = ConfigurationFactory.ParseString("akka { loglevel = WARNING, stdout-loglevel = WARNING }");
+
+    public static async Task<int> RunAsync(PholdOptions options, TextWriter output)
+    {
+        using var system = ActorSystem.Create("phold", Quiet);
+        EngineCase[] cases =
+        [
+            new("plain PriorityQueue", (o, law) => Task.FromResult(PlainPholdEngine.Run(o, law))),
+            new("SequentialKernel", (o, law) => Task.FromResult(Sequential(o, law, journalEvents: false))),
+            new("ActorKernel", (o, law) => Actor(system, o, law, journalEvents: false)),
+            new("SequentialKernel + counting sink", (o, law) => Task.FromResult(Sequential(o, law, journalEvents: true))),
+            new("ActorKernel + counting sink", (o, law) => Actor(system, o, law, journalEvents: true)),
+        ];
+
+        output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"PHOLD: {options.Processes} LPs, {options.Tokens} tokens, mean delay {options.MeanDelayMs} ms, ~{options.TargetEvents} events (until {options.Until}), seed {options.Seed}, median of {options.Repeats} after one warm-up, {Environment.ProcessorCount} cores"));
+        output.WriteLine("Journal column: lean counting sink (no file journal writer in this build); each LP journals every token it handles.");
+        var ok = true;
+        foreach (var law in options.Laws)
+        {
+            ok &= await MeasureAsync(options, law, cases, output);
+        }
+
+        await system.Terminate();
+        return ok ? 0 : 1;
+    }
+
+    private static async Task<bool> MeasureAsync(PholdOptions options, DelayLaw law, EngineCase[] cases, TextWriter output)
+    {
+        // Warm-up at a tenth of the size: JIT tiers, actor system threads and heap growth settle first.
+        var warmUp = options with { TargetEvents = Math.Max(1, options.TargetEvents / 10) };
+        foreach (var c in cases) await c.RunOnce(warmUp, law);
+
+        var timings = cases.Select(c => new CaseTiming(c)).ToArray();
+        for (var repeat = 0; repeat < options.Repeats; repeat++)
+        {
+            foreach (var timing in timings)
+            {
+                var clock = Stopwatch.StartNew();
+                var run = await timing.Engine.RunOnce(options, law);
+                timing.Add(run, clock.Elapsed.TotalSeconds);
+            }
+        }
+
+        var plain = timings[0];
+        var sequential = timings[1];
+        var actor = timings[2];
+        output.WriteLine();
+        output.WriteLine($"delay law: {law}");
+        output.WriteLine($"| {"engine",-34} | {"events",9} | {"median s",8} | {"events/s",11} | {"/ plain",7} | {"/ seq-kernel",12} | {"order checksum",-18} |");
+        output.WriteLine($"|{new string('-', 36)}|{new string('-', 11)}|{new string('-', 10)}|{new string('-', 13)}|{new string('-', 9)}|{new string('-', 14)}|{new string('-', 20)}|");
+        foreach (var t in timings)
+        {
+            var run = t.Run!.Value;
+            output.WriteLine(string.Create(
+                CultureInfo.InvariantCulture,
+                $"| {t.Engine.Label,-34} | {run.TokenEvents,9} | {t.MedianSeconds,8:F3} | {t.EventsPerSecond,11:N0} | {t.EventsPerSecond / plain.EventsPerSecond,7:F3} | {t.EventsPerSecond / sequential.EventsPerSecond,12:F3} | {run.Checksum,18:x16} |"));
+        }
+
+        output.WriteLine(string.Create(
+            CultureInfo.InvariantCulture,
+            $"ratios: actor/plain = {actor.EventsPerSecond / plain.EventsPerSecond:F3}, actor/sequential-kernel = {actor.EventsPerSecond / sequential.EventsPerSecond:F3}"));
+
+        var counts = timings.Select(t => t.Run!.Value.TokenEvents).Distinct().Count();
+        var checksums = timings.Select(t => t.Run!.Value.Checksum).Distinct().Count();
+        var same = counts == 1 && checksums == 1;
+        output.WriteLine(same
+            ? "check: all engines delivered the same number of events with the same order checksum"
+            : "CHECK FAILED: the engines disagree on the event count or the order checksum");
+        return same;
+    }
+
+    private static PholdRun Sequential(PholdOptions options, DelayLaw law, bool journalEvents)
+    {
+        var sink = new ChecksumSink();
+        var result = SequentialKernel.Run(new KernelSetup(PholdModel.Components(options, law, journalEvents), options.Seed, options.Until, sink));
+        return PholdModel.Summarise(options, result, sink);
+    }
+
+    private static async Task<PholdRun> Actor(ActorSystem system, PholdOptions options, DelayLaw law, bool journalEvents)
+    {
+        var sink = new ChecksumSink();
+        var result = await ActorKernel.RunAsync(system, new KernelSetup(PholdModel.Components(options, law, journalEvents), options.Seed, options.Until, sink));
+        return PholdModel.Summarise(options, result, sink);
+    }
+}
