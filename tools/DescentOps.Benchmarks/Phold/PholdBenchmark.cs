@@ -45,13 +45,19 @@ public static class PholdBenchmark
         foreach (var c in cases) await c.RunOnce(warmUp, law);
 
         var timings = cases.Select(c => new CaseTiming(c)).ToArray();
+        using var process = Process.GetCurrentProcess();
         for (var repeat = 0; repeat < options.Repeats; repeat++)
         {
             foreach (var timing in timings)
             {
+                var allocatedBefore = GC.GetTotalAllocatedBytes(precise: true);
+                var cpuBefore = process.TotalProcessorTime;
                 var clock = Stopwatch.StartNew();
                 var run = await timing.Engine.RunOnce(options, law);
-                timing.Add(run, clock.Elapsed.TotalSeconds);
+                var seconds = clock.Elapsed.TotalSeconds;
+                process.Refresh();
+                var cpuSeconds = (process.TotalProcessorTime - cpuBefore).TotalSeconds;
+                timing.Add(run, seconds, cpuSeconds, GC.GetTotalAllocatedBytes(precise: true) - allocatedBefore);
             }
         }
 
@@ -60,19 +66,19 @@ public static class PholdBenchmark
         var actor = timings[2];
         output.WriteLine();
         output.WriteLine($"delay law: {law}");
-        output.WriteLine($"| {"engine",-34} | {"events",9} | {"median s",8} | {"events/s",11} | {"/ plain",7} | {"/ seq-kernel",12} | {"order checksum",-18} |");
-        output.WriteLine($"|{new string('-', 36)}|{new string('-', 11)}|{new string('-', 10)}|{new string('-', 13)}|{new string('-', 9)}|{new string('-', 14)}|{new string('-', 20)}|");
+        output.WriteLine($"| {"engine",-34} | {"events",9} | {"median s",8} | {"events/s",11} | {"/ plain",7} | {"/ seq-kernel",12} | {"events/CPU-s",12} | {"order checksum",-18} | {"events/round",12} | {"alloc B/event",13} |");
+        output.WriteLine($"|{new string('-', 36)}|{new string('-', 11)}|{new string('-', 10)}|{new string('-', 13)}|{new string('-', 9)}|{new string('-', 14)}|{new string('-', 14)}|{new string('-', 20)}|{new string('-', 14)}|{new string('-', 15)}|");
         foreach (var t in timings)
         {
             var run = t.Run!.Value;
             output.WriteLine(string.Create(
                 CultureInfo.InvariantCulture,
-                $"| {t.Engine.Label,-34} | {run.TokenEvents,9} | {t.MedianSeconds,8:F3} | {t.EventsPerSecond,11:N0} | {t.EventsPerSecond / plain.EventsPerSecond,7:F3} | {t.EventsPerSecond / sequential.EventsPerSecond,12:F3} | {run.Checksum,18:x16} |"));
+                $"| {t.Engine.Label,-34} | {run.TokenEvents,9} | {t.MedianSeconds,8:F3} | {t.EventsPerSecond,11:N0} | {t.EventsPerSecond / plain.EventsPerSecond,7:F3} | {t.EventsPerSecond / sequential.EventsPerSecond,12:F3} | {t.EventsPerCpuSecond,12:N0} | {run.Checksum,18:x16} | {(run.Rounds is { } rounds ? (run.TokenEvents / (double)rounds).ToString("F2", CultureInfo.InvariantCulture) : "-"),12} | {t.AllocatedBytesPerEvent,13:F0} |"));
         }
 
         output.WriteLine(string.Create(
             CultureInfo.InvariantCulture,
-            $"ratios: actor/plain = {actor.EventsPerSecond / plain.EventsPerSecond:F3}, actor/sequential-kernel = {actor.EventsPerSecond / sequential.EventsPerSecond:F3}"));
+            $"ratios (wall): actor/plain = {actor.EventsPerSecond / plain.EventsPerSecond:F3}, actor/sequential-kernel = {actor.EventsPerSecond / sequential.EventsPerSecond:F3}; (CPU): actor/plain = {actor.EventsPerCpuSecond / plain.EventsPerCpuSecond:F3}, actor/sequential-kernel = {actor.EventsPerCpuSecond / sequential.EventsPerCpuSecond:F3}"));
 
         var counts = timings.Select(t => t.Run!.Value.TokenEvents).Distinct().Count();
         var checksums = timings.Select(t => t.Run!.Value.Checksum).Distinct().Count();

@@ -24,6 +24,6 @@ public static class PholdModel
             throw new InvalidOperationException($"PHOLD ended as {result.Outcome.Kind}: {result.Outcome.Reason}");
         }
 
-        return new PholdRun(result.EventsDelivered - (2L * options.Processes), sink.Checksum(ProcessIds(options).Select(id => id.Name)));
+        return new PholdRun(result.EventsDelivered - (2L * options.Processes), sink.Checksum(ProcessIds(options).Select(id => id.Name)), result.Rounds);
     }
 }

@@ -13,7 +13,7 @@ public sealed record PholdOptions(
     int Repeats,
     long Seed)
 {
-    public static PholdOptions Default { get; } = new(8, 64, 100_000, 1.0, null, 5, 1);
+    public static PholdOptions Default { get; } = new(8, 64, 400_000, 1.0, null, 5, 1);
 
     public IEnumerable<DelayLaw> Laws => OnlyLaw is { } law ? [law] : [DelayLaw.Poisson, DelayLaw.Exponential];
 
