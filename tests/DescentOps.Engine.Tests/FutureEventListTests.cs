@@ -10,6 +10,8 @@ public sealed class FutureEventListTests
     private static readonly ComponentId Beta = new("beta");
     private static readonly ComponentId Sink = new("sink");
 
+    // Times, priorities and sequence numbers below are labels: only their order matters, and each is chosen
+    // so that a different tie-break rule would produce a different order.
     private static SimEvent At(long ticks, byte priority, ComponentId sender, long sequence) =>
         new(new EventKey(new SimTime(ticks), new EventPriority(priority), sender, sequence), Sink, $"{sender}#{sequence}");
 

@@ -14,7 +14,7 @@ public sealed class KernelOrderDeterminismTests(ActorSystemFixture actors) : ICl
     private const int Nodes = 8;
     private const int TokensPerNode = 6;
     private const int Hops = 40;
-    private const long Seed = 77;
+    private const long Seed = 77; // any seed; the one below it must merely differ
 
     private static IReadOnlyList<ISimComponent> Mesh()
     {
