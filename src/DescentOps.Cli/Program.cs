@@ -1,1 +1,47 @@
-return 0;
+using System.CommandLine;
+using DescentOps.Cli;
+using DescentOps.Cli.Commands;
+using DescentOps.Scenarios.Loading;
+
+var root = new RootCommand("DescentOps: rehearse melt-probe missions against physics, inject faults, and keep a verifiable log of every run.")
+{
+    RunCommand.Create(),
+    VerifyCommand.Create(),
+    SchemaCommand.Create(),
+};
+
+try
+{
+    var parse = root.Parse(args);
+    if (parse.Errors.Count > 0)
+    {
+        foreach (var error in parse.Errors) Console.Error.WriteLine($"descentops: {error.Message}");
+        Console.Error.WriteLine("Try 'descentops --help'.");
+        return (int)ExitCode.UsageError;
+    }
+
+    return await parse.InvokeAsync(new InvocationConfiguration { EnableDefaultExceptionHandler = false });
+}
+catch (ScenarioException exception)
+{
+    foreach (var error in exception.Errors) Console.Error.WriteLine($"error: {error}");
+    return (int)ExitCode.InvalidInput;
+}
+catch (UsageException exception)
+{
+    Console.Error.WriteLine($"descentops: {exception.Message}");
+    return (int)ExitCode.UsageError;
+}
+catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+{
+    Console.Error.WriteLine($"descentops: {exception.Message}");
+    return (int)ExitCode.IoError;
+}
+#pragma warning disable CA1031 // The last line of defence: no stack trace reaches the user, but the defect is named.
+catch (Exception exception)
+#pragma warning restore CA1031
+{
+    Console.Error.WriteLine($"descentops: internal error ({exception.GetType().Name}): {exception.Message}");
+    Console.Error.WriteLine("This is a defect in DescentOps; please report it with the command line and scenario.");
+    return (int)ExitCode.InternalError;
+}

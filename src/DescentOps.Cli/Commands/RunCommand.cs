@@ -1,0 +1,131 @@
+using System.CommandLine;
+using System.Diagnostics;
+using System.Globalization;
+using DescentOps.Cli.Terminal;
+using DescentOps.Engine.Randomness;
+using DescentOps.Engine.Running;
+using DescentOps.Journal;
+using DescentOps.Mission.Running;
+using DescentOps.Scenarios.Format;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Cli.Commands;
+
+/// <summary><c>descentops run [SCENARIO] [--seed N] [--until DURATION] [--log PATH]</c>: one mission, one log.</summary>
+public static class RunCommand
+{
+    public static Command Create()
+    {
+        var scenarioArgument = new Argument<string?>("SCENARIO")
+        {
+            Description = "Scenario file, or the name of a built-in scenario; the built-in default when omitted.",
+            Arity = ArgumentArity.ZeroOrOne,
+        };
+        // Without this, a mistyped option ("--sed") would be taken for a scenario file name.
+        scenarioArgument.Validators.Add(result =>
+        {
+            if (result.GetValueOrDefault<string?>() is { } value && value.StartsWith('-'))
+            {
+                result.AddError($"Unknown option '{value}'.");
+            }
+        });
+        var seedOption = new Option<long?>("--seed") { Description = "Seed of the run's random streams (default: the scenario's run.seed)." };
+        var untilOption = new Option<string?>("--until") { Description = "Simulated time limit with a unit, e.g. '120 d' (default: the scenario's run.until)." };
+        var logOption = new Option<string?>("--log") { Description = "Where to write the event log (default: logs/<scenario>-seed<N>.jsonl)." };
+        var kernelOption = new Option<KernelChoice>("--kernel")
+        {
+            Description = "actors (default) or sequential: both write the same log; sequential is the reference.",
+            DefaultValueFactory = _ => KernelChoice.Actors,
+        };
+
+        var command = new Command("run", "Run a scenario and write its event log.")
+        {
+            scenarioArgument, seedOption, untilOption, logOption, kernelOption,
+        };
+        command.SetAction((parse, cancel) => ExecuteAsync(
+            parse.GetValue(scenarioArgument),
+            parse.GetValue(seedOption),
+            parse.GetValue(untilOption),
+            parse.GetValue(logOption),
+            parse.GetValue(kernelOption)));
+        return command;
+    }
+
+    /// <summary>The manifest of a run: with the binary, all a rerun needs to reproduce the log byte for byte.</summary>
+    public static RunManifest ManifestFor(Scenario scenario, long seed, double untilS) =>
+        new(ToolInfo.Version, scenario.Name, scenario.SourceText, seed, untilS, RandomStream.AlgorithmName);
+
+    private static async Task<int> ExecuteAsync(string? scenarioArgument, long? seedOverride, string? untilText, string? logPath, KernelChoice kernel)
+    {
+        var scenario = ScenarioSource.Load(scenarioArgument);
+        var seed = seedOverride ?? scenario.Run.Seed;
+        var untilS = scenario.Run.UntilS;
+        if (untilText is not null)
+        {
+            if (!QuantityParser.TryParseSi(QuantityKind.Duration, untilText, out untilS, out var error) || untilS <= 0)
+            {
+                throw new UsageException($"--until: {(error.Length > 0 ? error : "the time limit must be positive")}");
+            }
+        }
+
+        var path = Path.GetFullPath(logPath ?? Path.Combine("logs", $"{scenario.Name}-seed{seed}.jsonl"));
+        Directory.CreateDirectory(Path.GetDirectoryName(path)!);
+        var manifest = ManifestFor(scenario, seed, untilS);
+
+        Console.Out.WriteLine($"DescentOps {ToolInfo.Version}: scenario '{scenario.Name}' ({scenario.SourceName}), seed {seed}, until {untilS / 86400:0.###} d");
+        var progress = new ProgressLine();
+        var wall = Stopwatch.StartNew();
+        MissionSummary summary;
+        using (var writer = JournalWriter.Create(path, manifest))
+        {
+            try
+            {
+                summary = await MissionRunner.RunAsync(scenario, seed, untilS, writer, kernel, progress.Report).ConfigureAwait(false);
+                writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
+            }
+            catch
+            {
+                writer.Abandon();
+                throw;
+            }
+            finally
+            {
+                progress.Done();
+            }
+        }
+
+        wall.Stop();
+        PrintSummary(scenario, summary, wall.Elapsed, path);
+        return (int)(summary.Outcome.Kind switch
+        {
+            RunOutcomeKind.Completed => ExitCode.Ok,
+            RunOutcomeKind.ComponentFailed or RunOutcomeKind.KernelFault => ExitCode.RunAborted,
+            _ => ExitCode.MissionNotCompleted,
+        });
+    }
+
+    private static void PrintSummary(Scenario scenario, MissionSummary s, TimeSpan wall, string path)
+    {
+        var c = CultureInfo.InvariantCulture;
+        var rows = new (string, string)[]
+        {
+            ("outcome", $"{s.Outcome.Kind}: {s.Outcome.Reason}"),
+            ("simulated time", Days(s.FinalTimeS)),
+            ("time to breakthrough", s.BreakthroughTimeS is { } b ? Days(b) : "not reached"),
+            ("final depth", string.Create(c, $"{s.FinalDepthM:F1} m of {scenario.Shell.ThicknessM:F0} m")),
+            ("energy used", string.Create(c, $"{s.EnergyUsedJ / 3.6e9:F2} MWh ({s.EnergyUsedJ:E3} J)")),
+            ("faults injected", s.FaultsInjected.ToString(c)),
+            ("telemetry frames", string.Create(c, $"{s.FramesSent} sent, {s.FramesReceivedOnGround} received on ground, {s.FramesLost} lost")),
+            ("vehicle profiles", s.VehicleProfiles.ToString(c)),
+            ("component failures", s.ComponentFailures.ToString(c)),
+            ("events", string.Create(c, $"{s.EventsDelivered} delivered, {s.RecordsWritten} logged")),
+            ("wall time", string.Create(c, $"{wall.TotalSeconds:F2} s")),
+            ("speed-up", string.Create(c, $"{s.FinalTimeS / Math.Max(wall.TotalSeconds, 1e-6):E2} x real time")),
+            ("event log", path),
+        };
+        foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
+    }
+
+    private static string Days(double seconds) =>
+        string.Create(CultureInfo.InvariantCulture, $"{seconds / 86400:F3} d ({seconds:F0} s)");
+}

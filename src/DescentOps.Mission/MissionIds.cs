@@ -1,0 +1,15 @@
+using DescentOps.Primitives.Identity;
+
+namespace DescentOps.Mission;
+
+/// <summary>The fixed component ids of a mission; vehicles are named by the scenario.</summary>
+public static class MissionIds
+{
+    public static ComponentId Probe { get; } = new("probe");
+    public static ComponentId Tether { get; } = new("tether");
+    public static ComponentId Station { get; } = new("station");
+    public static ComponentId Ground { get; } = new("ground");
+    public static ComponentId FaultInjector { get; } = new("fault-injector");
+
+    public static ComponentId Vehicle(string name) => new("vehicle-" + name);
+}

@@ -1,0 +1,37 @@
+using DescentOps.Engine.Journaling;
+using DescentOps.Engine.Running;
+
+namespace DescentOps.Mission.Running;
+
+/// <summary>The figures of a finished mission run, derived from its journal records alone.</summary>
+public sealed record MissionSummary(
+    RunOutcome Outcome,
+    double FinalTimeS,
+    double? BreakthroughTimeS,
+    double FinalDepthM,
+    double EnergyUsedJ,
+    int FaultsInjected,
+    long FramesSent,
+    long FramesReceivedOnGround,
+    long FramesLost,
+    int VehicleProfiles,
+    long EventsDelivered,
+    long RecordsWritten,
+    int ComponentFailures)
+{
+    /// <summary>The summary's figures as journal fields, in a fixed order.</summary>
+    public IReadOnlyList<RecordField> ToFields() =>
+    [
+        RecordField.Of("breakthrough_t_s", BreakthroughTimeS ?? double.NaN),
+        RecordField.Of("final_depth_m", FinalDepthM),
+        RecordField.Of("energy_used_j", EnergyUsedJ),
+        RecordField.Of("faults_injected", FaultsInjected),
+        RecordField.Of("frames_sent", FramesSent),
+        RecordField.Of("frames_received_on_ground", FramesReceivedOnGround),
+        RecordField.Of("frames_lost", FramesLost),
+        RecordField.Of("vehicle_profiles", VehicleProfiles),
+        RecordField.Of("events_delivered", EventsDelivered),
+        RecordField.Of("records_written", RecordsWritten),
+        RecordField.Of("component_failures", ComponentFailures),
+    ];
+}

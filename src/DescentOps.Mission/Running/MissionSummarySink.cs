@@ -1,0 +1,81 @@
+using DescentOps.Engine.Journaling;
+using DescentOps.Engine.Running;
+
+namespace DescentOps.Mission.Running;
+
+/// <summary>
+/// Passes every record on to the journal and keeps the running figures the summary needs, so the summary
+/// says nothing the log does not.
+/// </summary>
+public sealed class MissionSummarySink : IJournalSink
+{
+    private readonly IJournalSink _next;
+    private double? _breakthroughS;
+    private double _depthM;
+    private double _energyJ;
+    private int _faults;
+    private long _framesSent;
+    private long _framesReceived;
+    private long _framesLost;
+    private int _profiles;
+
+    public MissionSummarySink(IJournalSink next) => _next = next;
+
+    public void Write(JournalRecord record)
+    {
+        _next.Write(record);
+        switch (record.Kind)
+        {
+            case "probe.telemetry":
+                _framesSent++;
+                _depthM = Field(record, "depth_m");
+                _energyJ = Field(record, "energy_used_j");
+                break;
+            case "probe.breakthrough":
+                _breakthroughS = record.Time.SecondsSinceEpoch;
+                _depthM = Field(record, "depth_m");
+                _energyJ = Field(record, "energy_used_j");
+                break;
+            case "probe.mission_complete":
+                _energyJ = Field(record, "energy_used_j");
+                break;
+            case "ground.telemetry":
+                _framesReceived++;
+                break;
+            case "tether.frame_lost" or "station.frame_lost":
+                _framesLost++;
+                break;
+            case "fault.injected":
+                _faults++;
+                break;
+            case "vehicle.profile":
+                _profiles++;
+                break;
+        }
+    }
+
+    public MissionSummary Summarize(RunResult result) => new(
+        result.Outcome,
+        result.FinalTime.SecondsSinceEpoch,
+        _breakthroughS,
+        _depthM,
+        _energyJ,
+        _faults,
+        _framesSent,
+        _framesReceived,
+        _framesLost,
+        _profiles,
+        result.EventsDelivered,
+        result.RecordsWritten,
+        result.ComponentFailures);
+
+    private static double Field(JournalRecord record, string name)
+    {
+        foreach (var field in record.Fields)
+        {
+            if (field.Name == name) return field.Number;
+        }
+
+        throw new InvalidOperationException($"Record {record.Kind} has no field '{name}'.");
+    }
+}

@@ -1,0 +1,64 @@
+using UnitsNet;
+
+namespace DescentOps.Scenarios.Format;
+
+/// <summary>The physical dimensions a scenario value can carry, each with the UnitsNet type that parses it.</summary>
+public enum QuantityKind
+{
+    Length,
+    Power,
+    Temperature,
+    Duration,
+    Mass,
+    Speed,
+    Acceleration,
+    Energy,
+    MassFraction,
+}
+
+public static class QuantityKindInfo
+{
+    public static Type UnitsNetType(this QuantityKind kind) => kind switch
+    {
+        QuantityKind.Length => typeof(Length),
+        QuantityKind.Power => typeof(Power),
+        QuantityKind.Temperature => typeof(Temperature),
+        QuantityKind.Duration => typeof(Duration),
+        QuantityKind.Mass => typeof(Mass),
+        QuantityKind.Speed => typeof(Speed),
+        QuantityKind.Acceleration => typeof(Acceleration),
+        QuantityKind.Energy => typeof(Energy),
+        QuantityKind.MassFraction => typeof(MassFraction),
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+    };
+
+    /// <summary>The SI unit the loader converts to, as written in messages and the schema.</summary>
+    public static string SiSymbol(this QuantityKind kind) => kind switch
+    {
+        QuantityKind.Length => "m",
+        QuantityKind.Power => "W",
+        QuantityKind.Temperature => "K",
+        QuantityKind.Duration => "s",
+        QuantityKind.Mass => "kg",
+        QuantityKind.Speed => "m/s",
+        QuantityKind.Acceleration => "m/s²",
+        QuantityKind.Energy => "J",
+        QuantityKind.MassFraction => "kg/kg",
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+    };
+
+    /// <summary>Unit symbols offered as examples in error messages and schema descriptions.</summary>
+    public static string ExampleUnits(this QuantityKind kind) => kind switch
+    {
+        QuantityKind.Length => "m, cm, mm, km",
+        QuantityKind.Power => "W, kW, MW",
+        QuantityKind.Temperature => "K, °C",
+        QuantityKind.Duration => "s, min, h, d, yr",
+        QuantityKind.Mass => "kg, g, t",
+        QuantityKind.Speed => "m/s, km/h",
+        QuantityKind.Acceleration => "m/s², m/s^2",
+        QuantityKind.Energy => "J, kJ, Wh, kWh",
+        QuantityKind.MassFraction => "g/kg, %",
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+    };
+}

@@ -1,0 +1,36 @@
+using System.Globalization;
+using System.Text.RegularExpressions;
+using UnitsNet;
+
+namespace DescentOps.Scenarios.Format;
+
+/// <summary>
+/// Reads "12 cm", "5kW", "250K", "400 d" into SI numbers with UnitsNet, culture-invariant. Shared by the
+/// scenario loader and the command line so both accept exactly the same spellings.
+/// </summary>
+public static partial class QuantityParser
+{
+    public static bool TryParseSi(QuantityKind kind, string text, out double valueSi, out string error)
+    {
+        var trimmed = text.Trim();
+        if (Quantity.TryParse(CultureInfo.InvariantCulture, kind.UnitsNetType(), trimmed, out IQuantity? quantity))
+        {
+            var baseUnit = quantity.QuantityInfo.BaseUnitInfo.Value;
+            valueSi = (double)UnitConverter.Convert(quantity.Value, quantity.Unit, baseUnit);
+            if (double.IsFinite(valueSi))
+            {
+                error = "";
+                return true;
+            }
+        }
+
+        valueSi = double.NaN;
+        error = NumberOnly().IsMatch(trimmed)
+            ? $"a unit is required, e.g. '{trimmed} {kind.ExampleUnits().Split(',')[0]}'"
+            : $"'{text}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()})";
+        return false;
+    }
+
+    [GeneratedRegex(@"^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$")]
+    private static partial Regex NumberOnly();
+}

@@ -1,0 +1,83 @@
+using static DescentOps.Scenarios.Format.QuantityKind;
+
+namespace DescentOps.Scenarios.Format;
+
+/// <summary>
+/// The scenario format, version 1: every section and field a scenario file may hold, with its unit
+/// dimension, bounds and meaning. Bounds are wide physical plausibility limits, not design limits: they
+/// catch a typed "12 m" radius, not a bold design.
+/// </summary>
+public static class ScenarioFormat
+{
+    public const string Version = "descentops-scenario/1";
+
+    private const double Day = 86_400;
+    private const double Year = 365.25 * Day;
+
+    public static SectionField Root { get; } = new(
+        "",
+        "A DescentOps scenario: the icy body, its ice shell, the probe, tether, station and vehicles, the faults to inject and the run settings.",
+        [
+            new TextField("scenario", "Scenario identifier, written into every log (lowercase letters, digits, '-').", IsIdentifier: true),
+            new TextField("description", "What this scenario rehearses, in a sentence or two.", Required: false),
+            new SectionField("body", "The icy body and the site.",
+            [
+                new TextField("name", "Name of the body."),
+                new TextField("site", "Name of the landing site."),
+                new QuantityField("gravity", "Surface gravity.", Acceleration, 0, 30, MinExclusive: true),
+                new QuantityField("distance_to_ground", "Distance from the surface station to the ground team, for the one-way light time.", Length, 0, 1e14),
+            ]),
+            new SectionField("shell", "The ice shell above the ocean.",
+            [
+                new QuantityField("thickness", "Ice thickness from the surface to the ocean.", Length, 0, 200_000, MinExclusive: true),
+                new QuantityField("surface_temperature", "Ice temperature at the surface.", Temperature, 20, 273.15),
+                new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (absolute, mass of salt per mass of seawater).", MassFraction, 0, 0.12),
+            ]),
+            new SectionField("probe", "The melt probe.",
+            [
+                new TextField("name", "Name of the probe."),
+                new QuantityField("radius", "Outer radius of the probe and its melting head.", Length, 0, 2, MinExclusive: true),
+                new QuantityField("length", "Length of the probe body.", Length, 0, 30, MinExclusive: true),
+                new QuantityField("mass", "Mass of the probe.", Mass, 0, 20_000, MinExclusive: true),
+                new QuantityField("head_power", "Heater power delivered to the melting head.", Power, 0, 1e6),
+                new QuantityField("wall_power", "Heater power delivered to the side walls.", Power, 0, 1e6),
+                new QuantityField("electronics_power", "Power drawn by on-board electronics.", Power, 0, 1e5),
+                new NumberField("head_efficiency", "Share of head power that goes into forward melting (0 to 1).", 0.01, 1),
+                new QuantityField("telemetry_interval", "Time between telemetry frames.", Duration, 1, Day),
+            ]),
+            new SectionField("tether", "The fibre-optic tether paid out by the probe.",
+            [
+                new QuantityField("length", "Fibre length on the spool.", Length, 0, 300_000, MinExclusive: true),
+                new QuantityField("signal_speed", "Speed of light in the fibre (about c/1.468 in silica fibre).", Speed, 1e7, 299_792_458),
+            ]),
+            new SectionField("station", "The surface station.",
+            [
+                new TextField("name", "Name of the station."),
+                new QuantityField("forwarding_delay", "Time the station takes to pass a frame on.", Duration, 0, 3600),
+            ]),
+            new ListField("vehicles", "Vehicles released into the ocean at breakthrough.", new SectionField("vehicle", "One vehicle.",
+            [
+                new TextField("name", "Vehicle identifier (lowercase letters, digits, '-').", IsIdentifier: true),
+                new QuantityField("battery", "Usable battery energy at release.", Energy, 0, 1e10, MinExclusive: true),
+                new NumberField("reserve", "Battery share kept for the return and docking; the task stops when only this is left.", 0, 0.9),
+                new QuantityField("hotel_power", "Power drawn by sensors and electronics.", Power, 0, 1e4),
+                new QuantityField("propulsion_power", "Power drawn by propulsion while moving.", Power, 0, 1e5),
+                new QuantityField("speed", "Speed through the water while profiling.", Speed, 0, 10, MinExclusive: true),
+                new QuantityField("profile_depth", "Depth below the ice of each water-column profile.", Length, 0, 100_000, MinExclusive: true),
+                new NumberField("speed_variation", "Standard deviation of the speed made good over one leg, as a share of the speed (currents); 0 for none.", 0, 0.5, Required: false),
+            ]), MinItems: 0, MaxItems: 16, Required: false),
+            new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
+            [
+                new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),
+                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure"]),
+                new QuantityField("at", "Simulated time after the start of the run when the fault begins.", Duration, 0, 1000 * Year),
+                new QuantityField("duration", "How long the fault lasts; omit for a fault that stays.", Duration, 0, 1000 * Year, Required: false, MinExclusive: true),
+                new NumberField("remaining_fraction", "For power_dip: the share of heater power left during the dip (0 to 1).", 0, 1, Required: false),
+            ]), MinItems: 0, MaxItems: 1000, Required: false),
+            new SectionField("run", "Run settings; the command line may override them.",
+            [
+                new IntegerField("seed", "Seed of the run's random streams.", long.MinValue, long.MaxValue),
+                new QuantityField("until", "Simulated time limit of the run.", Duration, 0, 1000 * Year, MinExclusive: true),
+            ]),
+        ]);
+}

@@ -1,0 +1,146 @@
+using System.Text;
+using DescentOps.Scenarios.Format;
+using DescentOps.Scenarios.Model;
+using YamlDotNet.Core;
+using YamlDotNet.RepresentationModel;
+
+namespace DescentOps.Scenarios.Loading;
+
+/// <summary>
+/// Reads scenario files. Every problem is reported as a <see cref="ScenarioException"/> that lists each
+/// error with its file, line, column and field path; nothing else escapes to the caller.
+/// </summary>
+public static class ScenarioLoader
+{
+    public static Scenario LoadFile(string path)
+    {
+        string text;
+        try
+        {
+            text = File.ReadAllText(path, Encoding.UTF8);
+        }
+        catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
+        {
+            throw new ScenarioException([new ScenarioError(new SourceLocation(path, 1, 1), "", $"cannot read the file: {exception.Message}")]);
+        }
+
+        return LoadText(text, path);
+    }
+
+    /// <summary>Parses <paramref name="text"/>; <paramref name="sourceName"/> is the file name errors carry.</summary>
+    public static Scenario LoadText(string text, string sourceName, ISet<string>? readPaths = null)
+    {
+        var errors = new List<ScenarioError>();
+        var stream = new YamlStream();
+        var parser = new Parser(new StringReader(text));
+        try
+        {
+            stream.Load(parser);
+        }
+        catch (YamlException exception)
+        {
+            var message = exception.InnerException?.Message ?? exception.Message;
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)exception.Start.Line, (int)exception.Start.Column), "", $"YAML syntax: {Trim(message)}")]);
+        }
+        catch (InvalidOperationException)
+        {
+            // The YAML scanner throws this bare exception for some malformed flow collections; the parser's
+            // last good token is then the best location there is.
+            var mark = parser.Current?.End ?? Mark.Empty;
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", "YAML syntax: a flow collection ('[...]' or '{...}') is not closed or is malformed near here")]);
+        }
+
+        if (stream.Documents.Count != 1)
+        {
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, 1, 1), "", $"expected one YAML document, found {stream.Documents.Count}")]);
+        }
+
+        var binder = new YamlBinder(sourceName, errors, readPaths);
+        var root = binder.BindSection(stream.Documents[0].RootNode, ScenarioFormat.Root, "");
+        if (errors.Count > 0 || root is null)
+        {
+            throw new ScenarioException([.. errors.OrderBy(e => e.Location.Line).ThenBy(e => e.Location.Column)]);
+        }
+
+        var scenario = Build(root, sourceName, text);
+        CheckConsistency(scenario, root, errors);
+        return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
+    }
+
+    private static Scenario Build(BoundSection root, string sourceName, string text)
+    {
+        var body = root.Section("body");
+        var shell = root.Section("shell");
+        var probe = root.Section("probe");
+        var tether = root.Section("tether");
+        var station = root.Section("station");
+        var run = root.Section("run");
+        return new Scenario(
+            root.Text("scenario"),
+            root.OptionalText("description") ?? "",
+            new BodyModel(body.Text("name"), body.Text("site"), body.Quantity("gravity"), body.Quantity("distance_to_ground")),
+            new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity")),
+            new ProbeModel(
+                probe.Text("name"),
+                probe.Quantity("radius"),
+                probe.Quantity("length"),
+                probe.Quantity("mass"),
+                probe.Quantity("head_power"),
+                probe.Quantity("wall_power"),
+                probe.Quantity("electronics_power"),
+                probe.Number("head_efficiency"),
+                probe.Quantity("telemetry_interval")),
+            new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
+            new StationModel(station.Text("name"), station.Quantity("forwarding_delay")),
+            [.. root.List("vehicles").Select(v => new VehicleModel(
+                v.Text("name"),
+                v.Quantity("battery"),
+                v.Number("reserve"),
+                v.Quantity("hotel_power"),
+                v.Quantity("propulsion_power"),
+                v.Quantity("speed"),
+                v.Quantity("profile_depth"),
+                v.OptionalNumber("speed_variation") ?? 0.0))],
+            [.. root.List("faults").Select(f => new FaultModel(
+                f.Text("name"),
+                ParseFaultKind(f.Text("kind")),
+                f.Quantity("at"),
+                f.OptionalQuantity("duration"),
+                f.OptionalNumber("remaining_fraction") ?? 0.0))],
+            new RunModel(run.Integer("seed"), run.Quantity("until")),
+            sourceName,
+            text);
+    }
+
+    /// <summary>Rules that tie fields together, which the per-field bounds cannot express.</summary>
+    private static void CheckConsistency(Scenario scenario, BoundSection root, List<ScenarioError> errors)
+    {
+        var faults = root.List("faults");
+        for (var i = 0; i < scenario.Faults.Count; i++)
+        {
+            if (scenario.Faults[i].Kind == FaultKind.PowerDip && scenario.Faults[i].DurationS is null)
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a power_dip needs a duration"));
+            }
+
+            if (scenario.Faults[i].Kind == FaultKind.TetherBreak && scenario.Faults[i].DurationS is not null)
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a broken fibre does not heal: a tether_break takes no duration"));
+            }
+        }
+    }
+
+    private static FaultKind ParseFaultKind(string word) => word switch
+    {
+        "power_dip" => FaultKind.PowerDip,
+        "tether_break" => FaultKind.TetherBreak,
+        "station_failure" => FaultKind.StationFailure,
+        _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
+    };
+
+    private static string Trim(string message)
+    {
+        var index = message.IndexOf(" (Line:", StringComparison.Ordinal);
+        return index > 0 ? message[..index] : message;
+    }
+}

@@ -1,0 +1,14 @@
+namespace DescentOps.Scenarios.Model;
+
+/// <summary>The faults a scenario can schedule. Names are the scenario file's words.</summary>
+public enum FaultKind
+{
+    /// <summary>Available heater power falls to a fraction for a time.</summary>
+    PowerDip,
+
+    /// <summary>The fibre parts at the depth reached: no frame crosses it again.</summary>
+    TetherBreak,
+
+    /// <summary>The surface station stops relaying.</summary>
+    StationFailure,
+}

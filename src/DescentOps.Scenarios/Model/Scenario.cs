@@ -1,0 +1,16 @@
+namespace DescentOps.Scenarios.Model;
+
+/// <summary>A loaded, validated scenario: every quantity in SI units, every reference resolved.</summary>
+public sealed record Scenario(
+    string Name,
+    string Description,
+    BodyModel Body,
+    ShellModel Shell,
+    ProbeModel Probe,
+    TetherModel Tether,
+    StationModel Station,
+    IReadOnlyList<VehicleModel> Vehicles,
+    IReadOnlyList<FaultModel> Faults,
+    RunModel Run,
+    string SourceName,
+    string SourceText);

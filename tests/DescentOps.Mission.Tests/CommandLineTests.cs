@@ -1,0 +1,66 @@
+namespace DescentOps.Mission.Tests;
+
+/// <summary>The descentops executable as a user meets it: exit codes, messages, files left behind.</summary>
+public sealed class CommandLineTests
+{
+    [Fact]
+    public async Task AMalformedScenarioIsReportedWithItsLocationAndLeavesNoLog()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        var scenario = Path.Combine(folder, "bad.yaml");
+        await File.WriteAllTextAsync(scenario, MissionHarness.DefaultText.Replace("  radius: 12 cm", "  radius: 12 kW", StringComparison.Ordinal));
+        var log = Path.Combine(folder, "out.jsonl");
+
+        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "run", scenario, "--log", log);
+
+        Assert.Equal(3, exit); // ExitCode.InvalidInput
+        var line = Array.FindIndex(MissionHarness.DefaultText.Split('\n'), l => l.StartsWith("  radius:", StringComparison.Ordinal)) + 1;
+        Assert.Contains($"{scenario}:{line}:11: field 'probe.radius'", stderr);
+        Assert.DoesNotContain("   at ", stderr); // no stack trace
+        Assert.Empty(Directory.GetFiles(folder, "out.jsonl*"));
+    }
+
+    [Fact]
+    public async Task AnUnknownOptionIsAUsageError()
+    {
+        var (exit, _, stderr) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), "run", "--sed", "3");
+        Assert.Equal(2, exit); // ExitCode.UsageError
+        Assert.Contains("--sed", stderr);
+    }
+
+    [Fact]
+    public async Task ARunStoppedByItsTimeLimitSaysSoInItsExitCodeAndLog()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "run", "--until", "10 d", "--log", "short.jsonl");
+        Assert.Equal(4, exit); // ExitCode.MissionNotCompleted
+        Assert.Contains("TimeLimit", stdout);
+        var last = File.ReadLines(Path.Combine(folder, "short.jsonl")).Last();
+        Assert.Contains("\"outcome\":\"TimeLimit\"", last);
+        Assert.Contains("\"final_t\":864000", last); // 10 d × 86400 s/d
+    }
+
+    [Fact]
+    public async Task VerifyFindsAnEditedLineAndNamesIt()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        await ToolProcess.RunAsync(folder, "run", "--until", "2 d", "--log", "a.jsonl");
+        var path = Path.Combine(folder, "a.jsonl");
+        var lines = await File.ReadAllLinesAsync(path);
+        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "verify", path)).ExitCode);
+
+        lines[41] = lines[41].Replace("\"t\":", "\"t\":1", StringComparison.Ordinal);
+        await File.WriteAllTextAsync(path, string.Join('\n', lines) + "\n");
+        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "verify", path);
+        Assert.Equal(6, exit); // ExitCode.VerificationFailed
+        Assert.Contains(":42:", stdout);
+    }
+
+    [Fact]
+    public async Task SchemaPrintsTheCommittedSchema()
+    {
+        var (exit, stdout, _) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), "schema");
+        Assert.Equal(0, exit);
+        Assert.Equal(DescentOps.Scenarios.Format.ScenarioJsonSchema.Generate(), stdout);
+    }
+}

@@ -1,0 +1,46 @@
+using DescentOps.Cli.Commands;
+using DescentOps.Journal;
+using DescentOps.Mission.Running;
+using DescentOps.Scenarios;
+using DescentOps.Scenarios.Loading;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>Runs missions the way the command line does, into memory.</summary>
+internal static class MissionHarness
+{
+    public static string DefaultText => BuiltInScenarios.Text(BuiltInScenarios.DefaultName);
+
+    public static Scenario Edited(params (string Line, string Replacement)[] edits)
+    {
+        var text = DefaultText;
+        foreach (var (line, replacement) in edits)
+        {
+            Assert.Contains(line, text);
+            text = text.Replace(line, replacement, StringComparison.Ordinal);
+        }
+
+        return ScenarioLoader.LoadText(text, "edited.yaml");
+    }
+
+    public static async Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(Scenario scenario, KernelChoice kernel = KernelChoice.Sequential, long? seed = null)
+    {
+        var sink = new CollectingSink();
+        var summary = await MissionRunner.RunAsync(scenario, seed ?? scenario.Run.Seed, scenario.Run.UntilS, sink, kernel);
+        return (summary, sink);
+    }
+
+    /// <summary>The complete journal bytes of a run, exactly as <c>descentops run</c> writes them.</summary>
+    public static async Task<byte[]> JournalBytesAsync(Scenario scenario, long seed, KernelChoice kernel)
+    {
+        using var stream = new MemoryStream();
+        using (var writer = JournalWriter.Create(stream, RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS)))
+        {
+            var summary = await MissionRunner.RunAsync(scenario, seed, scenario.Run.UntilS, writer, kernel);
+            writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
+        }
+
+        return stream.ToArray();
+    }
+}

@@ -1,0 +1,107 @@
+using DescentOps.Scenarios.Loading;
+
+namespace DescentOps.Scenarios.Tests;
+
+/// <summary>Each malformed input gets one clear error with its file, line, column and field path.</summary>
+public sealed class MalformedScenarioTests
+{
+    private const string File = "bad.yaml";
+
+    private static ScenarioError SingleError(string text)
+    {
+        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
+        var error = Assert.Single(exception.Errors);
+        Assert.Equal(File, error.Location.File);
+        return error;
+    }
+
+    [Fact]
+    public void AYamlSyntaxErrorIsLocated()
+    {
+        var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: [12 cm");
+        var error = SingleError(text);
+        Assert.Contains("YAML syntax", error.Message);
+        // The parser notices the unclosed '[' when the flow sequence meets the next line's key.
+        Assert.InRange(error.Location.Line, ScenarioText.LineOf(text, "radius: [12 cm"), ScenarioText.LineOf(text, "radius: [12 cm") + 1);
+    }
+
+    [Fact]
+    public void AnUnknownFieldIsNamedWithItsPath()
+    {
+        var text = ScenarioText.DefaultWith("  mass: 190 kg", "  mass: 190 kg\n  colour: orange");
+        var error = SingleError(text);
+        Assert.Equal("probe.colour", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "colour: orange"), error.Location.Line);
+        Assert.Equal(3, error.Location.Column);
+        Assert.Contains("unknown field", error.Message);
+    }
+
+    [Fact]
+    public void AMissingFieldIsNamedAtItsSection()
+    {
+        var text = ScenarioText.DefaultWith("  head_power: 5 kW\n", "");
+        var error = SingleError(text);
+        Assert.Equal("probe.head_power", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "  name: Spindle"), error.Location.Line);
+        Assert.Contains("missing required field", error.Message);
+    }
+
+    [Fact]
+    public void ANegativeLengthIsOutOfRange()
+    {
+        var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: -12 cm");
+        var error = SingleError(text);
+        Assert.Equal("probe.radius", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "radius: -12 cm"), error.Location.Line);
+        Assert.Equal(11, error.Location.Column);
+        Assert.Contains("out of range", error.Message);
+    }
+
+    [Fact]
+    public void AUnitOfTheWrongDimensionIsRefused()
+    {
+        var text = ScenarioText.DefaultWith("  length: 2.4 m", "  length: 2.4 kW");
+        var error = SingleError(text);
+        Assert.Equal("probe.length", error.FieldPath);
+        Assert.Contains("is not a length", error.Message);
+    }
+
+    [Fact]
+    public void ANumberWithoutAUnitAsksForOne()
+    {
+        var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: 12");
+        var error = SingleError(text);
+        Assert.Contains("a unit is required", error.Message);
+    }
+
+    [Fact]
+    public void ErrorsInAListNameTheEntry()
+    {
+        var text = ScenarioText.DefaultWith("    speed: 0.35 m/s", "    speed: fast");
+        var error = SingleError(text);
+        Assert.Equal("vehicles[1].speed", error.FieldPath);
+    }
+
+    [Fact]
+    public void EveryProblemIsReportedNotOnlyTheFirst()
+    {
+        var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: -1 m").Replace("  length: 2.4 m", "  length: 2.4 kW", StringComparison.Ordinal);
+        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
+        Assert.Equal(["probe.radius", "probe.length"], exception.Errors.Select(e => e.FieldPath));
+    }
+
+    [Fact]
+    public void APowerDipWithoutADurationIsRefused()
+    {
+        var text = ScenarioText.DefaultWith("    duration: 12 h\n", "");
+        var error = SingleError(text);
+        Assert.Equal("faults[0].duration", error.FieldPath);
+    }
+
+    [Fact]
+    public void AMissingFileIsAScenarioErrorNotACrash()
+    {
+        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadFile(Path.Combine(Path.GetTempPath(), "no-such-scenario.yaml")));
+        Assert.Contains("cannot read", Assert.Single(exception.Errors).Message);
+    }
+}

@@ -1,0 +1,86 @@
+using System.Globalization;
+using System.Text.Json.Nodes;
+using DescentOps.Scenarios.Format;
+using DescentOps.Scenarios.Loading;
+using Json.Schema;
+using YamlDotNet.RepresentationModel;
+
+namespace DescentOps.Scenarios.Tests;
+
+/// <summary>The committed JSON Schema, the format tree and the loader must describe the same files.</summary>
+public sealed class SchemaAgreementTests
+{
+    private static string CommittedSchema => File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "shared", "scenario.schema.json"));
+
+    [Fact]
+    public void TheCommittedSchemaIsTheGeneratedOne()
+    {
+        // If this fails, regenerate: dotnet run --project src/DescentOps.Cli -- schema > shared/scenario.schema.json
+        Assert.Equal(ScenarioJsonSchema.Generate(), CommittedSchema);
+    }
+
+    [Fact]
+    public void TheLoaderReadsEveryFieldTheFormatDefines()
+    {
+        var read = new HashSet<string>(StringComparer.Ordinal);
+        ScenarioLoader.LoadText(ScenarioText.Default, "default.yaml", read);
+
+        var defined = Paths(ScenarioFormat.Root, "").ToHashSet(StringComparer.Ordinal);
+        Assert.Empty(defined.Except(read));
+        Assert.Empty(read.Except(defined));
+    }
+
+    [Fact]
+    public void TheDefaultScenarioIsValidAgainstTheSchema()
+    {
+        var schema = JsonSchema.FromText(CommittedSchema);
+        var result = schema.Evaluate(ToJson(ScenarioText.Default), new EvaluationOptions { OutputFormat = OutputFormat.List });
+        Assert.True(result.IsValid, string.Join("; ", result.Details.Where(d => d.HasErrors).SelectMany(d => d.Errors!.Select(e => $"{d.InstanceLocation}: {e.Value}"))));
+    }
+
+    [Fact]
+    public void TheSchemaRejectsWhatTheLoaderRejects()
+    {
+        var schema = JsonSchema.FromText(CommittedSchema);
+        var unknownField = ScenarioText.DefaultWith("  mass: 190 kg", "  mass: 190 kg\n  colour: orange");
+        var noUnit = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: 12");
+        Assert.False(schema.Evaluate(ToJson(unknownField)).IsValid);
+        Assert.False(schema.Evaluate(ToJson(noUnit)).IsValid);
+        Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(unknownField, "x.yaml"));
+        Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(noUnit, "x.yaml"));
+    }
+
+    private static IEnumerable<string> Paths(SectionField section, string prefix)
+    {
+        foreach (var field in section.Fields)
+        {
+            var path = prefix.Length == 0 ? field.Name : prefix + "." + field.Name;
+            yield return path;
+            var children = field switch
+            {
+                SectionField child => Paths(child, path),
+                ListField list => Paths(list.Item, path + "[]"),
+                _ => [],
+            };
+            foreach (var child in children) yield return child;
+        }
+    }
+
+    /// <summary>YAML to JSON as an editor's YAML plugin sees it: plain scalars that read as numbers are numbers.</summary>
+    private static JsonNode? ToJson(string yaml)
+    {
+        var stream = new YamlStream();
+        stream.Load(new StringReader(yaml));
+        return Convert(stream.Documents[0].RootNode);
+    }
+
+    private static JsonNode? Convert(YamlNode node) => node switch
+    {
+        YamlMappingNode map => new JsonObject(map.Children.Select(kv => KeyValuePair.Create(((YamlScalarNode)kv.Key).Value!, Convert(kv.Value)))),
+        YamlSequenceNode seq => new JsonArray([.. seq.Children.Select(Convert)]),
+        YamlScalarNode { Style: YamlDotNet.Core.ScalarStyle.Plain } s when long.TryParse(s.Value, NumberStyles.Integer, CultureInfo.InvariantCulture, out var l) => JsonValue.Create(l),
+        YamlScalarNode { Style: YamlDotNet.Core.ScalarStyle.Plain } s when double.TryParse(s.Value, NumberStyles.Float, CultureInfo.InvariantCulture, out var d) => JsonValue.Create(d),
+        YamlScalarNode s => JsonValue.Create(s.Value),
+        _ => throw new InvalidOperationException(node.NodeType.ToString()),
+    };
+}
