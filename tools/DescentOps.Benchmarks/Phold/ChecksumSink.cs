@@ -3,11 +3,11 @@ using DescentOps.Engine.Journaling;
 namespace DescentOps.Benchmarks.Phold;
 
 /// <summary>
-/// The lean sink: counts every record and keeps only the processes' checksum lines. It stands in for a
-/// file journal where none is available, so the journal column then measures the cost of producing and
-/// committing records, not of encoding or writing them.
+/// The lean sink: counts every record and keeps only the processes' checksum lines, then hands the record
+/// on to <paramref name="next"/> if there is one (the file journal). Alone it measures the cost of producing
+/// and committing records, not of encoding or writing them.
 /// </summary>
-public sealed class ChecksumSink : IJournalSink
+public sealed class ChecksumSink(IJournalSink? next = null) : IJournalSink
 {
     private readonly SortedDictionary<string, ulong> _checksums = new(StringComparer.Ordinal);
 
@@ -20,6 +20,8 @@ public sealed class ChecksumSink : IJournalSink
         {
             _checksums[record.Source.Name] = unchecked((ulong)record.Fields[0].Integer);
         }
+
+        next?.Write(record);
     }
 
     /// <summary>Process hashes folded in process index order, matching the plain engine.</summary>

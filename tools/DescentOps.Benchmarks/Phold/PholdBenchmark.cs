@@ -2,6 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using Akka.Actor;
 using Akka.Configuration;
+using DescentOps.Engine.Journaling;
 using DescentOps.Engine.Running;
 
 namespace DescentOps.Benchmarks.Phold;
@@ -17,21 +18,27 @@ public static class PholdBenchmark
     public static async Task<int> RunAsync(PholdOptions options, TextWriter output)
     {
         using var system = ActorSystem.Create("phold", Quiet);
+        using var file = new FileJournal();
+        Func<KernelSetup, Task<RunResult>> sequential = setup => Task.FromResult(SequentialKernel.Run(setup));
+        Func<KernelSetup, Task<RunResult>> actor = setup => ActorKernel.RunAsync(system, setup);
         EngineCase[] cases =
         [
             new("plain PriorityQueue", (o, law) => Task.FromResult(PlainPholdEngine.Run(o, law))),
-            new("SequentialKernel", (o, law) => Task.FromResult(Sequential(o, law, journalEvents: false))),
-            new("ActorKernel", (o, law) => Actor(system, o, law, journalEvents: false)),
-            new("SequentialKernel + counting sink", (o, law) => Task.FromResult(Sequential(o, law, journalEvents: true))),
-            new("ActorKernel + counting sink", (o, law) => Actor(system, o, law, journalEvents: true)),
+            new("SequentialKernel", (o, law) => KernelAsync(sequential, o, law, JournalMode.None, file)),
+            new("ActorKernel", (o, law) => KernelAsync(actor, o, law, JournalMode.None, file)),
+            new("SequentialKernel + counting sink", (o, law) => KernelAsync(sequential, o, law, JournalMode.Counting, file)),
+            new("ActorKernel + counting sink", (o, law) => KernelAsync(actor, o, law, JournalMode.Counting, file)),
+            new("SequentialKernel + file journal", (o, law) => KernelAsync(sequential, o, law, JournalMode.File, file)),
+            new("ActorKernel + file journal", (o, law) => KernelAsync(actor, o, law, JournalMode.File, file)),
         ];
 
         output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"PHOLD: {options.Processes} LPs, {options.Tokens} tokens, mean delay {options.MeanDelayMs} ms, ~{options.TargetEvents} events (until {options.Until}), seed {options.Seed}, median of {options.Repeats} after one warm-up, {Environment.ProcessorCount} cores"));
-        output.WriteLine("Journal column: lean counting sink (no file journal writer in this build); each LP journals every token it handles.");
+        output.WriteLine("Journal cases: each LP journals every token it handles; 'counting sink' only counts the records, 'file journal' writes them with JournalWriter to a temporary file.");
         var ok = true;
         foreach (var law in options.Laws)
         {
             ok &= await MeasureAsync(options, law, cases, output);
+            output.WriteLine(string.Create(CultureInfo.InvariantCulture, $"file journal: {file.LastBytes:N0} bytes for {file.LastRecords:N0} records ({file.LastBytes / (double)Math.Max(1, file.LastRecords):F0} B/record)"));
         }
 
         await system.Terminate();
@@ -89,17 +96,23 @@ public static class PholdBenchmark
         return same;
     }
 
-    private static PholdRun Sequential(PholdOptions options, DelayLaw law, bool journalEvents)
+    private static async Task<PholdRun> KernelAsync(Func<KernelSetup, Task<RunResult>> kernel, PholdOptions options, DelayLaw law, JournalMode mode, FileJournal file)
     {
-        var sink = new ChecksumSink();
-        var result = SequentialKernel.Run(new KernelSetup(PholdModel.Components(options, law, journalEvents), options.Seed, options.Until, sink));
-        return PholdModel.Summarise(options, result, sink);
-    }
+        var components = PholdModel.Components(options, law, journalEvents: mode != JournalMode.None);
+        KernelSetup Setup(IJournalSink sink) => new(components, options.Seed, options.Until, sink);
+        ChecksumSink sink;
+        RunResult result;
+        if (mode == JournalMode.File)
+        {
+            sink = null!;
+            result = await file.WriteAsync(options, law, writer => kernel(Setup(sink = new ChecksumSink(writer))));
+        }
+        else
+        {
+            sink = new ChecksumSink();
+            result = await kernel(Setup(sink));
+        }
 
-    private static async Task<PholdRun> Actor(ActorSystem system, PholdOptions options, DelayLaw law, bool journalEvents)
-    {
-        var sink = new ChecksumSink();
-        var result = await ActorKernel.RunAsync(system, new KernelSetup(PholdModel.Components(options, law, journalEvents), options.Seed, options.Until, sink));
         return PholdModel.Summarise(options, result, sink);
     }
 }
