@@ -80,19 +80,22 @@ public static class PholdBenchmark
             var run = t.Run!.Value;
             output.WriteLine(string.Create(
                 CultureInfo.InvariantCulture,
-                $"| {t.Engine.Label,-34} | {run.TokenEvents,9} | {t.MedianSeconds,8:F3} | {t.EventsPerSecond,11:N0} | {t.EventsPerSecond / plain.EventsPerSecond,7:F3} | {t.EventsPerSecond / sequential.EventsPerSecond,12:F3} | {t.EventsPerCpuSecond,12:N0} | {run.Checksum,18:x16} | {(run.Rounds is { } rounds ? (run.TokenEvents / (double)rounds).ToString("F2", CultureInfo.InvariantCulture) : "-"),12} | {t.AllocatedBytesPerEvent,13:F0} |"));
+                $"| {t.Engine.Label,-34} | {run.TokenEvents,9} | {t.MedianSeconds,8:F3} | {t.EventsPerSecond,11:N0} | {t.EventsPerSecond / plain.EventsPerSecond,7:F3} | {t.EventsPerSecond / sequential.EventsPerSecond,12:F3} | {t.EventsPerCpuSecond,12:N0} | {run.Checksum,18:x16} | {run.TokenEvents / (double)run.Rounds,12:F2} | {t.AllocatedBytesPerEvent,13:F0} |"));
         }
 
         output.WriteLine(string.Create(
             CultureInfo.InvariantCulture,
             $"ratios (wall): actor/plain = {actor.EventsPerSecond / plain.EventsPerSecond:F3}, actor/sequential-kernel = {actor.EventsPerSecond / sequential.EventsPerSecond:F3}; (CPU): actor/plain = {actor.EventsPerCpuSecond / plain.EventsPerCpuSecond:F3}, actor/sequential-kernel = {actor.EventsPerCpuSecond / sequential.EventsPerCpuSecond:F3}"));
 
-        var counts = timings.Select(t => t.Run!.Value.TokenEvents).Distinct().Count();
-        var checksums = timings.Select(t => t.Run!.Value.Checksum).Distinct().Count();
-        var same = counts == 1 && checksums == 1;
+        var structure = plain.Run!.Value;
+        output.WriteLine(string.Create(
+            CultureInfo.InvariantCulture,
+            $"actor kernel traffic: {structure.Batches:N0} batches in {structure.Rounds:N0} rounds, {structure.Batches / (double)structure.Rounds:F2} LPs per barrier, {2.0 * structure.Batches / structure.TokenEvents:F2} messages per event (one out, one back per batch)"));
+
+        var same = timings.Select(t => (t.Run!.Value.TokenEvents, t.Run!.Value.Checksum, t.Run!.Value.Rounds)).Distinct().Count() == 1;
         output.WriteLine(same
-            ? "check: all engines delivered the same number of events with the same order checksum"
-            : "CHECK FAILED: the engines disagree on the event count or the order checksum");
+            ? "check: all engines delivered the same number of events in the same rounds with the same order checksum"
+            : "CHECK FAILED: the engines disagree on the event count, the rounds or the order checksum");
         return same;
     }
 

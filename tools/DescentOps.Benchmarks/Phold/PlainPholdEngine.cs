@@ -45,8 +45,25 @@ public static class PlainPholdEngine
         }
 
         long delivered = 0;
+        // The kernels' first round hands out the starts at the epoch; this loop does them above, unqueued.
+        long rounds = 1;
+        long batches = ids.Length;
+        var roundOfLastBatch = new long[ids.Length];
+        var current = (Time: -1L, Generation: -1);
         while (queue.TryDequeue(out var e, out var key) && key.Time <= until)
         {
+            if ((key.Time, key.Generation) != current)
+            {
+                current = (key.Time, key.Generation);
+                rounds++;
+            }
+
+            if (roundOfLastBatch[e.Target] != rounds)
+            {
+                roundOfLastBatch[e.Target] = rounds;
+                batches++;
+            }
+
             if (e.Token == ReportToken)
             {
                 reportsDone[e.Target] = true;
@@ -58,7 +75,7 @@ public static class PlainPholdEngine
             Pass(key.Time, key.Generation, e.Target, e.Token);
         }
 
-        return new PholdRun(delivered, OrderChecksum.Combine(hashes));
+        return new PholdRun(delivered, OrderChecksum.Combine(hashes), rounds, batches);
     }
 
     // The kernels' EventPriority.Normal and .Last byte values.
