@@ -114,8 +114,9 @@ internal sealed class KernelCore
             }
 
             foreach (var record in result.Records) WriteRecord(record);
-            foreach (var handle in result.Cancelled) _events.Cancel(handle);
+            // Scheduled before cancelled: a handler may cancel an event it scheduled in this same handling.
             foreach (var scheduled in result.Scheduled) _events.Add(scheduled);
+            foreach (var handle in result.Cancelled) _events.Cancel(handle);
             stop ??= result.StopRequest;
         }
 
