@@ -35,6 +35,16 @@ internal sealed class KernelCore
             throw new ArgumentException("Two components share an id.", nameof(setup));
         }
 
+        if (_known.Contains(KernelId))
+        {
+            throw new ArgumentException($"'{KernelId}' is the kernel's own id; a component cannot use it.", nameof(setup));
+        }
+
+        if (setup.ProgressEveryRounds <= 0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(setup), setup.ProgressEveryRounds, "Progress must be reported every one round or more.");
+        }
+
         foreach (var component in setup.Components.OrderBy(c => c.Id))
         {
             var key = new EventKey(SimTime.Epoch, EventPriority.First, KernelId, _kernelSequence++);

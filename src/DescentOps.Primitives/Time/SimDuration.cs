@@ -23,7 +23,7 @@ public readonly record struct SimDuration(long Ticks) : IComparable<SimDuration>
     /// <summary>Rounds to the nearest tick; refuses NaN, infinities and spans beyond the tick range.</summary>
     public static SimDuration FromSeconds(double seconds)
     {
-        if (double.IsNaN(seconds) || double.IsInfinity(seconds) || Math.Abs(seconds) > long.MaxValue / (double)TicksPerSecond)
+        if (double.IsNaN(seconds) || double.IsInfinity(seconds) || Math.Abs(seconds) >= long.MaxValue / (double)TicksPerSecond)
         {
             throw new ArgumentOutOfRangeException(nameof(seconds), seconds, "A simulated duration must be finite and within ±9.2e12 s.");
         }
