@@ -8,11 +8,23 @@ namespace DescentOps.Engine.Running;
 /// component actors and collects their acknowledgements. A component actor that dies outside its handler
 /// (which the host's own catch should make impossible) ends the run as a kernel fault instead of a hang.
 /// </summary>
+/// <remarks>
+/// An instant whose events all go to one component has nothing to run in parallel; sending it to that
+/// component's actor would only cost two thread hand-offs. Such a round is handled here, on the
+/// coordinator's thread, through the same <see cref="ComponentHost"/> the actor holds: the barrier already
+/// guarantees the actor is idle, and the message hand-offs before and after order the memory accesses.
+/// After <see cref="InlineRoundsBeforeYield"/> such rounds in a row the next one goes through its actor, which
+/// lets the coordinator's mailbox (a Terminated, say) be read.
+/// </remarks>
 internal sealed class KernelActor : UntypedActor
 {
     private readonly KernelSetup _setup;
     private readonly TaskCompletionSource<RunResult> _completion;
+    private const int InlineRoundsBeforeYield = 1024;
+
     private readonly Dictionary<ComponentId, IActorRef> _actors = [];
+    private readonly Dictionary<ComponentId, ComponentHost> _hosts = [];
+    private readonly List<EventResult[]> _inline = [null!];
     private readonly List<EventResult[]> _acks = [];
     private KernelCore? _core;
     private long _round;
@@ -40,6 +52,7 @@ internal sealed class KernelActor : UntypedActor
                 var actor = Context.ActorOf(Props.Create(() => new ComponentActor(host)), "c" + index++);
                 Context.Watch(actor);
                 _actors.Add(component.Id, actor);
+                _hosts.Add(component.Id, host);
             }
         }
 #pragma warning disable CA1031 // Report every setup failure through the task instead of a dead actor.
@@ -79,18 +92,31 @@ internal sealed class KernelActor : UntypedActor
     {
         try
         {
-            if (!_core!.TryBeginRound(out var batches))
+            for (var inline = 0; ; inline++)
             {
-                Complete();
-                return;
-            }
+                if (!_core!.TryBeginRound(out var batches))
+                {
+                    Complete();
+                    return;
+                }
 
-            _round++;
-            _acks.Clear();
-            _awaiting = batches.Count;
-            foreach (var (target, events) in batches)
-            {
-                _actors[target].Tell(new ComponentActor.DeliverBatch(_round, _core.Now, events));
+                if (batches.Count == 1 && inline < InlineRoundsBeforeYield)
+                {
+                    var (target, events) = batches[0];
+                    _inline[0] = _hosts[target].HandleBatch(_core.Now, events);
+                    _core.CommitRound(_inline);
+                    continue;
+                }
+
+                _round++;
+                _acks.Clear();
+                _awaiting = batches.Count;
+                foreach (var (target, events) in batches)
+                {
+                    _actors[target].Tell(new ComponentActor.DeliverBatch(_round, _core.Now, events));
+                }
+
+                return;
             }
         }
 #pragma warning disable CA1031
