@@ -564,7 +564,8 @@ public sealed class RuleChecker
         var frontier = new Queue<string>(compiled.Where(r => r.StartsEnabled).Select(r => r.Name));
         while (frontier.Count > 0)
         {
-            var rule = compiled.First(r => r.Name == frontier.Dequeue());
+            var name = frontier.Dequeue();
+            var rule = compiled.First(r => r.Name == name);
             if (neverFires.Contains(rule.Name))
             {
                 continue;
