@@ -1,0 +1,6 @@
+using DescentOps.Rules.Units;
+
+namespace DescentOps.Rules.Catalogue;
+
+/// <summary>A measured point: its dimension and the physical range its sensor can report, in SI.</summary>
+public sealed record NumericPointSpec(string Name, Dimension Dimension, double MinimumSi, double MaximumSi) : TelemetryPointSpec(Name);

@@ -1,0 +1,6 @@
+using DescentOps.Rules.Units;
+
+namespace DescentOps.Rules.Catalogue;
+
+/// <summary>An argument that is a physical quantity within a range, in SI.</summary>
+public sealed record QuantityArgumentSpec(string Name, Dimension Dimension, double MinimumSi, double MaximumSi) : ArgumentSpec(Name);

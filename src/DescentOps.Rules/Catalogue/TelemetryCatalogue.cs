@@ -1,0 +1,33 @@
+namespace DescentOps.Rules.Catalogue;
+
+/// <summary>What the mission offers rules: the points they may watch and the commands they may send.</summary>
+public sealed class TelemetryCatalogue
+{
+    private readonly Dictionary<string, TelemetryPointSpec> _points = new(StringComparer.Ordinal);
+    private readonly Dictionary<(string Target, string Name), CommandSpec> _commands = [];
+    private readonly HashSet<string> _targets = new(StringComparer.Ordinal);
+
+    public TelemetryCatalogue(IEnumerable<TelemetryPointSpec> points, IEnumerable<CommandSpec> commands)
+    {
+        foreach (var point in points)
+        {
+            _points[point.Name] = point;
+        }
+
+        foreach (var command in commands)
+        {
+            _commands[(command.Target.Name, command.Name)] = command;
+            _targets.Add(command.Target.Name);
+        }
+    }
+
+    public TelemetryPointSpec? FindPoint(string name) => _points.GetValueOrDefault(name);
+
+    public CommandSpec? FindCommand(string target, string name) => _commands.GetValueOrDefault((target, name));
+
+    public bool HasTarget(string target) => _targets.Contains(target);
+
+    /// <summary>Command names a target accepts, sorted, for messages.</summary>
+    public IReadOnlyList<string> CommandsOf(string target) =>
+        _commands.Keys.Where(k => k.Target == target).Select(k => k.Name).Order(StringComparer.Ordinal).ToArray();
+}

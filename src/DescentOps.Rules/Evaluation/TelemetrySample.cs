@@ -1,0 +1,9 @@
+using DescentOps.Primitives.Time;
+
+namespace DescentOps.Rules.Evaluation;
+
+/// <summary>One reading of a point at an instant; the value holds until the point's next sample.</summary>
+public sealed record TelemetrySample(string Point, SimTime Time, TelemetryValue Value)
+{
+    public override string ToString() => $"{Point}={Value}@{Time}";
+}
