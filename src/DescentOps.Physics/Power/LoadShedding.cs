@@ -16,14 +16,16 @@ public static class LoadShedding
         ValidRange.RequireNonNegative(availablePowerW, nameof(availablePowerW), "W", Model);
         var running = new List<PoweredLoad>();
         var shed = new List<PoweredLoad>();
-        var spare = availablePowerW;
+        // Summing what is admitted, rather than subtracting from the budget, keeps the guarantee exact in floating
+        // point: the sum of the running loads, added in this order, never exceeds the available power.
+        var used = 0.0;
         foreach (var load in loads.OrderBy(l => l.Priority).ThenBy(l => l.Name, StringComparer.Ordinal))
         {
             ValidRange.RequireNonNegative(load.PowerW, nameof(load.PowerW), "W", Model);
-            if (load.PowerW <= spare)
+            if (used + load.PowerW <= availablePowerW)
             {
                 running.Add(load);
-                spare -= load.PowerW;
+                used += load.PowerW;
             }
             else
             {
@@ -31,6 +33,6 @@ public static class LoadShedding
             }
         }
 
-        return new LoadAllocation(running, shed, availablePowerW - spare, spare);
+        return new LoadAllocation(running, shed, used, availablePowerW - used);
     }
 }

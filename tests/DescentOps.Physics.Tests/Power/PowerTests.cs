@@ -123,15 +123,26 @@ public class PowerTests
         Assert.DoesNotContain(LoadShedding.Allocate(0.0, loads).Running, l => l.PowerW > 0);
     }
 
+    [Fact]
+    public void LoadSheddingHoldsToTheLastBit()
+    {
+        // The case the property below once shrank to: 0.1 + 0.1 + 0.4 rounds to 0.6000000000000001 > 0.6, so the
+        // 0.4 W load must be shed even though 0.6 − 0.1 − 0.1 − 0.4 leaves a tiny positive remainder.
+        var a = LoadShedding.Allocate(0.6, [new PoweredLoad("L0", 1, 0.1), new PoweredLoad("L1", 4, 0.4), new PoweredLoad("L2", 1, 0.1)]);
+        Assert.Equal(["L0", "L2"], a.Running.Select(l => l.Name));
+        Assert.True(a.Running.Sum(l => l.PowerW) <= 0.6);
+    }
+
     [Property(MaxTest = 300)]
     public void LoadSheddingNeverExceedsAvailablePower(ushort available, ushort[] powers)
     {
         var loads = (powers ?? []).Select((p, i) => new PoweredLoad(FormattableString.Invariant($"L{i}"), p % 5, p / 10.0)).ToArray();
         var a = LoadShedding.Allocate(available / 5.0, loads);
         Assert.True(a.Running.Sum(l => l.PowerW) <= available / 5.0);
+        Assert.True(a.SparePowerW >= 0.0);
         Approx.Abs(a.Running.Sum(l => l.PowerW), a.SuppliedPowerW, 1e-9, "supplied");
         Assert.Equal(loads.Length, a.Running.Count + a.Shed.Count);
-        Assert.All(a.Shed, l => Assert.True(l.PowerW > a.SparePowerW, "a shed load must not fit in what is left"));
+        Assert.All(a.Shed, l => Assert.True(a.SuppliedPowerW + l.PowerW > available / 5.0, "a shed load must not fit in what is left"));
     }
 
     [Fact]
