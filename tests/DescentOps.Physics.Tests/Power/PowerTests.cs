@@ -36,9 +36,11 @@ public class PowerTests
     [Fact]
     public void PublishedUnitEfficiencies()
     {
-        // PW-5: 110 W_e / 2000 W_th (NASA MMRTG fact sheet) and 300 / 4400 (GPHS-RTG, secondary source); CALC η.
-        Approx.Abs(0.0550, RadioisotopeHeatSource.Output(2000.0, 110.0 / 2000.0, 0.0, 0.0).ElectricPowerW / 2000.0, 1e-4, "MMRTG");
-        Approx.Abs(0.0682, 300.0 / 4400.0, 1e-4, "GPHS-RTG");
+        // PW-5: a flown thermoelectric unit's published 110 W_e from 2000 W_th (space agency fact sheet, as quoted in the
+        // reference note), i.e. η 5.50 % (CALC): at t = 0 the source must return exactly the beginning-of-life output.
+        var start = RadioisotopeHeatSource.Output(2000.0, 0.0550, 0.015, 0.0);
+        Approx.Abs(110.0, start.ElectricPowerW, 1e-9, "P_e at t = 0");
+        Approx.Abs(2000.0, start.ThermalPowerW, 1e-9, "P_th at t = 0");
     }
 
     [Fact]
