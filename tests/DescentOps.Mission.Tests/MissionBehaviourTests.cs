@@ -1,7 +1,6 @@
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Station;
-using DescentOps.Physics.Descent;
 
 namespace DescentOps.Mission.Tests;
 
@@ -11,26 +10,25 @@ public sealed class MissionBehaviourTests
     private static readonly (string, string) NoFaults = ("faults:\n  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.4\n", "");
 
     [Fact]
-    public async Task TheCrossingTimeIsTheIntegralOfOneOverTheMeltRate()
+    public async Task TheCrossingTimeIsTheIntegralOfOneOverTheDescentRate()
     {
         var scenario = MissionHarness.Edited(NoFaults);
         var (summary, _) = await MissionHarness.RunAsync(scenario);
 
-        // Computed reference: t = ∫0^H dz / v(z) by the midpoint rule on 20,000 slices, with the same
-        // melt-rate and shell formulas. It checks the event-driven integration and the crossing event,
-        // not the physics (the physics issue checks that against published values).
-        var shell = new ShellThermalProfile(scenario.Shell, scenario.Body.GravityMPerS2);
+        // Computed reference: t = ∫0^H dz / v(z) by the midpoint rule on 20,000 slices, with the descent
+        // model the probe runs on. It checks the event-driven integration and the two crossing events (end of
+        // sublimation, breakthrough), not the physics (the physics tests check that against published values).
+        var model = new ProbeComponent(scenario).Descent;
         const int slices = 20_000;
         var dz = scenario.Shell.ThicknessM / slices;
         var expected = 0.0;
         for (var i = 0; i < slices; i++)
         {
-            var z = (i + 0.5) * dz;
-            expected += dz / IdealMeltRate.VelocityMPerS(scenario.Probe.HeadPowerW, scenario.Probe.RadiusM, shell.TemperatureAtK(z), shell.MeltingTemperatureAtK(z), scenario.Probe.HeadEfficiency);
+            expected += dz / model.Rate((i + 0.5) * dz, scenario.Probe.HeadPowerW, scenario.Probe.WallPowerW).VelocityMPerS;
         }
 
         // The simulator holds velocity constant over each 10-minute frame interval (a left Riemann sum in
-        // time); over ~150 days that lags by well under 0.1 %.
+        // time); over ~110 days that lags by well under 0.1 %.
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
         Assert.InRange(summary.BreakthroughTimeS!.Value / expected, 0.999, 1.001);
         Assert.Equal(scenario.Shell.ThicknessM, summary.FinalDepthM, 9);
@@ -57,16 +55,54 @@ public sealed class MissionBehaviourTests
         var (nominalSummary, _) = await MissionHarness.RunAsync(nominal);
         var (dippedSummary, dippedSink) = await MissionHarness.RunAsync(dipped);
 
-        // Computed: during the dip the probe melts at f·v instead of v for a duration D, so it ends the dip
-        // (1 − f)·v·D short of the nominal probe. After that both move through the same velocity field v(z),
-        // so the dipped probe stays behind by the time the nominal one took over that distance, (1 − f)·D,
-        // to first order (v barely changes over the few metres lost).
+        // Computed: during the dip the probe moves at v_dip instead of v for a duration D, so it ends the
+        // dip (v − v_dip)·D short of the nominal probe. After that both move through the same velocity field
+        // v(z), so the dipped probe stays behind by the time the nominal one took over that distance,
+        // D·(1 − v_dip/v), to first order (v barely changes over the metres lost).
         var dip = dipped.Faults[0];
-        var expectedDelay = (1 - dip.RemainingFraction) * dip.DurationS!.Value;
+        var model = new ProbeComponent(dipped).Descent;
+        var depthAtDip = CollectingSink.Field(dippedSink.OfKind("probe.telemetry").Last(r => r.Time.SecondsSinceEpoch <= dip.AtS), "depth_m");
+        var v = model.Rate(depthAtDip, dipped.Probe.HeadPowerW, dipped.Probe.WallPowerW).VelocityMPerS;
+        var vDip = model.Rate(depthAtDip, dipped.Probe.HeadPowerW * dip.RemainingFraction, dipped.Probe.WallPowerW * dip.RemainingFraction).VelocityMPerS;
+        var expectedDelay = dip.DurationS!.Value * (1 - (vDip / v));
         Assert.Single(dippedSink.OfKind("fault.injected"));
 
         var delay = dippedSummary.BreakthroughTimeS!.Value - nominalSummary.BreakthroughTimeS!.Value;
         Assert.InRange(delay / expectedDelay, 0.99, 1.01);
+    }
+
+    [Fact]
+    public async Task AProbeWithoutPowerFreezesInAfterTheStefanTimeAndMeltsFreeWhenPowerReturns()
+    {
+        var scenario = MissionHarness.Edited(
+            ("    remaining_fraction: 0.4\n", "    remaining_fraction: 0\n"),
+            ("    duration: 12 h\n", "    duration: 2 h\n"));
+        var (summary, sink) = await MissionHarness.RunAsync(scenario);
+
+        var refreezing = sink.OfKind("probe.refreezing").Single();
+        var frozen = sink.OfKind("probe.regime").Single(r => r.Fields.Any(f => f.Name == "to" && f.Text == "FrozenIn"));
+        // Computed: the freeze-in instant is the stop plus the Stefan freeze time the probe reported, to the tick.
+        Assert.Equal(refreezing.Time.SecondsSinceEpoch + CollectingSink.Field(refreezing, "freeze_time_s"), frozen.Time.SecondsSinceEpoch, 1e-5);
+        var meltingFree = sink.OfKind("probe.melting_free").Single();
+        Assert.Equal(scenario.Faults[0].AtS + scenario.Faults[0].DurationS!.Value, meltingFree.Time.SecondsSinceEpoch, 1e-6);
+        var resumed = sink.OfKind("probe.regime").Single(r => r.Fields.Any(f => f.Name == "from" && f.Text == "MeltingFree"));
+        Assert.Equal(meltingFree.Time.SecondsSinceEpoch + CollectingSink.Field(meltingFree, "time_s"), resumed.Time.SecondsSinceEpoch, 1e-5);
+        Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
+    }
+
+    [Fact]
+    public async Task WallHeatersTooWeakToMeltFreeLeaveTheProbeHeldByTheIce()
+    {
+        // 0.3 kW of wall power is below the steady conduction loss of the stopped body in this ice (about 2 kW
+        // for a 2.4 m probe of 12 cm radius at 130-190 K, per StallLimit), so the frozen gap can never reopen.
+        var scenario = MissionHarness.Edited(
+            ("    remaining_fraction: 0.4\n", "    remaining_fraction: 0\n"),
+            ("  wall_power: 3 kW", "  wall_power: 0.3 kW"));
+        var (summary, sink) = await MissionHarness.RunAsync(scenario);
+
+        Assert.Single(sink.OfKind("probe.cannot_melt_free"));
+        Assert.Equal(RunOutcomeKind.TimeLimit, summary.Outcome.Kind);
+        Assert.Null(summary.BreakthroughTimeS);
     }
 
     [Fact]

@@ -28,7 +28,7 @@ public sealed class MalformedScenarioTests
     [Fact]
     public void AnUnknownFieldIsNamedWithItsPath()
     {
-        var text = ScenarioText.DefaultWith("  mass: 190 kg", "  mass: 190 kg\n  colour: orange");
+        var text = ScenarioText.DefaultWith("  mass: 210 kg", "  mass: 210 kg\n  colour: orange");
         var error = SingleError(text);
         Assert.Equal("probe.colour", error.FieldPath);
         Assert.Equal(ScenarioText.LineOf(text, "colour: orange"), error.Location.Line);
@@ -39,7 +39,7 @@ public sealed class MalformedScenarioTests
     [Fact]
     public void AMissingFieldIsNamedAtItsSection()
     {
-        var text = ScenarioText.DefaultWith("  head_power: 5 kW\n", "");
+        var text = ScenarioText.DefaultWith("  head_power: 6 kW\n", "");
         var error = SingleError(text);
         Assert.Equal("probe.head_power", error.FieldPath);
         Assert.Equal(ScenarioText.LineOf(text, "  name: Spindle"), error.Location.Line);

@@ -11,5 +11,6 @@ public sealed record TelemetryFrame(
     double VelocityMPerS,
     double IceTemperatureK,
     double HeadPowerW,
+    double WallPowerW,
     double EnergyUsedJ,
     int VehiclesActive);

@@ -3,32 +3,52 @@ using DescentOps.Engine.Journaling;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Descent;
+using DescentOps.Physics.Ice;
+using DescentOps.Physics.Refreezing;
+using DescentOps.Physics.Shell;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
 
 namespace DescentOps.Mission.Probe;
 
 /// <summary>
-/// The descending probe. Between events it melts at a constant rate set by the energy balance at its
-/// depth; a telemetry frame goes up the tether every interval, and the crossing into the ocean is an event
-/// at the exact instant the depth reaches the shell's thickness, not at the next sample.
+/// The descending probe. Between events it moves at the constant rate the descent model gives for its depth
+/// and power; a telemetry frame goes up the tether every interval; the end of the sublimation zone and the
+/// crossing into the ocean are events at the exact instant the depth reaches them. A probe that stops long
+/// enough for its water gap to freeze is held by the ice until its wall heaters melt it free.
 /// </summary>
 public sealed class ProbeComponent : SimComponent<ProbeState>
 {
     private readonly Scenario _scenario;
-    private readonly ShellThermalProfile _shell;
+    private readonly ProbeDescentModel _descent;
     private readonly SimDuration _frameInterval;
 
     public ProbeComponent(Scenario scenario)
         : base(MissionIds.Probe, FailurePolicy.AbortRun)
     {
         _scenario = scenario;
-        _shell = new ShellThermalProfile(scenario.Shell, scenario.Body.GravityMPerS2);
+        var shell = new IceShell(
+            scenario.Shell.SurfaceTemperatureK,
+            scenario.Shell.ThicknessM,
+            scenario.Body.GravityMPerS2,
+            scenario.Body.SurfacePressurePa,
+            [BasalLayer(scenario.Shell)]);
+        _descent = new ProbeDescentModel(shell, new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg));
         _frameInterval = SimDuration.FromSeconds(scenario.Probe.TelemetryIntervalS);
     }
 
+    /// <summary>The descent model this probe runs on (exposed for the physics benchmark and tests).</summary>
+    public ProbeDescentModel Descent => _descent;
+
     public override ProbeState InitialState => new(
-        ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, 0, 0);
+        ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0);
+
+    /// <summary>
+    /// The ice at the base freezes from the ocean, so its melting point is the ocean's freezing point: a one-metre
+    /// basal layer carries the ocean's salinity (MODEL; the shell above is fresh unless a scenario says otherwise).
+    /// </summary>
+    private static IceLayer BasalLayer(ShellModel shell) =>
+        new(Math.Max(0, shell.ThicknessM - 1.0), shell.ThicknessM, shell.OceanSalinityKgPerKg * 1000.0);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -37,12 +57,19 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case RunStarted:
                 context.Record("probe.started", Severity.Info,
                     RecordField.Of("shell_thickness_m", _scenario.Shell.ThicknessM),
-                    RecordField.Of("base_temperature_k", _shell.BaseTemperatureK),
-                    RecordField.Of("head_power_w", _scenario.Probe.HeadPowerW));
-                return Replan(Retune(state, context), context);
+                    RecordField.Of("base_temperature_k", _descent.Shell.BaseTemperatureK),
+                    RecordField.Of("base_pressure_pa", _descent.Shell.BasePressurePa),
+                    RecordField.Of("liquid_onset_depth_m", _descent.LiquidOnsetDepthM),
+                    RecordField.Of("head_power_w", _scenario.Probe.HeadPowerW),
+                    RecordField.Of("wall_power_w", _scenario.Probe.WallPowerW));
+                var initial = state with { Regime = _descent.LiquidOnsetDepthM > 0 ? ProbeRegime.Sublimating : ProbeRegime.Melting };
+                return Replan(Retune(initial, context), context);
 
             case ProbeStepDue:
                 return Step(Advance(state with { PendingStep = null }, context.Now), context);
+
+            case ProbeThermalDue due:
+                return Replan(Retune(Thermal(Advance(state with { PendingThermal = null }, context.Now), due, context), context), context);
 
             case FaultStarted { Fault.Kind: FaultKind.PowerDip } dip:
                 return Replan(Retune(Advance(state, context.Now) with { PowerFraction = dip.Fault.RemainingFraction }, context), context);
@@ -60,7 +87,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     private ProbeState Step(ProbeState state, ComponentContext context)
     {
-        if (state.Regime != ProbeRegime.AtOcean && state.DepthM >= _scenario.Shell.ThicknessM)
+        if (IsMoving(state.Regime) && state.DepthM >= _scenario.Shell.ThicknessM)
         {
             state = Breakthrough(state, context);
         }
@@ -86,39 +113,146 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         };
     }
 
-    /// <summary>Sets the velocity for the depth and power now in force, and logs a change of regime.</summary>
+    /// <summary>Sets regime and velocity for the depth and power now in force, logging every change of regime.</summary>
     private ProbeState Retune(ProbeState state, ComponentContext context)
     {
-        if (state.Regime == ProbeRegime.AtOcean) return state with { VelocityMPerS = 0.0 };
-
-        var velocity = IdealMeltRate.VelocityMPerS(
-            HeadPowerW(state),
-            _scenario.Probe.RadiusM,
-            _shell.TemperatureAtK(state.DepthM),
-            _shell.MeltingTemperatureAtK(state.DepthM),
-            _scenario.Probe.HeadEfficiency);
-        var regime = velocity > 0 ? ProbeRegime.Melting : ProbeRegime.Stopped;
-        if (regime != state.Regime)
+        switch (state.Regime)
         {
-            context.Record("probe.regime", regime == ProbeRegime.Stopped ? Severity.Warning : Severity.Notice,
-                RecordField.Of("from", state.Regime.ToString()),
-                RecordField.Of("to", regime.ToString()),
-                RecordField.Of("depth_m", state.DepthM));
+            case ProbeRegime.AtOcean:
+                return state with { VelocityMPerS = 0.0 };
+            case ProbeRegime.FrozenIn:
+                return StartMeltingFree(state, context);
+            case ProbeRegime.MeltingFree when WallPowerW(state) <= 0:
+                context.Cancel(state.PendingThermal!.Value);
+                return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "wall heaters lost while melting free");
+            case ProbeRegime.MeltingFree:
+                return state with { VelocityMPerS = 0.0 };
         }
 
-        return state with { Regime = regime, VelocityMPerS = velocity };
+        var rate = _descent.Rate(state.DepthM, HeadPowerW(state), WallPowerW(state));
+        if (rate.Regime == DescentRegimeKind.Stalled)
+        {
+            return state.Regime == ProbeRegime.Stopped ? state with { VelocityMPerS = 0.0 } : Stop(state, rate, context);
+        }
+
+        if (state.PendingThermal is { } freezing)
+        {
+            context.Cancel(freezing);
+            state = state with { PendingThermal = null };
+        }
+
+        var regime = rate.Regime == DescentRegimeKind.Sublimating ? ProbeRegime.Sublimating : ProbeRegime.Melting;
+        state = ChangeRegime(state, regime, context, "heater power and ice allow descent");
+        var deficit = rate.Regime == DescentRegimeKind.Melting && !rate.WallPowerSufficient;
+        if (deficit != state.WallDeficit)
+        {
+            context.Record(deficit ? "probe.wall_deficit" : "probe.wall_sufficient", deficit ? Severity.Warning : Severity.Notice,
+                RecordField.Of("depth_m", state.DepthM),
+                RecordField.Of("wall_power_w", WallPowerW(state)),
+                RecordField.Of("lateral_loss_w", rate.LateralLossW),
+                RecordField.Of("ice_temperature_k", rate.IceTemperatureK));
+        }
+
+        return state with { VelocityMPerS = rate.VelocityMPerS, LastMovingVelocityMPerS = rate.VelocityMPerS, WallDeficit = deficit };
     }
 
-    /// <summary>Replaces the pending timer by one at the next frame or the crossing, whichever comes first.</summary>
+    /// <summary>
+    /// The probe stops. Unless its wall heaters can hold the water gap open against the conduction loss of the
+    /// stopped body (<see cref="StallLimit"/>), the gap freezes after the time the Stefan problem gives
+    /// (<see cref="Refreeze.FreezeInAroundProbe"/>), with the ice behind the wall warmed for half the time the
+    /// body took to pass (MODEL: the exposure of the body's middle, ℓ/(2v)).
+    /// </summary>
+    private ProbeState Stop(ProbeState state, DescentRate rate, ComponentContext context)
+    {
+        state = ChangeRegime(state with { VelocityMPerS = 0.0 }, ProbeRegime.Stopped, context, "heater power below what descent needs");
+        if (state.Regime == ProbeRegime.Stopped && state.LastMovingVelocityMPerS > 0 && state.DepthM >= _descent.LiquidOnsetDepthM)
+        {
+            var phi = IceConductivity.KirchhoffPotentialWPerM(rate.IceTemperatureK, rate.MeltingTemperatureK, IceConductivityFit.PetrenkoWhitworth1999);
+            var holdOpenW = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(_scenario.Probe.RadiusM, _scenario.Probe.LengthM), phi);
+            if (WallPowerW(state) < holdOpenW)
+            {
+                var exposureS = _scenario.Probe.LengthM / (2 * state.LastMovingVelocityMPerS);
+                var freeze = Refreeze.FreezeInAroundProbe(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
+                context.Record("probe.refreezing", Severity.Alarm,
+                    RecordField.Of("depth_m", state.DepthM),
+                    RecordField.Of("gap_m", _scenario.Probe.FreezeGapM),
+                    RecordField.Of("freeze_time_s", freeze.FreezeTimeS),
+                    RecordField.Of("stefan_number", freeze.StefanNumber),
+                    RecordField.Of("hold_open_power_w", holdOpenW));
+                if (double.IsFinite(freeze.FreezeTimeS))
+                {
+                    var handle = context.ScheduleSelf(SimDuration.FromSeconds(freeze.FreezeTimeS), new ProbeThermalDue(ProbeRegime.FrozenIn), MissionPriority.Physics);
+                    state = state with { PendingThermal = handle };
+                }
+            }
+        }
+
+        return state;
+    }
+
+    private ProbeState Thermal(ProbeState state, ProbeThermalDue due, ComponentContext context) => due.Completes switch
+    {
+        ProbeRegime.FrozenIn when state.Regime == ProbeRegime.Stopped =>
+            ChangeRegime(state, ProbeRegime.FrozenIn, context, "the water gap around the body has frozen"),
+        ProbeRegime.Melting when state.Regime == ProbeRegime.MeltingFree =>
+            ChangeRegime(state, ProbeRegime.Stopped, context, "the frozen gap is melted open") with { LastMovingVelocityMPerS = 0.0 },
+        _ => throw new InvalidOperationException($"A thermal timer for {due.Completes} fired in regime {state.Regime}; its cancellation was missed."),
+    };
+
+    /// <summary>A frozen-in probe with wall power melts its gap open (<see cref="Refreeze.MeltFree"/>), or stays held.</summary>
+    private ProbeState StartMeltingFree(ProbeState state, ComponentContext context)
+    {
+        var wallW = WallPowerW(state);
+        if (wallW <= 0 || state.MeltFreeRefusedAtWallW == wallW) return state with { VelocityMPerS = 0.0 };
+        var iceK = _descent.Shell.TemperatureK(state.DepthM);
+        var meltingK = MeltingCurve.TemperatureK(Math.Max(_descent.Shell.PressurePa(state.DepthM), TriplePoint.PressurePa));
+        var exposureS = Math.Max(1.0, state.LastMovingVelocityMPerS > 0 ? _scenario.Probe.LengthM / (2 * state.LastMovingVelocityMPerS) : 1.0);
+        var free = Refreeze.MeltFree(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, _scenario.Probe.LengthM, wallW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK);
+        if (!double.IsFinite(free.TimeS))
+        {
+            context.Record("probe.cannot_melt_free", Severity.Critical,
+                RecordField.Of("depth_m", state.DepthM),
+                RecordField.Of("wall_power_w", wallW));
+            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = wallW };
+        }
+
+        context.Record("probe.melting_free", Severity.Notice,
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("wall_power_w", wallW),
+            RecordField.Of("time_s", free.TimeS),
+            RecordField.Of("energy_j", free.EnergyJ));
+        var handle = context.ScheduleSelf(SimDuration.FromSeconds(free.TimeS), new ProbeThermalDue(ProbeRegime.Melting), MissionPriority.Physics);
+        return ChangeRegime(state with { VelocityMPerS = 0.0, PendingThermal = handle, MeltFreeRefusedAtWallW = null }, ProbeRegime.MeltingFree, context, "wall heaters powered");
+    }
+
+    private static ProbeState ChangeRegime(ProbeState state, ProbeRegime regime, ComponentContext context, string cause)
+    {
+        if (regime == state.Regime) return state;
+        var severity = regime switch
+        {
+            ProbeRegime.Stopped => Severity.Warning,
+            ProbeRegime.FrozenIn => Severity.Critical,
+            _ => Severity.Notice,
+        };
+        context.Record("probe.regime", severity,
+            RecordField.Of("from", state.Regime.ToString()),
+            RecordField.Of("to", regime.ToString()),
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("cause", cause));
+        return state with { Regime = regime };
+    }
+
+    /// <summary>Replaces the pending step by one at the next frame or the next depth crossing, whichever comes first.</summary>
     private ProbeState Replan(ProbeState state, ComponentContext context)
     {
         if (state.PendingStep is { } pending) context.Cancel(pending);
 
         var next = state.NextFrameAt;
-        if (state.Regime == ProbeRegime.Melting)
+        if (IsMoving(state.Regime) && state.VelocityMPerS > 0)
         {
-            var remaining = _scenario.Shell.ThicknessM - state.DepthM;
-            // Rounded up to the next tick so the step lands on or just past the interface, never just short of it.
+            var target = state.Regime == ProbeRegime.Sublimating ? _descent.LiquidOnsetDepthM : _scenario.Shell.ThicknessM;
+            var remaining = Math.Max(0.0, target - state.DepthM);
+            // Rounded up to the next tick so the step lands on or just past the boundary, never just short of it.
             var crossing = context.Now + new SimDuration((long)Math.Ceiling(Math.Min(remaining / state.VelocityMPerS, 1e12) * SimDuration.TicksPerSecond));
             if (crossing < next) next = SimTime.Max(crossing, context.Now);
         }
@@ -135,8 +269,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             state.Regime.ToString(),
             state.DepthM,
             state.VelocityMPerS,
-            _shell.TemperatureAtK(state.DepthM),
+            _descent.Shell.TemperatureK(state.DepthM),
             HeadPowerW(state),
+            WallPowerW(state),
             state.EnergyUsedJ,
             state.VehiclesActive);
         context.Record("probe.telemetry", Severity.Debug,
@@ -146,6 +281,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("velocity_m_s", frame.VelocityMPerS),
             RecordField.Of("ice_temperature_k", frame.IceTemperatureK),
             RecordField.Of("head_power_w", frame.HeadPowerW),
+            RecordField.Of("wall_power_w", frame.WallPowerW),
             RecordField.Of("energy_used_j", frame.EnergyUsedJ));
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
@@ -167,12 +303,13 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             context.StopRun(RunOutcomeKind.Completed, "the probe reached the ocean; no vehicles to release");
         }
 
+        state = ChangeRegime(state, ProbeRegime.AtOcean, context, "breakthrough into the ocean");
         return state with
         {
-            Regime = ProbeRegime.AtOcean,
             BreakthroughAt = context.Now,
             VehiclesActive = _scenario.Vehicles.Count,
             NextFrameAt = context.Now,
+            WallDeficit = false,
         };
     }
 
@@ -194,10 +331,13 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         return next;
     }
 
+    private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
+
     private double HeadPowerW(ProbeState state) =>
         state.Regime == ProbeRegime.AtOcean ? 0.0 : _scenario.Probe.HeadPowerW * state.PowerFraction;
 
-    private double BusPowerW(ProbeState state) =>
-        HeadPowerW(state) + (state.Regime == ProbeRegime.AtOcean ? 0.0 : _scenario.Probe.WallPowerW * state.PowerFraction)
-        + _scenario.Probe.ElectronicsPowerW;
+    private double WallPowerW(ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean ? 0.0 : _scenario.Probe.WallPowerW * state.PowerFraction;
+
+    private double BusPowerW(ProbeState state) => HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW;
 }

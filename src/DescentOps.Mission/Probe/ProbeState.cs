@@ -5,18 +5,23 @@ namespace DescentOps.Mission.Probe;
 
 /// <summary>
 /// The probe's committed state. Velocity is held constant between events, so the depth at any instant is
-/// exact: DepthM + VelocityMPerS × (t − LastUpdate).
+/// exact: DepthM + VelocityMPerS × (t − LastUpdate). <see cref="MeltFreeRefusedAtWallW"/> remembers the wall power
+/// at which a frozen-in probe was found unable to melt free, so the (costly) estimate is redone only when that changes.
 /// </summary>
 public sealed record ProbeState(
     ProbeRegime Regime,
     SimTime LastUpdate,
     double DepthM,
     double VelocityMPerS,
+    double LastMovingVelocityMPerS,
     double PowerFraction,
     double EnergyUsedJ,
     long FramesSent,
     SimTime NextFrameAt,
     EventHandle? PendingStep,
+    EventHandle? PendingThermal,
+    bool WallDeficit,
+    double? MeltFreeRefusedAtWallW,
     SimTime? BreakthroughAt,
     int VehiclesActive,
     int VehiclesFinished);

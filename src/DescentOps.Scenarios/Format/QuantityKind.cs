@@ -14,6 +14,7 @@ public enum QuantityKind
     Acceleration,
     Energy,
     MassFraction,
+    Pressure,
 }
 
 public static class QuantityKindInfo
@@ -29,6 +30,7 @@ public static class QuantityKindInfo
         QuantityKind.Acceleration => typeof(Acceleration),
         QuantityKind.Energy => typeof(Energy),
         QuantityKind.MassFraction => typeof(MassFraction),
+        QuantityKind.Pressure => typeof(Pressure),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -44,6 +46,7 @@ public static class QuantityKindInfo
         QuantityKind.Acceleration => "m/s²",
         QuantityKind.Energy => "J",
         QuantityKind.MassFraction => "kg/kg",
+        QuantityKind.Pressure => "Pa",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -59,6 +62,7 @@ public static class QuantityKindInfo
         QuantityKind.Acceleration => "m/s², m/s^2",
         QuantityKind.Energy => "J, kJ, Wh, kWh",
         QuantityKind.MassFraction => "g/kg, %",
+        QuantityKind.Pressure => "Pa, kPa, MPa, bar",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }

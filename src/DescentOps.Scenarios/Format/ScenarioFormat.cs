@@ -26,12 +26,13 @@ public static class ScenarioFormat
                 new TextField("site", "Name of the landing site."),
                 new QuantityField("gravity", "Surface gravity.", Acceleration, 0, 30, MinExclusive: true),
                 new QuantityField("distance_to_ground", "Distance from the surface station to the ground team, for the one-way light time.", Length, 0, 1e14),
+                new QuantityField("surface_pressure", "Atmospheric pressure at the surface; omit (0 Pa) for an airless body, where the probe starts by sublimating.", Pressure, 0, 2e5, Required: false),
             ]),
             new SectionField("shell", "The ice shell above the ocean.",
             [
                 new QuantityField("thickness", "Ice thickness from the surface to the ocean.", Length, 0, 200_000, MinExclusive: true),
                 new QuantityField("surface_temperature", "Ice temperature at the surface.", Temperature, 20, 273.15),
-                new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (absolute, mass of salt per mass of seawater).", MassFraction, 0, 0.12),
+                new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (mass of salt per mass of seawater); it sets the freezing point at the base.", MassFraction, 0, 0.04),
             ]),
             new SectionField("probe", "The melt probe.",
             [
@@ -42,7 +43,7 @@ public static class ScenarioFormat
                 new QuantityField("head_power", "Heater power delivered to the melting head.", Power, 0, 1e6),
                 new QuantityField("wall_power", "Heater power delivered to the side walls.", Power, 0, 1e6),
                 new QuantityField("electronics_power", "Power drawn by on-board electronics.", Power, 0, 1e5),
-                new NumberField("head_efficiency", "Share of head power that goes into forward melting (0 to 1).", 0.01, 1),
+                new QuantityField("freeze_gap", "Water gap around the body that refreezes when the probe stops (default 0.5 mm).", Length, 0, 0.05, Required: false, MinExclusive: true),
                 new QuantityField("telemetry_interval", "Time between telemetry frames.", Duration, 1, Day),
             ]),
             new SectionField("tether", "The fibre-optic tether paid out by the probe.",

@@ -12,6 +12,9 @@ namespace DescentOps.Scenarios.Loading;
 /// </summary>
 public static class ScenarioLoader
 {
+    /// <summary>Water gap left around a stopped probe without side heaters: 0.5 mm (a modelling default, no published value).</summary>
+    public const double DefaultFreezeGapM = 0.5e-3;
+
     public static Scenario LoadFile(string path)
     {
         string text;
@@ -78,7 +81,7 @@ public static class ScenarioLoader
         return new Scenario(
             root.Text("scenario"),
             root.OptionalText("description") ?? "",
-            new BodyModel(body.Text("name"), body.Text("site"), body.Quantity("gravity"), body.Quantity("distance_to_ground")),
+            new BodyModel(body.Text("name"), body.Text("site"), body.Quantity("gravity"), body.Quantity("distance_to_ground"), body.OptionalQuantity("surface_pressure") ?? 0.0),
             new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity")),
             new ProbeModel(
                 probe.Text("name"),
@@ -88,8 +91,8 @@ public static class ScenarioLoader
                 probe.Quantity("head_power"),
                 probe.Quantity("wall_power"),
                 probe.Quantity("electronics_power"),
-                probe.Number("head_efficiency"),
-                probe.Quantity("telemetry_interval")),
+                probe.Quantity("telemetry_interval"),
+                probe.OptionalQuantity("freeze_gap") ?? DefaultFreezeGapM),
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
             new StationModel(station.Text("name"), station.Quantity("forwarding_delay")),
             [.. root.List("vehicles").Select(v => new VehicleModel(

@@ -1,6 +1,6 @@
 namespace DescentOps.Scenarios.Model;
 
-/// <summary>The melt probe as built: size, heaters, how well the head turns power into melting, telemetry cadence.</summary>
+/// <summary>The melt probe as built: size, mass, heaters, telemetry cadence, and the water gap that refreezes when it stops.</summary>
 public sealed record ProbeModel(
     string Name,
     double RadiusM,
@@ -9,5 +9,5 @@ public sealed record ProbeModel(
     double HeadPowerW,
     double WallPowerW,
     double ElectronicsPowerW,
-    double HeadEfficiency,
-    double TelemetryIntervalS);
+    double TelemetryIntervalS,
+    double FreezeGapM);
