@@ -10,6 +10,7 @@ public static class MissionIds
     public static ComponentId Station { get; } = new("station");
     public static ComponentId Ground { get; } = new("ground");
     public static ComponentId FaultInjector { get; } = new("fault-injector");
+    public static ComponentId Autonomy { get; } = new("autonomy");
 
     public static ComponentId Vehicle(string name) => new("vehicle-" + name);
 }

@@ -84,7 +84,7 @@ public sealed class MissionBehaviourTests
         // Computed: the freeze-in instant is the stop plus the Stefan freeze time the probe reported, to the tick.
         Assert.Equal(refreezing.Time.SecondsSinceEpoch + CollectingSink.Field(refreezing, "freeze_time_s"), frozen.Time.SecondsSinceEpoch, 1e-5);
         var meltingFree = sink.OfKind("probe.melting_free").Single();
-        Assert.Equal(scenario.Faults[0].AtS + scenario.Faults[0].DurationS!.Value, meltingFree.Time.SecondsSinceEpoch, 1e-6);
+        Assert.Equal(scenario.Faults[0].AtS!.Value + scenario.Faults[0].DurationS!.Value, meltingFree.Time.SecondsSinceEpoch, 1e-6);
         var resumed = sink.OfKind("probe.regime").Single(r => r.Fields.Any(f => f.Name == "from" && f.Text == "MeltingFree"));
         Assert.Equal(meltingFree.Time.SecondsSinceEpoch + CollectingSink.Field(meltingFree, "time_s"), resumed.Time.SecondsSinceEpoch, 1e-5);
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);

@@ -28,6 +28,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         FaultKind.PowerDip => MissionIds.Probe,
         FaultKind.TetherBreak => MissionIds.Tether,
         FaultKind.StationFailure => MissionIds.Station,
+        FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout => MissionIds.Probe,
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -38,24 +39,21 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             case RunStarted:
                 for (var i = 0; i < _faults.Count; i++)
                 {
-                    context.ScheduleSelf(SimDuration.FromSeconds(_faults[i].AtS), new FaultDue(i, false), MissionPriority.Fault);
+                    if (_faults[i].AtS is { } at)
+                    {
+                        context.ScheduleSelf(SimDuration.FromSeconds(at), new FaultDue(i, false), MissionPriority.Fault);
+                    }
+                    else
+                    {
+                        context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(i, _faults[i].AtDepthM!.Value), MissionPriority.Fault);
+                    }
                 }
 
                 return state;
+            case DepthTriggerReached reached:
+                return Inject(state, reached.FaultIndex, context);
             case FaultDue { IsEnd: false } due:
-                var fault = _faults[due.Index];
-                context.Record("fault.injected", Severity.Alarm,
-                    RecordField.Of("fault", fault.Name),
-                    RecordField.Of("kind", fault.Kind.ToString()),
-                    RecordField.Of("target", TargetOf(fault.Kind).Name),
-                    RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
-                context.Schedule(TargetOf(fault.Kind), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
-                if (fault.DurationS is { } duration)
-                {
-                    context.ScheduleSelf(SimDuration.FromSeconds(duration), new FaultDue(due.Index, true), MissionPriority.Fault);
-                }
-
-                return state with { Started = state.Started + 1 };
+                return Inject(state, due.Index, context);
             case FaultDue { IsEnd: true } due:
                 var ended = _faults[due.Index];
                 context.Record("fault.cleared", Severity.Notice, RecordField.Of("fault", ended.Name));
@@ -64,5 +62,23 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             default:
                 throw new InvalidOperationException($"The fault injector cannot handle {message.GetType().Name}.");
         }
+    }
+
+    private FaultInjectorState Inject(FaultInjectorState state, int index, ComponentContext context)
+    {
+        var fault = _faults[index];
+        context.Record("fault.injected", Severity.Alarm,
+            RecordField.Of("fault", fault.Name),
+            RecordField.Of("kind", fault.Kind.ToString()),
+            RecordField.Of("target", TargetOf(fault.Kind).Name),
+            RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
+        context.Schedule(TargetOf(fault.Kind), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
+        if (fault.DurationS is { } duration)
+        {
+            context.ScheduleSelf(SimDuration.FromSeconds(duration), new FaultDue(index, true), MissionPriority.Fault);
+        }
+
+        return state with { Started = state.Started + 1 };
     }
 }

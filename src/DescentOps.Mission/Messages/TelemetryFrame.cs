@@ -2,15 +2,26 @@ using DescentOps.Primitives.Time;
 
 namespace DescentOps.Mission.Messages;
 
-/// <summary>A housekeeping frame from the probe, as it travels up the tether and home.</summary>
+/// <summary>
+/// A housekeeping frame from the probe, as it travels up the tether and home. <see cref="Readings"/> are what the
+/// sensors report (a faulty sensor lies, a dropped one is missing); <see cref="PaidOutM"/> is the tether's own
+/// measure of fibre paid out, which is what the spool physically did.
+/// </summary>
 public sealed record TelemetryFrame(
     long Sequence,
     SimTime SampledAt,
     string Regime,
-    double DepthM,
-    double VelocityMPerS,
-    double IceTemperatureK,
-    double HeadPowerW,
-    double WallPowerW,
-    double EnergyUsedJ,
-    int VehiclesActive);
+    IReadOnlyList<(string Point, double Value)> Readings,
+    double PaidOutM,
+    int VehiclesActive)
+{
+    public double? Reading(string point)
+    {
+        foreach (var (name, value) in Readings)
+        {
+            if (name == point) return value;
+        }
+
+        return null;
+    }
+}

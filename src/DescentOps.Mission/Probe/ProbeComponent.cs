@@ -41,7 +41,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     public ProbeDescentModel Descent => _descent;
 
     public override ProbeState InitialState => new(
-        ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0);
+        ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
+        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], []);
 
     /// <summary>
     /// The ice at the base freezes from the ocean, so its melting point is the ocean's freezing point: a one-metre
@@ -80,13 +81,74 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
 
+            case Telecommand command:
+                return Replan(Retune(Execute(Advance(state, context.Now), command, context), context), context);
+
+            case ArmDepthTrigger arm:
+                return Replan(state with { DepthTriggers = state.DepthTriggers.Add(new ArmedDepthTrigger(arm.FaultIndex, arm.DepthM)) }, context);
+
+            case FaultStarted { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
+                return StartSensorFault(state, sensor.Fault, context);
+
+            case FaultCleared { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
+                context.Record("probe.sensor_restored", Severity.Notice, RecordField.Of("fault", sensor.Fault.Name), RecordField.Of("point", sensor.Fault.Point ?? ""));
+                return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Fault.Name == sensor.Fault.Name) };
+
             default:
                 throw new InvalidOperationException($"The probe cannot handle {message.GetType().Name}.");
         }
     }
 
+    /// <summary>
+    /// Carries out a telecommand. Set points are what the heaters are asked for; a power dip still scales what they
+    /// get. Safe mode stops the head and runs the wall heaters at their maximum to keep the water gap open.
+    /// </summary>
+    private ProbeState Execute(ProbeState state, Telecommand command, ComponentContext context)
+    {
+        var action = command.Command;
+        double Power() => action.Arguments.Single(a => a.Name == "power").ValueSi!.Value;
+        var next = (action.Target.Name, action.Command) switch
+        {
+            (Autonomy.MissionCatalogue.Head, "set_power") => state with { HeadSetpointW = Math.Min(Power(), _scenario.Probe.MaxHeadPowerW) },
+            (Autonomy.MissionCatalogue.Wall, "set_power") => state with { WallSetpointW = Math.Min(Power(), _scenario.Probe.MaxWallPowerW) },
+            ("probe", "pause_descent") => state with { Paused = true },
+            ("probe", "resume_descent") => state with { Paused = false },
+            ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = _scenario.Probe.MaxWallPowerW },
+            _ => throw new InvalidOperationException($"The probe has no command {action}."),
+        };
+        context.Record("command.executed", Severity.Notice,
+            RecordField.Of("command", action.ToString()),
+            RecordField.Of("origin", command.Origin),
+            RecordField.Of("placement", command.Placement),
+            RecordField.Of("issued_t_s", command.IssuedAt.SecondsSinceEpoch),
+            RecordField.Of("latency_s", (context.Now - command.IssuedAt).TotalSeconds),
+            RecordField.Of("head_setpoint_w", next.HeadSetpointW),
+            RecordField.Of("wall_setpoint_w", next.WallSetpointW),
+            RecordField.Of("paused", next.Paused));
+        return next;
+    }
+
+    private ProbeState StartSensorFault(ProbeState state, FaultModel fault, ComponentContext context)
+    {
+        var truth = TrueReadings(state).First(r => r.Point == fault.Point).Value;
+        var stuckAt = fault.Kind == FaultKind.SensorStuck ? fault.ValueSi ?? truth : (double?)null;
+        context.Record("probe.sensor_fault", Severity.Warning,
+            RecordField.Of("fault", fault.Name),
+            RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("mode", fault.Kind.ToString()),
+            RecordField.Of("true_value", truth));
+        return state with { SensorFaults = state.SensorFaults.Add(new ActiveSensorFault(fault, stuckAt)) };
+    }
+
     private ProbeState Step(ProbeState state, ComponentContext context)
     {
+        foreach (var trigger in state.DepthTriggers.Where(t => state.DepthM >= t.DepthM))
+        {
+            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new DepthTriggerReached(trigger.FaultIndex, state.DepthM), MissionPriority.Fault);
+        }
+
+        state = state with { DepthTriggers = state.DepthTriggers.RemoveAll(t => state.DepthM >= t.DepthM) };
+
         if (IsMoving(state.Regime) && state.DepthM >= _scenario.Shell.ThicknessM)
         {
             state = Breakthrough(state, context);
@@ -251,6 +313,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         if (IsMoving(state.Regime) && state.VelocityMPerS > 0)
         {
             var target = state.Regime == ProbeRegime.Sublimating ? _descent.LiquidOnsetDepthM : _scenario.Shell.ThicknessM;
+            foreach (var trigger in state.DepthTriggers)
+            {
+                if (trigger.DepthM > state.DepthM) target = Math.Min(target, trigger.DepthM);
+            }
+
             var remaining = Math.Max(0.0, target - state.DepthM);
             // Rounded up to the next tick so the step lands on or just past the boundary, never just short of it.
             var crossing = context.Now + new SimDuration((long)Math.Ceiling(Math.Min(remaining / state.VelocityMPerS, 1e12) * SimDuration.TicksPerSecond));
@@ -263,29 +330,52 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     private ProbeState SendFrame(ProbeState state, ComponentContext context)
     {
-        var frame = new TelemetryFrame(
-            state.FramesSent + 1,
-            context.Now,
-            state.Regime.ToString(),
-            state.DepthM,
-            state.VelocityMPerS,
-            _descent.Shell.TemperatureK(state.DepthM),
-            HeadPowerW(state),
-            WallPowerW(state),
-            state.EnergyUsedJ,
-            state.VehiclesActive);
+        var truth = TrueReadings(state);
+        var reported = new List<(string Point, double Value)>(truth.Count);
+        foreach (var (point, value) in truth)
+        {
+            var fault = state.SensorFaults.LastOrDefault(f => f.Fault.Point == point);
+            switch (fault?.Fault.Kind)
+            {
+                case null:
+                    reported.Add((point, value));
+                    break;
+                case FaultKind.SensorStuck:
+                    reported.Add((point, fault.StuckAtSi!.Value));
+                    break;
+                case FaultKind.SensorBias:
+                    reported.Add((point, value + fault.Fault.ValueSi!.Value));
+                    break;
+                case FaultKind.SensorDropout:
+                    break;
+            }
+        }
+
+        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
         context.Record("probe.telemetry", Severity.Debug,
             RecordField.Of("frame", frame.Sequence),
             RecordField.Of("regime", frame.Regime),
-            RecordField.Of("depth_m", frame.DepthM),
-            RecordField.Of("velocity_m_s", frame.VelocityMPerS),
-            RecordField.Of("ice_temperature_k", frame.IceTemperatureK),
-            RecordField.Of("head_power_w", frame.HeadPowerW),
-            RecordField.Of("wall_power_w", frame.WallPowerW),
-            RecordField.Of("energy_used_j", frame.EnergyUsedJ));
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("velocity_m_s", state.VelocityMPerS),
+            RecordField.Of("ice_temperature_k", truth[2].Value),
+            RecordField.Of("head_power_w", HeadPowerW(state)),
+            RecordField.Of("wall_power_w", WallPowerW(state)),
+            RecordField.Of("energy_used_j", state.EnergyUsedJ));
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
     }
+
+    /// <summary>What the probe's sensors would read if none were faulty, in the catalogue's point names and SI units.</summary>
+    private IReadOnlyList<(string Point, double Value)> TrueReadings(ProbeState state) =>
+    [
+        ("probe.depth", state.DepthM),
+        ("probe.velocity", state.VelocityMPerS),
+        ("probe.ice_temperature", _descent.Shell.TemperatureK(state.DepthM)),
+        ("probe.head_power", HeadPowerW(state)),
+        ("probe.wall_power", WallPowerW(state)),
+        ("probe.energy_used", state.EnergyUsedJ),
+    ];
 
     private ProbeState Breakthrough(ProbeState state, ComponentContext context)
     {
@@ -333,11 +423,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
-    private double HeadPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean ? 0.0 : _scenario.Probe.HeadPowerW * state.PowerFraction;
+    private static double HeadPowerW(ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * state.PowerFraction;
 
-    private double WallPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean ? 0.0 : _scenario.Probe.WallPowerW * state.PowerFraction;
+    private static double WallPowerW(ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW * state.PowerFraction;
 
     private double BusPowerW(ProbeState state) => HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW;
 }

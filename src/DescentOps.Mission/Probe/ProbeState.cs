@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using DescentOps.Engine.Scheduling;
 using DescentOps.Primitives.Time;
 
@@ -24,4 +25,12 @@ public sealed record ProbeState(
     double? MeltFreeRefusedAtWallW,
     SimTime? BreakthroughAt,
     int VehiclesActive,
-    int VehiclesFinished);
+    int VehiclesFinished,
+    double HeadSetpointW,
+    double WallSetpointW,
+    bool Paused,
+    ImmutableList<ActiveSensorFault> SensorFaults,
+    ImmutableList<ArmedDepthTrigger> DepthTriggers);
+
+/// <summary>A fault that starts when the head reaches a depth.</summary>
+public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

@@ -1,4 +1,5 @@
 using DescentOps.Engine.Components;
+using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Faults;
 using DescentOps.Mission.Ground;
 using DescentOps.Mission.Probe;
@@ -12,13 +13,19 @@ namespace DescentOps.Mission.Running;
 /// <summary>Builds the components of a mission from its scenario.</summary>
 public static class MissionAssembly
 {
-    public static IReadOnlyList<ISimComponent> Components(Scenario scenario) =>
-    [
-        new ProbeComponent(scenario),
-        new TetherComponent(scenario),
-        new StationComponent(scenario),
-        new GroundTeamComponent(),
-        new FaultInjectorComponent(scenario),
-        .. scenario.Vehicles.Select(v => new VehicleComponent(v)),
-    ];
+    /// <summary>The components of a run; the scenario's rules are compiled first, so a bad rule stops the run before it starts.</summary>
+    public static IReadOnlyList<ISimComponent> Components(Scenario scenario)
+    {
+        var rules = MissionRules.Compile(scenario);
+        return
+        [
+            new ProbeComponent(scenario),
+            new TetherComponent(scenario),
+            new StationComponent(scenario),
+            new GroundTeamComponent(scenario, rules),
+            new OnboardAutonomyComponent(rules),
+            new FaultInjectorComponent(scenario),
+            .. scenario.Vehicles.Select(v => new VehicleComponent(v)),
+        ];
+    }
 }

@@ -16,12 +16,14 @@ public sealed class StationComponent : SimComponent<StationState>
     public const double SpeedOfLightMPerS = 299_792_458.0;
 
     private readonly SimDuration _delayHome;
+    private readonly SimDuration _forwarding;
 
     public StationComponent(Scenario scenario)
         : base(MissionIds.Station, FailurePolicy.RestartFromLastState)
     {
         OneWayLightTimeS = scenario.Body.DistanceToGroundM / SpeedOfLightMPerS;
         _delayHome = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS + OneWayLightTimeS);
+        _forwarding = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS);
     }
 
     public double OneWayLightTimeS { get; }
@@ -41,6 +43,15 @@ public sealed class StationComponent : SimComponent<StationState>
             case TelemetryFrame frame:
                 context.Schedule(MissionIds.Ground, _delayHome, frame, MissionPriority.Telemetry);
                 return state with { FramesForwarded = state.FramesForwarded + 1 };
+            case Telecommand command when state.Failed:
+                context.Record("command.lost", Severity.Alarm,
+                    RecordField.Of("command", command.Command.ToString()),
+                    RecordField.Of("origin", command.Origin),
+                    RecordField.Of("where", "station failed"));
+                return state;
+            case Telecommand command:
+                context.Schedule(MissionIds.Tether, _forwarding, command, MissionPriority.Command);
+                return state;
             case FaultStarted { Fault.Kind: FaultKind.StationFailure } fault:
                 context.Record("station.failed", Severity.Critical,
                     RecordField.Of("fault", fault.Fault.Name),

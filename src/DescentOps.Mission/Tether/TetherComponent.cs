@@ -27,7 +27,8 @@ public sealed class TetherComponent : SimComponent<TetherState>
     public override TetherState Handle(TetherState state, object message, ComponentContext context) => message switch
     {
         RunStarted => state,
-        TelemetryFrame frame => Carry(PayOut(state, frame.DepthM, context), frame, context),
+        TelemetryFrame frame => Carry(PayOut(state, frame.PaidOutM, context), frame, context),
+        Telecommand command => CarryDown(state, command, context),
         FaultStarted { Fault.Kind: FaultKind.TetherBreak } fault => Break(state, $"fault '{fault.Fault.Name}'", context),
         _ => throw new InvalidOperationException($"The tether cannot handle {message.GetType().Name}."),
     };
@@ -64,6 +65,22 @@ public sealed class TetherComponent : SimComponent<TetherState>
         var delay = SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS);
         context.Schedule(MissionIds.Station, delay, frame, MissionPriority.Telemetry);
         return state with { FramesCarried = state.FramesCarried + 1 };
+    }
+
+    /// <summary>A telecommand from the station goes down the fibre to the probe, or is lost at the break.</summary>
+    private TetherState CarryDown(TetherState state, Telecommand command, ComponentContext context)
+    {
+        if (state.Broken)
+        {
+            context.Record("command.lost", Severity.Alarm,
+                RecordField.Of("command", command.Command.ToString()),
+                RecordField.Of("origin", command.Origin),
+                RecordField.Of("where", "tether broken"));
+            return state;
+        }
+
+        context.Schedule(MissionIds.Probe, SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS), command, MissionPriority.Command);
+        return state;
     }
 
     private static TetherState Break(TetherState state, string cause, ComponentContext context)

@@ -21,6 +21,12 @@ public sealed class RuleScheduler : VirtualTimeScheduler<SimTime, SimDuration>
     {
     }
 
+    /// <summary>
+    /// When the earliest pending rule step is due (a persistence period ending, a wait, an escalation), so the
+    /// kernel can wake the rules exactly then instead of at the next sample; null when nothing is pending.
+    /// </summary>
+    public SimTime? NextDueTime => GetNext() is { } item ? item.DueTime : null;
+
     /// <summary>Saturates instead of overflowing, so a far-future step simply never comes due.</summary>
     protected override SimTime Add(SimTime absolute, SimDuration relative)
     {

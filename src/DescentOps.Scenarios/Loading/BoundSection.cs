@@ -10,13 +10,19 @@ public sealed class BoundSection
     private readonly Dictionary<string, object> _values;
     private readonly ISet<string>? _readPaths;
 
-    internal BoundSection(string path, SourceLocation location, Dictionary<string, object> values, ISet<string>? readPaths)
+    private readonly Dictionary<string, SourceLocation> _locations;
+
+    internal BoundSection(string path, SourceLocation location, Dictionary<string, object> values, Dictionary<string, SourceLocation> locations, ISet<string>? readPaths)
     {
         Path = path;
         Location = location;
         _values = values;
+        _locations = locations;
         _readPaths = readPaths;
     }
+
+    /// <summary>Where a field's value starts in the file (the section's own place when the field is absent).</summary>
+    public SourceLocation LocationOf(string name) => _locations.GetValueOrDefault(name, Location);
 
     public string Path { get; }
 

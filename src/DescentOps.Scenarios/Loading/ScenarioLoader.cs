@@ -92,7 +92,9 @@ public static class ScenarioLoader
                 probe.Quantity("wall_power"),
                 probe.Quantity("electronics_power"),
                 probe.Quantity("telemetry_interval"),
-                probe.OptionalQuantity("freeze_gap") ?? DefaultFreezeGapM),
+                probe.OptionalQuantity("freeze_gap") ?? DefaultFreezeGapM,
+                probe.OptionalQuantity("max_head_power") ?? probe.Quantity("head_power"),
+                probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power")),
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
             new StationModel(station.Text("name"), station.Quantity("forwarding_delay")),
             [.. root.List("vehicles").Select(v => new VehicleModel(
@@ -107,12 +109,39 @@ public static class ScenarioLoader
             [.. root.List("faults").Select(f => new FaultModel(
                 f.Text("name"),
                 ParseFaultKind(f.Text("kind")),
-                f.Quantity("at"),
+                f.OptionalQuantity("at"),
+                f.OptionalQuantity("at_depth"),
                 f.OptionalQuantity("duration"),
-                f.OptionalNumber("remaining_fraction") ?? 0.0))],
+                f.OptionalNumber("remaining_fraction") ?? 0.0,
+                f.OptionalText("point"),
+                SensorValue(f)))],
+            Rules(root, text),
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
             text);
+    }
+
+    /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
+    private static double? SensorValue(BoundSection fault)
+    {
+        if (fault.OptionalText("value") is not { } text) return null;
+        var kind = fault.OptionalText("point") is { } point ? ProbeTelemetryPoints.KindOf(point) : null;
+        if (kind is null) return double.NaN;
+        return QuantityParser.TryParseSi(kind.Value, text, out var si, out _) ? si : double.NaN;
+    }
+
+    /// <summary>The rules block with its place in the file: a block scalar's text starts on the line after 'rules: |'.</summary>
+    private static RulesSource Rules(BoundSection root, string text)
+    {
+        if (root.OptionalText("rules") is not { } rules) return RulesSource.None;
+        var at = root.LocationOf("rules");
+        var lines = text.Split('\n');
+        var valueLine = at.Line - 1 < lines.Length ? lines[at.Line - 1] : "";
+        var startsBlock = at.Column - 1 < valueLine.Length && valueLine[at.Column - 1] is '|' or '>';
+        if (!startsBlock) return new RulesSource(rules, at, at.Column - 1);
+        var first = Array.FindIndex(lines, at.Line, l => l.Trim().Length > 0);
+        var indent = first < 0 ? 0 : lines[first].Length - lines[first].TrimStart(' ').Length;
+        return new RulesSource(rules, new SourceLocation(at.File, at.Line + 1, 1), indent);
     }
 
     /// <summary>Rules that tie fields together, which the per-field bounds cannot express.</summary>
@@ -130,6 +159,34 @@ public static class ScenarioLoader
             {
                 errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a broken fibre does not heal: a tether_break takes no duration"));
             }
+
+            var fault = scenario.Faults[i];
+            if ((fault.AtS is null) == (fault.AtDepthM is null))
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].at", "give exactly one trigger: 'at' (a time) or 'at_depth' (a depth)"));
+            }
+
+            var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout;
+            if (isSensor && fault.Point is null)
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].point", $"a {KindWord(fault.Kind)} fault names the telemetry point that lies"));
+            }
+
+            if (!isSensor && (fault.Point is not null || faults[i].OptionalText("value") is not null))
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].point", $"'point' and 'value' belong to sensor faults, not to a {KindWord(fault.Kind)}"));
+            }
+
+            if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
+            {
+                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].value", "a sensor_bias needs the offset as a value"));
+            }
+
+            if (fault.ValueSi is { } v && double.IsNaN(v) && fault.Point is { } point)
+            {
+                var kind = ProbeTelemetryPoints.KindOf(point)!.Value;
+                errors.Add(new ScenarioError(faults[i].LocationOf("value"), $"faults[{i}].value", $"'{faults[i].OptionalText("value")}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()}), as point {point} needs"));
+            }
         }
     }
 
@@ -138,7 +195,20 @@ public static class ScenarioLoader
         "power_dip" => FaultKind.PowerDip,
         "tether_break" => FaultKind.TetherBreak,
         "station_failure" => FaultKind.StationFailure,
+        "sensor_stuck" => FaultKind.SensorStuck,
+        "sensor_bias" => FaultKind.SensorBias,
+        "sensor_dropout" => FaultKind.SensorDropout,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
+    };
+
+    private static string KindWord(FaultKind kind) => kind switch
+    {
+        FaultKind.PowerDip => "power_dip",
+        FaultKind.TetherBreak => "tether_break",
+        FaultKind.StationFailure => "station_failure",
+        FaultKind.SensorStuck => "sensor_stuck",
+        FaultKind.SensorBias => "sensor_bias",
+        _ => "sensor_dropout",
     };
 
     private static string Trim(string message)

@@ -31,6 +31,7 @@ internal sealed partial class YamlBinder
         }
 
         var values = new Dictionary<string, object>(StringComparer.Ordinal);
+        var locations = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
         foreach (var (keyNode, valueNode) in mapping.Children)
         {
             var key = (keyNode as YamlScalarNode)?.Value ?? "";
@@ -48,6 +49,7 @@ internal sealed partial class YamlBinder
                 continue;
             }
 
+            locations[key] = Locate(valueNode);
             if (BindValue(valueNode, field, fieldPath) is { } value) values[key] = value;
         }
 
@@ -56,7 +58,7 @@ internal sealed partial class YamlBinder
             Error(mapping, Join(path, field.Name), $"missing required field ({field.Description})");
         }
 
-        return new BoundSection(path, Locate(mapping), values, _readPaths);
+        return new BoundSection(path, Locate(mapping), values, locations, _readPaths);
     }
 
     private object? BindValue(YamlNode node, FieldSpec field, string path) => field switch

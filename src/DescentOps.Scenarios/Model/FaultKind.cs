@@ -11,4 +11,13 @@ public enum FaultKind
 
     /// <summary>The surface station stops relaying.</summary>
     StationFailure,
+
+    /// <summary>A telemetry point keeps reporting one value (the given one, or its reading when the fault began).</summary>
+    SensorStuck,
+
+    /// <summary>A telemetry point reports its true value plus a constant offset.</summary>
+    SensorBias,
+
+    /// <summary>A telemetry point is missing from every frame.</summary>
+    SensorDropout,
 }

@@ -10,4 +10,6 @@ public sealed record ProbeModel(
     double WallPowerW,
     double ElectronicsPowerW,
     double TelemetryIntervalS,
-    double FreezeGapM);
+    double FreezeGapM,
+    double MaxHeadPowerW,
+    double MaxWallPowerW);

@@ -11,6 +11,7 @@ public sealed record Scenario(
     StationModel Station,
     IReadOnlyList<VehicleModel> Vehicles,
     IReadOnlyList<FaultModel> Faults,
+    RulesSource Rules,
     RunModel Run,
     string SourceName,
     string SourceText);

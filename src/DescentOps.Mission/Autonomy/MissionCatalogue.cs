@@ -1,0 +1,43 @@
+using DescentOps.Rules.Catalogue;
+using DescentOps.Rules.Units;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Autonomy;
+
+/// <summary>
+/// What rules may read and command in a mission: the probe's telemetry points with their physical ranges, and the
+/// telecommands the probe obeys with the ranges of their arguments. The ranges come from the scenario (a depth
+/// cannot exceed the shell, a power its heater's maximum), so the checker can refuse a threshold no probe could reach.
+/// </summary>
+public static class MissionCatalogue
+{
+    public const string Head = "probe.head";
+    public const string Wall = "probe.wall";
+
+    public static IReadOnlyList<string> Regimes { get; } = [.. Enum.GetNames<Probe.ProbeRegime>()];
+
+    public static TelemetryCatalogue For(Scenario scenario)
+    {
+        var maxPowerW = Math.Max(scenario.Probe.MaxHeadPowerW, scenario.Probe.MaxWallPowerW);
+        TelemetryPointSpec[] points =
+        [
+            new NumericPointSpec("probe.depth", Dimension.Length, 0, scenario.Shell.ThicknessM),
+            // Speed bound: a melt probe never exceeds a few metres per hour; 1 m/s is a generous physical ceiling.
+            new NumericPointSpec("probe.velocity", Dimension.Speed, 0, 1.0),
+            new NumericPointSpec("probe.ice_temperature", Dimension.Temperature, 0, 273.16),
+            new NumericPointSpec("probe.head_power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW),
+            new NumericPointSpec("probe.wall_power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW),
+            new NumericPointSpec("probe.energy_used", Dimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
+            new DiscretePointSpec("probe.regime", Regimes),
+        ];
+        CommandSpec[] commands =
+        [
+            new(new(Head), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW)]),
+            new(new(Wall), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW)]),
+            new(MissionIds.Probe, "pause_descent", []),
+            new(MissionIds.Probe, "resume_descent", []),
+            new(MissionIds.Probe, "enter_safe_mode", []),
+        ];
+        return new TelemetryCatalogue(points, commands);
+    }
+}
