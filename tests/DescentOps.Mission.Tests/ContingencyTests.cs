@@ -1,0 +1,105 @@
+using DescentOps.Engine.Running;
+using DescentOps.Mission.Running;
+using DescentOps.Mission.Station;
+using DescentOps.Scenarios;
+using DescentOps.Scenarios.Loading;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>
+/// The contingency scenarios: each recovers with its rules, and the same fault without them (or with a naive rule)
+/// ends worse, by an outcome asserted here.
+/// </summary>
+public sealed class ContingencyTests
+{
+    private static string Text(string name) => BuiltInScenarios.Text(name);
+
+    private static string WithoutRules(string text)
+    {
+        var start = text.IndexOf("rules: |", StringComparison.Ordinal);
+        var end = text.IndexOf("\nrun:", StringComparison.Ordinal);
+        Assert.True(start > 0 && end > start);
+        return text[..start] + text[(end + 1)..];
+    }
+
+    private static Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(string text, string name) =>
+        MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));
+
+    [Fact]
+    public async Task AFrozenInProbeIsFreedByTheWallBoostRuleAndStaysHeldWithoutIt()
+    {
+        var (withRules, sinkWith) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
+        var (withoutRules, sinkWithout) = await RunAsync(WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
+
+        Assert.Equal(RunOutcomeKind.Completed, withRules.Outcome.Kind);
+        Assert.NotNull(withRules.BreakthroughTimeS);
+        Assert.Single(sinkWith.OfKind("probe.melting_free"));
+
+        Assert.Equal(RunOutcomeKind.TimeLimit, withoutRules.Outcome.Kind);
+        Assert.Null(withoutRules.BreakthroughTimeS);
+        Assert.Single(sinkWithout.OfKind("probe.cannot_melt_free"));
+        Assert.Empty(sinkWithout.OfKind("rule.fired"));
+    }
+
+    [Fact]
+    public async Task AStuckVelocitySensorFoolsTheNaiveRuleButNotTheDepthRateCrossCheck()
+    {
+        var better = Text("stuck-velocity-sensor.yaml");
+        const string crossCheck = "when rate of probe.depth over 2 h below 0.7 m/h and probe.depth above 20 m";
+        Assert.Contains(crossCheck, better);
+        var naive = better.Replace(crossCheck, "when probe.velocity below 0.7 m/h and probe.depth above 20 m", StringComparison.Ordinal);
+
+        var (betterSummary, betterSink) = await RunAsync(better, "better.yaml");
+        var (naiveSummary, naiveSink) = await RunAsync(naive, "naive.yaml");
+
+        // The stuck sensor keeps reporting the speed of day 14, so the naive rule never sees the slow-down.
+        Assert.Empty(naiveSink.OfKind("rule.fired"));
+        var fired = Assert.Single(betterSink.OfKind("rule.fired"));
+        Assert.InRange(fired.Time.SecondsSinceEpoch, 15 * 86400.0, 16 * 86400.0);
+        // Boosted through the 20-day sag, the probe arrives days earlier (here 94 against 120 days).
+        Assert.True(naiveSummary.BreakthroughTimeS - betterSummary.BreakthroughTimeS > 10 * 86400.0,
+            $"better {betterSummary.BreakthroughTimeS} s, naive {naiveSummary.BreakthroughTimeS} s");
+    }
+
+    [Fact]
+    public async Task TheSameRuleOnTheGroundActsOneRoundTripLaterThanOnBoard()
+    {
+        var onBoard = Text("stall-wall-boost.yaml");
+        var onGround = onBoard.Replace("    runs on board\n    severity high", "    runs on ground\n    severity high", StringComparison.Ordinal);
+        Assert.NotEqual(onBoard, onGround);
+
+        var (_, boardSink) = await RunAsync(onBoard, "board.yaml");
+        var (groundSummary, groundSink) = await RunAsync(onGround, "ground.yaml");
+        var scenario = ScenarioLoader.LoadText(onGround, "ground.yaml");
+
+        var boardFired = boardSink.OfKind("rule.fired").First();
+        var groundFired = groundSink.OfKind("rule.fired").First();
+        var groundCommand = groundSink.OfKind("command.executed").First();
+        var depth = CollectingSink.Field(groundSink.OfKind("probe.melting_free").Single(), "depth_m");
+
+        // Computed: the ground sees the same frame later by fibre + station + light time, and its command
+        // comes back by light time + station + fibre (each delay rounded to the 1 µs tick).
+        var fibreS = depth / scenario.Tether.SignalSpeedMPerS;
+        var lightS = scenario.Body.DistanceToGroundM / StationComponent.SpeedOfLightMPerS;
+        var oneWayS = fibreS + scenario.Station.ForwardingDelayS + lightS;
+        Assert.Equal(oneWayS, groundFired.Time.SecondsSinceEpoch - boardFired.Time.SecondsSinceEpoch, 5e-6);
+        Assert.Equal(oneWayS, CollectingSink.Field(groundCommand, "latency_s"), 5e-6);
+        Assert.Equal(RunOutcomeKind.Completed, groundSummary.Outcome.Kind);
+        Assert.True(groundSink.OfKind("probe.melting_free").Single().Time > boardSink.OfKind("probe.melting_free").Single().Time);
+    }
+
+    [Fact]
+    public void ARuleErrorIsReportedAtItsPlaceInTheScenarioFile()
+    {
+        var text = Text("stall-wall-boost.yaml").Replace("when probe.regime is FrozenIn", "when probe.regme is FrozenIn", StringComparison.Ordinal);
+        var scenario = ScenarioLoader.LoadText(text, "typo.yaml");
+        var exception = Assert.Throws<ScenarioException>(() => MissionAssembly.Components(scenario));
+        var error = Assert.Single(exception.Errors);
+        var lines = text.Split('\n');
+        var line = Array.FindIndex(lines, l => l.Contains("probe.regme", StringComparison.Ordinal)) + 1;
+        Assert.Equal("typo.yaml", error.Location.File);
+        Assert.Equal(line, error.Location.Line);
+        Assert.Equal(lines[line - 1].IndexOf("probe.regme", StringComparison.Ordinal) + 1, error.Location.Column);
+        Assert.Contains("probe.regme", error.Message);
+    }
+}
