@@ -10,6 +10,7 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     ReplayCommand.Create(),
     DiffCommand.Create(),
     EventsCommand.Create(),
+    CheckCommand.Create(),
     SchemaCommand.Create(),
 };
 

@@ -63,4 +63,23 @@ public sealed class CommandLineTests
         Assert.Equal(0, exit);
         Assert.Equal(DescentOps.Scenarios.Format.ScenarioJsonSchema.Generate(), stdout);
     }
+
+    [Fact]
+    public async Task CheckLocatesARuleErrorInTheScenarioFileAndPassesAGoodOne()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        var good = Path.Combine(folder, "good.yaml");
+        var bad = Path.Combine(folder, "bad.yaml");
+        var text = DescentOps.Scenarios.BuiltInScenarios.Text("stall-wall-boost.yaml");
+        await File.WriteAllTextAsync(good, text);
+        await File.WriteAllTextAsync(bad, text.Replace("set_power(power = 4.5 kW)", "set_power(power = 4.5 m)", StringComparison.Ordinal));
+
+        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "check", good)).ExitCode);
+        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "check", bad);
+        Assert.Equal(3, exit); // ExitCode.InvalidInput
+        var lines = text.Split('\n');
+        var line = Array.FindIndex(lines, l => l.Contains("set_power(power = 4.5 kW)", StringComparison.Ordinal)) + 1;
+        Assert.Contains($"{bad}:{line}:", stdout);
+        Assert.Contains("UnitMismatch", stdout);
+    }
 }

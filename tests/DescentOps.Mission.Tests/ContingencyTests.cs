@@ -42,6 +42,25 @@ public sealed class ContingencyTests
     }
 
     [Fact]
+    public async Task TheSummaryMeasuresDetectionActionAndRecoveryOfTheStall()
+    {
+        var (summary, sink) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
+        var measure = Assert.Single(summary.Faults);
+
+        // Computed: the trip at day 20 falls on a frame boundary and the gap freezes within seconds (Stefan time
+        // logged by the probe), so the first frame that shows FrozenIn is one 10-minute interval later; the
+        // on-board rule fires on that frame and its command acts at once.
+        var freezeS = CollectingSink.Field(sink.OfKind("probe.refreezing").Single(), "freeze_time_s");
+        Assert.True(freezeS < 600);
+        Assert.Equal(600.0, measure.DetectedAfterS!.Value, 6);
+        Assert.Equal(600.0, measure.FirstActionAfterS!.Value, 6);
+        // Recovered on the first frame after the gap is melted open: dip end + melt-free time, rounded up to a frame.
+        var meltFree = sink.OfKind("probe.melting_free").Single();
+        var openedS = meltFree.Time.SecondsSinceEpoch + CollectingSink.Field(meltFree, "time_s") - measure.StartS;
+        Assert.InRange(measure.RecoveredAfterS!.Value - openedS, 0, 600);
+    }
+
+    [Fact]
     public async Task AStuckVelocitySensorFoolsTheNaiveRuleButNotTheDepthRateCrossCheck()
     {
         var better = Text("stuck-velocity-sensor.yaml");

@@ -119,7 +119,14 @@ public static class RunCommand
             ("event log", path),
         };
         foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
+        foreach (var f in s.Faults)
+        {
+            Console.Out.WriteLine(string.Create(c, $"  fault {f.Fault} ({f.Kind}, at {f.StartS / 86400:F3} d): detected {After(f.DetectedAfterS)}, first action {After(f.FirstActionAfterS)}, recovered {After(f.RecoveredAfterS)} [{f.Recovery}]"));
+        }
     }
+
+    private static string After(double? seconds) =>
+        seconds is { } s ? string.Create(CultureInfo.InvariantCulture, $"after {s / 3600:F2} h") : "never";
 
     private static string Days(double seconds) =>
         string.Create(CultureInfo.InvariantCulture, $"{seconds / 86400:F3} d ({seconds:F0} s)");

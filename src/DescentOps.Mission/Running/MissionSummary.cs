@@ -17,7 +17,8 @@ public sealed record MissionSummary(
     int VehicleProfiles,
     long EventsDelivered,
     long RecordsWritten,
-    int ComponentFailures)
+    int ComponentFailures,
+    IReadOnlyList<FaultMeasure> Faults)
 {
     /// <summary>The summary's figures as journal fields, in a fixed order.</summary>
     public IReadOnlyList<RecordField> ToFields() =>
@@ -33,5 +34,11 @@ public sealed record MissionSummary(
         RecordField.Of("events_delivered", EventsDelivered),
         RecordField.Of("records_written", RecordsWritten),
         RecordField.Of("component_failures", ComponentFailures),
+        .. Faults.SelectMany(f => new[]
+        {
+            RecordField.Of($"fault.{f.Fault}.detected_after_s", f.DetectedAfterS ?? double.NaN),
+            RecordField.Of($"fault.{f.Fault}.first_action_after_s", f.FirstActionAfterS ?? double.NaN),
+            RecordField.Of($"fault.{f.Fault}.recovered_after_s", f.RecoveredAfterS ?? double.NaN),
+        }),
     ];
 }

@@ -18,12 +18,14 @@ public sealed class MissionSummarySink : IJournalSink
     private long _framesReceived;
     private long _framesLost;
     private int _profiles;
+    private readonly FaultMeasures _faultMeasures = new();
 
     public MissionSummarySink(IJournalSink next) => _next = next;
 
     public void Write(JournalRecord record)
     {
         _next.Write(record);
+        _faultMeasures.Observe(record);
         switch (record.Kind)
         {
             case "probe.telemetry":
@@ -67,7 +69,8 @@ public sealed class MissionSummarySink : IJournalSink
         _profiles,
         result.EventsDelivered,
         result.RecordsWritten,
-        result.ComponentFailures);
+        result.ComponentFailures,
+        _faultMeasures.Measures());
 
     private static double Field(JournalRecord record, string name)
     {

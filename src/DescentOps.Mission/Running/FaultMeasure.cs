@@ -1,0 +1,8 @@
+namespace DescentOps.Mission.Running;
+
+/// <summary>
+/// What one fault did to a run, in seconds after it began: when a rule first noticed (detection), when a command
+/// first reached the probe (first action), when the physical state was back within limits (recovery); null for
+/// what never happened. <see cref="Recovery"/> says how recovery is judged for this kind of fault.
+/// </summary>
+public sealed record FaultMeasure(string Fault, string Kind, double StartS, double? DetectedAfterS, double? FirstActionAfterS, double? RecoveredAfterS, string Recovery);

@@ -1,0 +1,80 @@
+using DescentOps.Engine.Journaling;
+
+namespace DescentOps.Mission.Running;
+
+/// <summary>
+/// Derives <see cref="FaultMeasure"/>s from journal records as they are written. Recovery, by fault kind:
+/// a power dip is recovered when a frame shows the probe melting at 90 % or more of the speed in the last frame
+/// before the fault (a rule of thumb of ours: "back to nominal" within a typical telemetry noise band); a station
+/// failure when the station reports recovered; a tether break never (no relays yet); a sensor fault does not
+/// move the physical state, so it has no recovery, only detection.
+/// </summary>
+public sealed class FaultMeasures
+{
+    private const double RecoveredSpeedShare = 0.9;
+
+    private readonly List<Open> _faults = [];
+    private double _lastSpeedMPerS;
+
+    public void Observe(JournalRecord record)
+    {
+        var t = record.Time.SecondsSinceEpoch;
+        switch (record.Kind)
+        {
+            case "fault.injected":
+                _faults.Add(new Open(Text(record, "fault"), Text(record, "kind"), t, _lastSpeedMPerS));
+                break;
+            case "rule.fired":
+                foreach (var f in _faults) f.DetectedS ??= t > f.StartS || t == f.StartS ? t : null;
+                break;
+            case "command.executed":
+                foreach (var f in _faults) f.ActionS ??= t >= f.StartS ? t : null;
+                break;
+            case "probe.telemetry":
+                var speed = Number(record, "velocity_m_s");
+                foreach (var f in _faults.Where(f => f.Kind == "PowerDip" && f.RecoveredS is null && t > f.StartS))
+                {
+                    if (Text(record, "regime") == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS) f.RecoveredS = t;
+                }
+
+                _lastSpeedMPerS = speed;
+                break;
+            case "station.recovered":
+                foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
+                break;
+        }
+    }
+
+    public IReadOnlyList<FaultMeasure> Measures() =>
+    [
+        .. _faults.Select(f => new FaultMeasure(
+            f.Name,
+            f.Kind,
+            f.StartS,
+            f.DetectedS - f.StartS,
+            f.ActionS - f.StartS,
+            f.RecoveredS - f.StartS,
+            f.Kind switch
+            {
+                "PowerDip" => "descent back to 90 % of its pre-fault speed",
+                "StationFailure" => "station relaying again",
+                "TetherBreak" => "none: a broken fibre stays broken",
+                _ => "none: a sensor fault leaves the physical state alone",
+            })),
+    ];
+
+    private static string Text(JournalRecord record, string name) => record.Fields.First(f => f.Name == name).Text ?? "";
+
+    private static double Number(JournalRecord record, string name) => record.Fields.First(f => f.Name == name).Number;
+
+    private sealed class Open(string name, string kind, double startS, double speedBeforeMPerS)
+    {
+        public string Name { get; } = name;
+        public string Kind { get; } = kind;
+        public double StartS { get; } = startS;
+        public double SpeedBeforeMPerS { get; } = speedBeforeMPerS;
+        public double? DetectedS { get; set; }
+        public double? ActionS { get; set; }
+        public double? RecoveredS { get; set; }
+    }
+}
