@@ -8,6 +8,7 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     RunCommand.Create(),
     VerifyCommand.Create(),
     ReplayCommand.Create(),
+    BranchCommand.Create(),
     DiffCommand.Create(),
     EventsCommand.Create(),
     CheckCommand.Create(),

@@ -30,7 +30,13 @@ public sealed record LoggedRun(string Path, RunManifest Manifest, Scenario Scena
             throw new LogIntegrityException($"{path}: the log has no manifest line.");
         }
 
-        var scenario = ScenarioLoader.LoadText(manifestEntry.Manifest.ScenarioText, $"{path}#manifest");
-        return new LoggedRun(path, manifestEntry.Manifest, scenario, integrity);
+        var manifest = manifestEntry.Manifest;
+        var scenario = ScenarioLoader.LoadText(manifest.ScenarioText, $"{path}#manifest");
+        if (BranchInfo.Of(manifest) is { } branch)
+        {
+            scenario = ScenarioLoader.LoadChange(branch.ChangeText, $"{path}#branch-change").ApplyTo(scenario);
+        }
+
+        return new LoggedRun(path, manifest, scenario, integrity);
     }
 }

@@ -34,37 +34,7 @@ public static class ScenarioLoader
     public static Scenario LoadText(string text, string sourceName, ISet<string>? readPaths = null)
     {
         var errors = new List<ScenarioError>();
-        var stream = new YamlStream();
-        var parser = new Parser(new StringReader(text));
-        try
-        {
-            stream.Load(parser);
-        }
-        catch (YamlException exception)
-        {
-            var message = exception.InnerException?.Message ?? exception.Message;
-            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)exception.Start.Line, (int)exception.Start.Column), "", $"YAML syntax: {Trim(message)}")]);
-        }
-        catch (InvalidOperationException)
-        {
-            // The YAML scanner throws this bare exception for some malformed flow collections; the parser's
-            // last good token is then the best location there is.
-            var mark = parser.Current?.End ?? Mark.Empty;
-            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", "YAML syntax: a flow collection ('[...]' or '{...}') is not closed or is malformed near here")]);
-        }
-
-        if (stream.Documents.Count != 1)
-        {
-            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, 1, 1), "", $"expected one YAML document, found {stream.Documents.Count}")]);
-        }
-
-        var binder = new YamlBinder(sourceName, errors, readPaths);
-        var root = binder.BindSection(stream.Documents[0].RootNode, ScenarioFormat.Root, "");
-        if (errors.Count > 0 || root is null)
-        {
-            throw new ScenarioException([.. errors.OrderBy(e => e.Location.Line).ThenBy(e => e.Location.Column)]);
-        }
-
+        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths);
         var scenario = Build(root, sourceName, text);
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
@@ -106,20 +76,72 @@ public static class ScenarioLoader
                 v.Quantity("speed"),
                 v.Quantity("profile_depth"),
                 v.OptionalNumber("speed_variation") ?? 0.0))],
-            [.. root.List("faults").Select(f => new FaultModel(
-                f.Text("name"),
-                ParseFaultKind(f.Text("kind")),
-                f.OptionalQuantity("at"),
-                f.OptionalQuantity("at_depth"),
-                f.OptionalQuantity("duration"),
-                f.OptionalNumber("remaining_fraction") ?? 0.0,
-                f.OptionalText("point"),
-                SensorValue(f)))],
+            [.. root.List("faults").Select(BuildFault)],
             Rules(root, text),
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
             text);
     }
+
+    /// <summary>Reads a branch change file (see <see cref="ChangeFormat"/>), with the same located errors as a scenario.</summary>
+    public static ScenarioChange LoadChange(string text, string sourceName)
+    {
+        var errors = new List<ScenarioError>();
+        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null);
+        var added = root.List("add_faults");
+        var faults = added.Select(BuildFault).ToList();
+        for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
+        if (errors.Count > 0) throw new ScenarioException(errors);
+        var rules = root.OptionalText("rules") is null ? null : Rules(root, text);
+        return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules);
+    }
+
+    /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
+    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths)
+    {
+        var stream = new YamlStream();
+        var parser = new Parser(new StringReader(text));
+        try
+        {
+            stream.Load(parser);
+        }
+        catch (YamlException exception)
+        {
+            var message = exception.InnerException?.Message ?? exception.Message;
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)exception.Start.Line, (int)exception.Start.Column), "", $"YAML syntax: {Trim(message)}")]);
+        }
+        catch (InvalidOperationException)
+        {
+            // The YAML scanner throws this bare exception for some malformed flow collections; the parser's
+            // last good token is then the best location there is.
+            var mark = parser.Current?.End ?? Mark.Empty;
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, (int)Math.Max(1, mark.Line), (int)Math.Max(1, mark.Column)), "", "YAML syntax: a flow collection ('[...]' or '{...}') is not closed or is malformed near here")]);
+        }
+
+        if (stream.Documents.Count != 1)
+        {
+            throw new ScenarioException([new ScenarioError(new SourceLocation(sourceName, 1, 1), "", $"expected one YAML document, found {stream.Documents.Count}")]);
+        }
+
+        var binder = new YamlBinder(sourceName, errors, readPaths);
+        var root = binder.BindSection(stream.Documents[0].RootNode, spec, "");
+        if (errors.Count > 0 || root is null)
+        {
+            throw new ScenarioException([.. errors.OrderBy(e => e.Location.Line).ThenBy(e => e.Location.Column)]);
+        }
+
+        return root;
+    }
+
+    internal static FaultModel BuildFault(BoundSection f) => new(
+        f.Text("name"),
+        ParseFaultKind(f.Text("kind")),
+        f.OptionalQuantity("at"),
+        f.OptionalQuantity("at_depth"),
+        f.OptionalQuantity("duration"),
+        f.OptionalNumber("remaining_fraction") ?? 0.0,
+        f.OptionalText("point"),
+        SensorValue(f));
 
     /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
     private static double? SensorValue(BoundSection fault)
@@ -150,43 +172,48 @@ public static class ScenarioLoader
         var faults = root.List("faults");
         for (var i = 0; i < scenario.Faults.Count; i++)
         {
-            if (scenario.Faults[i].Kind == FaultKind.PowerDip && scenario.Faults[i].DurationS is null)
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a power_dip needs a duration"));
-            }
+            CheckFault(scenario.Faults[i], faults[i], $"faults[{i}]", errors);
+        }
+    }
 
-            if (scenario.Faults[i].Kind == FaultKind.TetherBreak && scenario.Faults[i].DurationS is not null)
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].duration", "a broken fibre does not heal: a tether_break takes no duration"));
-            }
+    /// <summary>The cross-field rules of one fault, shared by scenarios and branch change files.</summary>
+    internal static void CheckFault(FaultModel fault, BoundSection section, string path, List<ScenarioError> errors)
+    {
+        if (fault.Kind == FaultKind.PowerDip && fault.DurationS is null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a power_dip needs a duration"));
+        }
 
-            var fault = scenario.Faults[i];
-            if ((fault.AtS is null) == (fault.AtDepthM is null))
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].at", "give exactly one trigger: 'at' (a time) or 'at_depth' (a depth)"));
-            }
+        if (fault.Kind == FaultKind.TetherBreak && fault.DurationS is not null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a broken fibre does not heal: a tether_break takes no duration"));
+        }
 
-            var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout;
-            if (isSensor && fault.Point is null)
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].point", $"a {KindWord(fault.Kind)} fault names the telemetry point that lies"));
-            }
+        if ((fault.AtS is null) == (fault.AtDepthM is null))
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.at", "give exactly one trigger: 'at' (a time) or 'at_depth' (a depth)"));
+        }
 
-            if (!isSensor && (fault.Point is not null || faults[i].OptionalText("value") is not null))
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].point", $"'point' and 'value' belong to sensor faults, not to a {KindWord(fault.Kind)}"));
-            }
+        var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout;
+        if (isSensor && fault.Point is null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.point", $"a {KindWord(fault.Kind)} fault names the telemetry point that lies"));
+        }
 
-            if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
-            {
-                errors.Add(new ScenarioError(faults[i].Location, $"faults[{i}].value", "a sensor_bias needs the offset as a value"));
-            }
+        if (!isSensor && (fault.Point is not null || section.OptionalText("value") is not null))
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.point", $"'point' and 'value' belong to sensor faults, not to a {KindWord(fault.Kind)}"));
+        }
 
-            if (fault.ValueSi is { } v && double.IsNaN(v) && fault.Point is { } point)
-            {
-                var kind = ProbeTelemetryPoints.KindOf(point)!.Value;
-                errors.Add(new ScenarioError(faults[i].LocationOf("value"), $"faults[{i}].value", $"'{faults[i].OptionalText("value")}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()}), as point {point} needs"));
-            }
+        if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_bias needs the offset as a value"));
+        }
+
+        if (fault.ValueSi is { } v && double.IsNaN(v) && fault.Point is { } point)
+        {
+            var kind = ProbeTelemetryPoints.KindOf(point)!.Value;
+            errors.Add(new ScenarioError(section.LocationOf("value"), $"{path}.value", $"'{section.OptionalText("value")}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()}), as point {point} needs"));
         }
     }
 

@@ -1,0 +1,19 @@
+namespace DescentOps.Scenarios.Format;
+
+/// <summary>
+/// The format of a branch change file: scenario-style YAML with the scenario's own fault entries and rules block.
+/// </summary>
+public static class ChangeFormat
+{
+    public static SectionField Root { get; } = new(
+        "",
+        "A change applied to a logged run's scenario when branching from an instant.",
+        [
+            new TextField("description", "What the branch tries, in a sentence.", Required: false),
+            new ListField("add_faults", "Faults to add; each starts at or after the branch instant.",
+                ((ListField)ScenarioFormat.Root.Find("faults")!).Item, 0, 1000, Required: false),
+            new ListField("remove_faults", "Faults of the parent to leave out; each must start at or after the branch instant.",
+                new SectionField("fault", "A fault of the parent, by name.", [new TextField("name", "The fault's name.", IsIdentifier: true)]), 0, 1000, Required: false),
+            new TextField("rules", "A rules block replacing the parent's ('rules: |' then indented lines); it must not act before the instant.", Required: false),
+        ]);
+}

@@ -1,0 +1,28 @@
+namespace DescentOps.Scenarios.Model;
+
+/// <summary>
+/// A change to a scenario for a branch: faults added, faults removed by name, and optionally the whole rules block
+/// replaced. Applied to the parent's scenario; a branch checks that the run is unchanged before its instant.
+/// </summary>
+public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<FaultModel> AddFaults, IReadOnlyList<string> RemoveFaults, RulesSource? Rules)
+{
+    public Scenario ApplyTo(Scenario parent)
+    {
+        var missing = RemoveFaults.Where(n => parent.Faults.All(f => f.Name != n)).ToList();
+        if (missing.Count > 0)
+        {
+            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "remove_faults",
+                $"the parent scenario has no fault named {string.Join(", ", missing)}")]);
+        }
+
+        var faults = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).Concat(AddFaults).ToList();
+        var clash = faults.GroupBy(f => f.Name).FirstOrDefault(g => g.Count() > 1);
+        if (clash is not null)
+        {
+            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "add_faults",
+                $"fault '{clash.Key}' is already in the parent scenario; remove it first to replace it")]);
+        }
+
+        return parent with { Faults = faults, Rules = Rules ?? parent.Rules };
+    }
+}

@@ -1,0 +1,56 @@
+using System.Security.Cryptography;
+using DescentOps.Cli.Running;
+using DescentOps.Journal.Comparison;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>Branches: identical to the parent before the instant, different where the change acts, and honest about it.</summary>
+public sealed class BranchTests
+{
+    private const string SecondTrip = """
+        add_faults:
+          - name: second-trip-day-50
+            kind: power_dip
+            at: 50 d
+            duration: 3 h
+            remaining_fraction: 0
+        """;
+
+    [Fact]
+    public async Task ABranchEqualsItsParentBeforeTheInstantAndPartsWhereTheChangeActs()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), SecondTrip);
+
+        var (exit, stdout, stderr) = await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "branch.jsonl");
+        Assert.True(exit == 0, stdout + stderr);
+
+        var parent = Path.Combine(folder, "parent.jsonl");
+        var branch = Path.Combine(folder, "branch.jsonl");
+        var divergence = Assert.IsType<JournalDivergence>(JournalDiff.Compare(parent, branch).FirstEventDivergence);
+        // The added fault starts at day 50 = 4,320,000 s: that is where the two logs part, and not a line before.
+        Assert.Equal(50 * 86400.0, divergence.TimeB);
+        Assert.Contains("second-trip-day-50", divergence.LineB);
+
+        var logged = LoggedRun.Open(branch);
+        var info = Assert.IsType<BranchInfo>(BranchInfo.Of(logged.Manifest));
+        Assert.Equal(Convert.ToHexStringLower(SHA256.HashData(await File.ReadAllBytesAsync(parent))), info.ParentSha256);
+        Assert.Equal(50 * 86400.0, info.AtS);
+        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "replay", "branch.jsonl")).ExitCode);
+    }
+
+    [Fact]
+    public async Task AChangeThatActsBeforeTheInstantIsRefusedAndLeavesNoLog()
+    {
+        var folder = ToolProcess.NewTempDirectory();
+        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        // The parent's trip is on day 20; removing it changes the run from day 20, before a day-30 instant.
+        await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), "remove_faults:\n  - name: bus-trip-day-20\n");
+
+        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "30 d", "--with", "change.yaml", "--log", "branch.jsonl");
+        Assert.Equal(3, exit); // ExitCode.InvalidInput
+        Assert.Contains("acts before the branch instant", stderr);
+        Assert.Empty(Directory.GetFiles(folder, "branch.jsonl*"));
+    }
+}
