@@ -22,8 +22,9 @@ public sealed class ProbeDescentModel
 
     private readonly Dictionary<(int Node, double HeadW, double WallW), DescentRate> _nodes = [];
 
-    public ProbeDescentModel(IceShell shell, ProbeGeometry geometry, double nodeSpacingM = DefaultNodeSpacingM)
+    public ProbeDescentModel(IceShell shell, ProbeGeometry geometry, double nodeSpacingM = DefaultNodeSpacingM, double sealDiameters = LiquidOnset.DefaultSealDiameters)
     {
+        SealDiameters = ValidRange.RequirePositive(sealDiameters, nameof(sealDiameters), "hole diameters", "the probe descent model");
         Shell = shell;
         Geometry = geometry;
         NodeSpacingM = ValidRange.RequirePositive(nodeSpacingM, nameof(nodeSpacingM), "m", "the probe descent model");
@@ -36,6 +37,9 @@ public sealed class ProbeDescentModel
     public ProbeGeometry Geometry { get; }
 
     public double NodeSpacingM { get; }
+
+    /// <summary>Hole diameters above the probe that must be re-sealed before liquid can form (MODEL, see <see cref="LiquidOnset"/>).</summary>
+    public double SealDiameters { get; }
 
     /// <summary>Depth of the head below which melting can happen; 0 where the surface pressure already allows liquid.</summary>
     public double LiquidOnsetDepthM { get; }
@@ -124,7 +128,7 @@ public sealed class ProbeDescentModel
     {
         // Both conditions of LiquidOnset grow monotonically true with depth: step down to the first depth that meets them.
         var density = IceIh.DensityKgPerM3(Shell.SurfaceTemperatureK, 0);
-        var seal = LiquidOnset.SealDepthM(Geometry.LengthM, Geometry.RadiusM);
+        var seal = LiquidOnset.SealDepthM(Geometry.LengthM, Geometry.RadiusM, SealDiameters);
         var overburden = LiquidOnset.MinimumLiquidDepthM(density, Shell.GravityMPerS2);
         return Math.Min(Math.Max(seal, overburden), Shell.ThicknessM);
     }
