@@ -10,6 +10,8 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     ReplayCommand.Create(),
     DiffCommand.Create(),
     EventsCommand.Create(),
+    ReportCommand.Create(),
+    ExportCommand.Create(),
     SchemaCommand.Create(),
 };
 
