@@ -28,6 +28,9 @@ public static class SqliteExport
         var connectionString = new SqliteConnectionStringBuilder { DataSource = databasePath, Pooling = false, Mode = SqliteOpenMode.ReadWriteCreate }.ToString();
         using var db = new SqliteConnection(connectionString);
         db.Open();
+        // The file is a private copy until the rename publishes it, and a failure deletes it, so SQLite's own
+        // crash safety (a journal on disk, a sync per commit) would only cost time here.
+        Execute(db, null, "PRAGMA journal_mode = MEMORY; PRAGMA synchronous = OFF");
         PrepareSchema(db);
 
         using var reader = JournalReader.Open(logPath);
