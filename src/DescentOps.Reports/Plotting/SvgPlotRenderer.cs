@@ -15,7 +15,7 @@ public static class SvgPlotRenderer
         Color.FromHex("#1d4e89"), Color.FromHex("#c05a12"), Color.FromHex("#2a7f62"), Color.FromHex("#8c2f5a"), Color.FromHex("#5b4a9e"),
     ];
 
-    private static readonly Color FaultFill = Color.FromHex("#d9342b").WithAlpha(0.18);
+    private static readonly Color FaultFill = Color.FromHex("#d9342b").WithAlpha(0.3);
     private static readonly Color RegimeLine = Color.FromHex("#444444");
 
     public static RenderedPlot Render(RunLog log, PlotDefinition definition, FaultTimeline timeline)
