@@ -12,6 +12,8 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     DiffCommand.Create(),
     EventsCommand.Create(),
     CheckCommand.Create(),
+    ReportCommand.Create(),
+    ExportCommand.Create(),
     SchemaCommand.Create(),
 };
 

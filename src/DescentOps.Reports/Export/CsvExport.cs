@@ -1,0 +1,72 @@
+using System.Globalization;
+using System.Text;
+using DescentOps.Journal;
+
+namespace DescentOps.Reports.Export;
+
+/// <summary>
+/// Writes a log as two CSV files into a folder: <c>events.csv</c> (every event, its data as one JSON cell) and
+/// <c>telemetry.csv</c> (one row per <c>probe.telemetry</c> event, one column per field) for spreadsheets.
+/// </summary>
+public static class CsvExport
+{
+    public const string EventsFile = "events.csv";
+    public const string TelemetryFile = "telemetry.csv";
+    public const string TelemetryKind = "probe.telemetry";
+
+    private static readonly UTF8Encoding Utf8 = new(encoderShouldEmitUTF8Identifier: false);
+
+    public static CsvExportResult Write(string logPath, string directory)
+    {
+        Directory.CreateDirectory(directory);
+        var eventsPath = Path.Combine(directory, EventsFile);
+        var telemetryPath = Path.Combine(directory, TelemetryFile);
+        long events = 0, rows = 0;
+        long? truncated = null;
+        var columns = new List<string>();
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+
+        // Pass 1: every event, and the union of telemetry field names in order of first appearance (a field that
+        // appears later in the run, after a software change for instance, still gets a column).
+        AtomicFile.Write(eventsPath, partial =>
+        {
+            using var output = new StreamWriter(partial, append: false, Utf8, 1 << 16);
+            output.Write(CsvText.Row(["seq", "t_s", "source", "kind", "severity", "data"]));
+            using var reader = JournalReader.Open(logPath);
+            foreach (var e in reader.ReadAll().OfType<EventEntry>())
+            {
+                events++;
+                output.Write(CsvText.Row([
+                    e.Sequence.ToString(CultureInfo.InvariantCulture), DataJson.Number(e.TimeSeconds), CsvText.Cell(e.Source),
+                    CsvText.Cell(e.Kind), e.Severity.ToString().ToLowerInvariant(), CsvText.Cell(DataJson.Of(e.Data))]));
+                if (e.Kind != TelemetryKind) continue;
+                foreach (var f in e.Data)
+                {
+                    if (seen.Add(f.Name)) columns.Add(f.Name);
+                }
+            }
+
+            truncated = reader.IsTruncated ? reader.TruncatedAtLine : null;
+        });
+
+        AtomicFile.Write(telemetryPath, partial =>
+        {
+            using var output = new StreamWriter(partial, append: false, Utf8, 1 << 16);
+            output.Write(CsvText.Row(["seq", "t_s", "source", .. columns.Select(CsvText.Cell)]));
+            using var reader = JournalReader.Open(logPath);
+            var cells = new string[columns.Count];
+            foreach (var e in reader.ReadAll().OfType<EventEntry>().Where(e => e.Kind == TelemetryKind))
+            {
+                rows++;
+                Array.Fill(cells, "");
+                foreach (var f in e.Data) cells[columns.IndexOf(f.Name)] = CsvText.Cell(f);
+                output.Write(CsvText.Row([e.Sequence.ToString(CultureInfo.InvariantCulture), DataJson.Number(e.TimeSeconds), CsvText.Cell(e.Source), .. cells]));
+            }
+        });
+
+        return new CsvExportResult(eventsPath, telemetryPath, events, rows, truncated);
+    }
+
+    /// <summary>The default folder: the log's path without its extension, plus <c>-csv</c>.</summary>
+    public static string DefaultDirectory(string logPath) => Path.ChangeExtension(logPath, null) + "-csv";
+}

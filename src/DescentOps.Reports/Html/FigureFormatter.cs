@@ -1,0 +1,68 @@
+using System.Globalization;
+using DescentOps.Engine.Journaling;
+
+namespace DescentOps.Reports.Html;
+
+/// <summary>
+/// Turns the summary's SI fields into the figures an operator reads. The unit comes from the field name's
+/// suffix (the project's naming rule), so a figure the runner adds later is shown sensibly without a change here.
+/// </summary>
+public static class FigureFormatter
+{
+    private static readonly Dictionary<string, string> Labels = new(StringComparer.Ordinal)
+    {
+        ["breakthrough_t_s"] = "time to breakthrough",
+        ["final_depth_m"] = "final depth",
+        ["energy_used_j"] = "energy used",
+        ["faults_injected"] = "faults injected",
+        ["frames_sent"] = "telemetry frames sent",
+        ["frames_received_on_ground"] = "frames received on ground",
+        ["frames_lost"] = "frames lost",
+        ["vehicle_profiles"] = "vehicle profiles",
+        ["events_delivered"] = "events delivered",
+        ["records_written"] = "events logged",
+        ["component_failures"] = "component failures",
+    };
+
+    public static SummaryFigure Format(RecordField field) => new(Label(field.Name), Value(field));
+
+    public static string Label(string name)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        if (Labels.TryGetValue(name, out var label)) return label;
+        foreach (var suffix in new[] { "_t_s", "_s", "_j", "_m", "_w", "_k", "_pa", "_m_s" })
+        {
+            if (name.EndsWith(suffix, StringComparison.Ordinal) && name.Length > suffix.Length)
+            {
+                name = name[..^suffix.Length];
+                break;
+            }
+        }
+
+        return name.Replace('_', ' ');
+    }
+
+    public static string Value(RecordField field) => field.Kind switch
+    {
+        RecordFieldKind.Number => Number(field.Name, field.Number),
+        RecordFieldKind.Integer => field.Integer.ToString(CultureInfo.InvariantCulture),
+        RecordFieldKind.Boolean => field.Integer != 0 ? "yes" : "no",
+        _ => field.Text ?? "",
+    };
+
+    /// <summary>A time in seconds as days with the exact seconds beside it, as the run command prints it.</summary>
+    public static string Duration(double seconds) =>
+        string.Create(CultureInfo.InvariantCulture, $"{seconds / 86_400:F3} d ({seconds:F0} s)");
+
+    private static string Number(string name, double value)
+    {
+        if (!double.IsFinite(value)) return DataJson.Number(value);
+        if (name.EndsWith("_m_s", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:G6} m/s");
+        if (name.EndsWith("_s", StringComparison.Ordinal)) return Duration(value);
+        if (name.EndsWith("_j", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value / 3.6e9:F2} MWh ({value:E3} J)");
+        if (name.EndsWith("_m", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:F1} m");
+        if (name.EndsWith("_w", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:G6} W");
+        if (name.EndsWith("_k", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:F1} K");
+        return value.ToString("G6", CultureInfo.InvariantCulture);
+    }
+}
