@@ -11,6 +11,7 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     DiffCommand.Create(),
     EventsCommand.Create(),
     SchemaCommand.Create(),
+    DescentOps.Cli.Commands.Physics.PhysicsCommand.Create(),
 };
 
 try
