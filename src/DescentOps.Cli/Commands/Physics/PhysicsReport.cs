@@ -13,6 +13,9 @@ internal sealed class PhysicsReport(string title)
 {
     private readonly List<PhysicsReportEntry> _entries = [];
 
+    /// <summary>The short form of the README's cautions, printed under every table.</summary>
+    public const string Caution = "Published models with stated limits, for rehearsal only: DescentOps certifies nothing (see README, Cautions).";
+
     public string Title { get; } = title;
 
     public IReadOnlyList<PhysicsReportEntry> Entries => _entries;
@@ -87,11 +90,12 @@ internal sealed class PhysicsReport(string title)
         var valueWidth = rows.Max(r => r.Value.Length);
         foreach (var (label, value, unit) in rows)
         {
-            var line = unit.Length > 0
-                ? $"  {label.PadRight(labelWidth)}{value.PadLeft(valueWidth)} {unit}"
-                : $"  {label.PadRight(labelWidth)}{value}";
-            output.WriteLine(line.TrimEnd());
+            // Values right-aligned in one column so that magnitudes line up; a section heading has none.
+            output.WriteLine($"  {label.PadRight(labelWidth)}{value.PadLeft(value.Length > 0 ? valueWidth : 0)} {unit}".TrimEnd());
         }
+
+        // Every printout carries the project's caution (README, "Cautions"); the JSON stays a bare object for scripts.
+        output.WriteLine(Caution);
     }
 
     private static void Collect(PhysicsReport report, string indent, List<(string, string, string)> rows)
