@@ -243,7 +243,7 @@ public sealed class PhysicsCommandTests
     public async Task SeawaterSoundSpeedMatchesTheMackenzie1981CheckValue()
     {
         // Mackenzie (1981), J. Acoust. Soc. Am. 70(3), check value: T = 25 °C, S = 35, D = 1000 m → 1550.744 m/s.
-        var w = await JsonAsync("seawater", "--salinity", "35", "--pressure", "0 Pa", "--temperature", "25 °C", "--earth-depth", "1000 m");
+        var w = await JsonAsync("seawater", "--salinity", "35", "--pressure", "0 Pa", "--temperature", "25 °C", "--terrestrial-depth", "1000 m");
         Assert.Equal(1550.744, Number(w, "sound_speed_mackenzie_m_s"), 1e-3);
         // Chen-Millero at the surface, same water: the two formulas agree within Mackenzie's own depth term, 16.3 m/s per km.
         Assert.Equal(1550.744 - 16.3, Number(w, "sound_speed_m_s"), 1.0);

@@ -20,7 +20,7 @@ internal static class AcousticSubcommand
         var range = QuantityOption.Required("--range", QuantityKind.Length, "Distance between source and receiver, at least 1 m.");
         var temperature = QuantityOption.Required("--temperature", QuantityKind.Temperature, "Water temperature.");
         var salinity = new SalinityOption("--salinity", "Salinity of the water.");
-        var depth = QuantityOption.Required("--depth", QuantityKind.Length, "Depth in the water column (the formulas' Earth depth).");
+        var depth = QuantityOption.Required("--depth", QuantityKind.Length, "Depth in the water column (the formulas' depth in a terrestrial ocean).");
         var formula = new Option<AbsorptionFormula>("--absorption-formula")
         {
             Description = "AinslieMcColm (default; salinity 5–50, −6 to 35 °C, 0–7 km), FrancoisGarrison (salinity 30–35, −2 to 22 °C, 0–3.5 km) or Thorp (frequency only).",

@@ -8,7 +8,7 @@ namespace DescentOps.Cli.Commands.Physics;
 /// A seawater salinity option. The UNESCO/EOS-80 formulas take practical salinity (PSS-78, dimensionless), so a bare
 /// number or "35 psu" is practical salinity. A mass fraction ("35 g/kg", "3.5 %") is taken as Reference-Composition
 /// Absolute Salinity S_R and converted with the TEOS-10 reference ratio S_P = S_R · 35 / 35.16504 (no regional
-/// anomaly: an ocean of other salts than Earth's sea salt is outside every formula here anyway).
+/// anomaly: an ocean of other salts than terrestrial sea salt is outside every formula here anyway).
 /// </summary>
 internal sealed class SalinityOption
 {

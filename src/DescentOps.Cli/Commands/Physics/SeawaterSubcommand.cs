@@ -11,19 +11,19 @@ internal static class SeawaterSubcommand
     public static Command Create()
     {
         var salinity = new SalinityOption("--salinity", "Salinity of the water; the freezing point needs 4 to 40.");
-        var pressure = QuantityOption.Required("--pressure", QuantityKind.Pressure, "Sea pressure as the UNESCO formulas define it: absolute pressure less one standard atmosphere in an Earth ocean; under an ice shell on an airless body, the absolute pressure (ice overburden plus the water above). The freezing point needs 0 to 5 MPa (500 dbar).");
+        var pressure = QuantityOption.Required("--pressure", QuantityKind.Pressure, "Sea pressure as the UNESCO formulas define it: absolute pressure less one standard atmosphere in a terrestrial ocean; under an ice shell on an airless body, the absolute pressure (ice overburden plus the water above). The freezing point needs 0 to 5 MPa (500 dbar).");
         var temperature = QuantityOption.Required("--temperature", QuantityKind.Temperature, "In-situ temperature (ITS-90), −2 °C to 40 °C.");
-        var earthDepth = QuantityOption.NotRequired("--earth-depth", QuantityKind.Length, "Also give the Mackenzie (1981) sound speed at this depth of an Earth ocean (0 to 8000 m; needs salinity 30 to 40 and −2 °C to 30 °C).");
+        var terrestrialDepth = QuantityOption.NotRequired("--terrestrial-depth", QuantityKind.Length, "Also give the Mackenzie (1981) sound speed at this depth of a terrestrial ocean (0 to 8000 m; needs salinity 30 to 40 and −2 °C to 30 °C).");
         var json = PhysicsAction.JsonOption();
         var command = new Command(
             "seawater",
             "Freezing temperature (UNESCO 1983, Millero-Leung), sound speed (Chen-Millero, UNESCO 1983) and in-situ density (EOS-80) of seawater at practical salinity S.")
         {
-            salinity.Option, pressure.Option, temperature.Option, earthDepth.Option, json,
+            salinity.Option, pressure.Option, temperature.Option, terrestrialDepth.Option, json,
         };
         var map = new Dictionary<string, string>
         {
-            ["practicalSalinity"] = salinity.Name, ["seaPressurePa"] = pressure.Name, ["temperatureK"] = temperature.Name, ["earthDepthM"] = earthDepth.Name,
+            ["practicalSalinity"] = salinity.Name, ["seaPressurePa"] = pressure.Name, ["temperatureK"] = temperature.Name, ["earthDepthM"] = terrestrialDepth.Name,
         };
         command.SetAction(parse => PhysicsAction.Run("seawater", parse, json, p =>
         {
@@ -39,8 +39,8 @@ internal static class SeawaterSubcommand
                 .Number("sound_speed_m_s", "sound speed (Chen-Millero)", SoundSpeed.UnescoMPerS(s, t, pa), "m/s")
                 .Number("density_kg_m3", "in-situ density (EOS-80)", density.DensityKgPerM3, "kg/m³")
                 .Number("secant_bulk_modulus_pa", "secant bulk modulus (EOS-80)", density.SecantBulkModulusPa, "Pa");
-            return earthDepth.Optional(p) is { } depth
-                ? report.Number("sound_speed_mackenzie_m_s", "sound speed (Mackenzie 1981, Earth depth)", SoundSpeed.MackenzieMPerS(s, t, depth), "m/s")
+            return terrestrialDepth.Optional(p) is { } depth
+                ? report.Number("sound_speed_mackenzie_m_s", "sound speed (Mackenzie 1981, terrestrial depth)", SoundSpeed.MackenzieMPerS(s, t, depth), "m/s")
                 : report;
         }, map));
         return command;
