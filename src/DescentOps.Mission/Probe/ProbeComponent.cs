@@ -5,7 +5,6 @@ using DescentOps.Mission.Messages;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
 using DescentOps.Physics.Refreezing;
-using DescentOps.Physics.Shell;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
 
@@ -27,13 +26,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         : base(MissionIds.Probe, FailurePolicy.AbortRun)
     {
         _scenario = scenario;
-        var shell = new IceShell(
-            scenario.Shell.SurfaceTemperatureK,
-            scenario.Shell.ThicknessM,
-            scenario.Body.GravityMPerS2,
-            scenario.Body.SurfacePressurePa,
-            [BasalLayer(scenario.Shell)]);
-        _descent = new ProbeDescentModel(shell, new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg));
+        _descent = ProbeDescentFactory.Model(scenario);
         _frameInterval = SimDuration.FromSeconds(scenario.Probe.TelemetryIntervalS);
     }
 
@@ -43,13 +36,6 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     public override ProbeState InitialState => new(
         ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
         _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], []);
-
-    /// <summary>
-    /// The ice at the base freezes from the ocean, so its melting point is the ocean's freezing point: a one-metre
-    /// basal layer carries the ocean's salinity (MODEL; the shell above is fresh unless a scenario says otherwise).
-    /// </summary>
-    private static IceLayer BasalLayer(ShellModel shell) =>
-        new(Math.Max(0, shell.ThicknessM - 1.0), shell.ThicknessM, shell.OceanSalinityKgPerKg * 1000.0);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {

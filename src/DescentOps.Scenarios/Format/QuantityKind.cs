@@ -15,6 +15,9 @@ public enum QuantityKind
     Energy,
     MassFraction,
     Pressure,
+    Frequency,
+    AbsorbedDose,
+    Density,
 }
 
 public static class QuantityKindInfo
@@ -31,6 +34,9 @@ public static class QuantityKindInfo
         QuantityKind.Energy => typeof(Energy),
         QuantityKind.MassFraction => typeof(MassFraction),
         QuantityKind.Pressure => typeof(Pressure),
+        QuantityKind.Frequency => typeof(Frequency),
+        QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
+        QuantityKind.Density => typeof(Density),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -47,6 +53,9 @@ public static class QuantityKindInfo
         QuantityKind.Energy => "J",
         QuantityKind.MassFraction => "kg/kg",
         QuantityKind.Pressure => "Pa",
+        QuantityKind.Frequency => "Hz",
+        QuantityKind.AbsorbedDose => "Gy",
+        QuantityKind.Density => "kg/m³",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -63,6 +72,9 @@ public static class QuantityKindInfo
         QuantityKind.Energy => "J, kJ, Wh, kWh",
         QuantityKind.MassFraction => "g/kg, %",
         QuantityKind.Pressure => "Pa, kPa, MPa, bar",
+        QuantityKind.Frequency => "Hz, kHz, MHz, GHz",
+        QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
+        QuantityKind.Density => "kg/m³, g/cm³",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }

@@ -1,0 +1,38 @@
+using System.CommandLine;
+using DescentOps.Scenarios.Format;
+
+namespace DescentOps.Cli.Commands.Physics;
+
+/// <summary>
+/// An absorbed-dose-rate option such as "0.5 Gy/d", "20 mrad/h" or "1e-6 Gy/s". UnitsNet has a dose but no dose
+/// rate, so the text is split at its last '/' and each side read with the shared parser: a dose, and one unit of a
+/// duration.
+/// </summary>
+internal sealed class DoseRateOption(string name, string description)
+{
+    public string Name { get; } = name;
+
+    public Option<string?> Option { get; } = new(name)
+    {
+        Description = description + " Units: a dose over a duration, e.g. Gy/s, mGy/h, krad/yr.",
+        Required = true,
+        HelpName = "dose-rate",
+    };
+
+    /// <summary>Gy/s.</summary>
+    public double Value(ParseResult parse)
+    {
+        ArgumentNullException.ThrowIfNull(parse);
+        var text = (parse.GetValue(Option) ?? throw new UsageException($"{Name} is required.")).Trim();
+        var slash = text.LastIndexOf('/');
+        if (slash > 0
+            && QuantityParser.TryParseSi(QuantityKind.AbsorbedDose, text[..slash], out var doseGy, out _)
+            && QuantityParser.TryParseSi(QuantityKind.Duration, "1 " + text[(slash + 1)..].Trim(), out var perS, out _)
+            && perS > 0)
+        {
+            return doseGy / perS;
+        }
+
+        throw new UsageException($"{Name}: '{text}' is not a dose rate (write e.g. '0.5 Gy/d' or '20 mrad/h')");
+    }
+}
