@@ -40,6 +40,12 @@ catch (LogIntegrityException exception)
     Console.Error.WriteLine($"descentops: {exception.Message}");
     return (int)ExitCode.VerificationFailed;
 }
+catch (InvalidDataException exception)
+{
+    // A file that is not a journal, or one damaged in a way the reader cannot step over: bad input, not a defect.
+    Console.Error.WriteLine($"descentops: not a readable event log: {exception.Message}");
+    return (int)ExitCode.InvalidInput;
+}
 catch (UsageException exception)
 {
     Console.Error.WriteLine($"descentops: {exception.Message}");

@@ -46,18 +46,19 @@ public sealed class ContingencyTests
     {
         var (summary, sink) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
         var measure = Assert.Single(summary.Faults);
+        var frameS = ScenarioLoader.LoadText(Text("stall-wall-boost.yaml"), "with.yaml").Probe.TelemetryIntervalS;
 
         // Computed: the trip at day 20 falls on a frame boundary and the gap freezes within seconds (Stefan time
         // logged by the probe), so the first frame that shows FrozenIn is one 10-minute interval later; the
         // on-board rule fires on that frame and its command acts at once.
         var freezeS = CollectingSink.Field(sink.OfKind("probe.refreezing").Single(), "freeze_time_s");
-        Assert.True(freezeS < 600);
-        Assert.Equal(600.0, measure.DetectedAfterS!.Value, 6);
-        Assert.Equal(600.0, measure.FirstActionAfterS!.Value, 6);
+        Assert.True(freezeS < frameS);
+        Assert.Equal(frameS, measure.DetectedAfterS!.Value, 6);
+        Assert.Equal(frameS, measure.FirstActionAfterS!.Value, 6);
         // Recovered on the first frame after the gap is melted open: dip end + melt-free time, rounded up to a frame.
         var meltFree = sink.OfKind("probe.melting_free").Single();
         var openedS = meltFree.Time.SecondsSinceEpoch + CollectingSink.Field(meltFree, "time_s") - measure.StartS;
-        Assert.InRange(measure.RecoveredAfterS!.Value - openedS, 0, 600);
+        Assert.InRange(measure.RecoveredAfterS!.Value - openedS, 0, frameS);
     }
 
     [Fact]
@@ -74,9 +75,14 @@ public sealed class ContingencyTests
         // The stuck sensor keeps reporting the speed of day 14, so the naive rule never sees the slow-down.
         Assert.Empty(naiveSink.OfKind("rule.fired"));
         var fired = Assert.Single(betterSink.OfKind("rule.fired"));
+        // The sag starts on day 15; the rule needs a 2-hour rate window and 3 frames, so it fires within the
+        // following day (window chosen as one day: 2 h + 3 × 10 min plus margin, a bound, not a prediction).
         Assert.InRange(fired.Time.SecondsSinceEpoch, 15 * 86400.0, 16 * 86400.0);
-        // Boosted through the 20-day sag, the probe arrives days earlier (here 94 against 120 days).
-        Assert.True(naiveSummary.BreakthroughTimeS - betterSummary.BreakthroughTimeS > 10 * 86400.0,
+        // The boost raises the head set point from 6 to 9 kW from day 15 on (it stays after the sag): the probe must
+        // arrive clearly earlier. Threshold: two days, a margin of our own (common practice, no source), far below
+        // the measured gain of about 26 days (94 against 120 days).
+        var gain = naiveSummary.BreakthroughTimeS!.Value - betterSummary.BreakthroughTimeS!.Value;
+        Assert.True(gain > 2 * 86400.0,
             $"better {betterSummary.BreakthroughTimeS} s, naive {naiveSummary.BreakthroughTimeS} s");
     }
 

@@ -106,6 +106,36 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
+    public async Task OverlappingPowerDipsLeaveTheSmallestShareUntilTheLastOneEnds()
+    {
+        // Day 30-30.5 at 40 % (the default's dip) and day 30.25-31 at 70 %: full power must not return at day 30.5.
+        var scenario = MissionHarness.Edited(("run:\n", "  - name: long-sag\n    kind: power_dip\n    at: 30.25 d\n    duration: 0.75 d\n    remaining_fraction: 0.7\nrun:\n"));
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        double HeadAt(double days) => CollectingSink.Field(sink.OfKind("probe.telemetry").First(r => r.Time.SecondsSinceEpoch >= days * 86400), "head_power_w");
+
+        // Computed: head 6 kW × share in force (min of the dips active).
+        Assert.Equal(6000 * 0.4, HeadAt(30.3), 6);
+        Assert.Equal(6000 * 0.7, HeadAt(30.6), 6);
+        Assert.Equal(6000.0, HeadAt(31.1), 6);
+    }
+
+    [Fact]
+    public async Task AStuckSensorRepeatsTheTrueReadingOfTheInstantItStuck()
+    {
+        // Stuck between two frames (at day 10 plus 5 minutes): the reading it keeps is the depth at that instant.
+        var scenario = MissionHarness.Edited(("run:\n", "  - name: depth-stuck\n    kind: sensor_stuck\n    at: 864300 s\n    point: probe.depth\nrun:\n"));
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        var stuck = sink.OfKind("probe.sensor_fault").Single();
+        var before = sink.OfKind("probe.telemetry").Last(r => r.Time < stuck.Time);
+        var after = sink.OfKind("probe.telemetry").First(r => r.Time > stuck.Time);
+        var truth = CollectingSink.Field(stuck, "true_value");
+        // Computed: depth moves linearly between the frames at constant velocity, so the truth lies strictly between them.
+        Assert.InRange(truth, CollectingSink.Field(before, "depth_m") + 1e-6, CollectingSink.Field(after, "depth_m") - 1e-6);
+        var reported = sink.OfKind("ground.telemetry").Last();
+        Assert.Equal(truth, CollectingSink.Field(reported, "depth_m"), 9);
+    }
+
+    [Fact]
     public async Task GroundLatencyIsFibrePlusStationPlusLightTime()
     {
         var scenario = DescentOps.Scenarios.BuiltInScenarios.Default();

@@ -41,32 +41,52 @@ public static class BranchCommand
         var scenario = change.ApplyTo(parent.Scenario);
 
         var parentSha = Convert.ToHexStringLower(SHA256.HashData(await File.ReadAllBytesAsync(parentPath).ConfigureAwait(false)));
-        var branch = new BranchInfo(parentSha, atS, Path.GetFileName(changePath), changeText);
+        var branch = new BranchInfo(BranchInfo.All(parent.Manifest).Count + 1, parentSha, atS, Path.GetFileName(changePath), changeText);
         var manifest = parent.Manifest with { Extra = [.. parent.Manifest.Extra, .. branch.ToFields()] };
         var path = Path.GetFullPath(output ?? Path.Combine(Path.GetDirectoryName(Path.GetFullPath(parentPath))!, Path.GetFileNameWithoutExtension(parentPath) + "-branch.jsonl"));
+        if (File.Exists(path))
+        {
+            throw new UsageException($"--log: {path} exists; a branch never replaces a log (the parent least of all). Name a new file.");
+        }
 
+        // Written and checked under a temporary name: an unchecked branch must never sit under its final name.
+        var checking = path + ".unchecked";
         MissionSummary summary;
-        using (var writer = JournalWriter.Create(path, manifest))
+        try
         {
-            summary = await JournaledRun.RunAsync(scenario, manifest, writer).ConfigureAwait(false);
-        }
+            using (var file = new FileStream(checking, FileMode.Create, FileAccess.Write, FileShare.Read))
+            using (var writer = JournalWriter.Create(file, manifest))
+            {
+                summary = await JournaledRun.RunAsync(scenario, manifest, writer).ConfigureAwait(false);
+            }
 
-        var diff = JournalDiff.Compare(parentPath, path);
+            var diff = JournalDiff.Compare(parentPath, checking);
+            var c = CultureInfo.InvariantCulture;
+            if (diff.FirstEventDivergence is { } d && (d.TimeA ?? d.TimeB ?? 0) < atS)
+            {
+                Console.Error.WriteLine(string.Create(c, $"descentops: the change acts before the branch instant: the runs part at line {d.Line}, t = {(d.TimeA ?? d.TimeB):R} s, before {atS:R} s. No branch log was kept."));
+                Console.Error.WriteLine($"  parent: {d.LineA}");
+                Console.Error.WriteLine($"  branch: {d.LineB}");
+                return (int)ExitCode.InvalidInput;
+            }
+
+            File.Move(checking, path);
+            Report(parentPath, changePath, atS, summary, diff, path);
+            return (int)ExitCode.Ok;
+        }
+        finally
+        {
+            File.Delete(checking);
+        }
+    }
+
+    private static void Report(string parentPath, string changePath, double atS, MissionSummary summary, JournalDiff diff, string path)
+    {
         var c = CultureInfo.InvariantCulture;
-        if (diff.FirstEventDivergence is { } d && (d.TimeA ?? d.TimeB ?? 0) < atS)
-        {
-            File.Delete(path);
-            Console.Error.WriteLine(string.Create(c, $"descentops: the change acts before the branch instant: the runs part at line {d.Line}, t = {(d.TimeA ?? d.TimeB):R} s, before {atS:R} s. No branch log was kept."));
-            Console.Error.WriteLine($"  parent: {d.LineA}");
-            Console.Error.WriteLine($"  branch: {d.LineB}");
-            return (int)ExitCode.InvalidInput;
-        }
-
-        Console.Out.WriteLine($"branch of {parentPath} at {atS / 86400:0.###} d with {changePath}: {summary.Outcome.Kind}: {summary.Outcome.Reason}");
+        Console.Out.WriteLine(string.Create(c, $"branch of {parentPath} at {atS / 86400:0.###} d with {changePath}: {summary.Outcome.Kind}: {summary.Outcome.Reason}"));
         Console.Out.WriteLine(diff.FirstEventDivergence is { } first
             ? string.Create(c, $"  identical to the parent up to t = {(first.TimeA ?? first.TimeB):R} s ({(first.TimeA ?? first.TimeB) / 86400:F4} d), line {first.Line}")
             : "  identical to the parent event for event (the change did not act)");
         Console.Out.WriteLine($"  event log {path}");
-        return (int)ExitCode.Ok;
     }
 }

@@ -73,7 +73,7 @@ public static class RunCommand
         Directory.CreateDirectory(Path.GetDirectoryName(path)!);
         var manifest = ManifestFor(scenario, seed, untilS);
 
-        Console.Out.WriteLine($"DescentOps {ToolInfo.Version}: scenario '{scenario.Name}' ({scenario.SourceName}), seed {seed}, until {untilS / 86400:0.###} d");
+        Console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture, $"DescentOps {ToolInfo.Version}: scenario '{scenario.Name}' ({scenario.SourceName}), seed {seed}, until {untilS / 86400:0.###} d"));
         var progress = new ProgressLine();
         var wall = Stopwatch.StartNew();
         MissionSummary summary;

@@ -1,27 +1,44 @@
+using System.Globalization;
 using DescentOps.Engine.Journaling;
 using DescentOps.Journal;
 
 namespace DescentOps.Cli.Running;
 
 /// <summary>
-/// What a branch log's manifest records of its parent: the parent log's SHA-256, the branch instant, and the change
-/// file's text (so a replay of the branch re-applies exactly the same change).
+/// One generation of branching as a manifest records it: the parent log's SHA-256, the branch instant, and the change
+/// file's text. A branch of a branch carries every generation, numbered from 1, so a replay re-applies all the
+/// changes in order.
 /// </summary>
-public sealed record BranchInfo(string ParentSha256, double AtS, string ChangeName, string ChangeText)
+public sealed record BranchInfo(int Generation, string ParentSha256, double AtS, string ChangeName, string ChangeText)
 {
     public IReadOnlyList<RecordField> ToFields() =>
     [
-        RecordField.Of("branch_parent_sha256", ParentSha256),
-        RecordField.Of("branch_at_s", AtS),
-        RecordField.Of("branch_change_name", ChangeName),
-        RecordField.Of("branch_change_text", ChangeText),
+        RecordField.Of(Name("parent_sha256"), ParentSha256),
+        RecordField.Of(Name("at_s"), AtS),
+        RecordField.Of(Name("change_name"), ChangeName),
+        RecordField.Of(Name("change_text"), ChangeText),
     ];
 
-    public static BranchInfo? Of(RunManifest manifest)
+    /// <summary>Every generation recorded in the manifest, oldest first.</summary>
+    public static IReadOnlyList<BranchInfo> All(RunManifest manifest)
     {
-        string? Text(string name) => manifest.Extra.FirstOrDefault(f => f.Name == name).Text;
-        if (Text("branch_change_text") is not { } change) return null;
-        var at = manifest.Extra.First(f => f.Name == "branch_at_s").Number;
-        return new BranchInfo(Text("branch_parent_sha256") ?? "", at, Text("branch_change_name") ?? "", change);
+        var generations = new List<BranchInfo>();
+        for (var g = 1; ; g++)
+        {
+            string Key(string part) => string.Create(CultureInfo.InvariantCulture, $"branch_{g}_{part}");
+            var change = manifest.Extra.FirstOrDefault(f => f.Name == Key("change_text")).Text;
+            if (change is null) return generations;
+            generations.Add(new BranchInfo(
+                g,
+                manifest.Extra.First(f => f.Name == Key("parent_sha256")).Text ?? "",
+                manifest.Extra.First(f => f.Name == Key("at_s")).Number,
+                manifest.Extra.FirstOrDefault(f => f.Name == Key("change_name")).Text ?? "",
+                change));
+        }
     }
+
+    /// <summary>The newest generation, or null for a log that is not a branch.</summary>
+    public static BranchInfo? Of(RunManifest manifest) => All(manifest) is { Count: > 0 } all ? all[^1] : null;
+
+    private string Name(string part) => string.Create(CultureInfo.InvariantCulture, $"branch_{Generation}_{part}");
 }

@@ -32,9 +32,9 @@ public sealed record LoggedRun(string Path, RunManifest Manifest, Scenario Scena
 
         var manifest = manifestEntry.Manifest;
         var scenario = ScenarioLoader.LoadText(manifest.ScenarioText, $"{path}#manifest");
-        if (BranchInfo.Of(manifest) is { } branch)
+        foreach (var branch in BranchInfo.All(manifest))
         {
-            scenario = ScenarioLoader.LoadChange(branch.ChangeText, $"{path}#branch-change").ApplyTo(scenario);
+            scenario = ScenarioLoader.LoadChange(branch.ChangeText, $"{path}#branch-{branch.Generation}").ApplyTo(scenario);
         }
 
         return new LoggedRun(path, manifest, scenario, integrity);

@@ -1,3 +1,5 @@
+using System.Globalization;
+
 namespace DescentOps.Engine.Journaling;
 
 /// <summary>
@@ -29,8 +31,8 @@ public readonly struct RecordField
 
     public override string ToString() => Kind switch
     {
-        RecordFieldKind.Number => $"{Name}={Number:R}",
-        RecordFieldKind.Integer => $"{Name}={Integer}",
+        RecordFieldKind.Number => Name + "=" + Number.ToString("R", CultureInfo.InvariantCulture),
+        RecordFieldKind.Integer => Name + "=" + Integer.ToString(CultureInfo.InvariantCulture),
         RecordFieldKind.Boolean => $"{Name}={(Integer != 0 ? "true" : "false")}",
         _ => $"{Name}={Text}",
     };

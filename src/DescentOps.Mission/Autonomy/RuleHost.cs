@@ -24,7 +24,6 @@ public sealed class RuleHost
     {
         Placement = placement;
         var own = rules with { Rules = [.. rules.Rules.Where(r => r.Placement == placement)] };
-        own = own with { Exclusions = [.. rules.Exclusions] };
         RuleCount = own.Rules.Count;
         _evaluator = new RuleEvaluator(own, new RuleScheduler());
         _evaluator.Outputs.Subscribe(_outputs.Add);
@@ -60,11 +59,11 @@ public sealed class RuleHost
             switch (output)
             {
                 case RuleFiring firing:
-                    context.Record("rule.fired", Severity(firing.Severity.ToString()),
+                    context.Record("rule.fired", Severity(firing.Severity),
                         RecordField.Of("rule", firing.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("firing", firing.Firing),
-                        RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s"))),
+                        RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))),
                         RecordField.Of("commands", string.Join("; ", firing.Commands)));
                     commands.AddRange(firing.Commands.Select(c => new Telecommand(c, firing.Rule, where, context.Now)));
                     break;
@@ -104,12 +103,13 @@ public sealed class RuleHost
         return context.ScheduleSelf(due - context.Now, wakeMessage, MissionPriority.Command);
     }
 
-    private static Severity Severity(string ruleSeverity) => ruleSeverity switch
+    private static Severity Severity(RuleSeverity ruleSeverity) => ruleSeverity switch
     {
-        "High" => Engine.Journaling.Severity.Alarm,
-        "Medium" => Engine.Journaling.Severity.Warning,
-        "Low" => Engine.Journaling.Severity.Notice,
-        _ => Engine.Journaling.Severity.Info,
+        RuleSeverity.High => Engine.Journaling.Severity.Alarm,
+        RuleSeverity.Medium => Engine.Journaling.Severity.Warning,
+        RuleSeverity.Low => Engine.Journaling.Severity.Notice,
+        RuleSeverity.Info => Engine.Journaling.Severity.Info,
+        _ => throw new ArgumentOutOfRangeException(nameof(ruleSeverity), ruleSeverity, "A rule severity without a journal severity."),
     };
 
     /// <summary>The component that executes a command's target (the probe for its head and wall too).</summary>

@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using DescentOps.Engine.Components;
 using DescentOps.Engine.Journaling;
 using DescentOps.Engine.Running;
@@ -18,6 +19,9 @@ namespace DescentOps.Mission.Probe;
 /// </summary>
 public sealed class ProbeComponent : SimComponent<ProbeState>
 {
+    /// <summary>Longest thermal timer worth scheduling, 1e10 s (about 300 years): longer means never within a run.</summary>
+    private const double MaxTimerS = 1e10;
+
     private readonly Scenario _scenario;
     private readonly ProbeDescentModel _descent;
     private readonly SimDuration _frameInterval;
@@ -35,7 +39,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     public override ProbeState InitialState => new(
         ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
-        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], []);
+        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal));
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -59,10 +63,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 return Replan(Retune(Thermal(Advance(state with { PendingThermal = null }, context.Now), due, context), context), context);
 
             case FaultStarted { Fault.Kind: FaultKind.PowerDip } dip:
-                return Replan(Retune(Advance(state, context.Now) with { PowerFraction = dip.Fault.RemainingFraction }, context), context);
+                return Replan(Retune(WithDips(Advance(state, context.Now), state.ActiveDips.SetItem(dip.Fault.Name, dip.Fault.RemainingFraction)), context), context);
 
-            case FaultCleared { Fault.Kind: FaultKind.PowerDip }:
-                return Replan(Retune(Advance(state, context.Now) with { PowerFraction = 1.0 }, context), context);
+            case FaultCleared { Fault.Kind: FaultKind.PowerDip } cleared:
+                return Replan(Retune(WithDips(Advance(state, context.Now), state.ActiveDips.Remove(cleared.Fault.Name)), context), context);
 
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
@@ -74,7 +78,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 return Replan(state with { DepthTriggers = state.DepthTriggers.Add(new ArmedDepthTrigger(arm.FaultIndex, arm.DepthM)) }, context);
 
             case FaultStarted { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
-                return StartSensorFault(state, sensor.Fault, context);
+                return StartSensorFault(Advance(state, context.Now), sensor.Fault, context);
 
             case FaultCleared { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
                 context.Record("probe.sensor_restored", Severity.Notice, RecordField.Of("fault", sensor.Fault.Name), RecordField.Of("point", sensor.Fault.Point ?? ""));
@@ -113,6 +117,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("paused", next.Paused));
         return next;
     }
+
+    /// <summary>Overlapping dips: the bus delivers the smallest share any dip in force leaves.</summary>
+    private static ProbeState WithDips(ProbeState state, ImmutableSortedDictionary<string, double> dips) =>
+        state with { ActiveDips = dips, PowerFraction = dips.IsEmpty ? 1.0 : dips.Values.Min() };
 
     private ProbeState StartSensorFault(ProbeState state, FaultModel fault, ComponentContext context)
     {
@@ -227,7 +235,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                     RecordField.Of("freeze_time_s", freeze.FreezeTimeS),
                     RecordField.Of("stefan_number", freeze.StefanNumber),
                     RecordField.Of("hold_open_power_w", holdOpenW));
-                if (double.IsFinite(freeze.FreezeTimeS))
+                if (freeze.FreezeTimeS < MaxTimerS)
                 {
                     var handle = context.ScheduleSelf(SimDuration.FromSeconds(freeze.FreezeTimeS), new ProbeThermalDue(ProbeRegime.FrozenIn), MissionPriority.Physics);
                     state = state with { PendingThermal = handle };
@@ -343,7 +351,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("regime", frame.Regime),
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("velocity_m_s", state.VelocityMPerS),
-            RecordField.Of("ice_temperature_k", truth[2].Value),
+            RecordField.Of("ice_temperature_k", truth.First(r => r.Point == "probe.ice_temperature").Value),
             RecordField.Of("head_power_w", HeadPowerW(state)),
             RecordField.Of("wall_power_w", WallPowerW(state)),
             RecordField.Of("energy_used_j", state.EnergyUsedJ));

@@ -8,6 +8,7 @@ namespace DescentOps.Mission.Probe;
 /// The probe's committed state. Velocity is held constant between events, so the depth at any instant is
 /// exact: DepthM + VelocityMPerS × (t − LastUpdate). <see cref="MeltFreeRefusedAtWallW"/> remembers the wall power
 /// at which a frozen-in probe was found unable to melt free, so the (costly) estimate is redone only when that changes.
+/// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
 /// </summary>
 public sealed record ProbeState(
     ProbeRegime Regime,
@@ -30,7 +31,8 @@ public sealed record ProbeState(
     double WallSetpointW,
     bool Paused,
     ImmutableList<ActiveSensorFault> SensorFaults,
-    ImmutableList<ArmedDepthTrigger> DepthTriggers);
+    ImmutableList<ArmedDepthTrigger> DepthTriggers,
+    ImmutableSortedDictionary<string, double> ActiveDips);
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

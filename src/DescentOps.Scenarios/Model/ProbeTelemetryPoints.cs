@@ -15,6 +15,7 @@ public static class ProbeTelemetryPoints
         ("probe.ice_temperature", QuantityKind.Temperature),
         ("probe.head_power", QuantityKind.Power),
         ("probe.wall_power", QuantityKind.Power),
+        ("probe.energy_used", QuantityKind.Energy),
     ];
 
     public static QuantityKind? KindOf(string name) =>
