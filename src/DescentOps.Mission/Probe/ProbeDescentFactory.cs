@@ -13,7 +13,9 @@ public static class ProbeDescentFactory
     /// <summary>Thickness of the basal layer that carries the ocean's salt.</summary>
     public const double BasalLayerThicknessM = 1.0;
 
-    public static IceShell Shell(Scenario scenario)
+    /// <param name="scenario">The scenario whose shell is modelled.</param>
+    /// <param name="conductivityCoefficientWPerM">The a of k = a/T for the lid (a sensitivity knob; the run uses the default).</param>
+    public static IceShell Shell(Scenario scenario, double conductivityCoefficientWPerM = Physics.Ice.IceConductivity.ReciprocalCoefficientWPerM)
     {
         ArgumentNullException.ThrowIfNull(scenario);
         return new IceShell(
@@ -21,13 +23,22 @@ public static class ProbeDescentFactory
             scenario.Shell.ThicknessM,
             scenario.Body.GravityMPerS2,
             scenario.Body.SurfacePressurePa,
-            [BasalLayer(scenario.Shell)]);
+            [BasalLayer(scenario.Shell)],
+            conductivityCoefficientWPerM: conductivityCoefficientWPerM);
     }
 
-    public static ProbeDescentModel Model(Scenario scenario)
+    /// <param name="scenario">The scenario whose probe and shell are modelled.</param>
+    /// <param name="nodeSpacingM">Depth spacing of cached steady solutions (a sensitivity knob; the run uses the default).</param>
+    /// <param name="sealDiameters">Hole diameters to seal before liquid can form (a sensitivity knob; the run uses the default).</param>
+    /// <param name="conductivityCoefficientWPerM">The a of k = a/T for the lid.</param>
+    public static ProbeDescentModel Model(
+        Scenario scenario,
+        double nodeSpacingM = ProbeDescentModel.DefaultNodeSpacingM,
+        double sealDiameters = Physics.Vacuum.LiquidOnset.DefaultSealDiameters,
+        double conductivityCoefficientWPerM = Physics.Ice.IceConductivity.ReciprocalCoefficientWPerM)
     {
         ArgumentNullException.ThrowIfNull(scenario);
-        return new ProbeDescentModel(Shell(scenario), new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg));
+        return new ProbeDescentModel(Shell(scenario, conductivityCoefficientWPerM), new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg), nodeSpacingM, sealDiameters);
     }
 
     /// <summary>

@@ -4,7 +4,6 @@ using DescentOps.Engine.Journaling;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;
 using DescentOps.Physics.Descent;
-using DescentOps.Physics.Shell;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Model;
 
@@ -96,9 +95,7 @@ public static class PhysicsBenchmark
     /// <summary>∫ dz / v(z) over the shell at full power, midpoint rule on 1 m slices.</summary>
     private static double CrossingS(Scenario scenario, double nodeSpacingM, double conductivityCoefficientWPerM, double sealDiameters = DescentOps.Physics.Vacuum.LiquidOnset.DefaultSealDiameters)
     {
-        var shell = new IceShell(scenario.Shell.SurfaceTemperatureK, scenario.Shell.ThicknessM, scenario.Body.GravityMPerS2, scenario.Body.SurfacePressurePa,
-            [new IceLayer(scenario.Shell.ThicknessM - 1, scenario.Shell.ThicknessM, scenario.Shell.OceanSalinityKgPerKg * 1000)], null, conductivityCoefficientWPerM);
-        var model = new ProbeDescentModel(shell, new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg), nodeSpacingM, sealDiameters);
+        var model = ProbeDescentFactory.Model(scenario, nodeSpacingM, sealDiameters, conductivityCoefficientWPerM);
         var t = 0.0;
         for (var z = 0.5; z < scenario.Shell.ThicknessM; z += 1.0) t += 1.0 / model.Rate(z, scenario.Probe.HeadPowerW, scenario.Probe.WallPowerW).VelocityMPerS;
         return t;
