@@ -127,4 +127,37 @@ public sealed class ContingencyTests
         Assert.Equal(lines[line - 1].IndexOf("probe.regme", StringComparison.Ordinal) + 1, error.Location.Column);
         Assert.Contains("probe.regme", error.Message);
     }
+
+    [Fact]
+    public async Task AFailedHeadSegmentTurnsTheProbePastItsLimitUnlessARuleSteersBack()
+    {
+        var (steered, steeredSink) = await RunAsync(Text("tilt-steering.yaml"), "steered.yaml");
+        var (unsteered, unsteeredSink) = await RunAsync(WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
+
+        Assert.Equal(RunOutcomeKind.Completed, steered.Outcome.Kind);
+        Assert.NotNull(Assert.Single(steered.Faults).RecoveredAfterS);
+        Assert.Empty(steeredSink.OfKind("probe.tilt_limit"));
+
+        Assert.Equal(RunOutcomeKind.MissionLost, unsteered.Outcome.Kind);
+        var limit = Assert.Single(unsteeredSink.OfKind("probe.tilt_limit"));
+        Assert.True(CollectingSink.Field(limit, "tilt_rad") > 8 * Math.PI / 180); // the scenario's max_tilt: 8 deg
+    }
+
+    [Fact]
+    public async Task AnUnevenHeadTurnsTheProbeAtTheKinematicLimitOfItsClearance()
+    {
+        var scenario = ScenarioLoader.LoadText(WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        var frames = sink.OfKind("probe.telemetry").Where(r => r.Time.SecondsSinceEpoch > 21 * 86400).Take(2).ToList();
+
+        // Computed (tilt model of the physics reference, §7.2, MODEL): the half-head turn rate is far above what a
+        // rigid body of length ℓ fits through a hole of clearance w_c, so the tilt grows at ω_kin = 8 v w_c / ℓ²,
+        // with v the axial speed held over the step. The frame logs v just before it is re-evaluated at the new depth
+        // (0.2 m further on), which moves it by about 1e-5 relative: hence 1e-4.
+        var v = CollectingSink.Field(frames[0], "velocity_m_s");
+        var expected = 8 * v * scenario.Probe.FreezeGapM / (scenario.Probe.LengthM * scenario.Probe.LengthM);
+        var dt = (frames[1].Time - frames[0].Time).TotalSeconds;
+        var actual = (CollectingSink.Field(frames[1], "tilt_rad") - CollectingSink.Field(frames[0], "tilt_rad")) / dt;
+        Assert.Equal(expected, actual, expected * 1e-4);
+    }
 }

@@ -28,12 +28,14 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.head_power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW),
             new NumericPointSpec("probe.wall_power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW),
             new NumericPointSpec("probe.energy_used", Dimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
+            new NumericPointSpec("probe.tilt", Dimension.Angle, -Math.PI / 2, Math.PI / 2),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
         [
             new(new(Head), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW)]),
             new(new(Wall), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW)]),
+            new(MissionIds.Probe, "steer", [new QuantityArgumentSpec("power_difference", Dimension.Power, -scenario.Probe.MaxHeadPowerW / 2, scenario.Probe.MaxHeadPowerW / 2)]),
             new(MissionIds.Probe, "pause_descent", []),
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),

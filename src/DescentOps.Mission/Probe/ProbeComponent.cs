@@ -3,6 +3,7 @@ using DescentOps.Engine.Components;
 using DescentOps.Engine.Journaling;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
+using DescentOps.Physics.Attitude;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
 using DescentOps.Physics.Refreezing;
@@ -39,7 +40,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     public override ProbeState InitialState => new(
         ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
-        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal));
+        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal), 0.0, 0.0, 0.0, 0.0);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -71,6 +72,19 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
 
+            case FaultStarted { Fault.Kind: FaultKind.HeaterSegmentFailure } segment:
+                return Replan(Retune(Advance(state, context.Now) with { SegmentLossFraction = 1 - segment.Fault.RemainingFraction }, context), context);
+
+            case FaultCleared { Fault.Kind: FaultKind.HeaterSegmentFailure }:
+                return Replan(Retune(Advance(state, context.Now) with { SegmentLossFraction = 0.0 }, context), context);
+
+            case FaultStarted { Fault.Kind: FaultKind.TiltKick } kick:
+                var kicked = Advance(state, context.Now);
+                return Replan(CheckTilt(kicked with { TiltRad = kicked.TiltRad + kick.Fault.AngleRad!.Value }, context), context);
+
+            case FaultCleared { Fault.Kind: FaultKind.TiltKick }:
+                return state;
+
             case Telecommand command:
                 return Replan(Retune(Execute(Advance(state, context.Now), command, context), context), context);
 
@@ -101,6 +115,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         {
             (Autonomy.MissionCatalogue.Head, "set_power") => state with { HeadSetpointW = Math.Min(Power(), _scenario.Probe.MaxHeadPowerW) },
             (Autonomy.MissionCatalogue.Wall, "set_power") => state with { WallSetpointW = Math.Min(Power(), _scenario.Probe.MaxWallPowerW) },
+            ("probe", "steer") => state with { SteeringW = Math.Clamp(action.Arguments.Single(a => a.Name == "power_difference").ValueSi!.Value, -_scenario.Probe.MaxHeadPowerW / 2, _scenario.Probe.MaxHeadPowerW / 2) },
             ("probe", "pause_descent") => state with { Paused = true },
             ("probe", "resume_descent") => state with { Paused = false },
             ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = _scenario.Probe.MaxWallPowerW },
@@ -116,6 +131,19 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("wall_setpoint_w", next.WallSetpointW),
             RecordField.Of("paused", next.Paused));
         return next;
+    }
+
+    /// <summary>Beyond the scenario's tilt limit the probe is lost: the run ends as MissionLost.</summary>
+    private ProbeState CheckTilt(ProbeState state, ComponentContext context)
+    {
+        if (Math.Abs(state.TiltRad) <= _scenario.Probe.MaxTiltRad || state.Regime == ProbeRegime.AtOcean) return state;
+        context.Record("probe.tilt_limit", Severity.Critical,
+            RecordField.Of("tilt_rad", state.TiltRad),
+            RecordField.Of("limit_rad", _scenario.Probe.MaxTiltRad),
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("lateral_drift_m", state.LateralDriftM));
+        context.StopRun(RunOutcomeKind.MissionLost, string.Create(System.Globalization.CultureInfo.InvariantCulture, $"tilt {state.TiltRad * 180 / Math.PI:F1} deg beyond the {_scenario.Probe.MaxTiltRad * 180 / Math.PI:F1} deg limit"));
+        return state with { VelocityMPerS = 0.0 };
     }
 
     /// <summary>Overlapping dips: the bus delivers the smallest share any dip in force leaves.</summary>
@@ -142,6 +170,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         }
 
         state = state with { DepthTriggers = state.DepthTriggers.RemoveAll(t => state.DepthM >= t.DepthM) };
+        state = CheckTilt(state, context);
 
         if (IsMoving(state.Regime) && state.DepthM >= _scenario.Shell.ThicknessM)
         {
@@ -160,13 +189,35 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private ProbeState Advance(ProbeState state, SimTime now)
     {
         var seconds = (now - state.LastUpdate).TotalSeconds;
-        var depth = Math.Min(state.DepthM + (state.VelocityMPerS * seconds), _scenario.Shell.ThicknessM);
+        var depth = Math.Min(state.DepthM + (state.VelocityMPerS * Math.Cos(state.TiltRad) * seconds), _scenario.Shell.ThicknessM);
         return state with
         {
             LastUpdate = now,
             DepthM = depth,
+            LateralDriftM = state.LateralDriftM + (state.VelocityMPerS * Math.Sin(state.TiltRad) * seconds),
+            TiltRad = state.TiltRad + (TiltRateRadPerS(state) * seconds),
             EnergyUsedJ = state.EnergyUsedJ + (BusPowerW(state) * seconds),
         };
+    }
+
+    /// <summary>
+    /// dθ/dt from <see cref="TiltDynamics"/> (MODEL): the head's power difference turns it, a pendulum-stabilised body
+    /// relaxes towards the vertical with τ = ℓ/v, and the body cannot turn faster than its clearance allows. Held over
+    /// one step (explicit Euler): over a 10-minute step the tilt changes by thousandths of a degree. A failed
+    /// segment turns the probe towards positive tilt; steering power on the other half turns it back.
+    /// </summary>
+    private double TiltRateRadPerS(ProbeState state)
+    {
+        var v = state.VelocityMPerS;
+        if (v <= 0 || !IsMoving(state.Regime)) return 0.0;
+        var rate = _descent.Rate(state.DepthM, HeadPowerW(state), WallPowerW(state));
+        var area = Math.PI * _scenario.Probe.RadiusM * _scenario.Probe.RadiusM;
+        var density = Physics.Ice.IceIh.DensityKgPerM3(rate.IceTemperatureK, Math.Max(rate.PressurePa, 0));
+        var meltEnthalpy = (rate.SensibleW + rate.LatentW) / (density * area * v);
+        var differenceW = (state.SegmentLossFraction * state.HeadSetpointW * state.PowerFraction / 2) - (state.SteeringW * state.PowerFraction);
+        var turn = TiltDynamics.HeadTurnRateRadPerS(differenceW, _scenario.Probe.RadiusM, density, meltEnthalpy);
+        var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, _scenario.Probe.FreezeGapM, _scenario.Probe.LengthM);
+        return TiltDynamics.TiltRateRadPerS(state.TiltRad, 0.0, turn, 0.0, _scenario.Probe.LengthM / v, limit);
     }
 
     /// <summary>Sets regime and velocity for the depth and power now in force, logging every change of regime.</summary>
@@ -314,7 +365,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
             var remaining = Math.Max(0.0, target - state.DepthM);
             // Rounded up to the next tick so the step lands on or just past the boundary, never just short of it.
-            var crossing = context.Now + new SimDuration((long)Math.Ceiling(Math.Min(remaining / state.VelocityMPerS, 1e12) * SimDuration.TicksPerSecond));
+            var vertical = Math.Max(state.VelocityMPerS * Math.Cos(state.TiltRad), 1e-12);
+            var crossing = context.Now + new SimDuration((long)Math.Ceiling(Math.Min(remaining / vertical, 1e12) * SimDuration.TicksPerSecond));
             if (crossing < next) next = SimTime.Max(crossing, context.Now);
         }
 
@@ -354,7 +406,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("ice_temperature_k", truth.First(r => r.Point == "probe.ice_temperature").Value),
             RecordField.Of("head_power_w", HeadPowerW(state)),
             RecordField.Of("wall_power_w", WallPowerW(state)),
-            RecordField.Of("energy_used_j", state.EnergyUsedJ));
+            RecordField.Of("energy_used_j", state.EnergyUsedJ),
+            RecordField.Of("tilt_rad", state.TiltRad),
+            RecordField.Of("lateral_drift_m", state.LateralDriftM));
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
@@ -369,6 +423,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         ("probe.head_power", HeadPowerW(state)),
         ("probe.wall_power", WallPowerW(state)),
         ("probe.energy_used", state.EnergyUsedJ),
+        ("probe.tilt", state.TiltRad),
     ];
 
     private ProbeState Breakthrough(ProbeState state, ComponentContext context)
@@ -418,7 +473,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
     private static double HeadPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * state.PowerFraction;
+        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * state.PowerFraction * (1 - (state.SegmentLossFraction / 2));
 
     private static double WallPowerW(ProbeState state) =>
         state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW * state.PowerFraction;

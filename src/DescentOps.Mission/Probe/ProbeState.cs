@@ -8,6 +8,8 @@ namespace DescentOps.Mission.Probe;
 /// The probe's committed state. Velocity is held constant between events, so the depth at any instant is
 /// exact: DepthM + VelocityMPerS × (t − LastUpdate). <see cref="MeltFreeRefusedAtWallW"/> remembers the wall power
 /// at which a frozen-in probe was found unable to melt free, so the (costly) estimate is redone only when that changes.
+/// The probe moves along its axis, tilted by <see cref="TiltRad"/> from the vertical in its steering plane, so depth
+/// grows at v·cos θ and <see cref="LateralDriftM"/> at v·sin θ.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
 /// </summary>
 public sealed record ProbeState(
@@ -32,7 +34,11 @@ public sealed record ProbeState(
     bool Paused,
     ImmutableList<ActiveSensorFault> SensorFaults,
     ImmutableList<ArmedDepthTrigger> DepthTriggers,
-    ImmutableSortedDictionary<string, double> ActiveDips);
+    ImmutableSortedDictionary<string, double> ActiveDips,
+    double TiltRad,
+    double LateralDriftM,
+    double SegmentLossFraction,
+    double SteeringW);
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

@@ -6,12 +6,16 @@ namespace DescentOps.Mission.Running;
 /// Derives <see cref="FaultMeasure"/>s from journal records as they are written. Recovery, by fault kind:
 /// a power dip is recovered when a frame shows the probe melting at 90 % or more of the speed in the last frame
 /// before the fault (a rule of thumb of ours: "back to nominal" within a typical telemetry noise band); a station
-/// failure when the station reports recovered; a tether break never (no relays yet); a sensor fault does not
+/// failure when the station reports recovered; a tilt fault when the tilt, having left 1 degree of vertical, is
+/// back within it; a tether break never (no relays yet); a sensor fault does not
 /// move the physical state, so it has no recovery, only detection.
 /// </summary>
 public sealed class FaultMeasures
 {
     private const double RecoveredSpeedShare = 0.9;
+
+    /// <summary>Within one degree of vertical counts as upright (a rule of thumb of ours).</summary>
+    private const double UprightRad = Math.PI / 180;
 
     private readonly List<Open> _faults = [];
     private double _lastSpeedMPerS;
@@ -32,6 +36,13 @@ public sealed class FaultMeasures
                 break;
             case "probe.telemetry":
                 var speed = Number(record, "velocity_m_s");
+                var tilt = Math.Abs(Number(record, "tilt_rad"));
+                foreach (var f in _faults.Where(f => f.Kind is "HeaterSegmentFailure" or "TiltKick" && f.RecoveredS is null && t > f.StartS))
+                {
+                    if (tilt > UprightRad) f.LeftUpright = true;
+                    else if (f.LeftUpright) f.RecoveredS = t;
+                }
+
                 foreach (var f in _faults.Where(f => f.Kind == "PowerDip" && f.RecoveredS is null && t > f.StartS))
                 {
                     if (Text(record, "regime") == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS) f.RecoveredS = t;
@@ -59,6 +70,7 @@ public sealed class FaultMeasures
                 "PowerDip" => "descent back to 90 % of its pre-fault speed",
                 "StationFailure" => "station relaying again",
                 "TetherBreak" => "none: a broken fibre stays broken",
+                "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it",
                 _ => "none: a sensor fault leaves the physical state alone",
             })),
     ];
@@ -76,5 +88,6 @@ public sealed class FaultMeasures
         public double? DetectedS { get; set; }
         public double? ActionS { get; set; }
         public double? RecoveredS { get; set; }
+        public bool LeftUpright { get; set; }
     }
 }

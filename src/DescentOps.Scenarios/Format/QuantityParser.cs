@@ -15,8 +15,9 @@ public static partial class QuantityParser
         var trimmed = text.Trim();
         if (Quantity.TryParse(CultureInfo.InvariantCulture, kind.UnitsNetType(), trimmed, out IQuantity? quantity))
         {
-            var baseUnit = quantity.QuantityInfo.BaseUnitInfo.Value;
-            valueSi = (double)UnitConverter.Convert(quantity.Value, quantity.Unit, baseUnit);
+            // UnitsNet's base unit is SI for every kind used here except angles (degrees there, radians here).
+            Enum target = kind == QuantityKind.Angle ? UnitsNet.Units.AngleUnit.Radian : quantity.QuantityInfo.BaseUnitInfo.Value;
+            valueSi = (double)UnitConverter.Convert(quantity.Value, quantity.Unit, target);
             if (double.IsFinite(valueSi))
             {
                 error = "";

@@ -15,6 +15,9 @@ public static class ScenarioLoader
     /// <summary>Water gap left around a stopped probe without side heaters: 0.5 mm (a modelling default, no published value).</summary>
     public const double DefaultFreezeGapM = 0.5e-3;
 
+    /// <summary>Tilt at which a probe is taken as lost: 10 degrees (a modelling default of ours, no published value).</summary>
+    public const double DefaultMaxTiltRad = 10 * Math.PI / 180;
+
     public static Scenario LoadFile(string path)
     {
         string text;
@@ -64,7 +67,8 @@ public static class ScenarioLoader
                 probe.Quantity("telemetry_interval"),
                 probe.OptionalQuantity("freeze_gap") ?? DefaultFreezeGapM,
                 probe.OptionalQuantity("max_head_power") ?? probe.Quantity("head_power"),
-                probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power")),
+                probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power"),
+                probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad),
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
             new StationModel(station.Text("name"), station.Quantity("forwarding_delay")),
             [.. root.List("vehicles").Select(v => new VehicleModel(
@@ -141,7 +145,8 @@ public static class ScenarioLoader
         f.OptionalQuantity("duration"),
         f.OptionalNumber("remaining_fraction") ?? 0.0,
         f.OptionalText("point"),
-        SensorValue(f));
+        SensorValue(f),
+        f.OptionalQuantity("angle"));
 
     /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
     private static double? SensorValue(BoundSection fault)
@@ -205,6 +210,11 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.point", $"'point' and 'value' belong to sensor faults, not to a {KindWord(fault.Kind)}"));
         }
 
+        if ((fault.Kind == FaultKind.TiltKick) != (fault.AngleRad is not null))
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.angle", fault.Kind == FaultKind.TiltKick ? "a tilt_kick needs its angle" : "'angle' belongs to a tilt_kick"));
+        }
+
         if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
         {
             errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_bias needs the offset as a value"));
@@ -225,6 +235,8 @@ public static class ScenarioLoader
         "sensor_stuck" => FaultKind.SensorStuck,
         "sensor_bias" => FaultKind.SensorBias,
         "sensor_dropout" => FaultKind.SensorDropout,
+        "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
+        "tilt_kick" => FaultKind.TiltKick,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -235,7 +247,9 @@ public static class ScenarioLoader
         FaultKind.StationFailure => "station_failure",
         FaultKind.SensorStuck => "sensor_stuck",
         FaultKind.SensorBias => "sensor_bias",
-        _ => "sensor_dropout",
+        FaultKind.SensorDropout => "sensor_dropout",
+        FaultKind.HeaterSegmentFailure => "heater_segment_failure",
+        _ => "tilt_kick",
     };
 
     private static string Trim(string message)

@@ -20,4 +20,10 @@ public enum FaultKind
 
     /// <summary>A telemetry point is missing from every frame.</summary>
     SensorDropout,
+
+    /// <summary>One half of the head heater keeps only part of its power: the head melts unevenly and the probe turns.</summary>
+    HeaterSegmentFailure,
+
+    /// <summary>A sudden change of tilt as the head meets a debris band or an inclined layer.</summary>
+    TiltKick,
 }

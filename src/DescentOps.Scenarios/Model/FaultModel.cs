@@ -14,4 +14,5 @@ public sealed record FaultModel(
     double? DurationS,
     double RemainingFraction,
     string? Point = null,
-    double? ValueSi = null);
+    double? ValueSi = null,
+    double? AngleRad = null);

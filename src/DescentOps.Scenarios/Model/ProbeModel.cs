@@ -12,4 +12,5 @@ public sealed record ProbeModel(
     double TelemetryIntervalS,
     double FreezeGapM,
     double MaxHeadPowerW,
-    double MaxWallPowerW);
+    double MaxWallPowerW,
+    double MaxTiltRad);

@@ -16,6 +16,7 @@ public static class ProbeTelemetryPoints
         ("probe.head_power", QuantityKind.Power),
         ("probe.wall_power", QuantityKind.Power),
         ("probe.energy_used", QuantityKind.Energy),
+        ("probe.tilt", QuantityKind.Angle),
     ];
 
     public static QuantityKind? KindOf(string name) =>
