@@ -23,13 +23,7 @@ public sealed class ReplayAndQueryTests
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
 
         var logged = LoggedRun.Open(log);
-        using var comparison = new LineComparingStream(File.OpenRead(log));
-        using (var writer = JournalWriter.Create(comparison, logged.Manifest))
-        {
-            await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Actors);
-        }
-
-        comparison.Finish();
+        var comparison = await LogReplay.CompareAsync(logged, KernelChoice.Actors);
 
         Assert.Null(comparison.Divergence);
         Assert.Equal(File.ReadLines(log).Count(), comparison.LinesMatched);
@@ -43,13 +37,7 @@ public sealed class ReplayAndQueryTests
         var scenario = BuiltInScenarios.Default();
         var log = await WriteLogAsync(manifestSeed: 1, runSeed: 2, scenario);
         var logged = LoggedRun.Open(log);
-        using var comparison = new LineComparingStream(File.OpenRead(log));
-        using (var writer = JournalWriter.Create(comparison, logged.Manifest))
-        {
-            await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Sequential);
-        }
-
-        comparison.Finish();
+        var comparison = await LogReplay.CompareAsync(logged, KernelChoice.Sequential);
 
         var divergence = Assert.IsType<JournalDivergence>(comparison.Divergence);
         Assert.Contains("vehicle", divergence.LineA + divergence.LineB);
@@ -80,13 +68,7 @@ public sealed class ReplayAndQueryTests
 
         var logged = LoggedRun.Open(log);
         Assert.True(logged.IsTruncated);
-        using var comparison = new LineComparingStream(File.OpenRead(log), logged.IntactLines);
-        using (var writer = JournalWriter.Create(comparison, logged.Manifest))
-        {
-            await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, KernelChoice.Sequential);
-        }
-
-        comparison.Finish();
+        var comparison = await LogReplay.CompareAsync(logged, KernelChoice.Sequential);
 
         Assert.Null(comparison.Divergence);
         Assert.Equal(logged.IntactLines, comparison.LinesMatched);

@@ -1,8 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
 using DescentOps.Cli.Running;
-using DescentOps.Journal;
-using DescentOps.Journal.Comparison;
 using DescentOps.Mission.Running;
 
 namespace DescentOps.Cli.Commands;
@@ -38,17 +36,10 @@ public static class ReplayCommand
             Console.Out.WriteLine($"note: the log is truncated at line {logged.Integrity.FirstBadLine}; comparing its {logged.IntactLines} intact lines.");
         }
 
-        using var comparison = new LineComparingStream(File.OpenRead(path), logged.IntactLines);
-        using (var writer = JournalWriter.Create(comparison, manifest))
+        var (found, linesMatched) = await LogReplay.CompareAsync(logged, kernel).ConfigureAwait(false);
+        if (found is not { } divergence)
         {
-            await JournaledRun.RunAsync(logged.Scenario, manifest, writer, kernel).ConfigureAwait(false);
-        }
-
-        comparison.Finish();
-
-        if (comparison.Divergence is not { } divergence)
-        {
-            Console.Out.WriteLine($"{path}: identical ({comparison.LinesMatched} lines re-run and matched)");
+            Console.Out.WriteLine($"{path}: identical ({linesMatched} lines re-run and matched)");
             return (int)ExitCode.Ok;
         }
 

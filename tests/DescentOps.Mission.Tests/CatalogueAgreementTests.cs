@@ -1,0 +1,51 @@
+using DescentOps.Mission.Autonomy;
+using DescentOps.Mission.Messages;
+using DescentOps.Rules.Catalogue;
+using DescentOps.Scenarios;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>
+/// The probe's telemetry points are named in three places (what the probe reports, what rules may read, what a
+/// sensor fault may name); this keeps the three lists the same.
+/// </summary>
+public sealed class CatalogueAgreementTests
+{
+    [Fact]
+    public void FramesCatalogueAndScenarioFormatNameTheSameNumericPoints()
+    {
+        var scenario = BuiltInScenarios.Default();
+        var catalogue = MissionCatalogue.For(scenario);
+        var formatPoints = ProbeTelemetryPoints.Numeric.Select(p => p.Name).Order(StringComparer.Ordinal).ToList();
+        var cataloguePoints = formatPoints.Where(p => catalogue.FindPoint(p) is NumericPointSpec).ToList();
+        Assert.Equal(formatPoints, cataloguePoints);
+        Assert.IsType<DiscretePointSpec>(catalogue.FindPoint("probe.regime"));
+
+        var framePoints = FrameReadingNames(new Probe.ProbeComponent(scenario)).Order(StringComparer.Ordinal).ToList();
+        Assert.Equal(formatPoints, framePoints);
+    }
+
+    /// <summary>Runs the probe alone for its first second and reads the point names of the frame it sends.</summary>
+    private static IEnumerable<string> FrameReadingNames(Probe.ProbeComponent probe)
+    {
+        var caught = new List<TelemetryFrame>();
+        var setup = new Engine.Running.KernelSetup(
+            [probe, new FrameCatcher(MissionIds.Tether, caught), new FrameCatcher(MissionIds.Autonomy, caught), new FrameCatcher(MissionIds.FaultInjector, caught)],
+            1, Primitives.Time.SimTime.FromSecondsSinceEpoch(1), Engine.Journaling.NullJournalSink.Instance);
+        Engine.Running.SequentialKernel.Run(setup);
+        return caught.First().Readings.Select(r => r.Point);
+    }
+
+    /// <summary>Stands in for the probe's neighbours and keeps the frames it is sent.</summary>
+    private sealed class FrameCatcher(Primitives.Identity.ComponentId id, List<TelemetryFrame> caught) : Engine.Components.SimComponent<int>(id)
+    {
+        public override int InitialState => 0;
+
+        public override int Handle(int state, object message, Engine.Components.ComponentContext context)
+        {
+            if (message is TelemetryFrame frame) caught.Add(frame);
+            return state + 1;
+        }
+    }
+}
