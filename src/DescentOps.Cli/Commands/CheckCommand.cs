@@ -1,5 +1,6 @@
 using System.CommandLine;
 using DescentOps.Mission.Autonomy;
+using DescentOps.Mission.Faults;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Text;
 using DescentOps.Scenarios.Model;
@@ -38,6 +39,14 @@ public static class CheckCommand
             else
             {
                 scenario = ScenarioSource.Load(path);
+                var triggerErrors = FaultConditions.Check(scenario, out _);
+                foreach (var error in triggerErrors) Console.Out.WriteLine($"error: {error}");
+                if (triggerErrors.Count > 0)
+                {
+                    Console.Out.WriteLine($"{path}: {triggerErrors.Count} errors in fault trigger conditions");
+                    return (int)ExitCode.InvalidInput;
+                }
+
                 if (scenario.Rules.IsEmpty)
                 {
                     Console.Out.WriteLine($"{path}: scenario valid; it holds no rules");

@@ -14,12 +14,17 @@ namespace DescentOps.Mission.Faults;
 public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
 {
     private readonly IReadOnlyList<FaultModel> _faults;
+    private readonly IReadOnlyList<ConditionTrigger> _conditions;
 
     public FaultInjectorComponent(Scenario scenario)
         : base(MissionIds.FaultInjector, FailurePolicy.AbortRun)
     {
         _faults = scenario.Faults;
+        _conditions = [.. FaultConditions.Compile(scenario).OrderBy(c => c.Key).Select(c => new ConditionTrigger(c.Key, c.Value))];
     }
+
+    /// <summary>True when some fault waits for a condition, so the probe must send its true state here.</summary>
+    public static bool WatchesTrueState(Scenario scenario) => scenario.Faults.Any(f => f.When is not null);
 
     public override FaultInjectorState InitialState => new(0, 0);
 
@@ -40,17 +45,26 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             case RunStarted:
                 for (var i = 0; i < _faults.Count; i++)
                 {
-                    if (_faults[i].AtS is { } at)
+                    var fault = _faults[i];
+                    if (fault.AtS is { } at)
                     {
                         context.ScheduleSelf(SimDuration.FromSeconds(at), new FaultDue(i, false), MissionPriority.Fault);
                     }
-                    else
+                    else if (fault.AtDepthM is { } depth)
                     {
-                        context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(i, _faults[i].AtDepthM!.Value), MissionPriority.Fault);
+                        context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(i, depth), MissionPriority.Fault);
+                    }
+                    else if (fault.IsRandom)
+                    {
+                        ScheduleRandom(i, context);
                     }
                 }
 
                 return state;
+            case TrueStateFrame truth:
+                return WatchConditions(state, context, c => c.OnFrame(truth.Frame));
+            case TriggerWake:
+                return WatchConditions(state with { PendingWake = null }, context, c => c.OnWake(context.Now));
             case DepthTriggerReached reached:
                 return Inject(state, reached.FaultIndex, context);
             case FaultDue { IsEnd: false } due:
@@ -63,6 +77,50 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             default:
                 throw new InvalidOperationException($"The fault injector cannot handle {message.GetType().Name}.");
         }
+    }
+
+    /// <summary>
+    /// Draws every occurrence of a random fault at the start, from this component's own stream and in the faults'
+    /// order, so a fault added at the end of the list (a branch) leaves the earlier faults' draws alone. Occurrence k+1
+    /// begins an exponential interval after occurrence k ended, and never in the same instant.
+    /// </summary>
+    private void ScheduleRandom(int index, ComponentContext context)
+    {
+        var fault = _faults[index];
+        var rate = 1.0 / fault.MeanIntervalS!.Value;
+        var start = SimDuration.FromSeconds(fault.NotBeforeS) + SimDuration.FromSeconds(context.Random.NextExponential(rate));
+        var starts = new List<SimDuration> { start };
+        for (var k = 1; k < fault.Occurrences; k++)
+        {
+            var end = start + SimDuration.FromSeconds(fault.DurationS!.Value);
+            var gap = SimDuration.FromSeconds(context.Random.NextExponential(rate));
+            start = end + (gap > SimDuration.Zero ? gap : new SimDuration(1));
+            starts.Add(start);
+        }
+
+        foreach (var at in starts) context.ScheduleSelf(at, new FaultDue(index, false), MissionPriority.Fault);
+        context.Record("fault.drawn", Severity.Info,
+            RecordField.Of("fault", fault.Name),
+            RecordField.Of("mean_interval_s", fault.MeanIntervalS.Value),
+            RecordField.Of("starts_s", string.Join(" ", starts.Select(t => t.TotalSeconds.ToString("R", System.Globalization.CultureInfo.InvariantCulture)))));
+    }
+
+    /// <summary>Feeds the trigger conditions, injects the faults whose condition now holds, and keeps one wake-up timer.</summary>
+    private FaultInjectorState WatchConditions(FaultInjectorState state, ComponentContext context, Func<ConditionTrigger, Rules.Evaluation.RuleFiring?> step)
+    {
+        foreach (var condition in _conditions)
+        {
+            if (step(condition) is not { } firing) continue;
+            context.Record("fault.triggered", Severity.Warning,
+                RecordField.Of("fault", _faults[condition.FaultIndex].Name),
+                RecordField.Of("condition", _faults[condition.FaultIndex].When ?? ""),
+                RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))));
+            state = Inject(state, condition.FaultIndex, context);
+        }
+
+        if (state.PendingWake is { } pending) context.Cancel(pending);
+        var due = _conditions.Select(c => c.NextDueTime).Where(t => t is not null && t.Value > context.Now).Min();
+        return state with { PendingWake = due is { } at ? context.ScheduleSelf(at - context.Now, TriggerWake.Instance, MissionPriority.Fault) : null };
     }
 
     private FaultInjectorState Inject(FaultInjectorState state, int index, ComponentContext context)

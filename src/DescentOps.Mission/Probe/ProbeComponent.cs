@@ -26,6 +26,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private readonly Scenario _scenario;
     private readonly ProbeDescentModel _descent;
     private readonly SimDuration _frameInterval;
+    private readonly bool _watchedByFaults;
 
     public ProbeComponent(Scenario scenario)
         : base(MissionIds.Probe, FailurePolicy.AbortRun)
@@ -33,6 +34,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         _scenario = scenario;
         _descent = ProbeDescentFactory.Model(scenario);
         _frameInterval = SimDuration.FromSeconds(scenario.Probe.TelemetryIntervalS);
+        _watchedByFaults = Faults.FaultInjectorComponent.WatchesTrueState(scenario);
     }
 
     /// <summary>The descent model this probe runs on (exposed for the physics benchmark and tests).</summary>
@@ -411,6 +413,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("lateral_drift_m", state.LateralDriftM));
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        if (_watchedByFaults)
+        {
+            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);
+        }
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
     }
 

@@ -38,6 +38,8 @@ public sealed class BoundSection
 
     public long Integer(string name) => Get<long>(name);
 
+    public long? OptionalInteger(string name) => GetOptional<long>(name);
+
     public string Text(string name) => Get<string>(name);
 
     public string? OptionalText(string name) => GetOptionalRef<string>(name);

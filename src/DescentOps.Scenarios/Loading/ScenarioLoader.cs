@@ -146,7 +146,12 @@ public static class ScenarioLoader
         f.OptionalNumber("remaining_fraction") ?? 0.0,
         f.OptionalText("point"),
         SensorValue(f),
-        f.OptionalQuantity("angle"));
+        f.OptionalQuantity("angle"),
+        f.OptionalText("when"),
+        f.OptionalText("when") is null ? null : f.LocationOf("when"),
+        f.OptionalQuantity("mean_interval"),
+        f.OptionalQuantity("not_before") ?? 0.0,
+        (int)(f.OptionalInteger("occurrences") ?? 1));
 
     /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
     private static double? SensorValue(BoundSection fault)
@@ -194,9 +199,20 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a broken fibre does not heal: a tether_break takes no duration"));
         }
 
-        if ((fault.AtS is null) == (fault.AtDepthM is null))
+        var triggers = (fault.AtS is null ? 0 : 1) + (fault.AtDepthM is null ? 0 : 1) + (fault.When is null ? 0 : 1) + (fault.IsRandom ? 1 : 0);
+        if (triggers != 1)
         {
-            errors.Add(new ScenarioError(section.Location, $"{path}.at", "give exactly one trigger: 'at' (a time) or 'at_depth' (a depth)"));
+            errors.Add(new ScenarioError(section.Location, $"{path}.at", "give exactly one trigger: 'at' (a time), 'at_depth' (a depth), 'when' (a condition) or 'mean_interval' (at random)"));
+        }
+
+        if (!fault.IsRandom && (section.OptionalQuantity("not_before") is not null || section.OptionalInteger("occurrences") is not null))
+        {
+            errors.Add(new ScenarioError(section.LocationOf(section.OptionalQuantity("not_before") is not null ? "not_before" : "occurrences"), $"{path}.mean_interval", "'not_before' and 'occurrences' belong to a random trigger ('mean_interval')"));
+        }
+
+        if (fault.Occurrences > 1 && fault.DurationS is null)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("occurrences"), $"{path}.occurrences", "a fault that stays happens once: give a duration for more than one occurrence"));
         }
 
         var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout;

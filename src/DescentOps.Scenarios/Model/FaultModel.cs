@@ -1,10 +1,13 @@
+using DescentOps.Scenarios.Loading;
+
 namespace DescentOps.Scenarios.Model;
 
 /// <summary>
-/// One fault. It starts at <see cref="AtS"/> or when the probe's head reaches <see cref="AtDepthM"/> (exactly one of
-/// the two is set). <see cref="DurationS"/> is null for a fault that stays; <see cref="RemainingFraction"/> is what a
-/// power dip leaves of the heater power; sensor faults name their <see cref="Point"/> and, in SI, their
-/// <see cref="ValueSi"/> (the stuck reading or the bias).
+/// One fault. It starts at <see cref="AtS"/> or when the probe's head reaches <see cref="AtDepthM"/>.
+/// <see cref="DurationS"/> is null for a fault that stays; <see cref="RemainingFraction"/> is what a power dip leaves
+/// of the heater power; sensor faults name their <see cref="Point"/> and, in SI, their <see cref="ValueSi"/> (the stuck reading or the bias). Instead of a time or a depth, a fault may start when the
+/// condition <see cref="When"/> (rule-language text, located at <see cref="WhenAt"/>) first holds on the probe's true
+/// state, or at random after <see cref="NotBeforeS"/>, up to <see cref="Occurrences"/> times.
 /// </summary>
 public sealed record FaultModel(
     string Name,
@@ -15,4 +18,13 @@ public sealed record FaultModel(
     double RemainingFraction,
     string? Point = null,
     double? ValueSi = null,
-    double? AngleRad = null);
+    double? AngleRad = null,
+    string? When = null,
+    SourceLocation? WhenAt = null,
+    double? MeanIntervalS = null,
+    double NotBeforeS = 0.0,
+    int Occurrences = 1)
+{
+    /// <summary>True when the fault starts at random (a Poisson process with mean interval <see cref="MeanIntervalS"/>).</summary>
+    public bool IsRandom => MeanIntervalS is not null;
+}
