@@ -1,10 +1,12 @@
 using DescentOps.Benchmarks.Phold;
 using DescentOps.Benchmarks.Physics;
+using DescentOps.Benchmarks.Rules;
 
 return args.FirstOrDefault() switch
 {
     "phold" => await PholdBenchmark.RunAsync(PholdOptions.Parse(args[1..]), Console.Out),
     "physics" => await PhysicsBenchmark.RunAsync(Console.Out),
+    "rules" => await RulesBenchmark.RunAsync(Console.Out, args.Length > 2 && args[1] == "--repeats" ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 3),
     _ => Usage(),
 };
 
@@ -12,5 +14,6 @@ static int Usage()
 {
     Console.Error.WriteLine("usage: DescentOps.Benchmarks phold [--lps 8] [--tokens 64] [--events 400000] [--mean-delay-ms 1] [--delay poisson|exponential] [--repeats 5] [--seed 1]");
     Console.Error.WriteLine("       DescentOps.Benchmarks physics");
+    Console.Error.WriteLine("       DescentOps.Benchmarks rules [--repeats 3]");
     return 2;
 }

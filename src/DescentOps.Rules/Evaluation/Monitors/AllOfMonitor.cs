@@ -7,8 +7,16 @@ internal sealed class AllOfMonitor(IReadOnlyList<ConditionMonitor> operands) : C
 {
     public override MonitorResult Evaluate(EvaluationContext context)
     {
-        var results = operands.Select(o => o.Evaluate(context)).ToArray();
-        return new MonitorResult(results.All(r => r.Holds), EvidenceSet.Union(results.Select(r => r.Evidence)));
+        var holds = true;
+        var evidence = new IReadOnlyList<TelemetrySample>[operands.Count];
+        for (var i = 0; i < operands.Count; i++)
+        {
+            var result = operands[i].Evaluate(context);
+            holds &= result.Holds;
+            evidence[i] = result.Evidence;
+        }
+
+        return new MonitorResult(holds, EvidenceSet.Union(evidence));
     }
 
     public override void Reset()
