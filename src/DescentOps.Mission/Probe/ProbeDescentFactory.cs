@@ -23,8 +23,20 @@ public static class ProbeDescentFactory
             scenario.Shell.ThicknessM,
             scenario.Body.GravityMPerS2,
             scenario.Body.SurfacePressurePa,
-            [BasalLayer(scenario.Shell)],
-            conductivityCoefficientWPerM: conductivityCoefficientWPerM);
+            Layers(scenario.Shell),
+            [.. scenario.Shell.DebrisBands.Select(b => new DebrisBand(b.TopM, b.BottomM, b.VolumeFraction))],
+            conductivityCoefficientWPerM,
+            fracturedToDepthM: scenario.Shell.FracturedToM);
+    }
+
+    /// <summary>The scenario's salty layers, and under them the basal layer wherever a scenario layer leaves it free.</summary>
+    private static IReadOnlyList<IceLayer> Layers(ShellModel shell)
+    {
+        var layers = shell.Layers.Select(l => new IceLayer(l.TopM, l.BottomM, l.SalinityKgPerKg * 1000.0)).ToList();
+        var basal = BasalLayer(shell);
+        var top = layers.Select(l => l.BottomDepthM).Where(b => b > basal.TopDepthM).DefaultIfEmpty(basal.TopDepthM).Max();
+        if (top < basal.BottomDepthM) layers.Add(basal with { TopDepthM = top });
+        return layers;
     }
 
     /// <param name="scenario">The scenario whose probe and shell are modelled.</param>

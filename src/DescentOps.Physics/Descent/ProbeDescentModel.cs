@@ -85,7 +85,8 @@ public sealed class ProbeDescentModel
     private DescentRate Melting(double depthM, double headPowerW, double wallPowerW)
     {
         var pressure = Math.Max(Shell.PressurePa(depthM), TriplePoint.PressurePa);
-        var meltingK = MeltingCurve.TemperatureK(pressure);
+        // Salt in the layer lowers the melting point the head must reach (the basal layer carries the ocean's salt).
+        var meltingK = SalineIce.MeltingTemperatureK(Shell.SalinityGPerKg(depthM), pressure);
         // The far field must be colder than the melting point for the steady model; at the base the ice is at it.
         var farFieldK = Math.Min(Shell.TemperatureK(depthM), meltingK - 1e-3);
         if (headPowerW <= 0)
@@ -93,7 +94,7 @@ public sealed class ProbeDescentModel
             return new DescentRate(DescentRegimeKind.Stalled, 0.0, farFieldK, meltingK, pressure, 0, 0, wallPowerW, 0, false);
         }
 
-        var solution = SteadyDescent.Solve(Geometry, headPowerW, wallPowerW, farFieldK, pressure, Shell.GravityMPerS2);
+        var solution = SteadyDescent.Solve(Geometry, headPowerW, wallPowerW, farFieldK, pressure, Shell.GravityMPerS2, meltingK);
         return new DescentRate(
             solution.Stalled ? DescentRegimeKind.Stalled : DescentRegimeKind.Melting,
             solution.VelocityMPerS,
@@ -130,7 +131,8 @@ public sealed class ProbeDescentModel
         var density = IceIh.DensityKgPerM3(Shell.SurfaceTemperatureK, 0);
         var seal = LiquidOnset.SealDepthM(Geometry.LengthM, Geometry.RadiusM, SealDiameters);
         var overburden = LiquidOnset.MinimumLiquidDepthM(density, Shell.GravityMPerS2);
-        return Math.Min(Math.Max(seal, overburden), Shell.ThicknessM);
+        // Open fractures near the surface let vapour and melt escape, so no pocket can hold liquid above their bottom (MODEL).
+        return Math.Min(Math.Max(Math.Max(seal, overburden), Shell.FracturedToDepthM), Shell.ThicknessM);
     }
 
     private static double Lerp(double a, double b, double fraction) => a + ((b - a) * fraction);

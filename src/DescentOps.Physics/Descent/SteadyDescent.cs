@@ -31,7 +31,20 @@ public static class SteadyDescent
 {
     private const string Model = "the steady descent model";
 
-    public static DescentSolution Solve(ProbeGeometry geometry, double headPowerW, double wallPowerW, double farFieldTemperatureK, double pressurePa, double gravityMPerS2)
+    /// <summary>Largest salt depression of the melting point accepted: 3 K, about seawater's freezing point at 40 g/kg (UNESCO 1983).</summary>
+    private const double MaximumSaltDepressionK = 3.0;
+
+    /// <param name="geometry">Radius, length and mass of the probe.</param>
+    /// <param name="headPowerW">Heater power delivered to the head.</param>
+    /// <param name="wallPowerW">Heater power delivered to the side walls.</param>
+    /// <param name="farFieldTemperatureK">Temperature of the undisturbed ice.</param>
+    /// <param name="pressurePa">Pressure in the melt (at least the triple-point pressure).</param>
+    /// <param name="gravityMPerS2">The body's gravity, for the probe's load on its melt film.</param>
+    /// <param name="meltingTemperatureK">
+    /// Melting point of the ice being cut; default the pure-ice curve at <paramref name="pressurePa"/>. Salt lowers it
+    /// (see <see cref="Shell.SalineIce"/>): less sensible heat per kilogram, and the latent heat of the ice matrix unchanged (MODEL).
+    /// </param>
+    public static DescentSolution Solve(ProbeGeometry geometry, double headPowerW, double wallPowerW, double farFieldTemperatureK, double pressurePa, double gravityMPerS2, double? meltingTemperatureK = null)
     {
         ArgumentNullException.ThrowIfNull(geometry);
         var radiusM = ValidRange.RequirePositive(geometry.RadiusM, nameof(geometry.RadiusM), "m", Model);
@@ -42,7 +55,10 @@ public static class SteadyDescent
         ValidRange.Require(pressurePa, TriplePoint.PressurePa, FusionLatentHeat.MaximumPressurePa, nameof(pressurePa), "Pa", Model + " (liquid meltwater needs p ≥ p_t; latent heat trusted to 50 MPa)");
         ValidRange.Require(gravityMPerS2, 1e-3, 30.0, nameof(gravityMPerS2), "m/s²", Model);
 
-        var meltingK = MeltingCurve.TemperatureK(pressurePa);
+        var pureMeltingK = MeltingCurve.TemperatureK(pressurePa);
+        var meltingK = meltingTemperatureK is { } given
+            ? ValidRange.Require(given, pureMeltingK - MaximumSaltDepressionK, pureMeltingK, nameof(meltingTemperatureK), "K", Model + " (at most the pure-ice melting point, salt lowering it by at most 3 K)")
+            : pureMeltingK;
         ValidRange.Require(farFieldTemperatureK, IceConductivity.MinimumTemperatureK(IceConductivityFit.PetrenkoWhitworth1999), meltingK, nameof(farFieldTemperatureK), "K", Model + " (ice below its melting point)");
 
         var loadN = (geometry.MassKg - (LiquidWater.DensityKgPerM3 * geometry.VolumeM3)) * gravityMPerS2;

@@ -25,11 +25,13 @@ public sealed class IceShell
         IReadOnlyList<IceLayer>? layers = null,
         IReadOnlyList<DebrisBand>? debrisBands = null,
         double conductivityCoefficientWPerM = Ice.IceConductivity.ReciprocalCoefficientWPerM,
-        int integrationSteps = HydrostaticPressure.DefaultSteps)
+        int integrationSteps = HydrostaticPressure.DefaultSteps,
+        double fracturedToDepthM = 0.0)
     {
         ThicknessM = ValidRange.RequirePositive(thicknessM, nameof(thicknessM), "m", Model);
         GravityMPerS2 = ValidRange.RequirePositive(gravityMPerS2, nameof(gravityMPerS2), "m/s²", Model);
         SurfacePressurePa = surfacePressurePa;
+        FracturedToDepthM = ValidRange.Require(fracturedToDepthM, 0.0, thicknessM, nameof(fracturedToDepthM), "m", Model);
         this.layers = CheckIntervals(layers ?? [], l => (l.TopDepthM, l.BottomDepthM), nameof(layers));
         foreach (var l in this.layers) ValidRange.Require(l.SalinityGPerKg, 0.0, 40.0, nameof(IceLayer.SalinityGPerKg), "g/kg", Model);
         this.debrisBands = CheckIntervals(debrisBands ?? [], b => (b.TopDepthM, b.BottomDepthM), nameof(debrisBands));
@@ -60,6 +62,9 @@ public sealed class IceShell
     public double GravityMPerS2 { get; }
 
     public double SurfacePressurePa { get; }
+
+    /// <summary>Bottom of the open-fractured zone below the surface (0: none); it matters to the liquid-onset depth.</summary>
+    public double FracturedToDepthM { get; }
 
     public double SurfaceTemperatureK => Lid.SurfaceTemperatureK;
 

@@ -33,6 +33,19 @@ public static class ScenarioFormat
                 new QuantityField("thickness", "Ice thickness from the surface to the ocean.", Length, 0, 200_000, MinExclusive: true),
                 new QuantityField("surface_temperature", "Ice temperature at the surface.", Temperature, 20, 273.15),
                 new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (mass of salt per mass of seawater); it sets the freezing point at the base.", MassFraction, 0, 0.04),
+                new QuantityField("fractured_to", "Bottom of an open-fractured zone below the surface of an airless body: vapour and melt escape through it, so melting (rather than sublimating) cannot start above it (default: no such zone).", Length, 0, 200_000, Required: false),
+                new ListField("layers", "Salty layers of the shell; ice outside them is fresh. Salt lowers the melting point the head must reach.", new SectionField("layer", "One salty layer.",
+                [
+                    new QuantityField("top", "Depth of the layer's top.", Length, 0, 200_000),
+                    new QuantityField("bottom", "Depth of the layer's bottom.", Length, 0, 200_000),
+                    new QuantityField("salinity", "Bulk salinity of the ice (mass of salt per mass of ice).", MassFraction, 0, 0.04),
+                ]), MinItems: 0, MaxItems: 100, Required: false),
+                new ListField("debris_bands", "Bands of dust, tephra or sediment in the ice; the probe collects their debris on its head.", new SectionField("band", "One debris band.",
+                [
+                    new QuantityField("top", "Depth of the band's top.", Length, 0, 200_000),
+                    new QuantityField("bottom", "Depth of the band's bottom.", Length, 0, 200_000),
+                    new NumberField("volume_fraction", "Debris volume per volume of ice (0 to 0.99).", 0, 0.99),
+                ]), MinItems: 0, MaxItems: 100, Required: false),
             ]),
             new SectionField("probe", "The melt probe.",
             [

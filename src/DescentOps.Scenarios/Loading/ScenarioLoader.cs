@@ -55,7 +55,12 @@ public static class ScenarioLoader
             root.Text("scenario"),
             root.OptionalText("description") ?? "",
             new BodyModel(body.Text("name"), body.Text("site"), body.Quantity("gravity"), body.Quantity("distance_to_ground"), body.OptionalQuantity("surface_pressure") ?? 0.0),
-            new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity")),
+            new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity"))
+            {
+                FracturedToM = shell.OptionalQuantity("fractured_to") ?? 0.0,
+                Layers = [.. shell.List("layers").Select(l => new ShellLayerModel(l.Quantity("top"), l.Quantity("bottom"), l.Quantity("salinity")))],
+                DebrisBands = [.. shell.List("debris_bands").Select(b => new DebrisBandModel(b.Quantity("top"), b.Quantity("bottom"), b.Number("volume_fraction")))],
+            },
             new ProbeModel(
                 probe.Text("name"),
                 probe.Quantity("radius"),
@@ -179,10 +184,43 @@ public static class ScenarioLoader
     /// <summary>Rules that tie fields together, which the per-field bounds cannot express.</summary>
     private static void CheckConsistency(Scenario scenario, BoundSection root, List<ScenarioError> errors)
     {
+        var shell = root.Section("shell");
+        CheckIntervals(shell.List("layers"), scenario.Shell.Layers.Select(l => (l.TopM, l.BottomM)).ToList(), "shell.layers", scenario.Shell.ThicknessM, errors);
+        CheckIntervals(shell.List("debris_bands"), scenario.Shell.DebrisBands.Select(b => (b.TopM, b.BottomM)).ToList(), "shell.debris_bands", scenario.Shell.ThicknessM, errors);
+        if (scenario.Shell.FracturedToM > scenario.Shell.ThicknessM)
+        {
+            errors.Add(new ScenarioError(shell.LocationOf("fractured_to"), "shell.fractured_to", "the fractured zone cannot reach below the shell's thickness"));
+        }
+
         var faults = root.List("faults");
         for (var i = 0; i < scenario.Faults.Count; i++)
         {
             CheckFault(scenario.Faults[i], faults[i], $"faults[{i}]", errors);
+        }
+    }
+
+    /// <summary>Depth intervals of the shell: top above bottom, inside the shell, and none overlapping another.</summary>
+    private static void CheckIntervals(IReadOnlyList<BoundSection> sections, IReadOnlyList<(double Top, double Bottom)> intervals, string path, double thicknessM, List<ScenarioError> errors)
+    {
+        for (var i = 0; i < intervals.Count; i++)
+        {
+            var (top, bottom) = intervals[i];
+            if (bottom <= top)
+            {
+                errors.Add(new ScenarioError(sections[i].LocationOf("bottom"), $"{path}[{i}].bottom", "the bottom must be deeper than the top"));
+            }
+            else if (bottom > thicknessM)
+            {
+                errors.Add(new ScenarioError(sections[i].LocationOf("bottom"), $"{path}[{i}].bottom", "the bottom lies below the shell's thickness"));
+            }
+
+            for (var j = 0; j < i; j++)
+            {
+                if (top < intervals[j].Bottom && intervals[j].Top < bottom)
+                {
+                    errors.Add(new ScenarioError(sections[i].Location, $"{path}[{i}]", $"overlaps {path}[{j}]"));
+                }
+            }
         }
     }
 

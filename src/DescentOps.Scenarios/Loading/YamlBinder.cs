@@ -92,6 +92,8 @@ internal sealed partial class YamlBinder
             if (BindSection(sequence.Children[i], spec.Item, $"{path}[{i}]") is { } item) items.Add(item);
         }
 
+        // Named entries (vehicles, faults) must be told apart; unnamed ones (depth intervals) need not be.
+        if (!spec.Item.Fields.Any(f => f.Name == "name")) return items;
         var duplicate = items.GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
         if (duplicate is not null)
         {

@@ -3,5 +3,13 @@ namespace DescentOps.Scenarios.Model;
 /// <summary>
 /// The ice shell between the surface and the ocean. The temperature profile is conductive for a
 /// conductivity that goes as 1/T, which gives T(z) = Ts (Tb/Ts)^(z/H) with Tb the melting point at the base.
+/// Salty layers, debris bands and an open-fractured zone at the top are optional.
 /// </summary>
-public sealed record ShellModel(double ThicknessM, double SurfaceTemperatureK, double OceanSalinityKgPerKg);
+public sealed record ShellModel(double ThicknessM, double SurfaceTemperatureK, double OceanSalinityKgPerKg)
+{
+    public double FracturedToM { get; init; }
+
+    public IReadOnlyList<ShellLayerModel> Layers { get; init; } = [];
+
+    public IReadOnlyList<DebrisBandModel> DebrisBands { get; init; } = [];
+}
