@@ -148,6 +148,33 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         return state with { VelocityMPerS = 0.0 };
     }
 
+    /// <summary>
+    /// Accounts for the debris bands melted through since the last step: the deposit on the head grows, and the tilt takes
+    /// one normal draw with the variance the bands give over that depth (a random walk in depth, so the step length does
+    /// not matter). The probe draws only when a band scatters, so shells without such bands keep their random streams.
+    /// </summary>
+    private ProbeState CrossDebris(ProbeState state, ComponentContext context)
+    {
+        if (state.DepthM <= state.DebrisAccountedToM) return state;
+        var crossing = DebrisCrossing.Between(_scenario.Shell.DebrisBands, state.DebrisAccountedToM, state.DepthM);
+        state = state with { DebrisAccountedToM = state.DepthM, DebrisOnHeadM = state.DebrisOnHeadM + crossing.DebrisM };
+        if (crossing.TiltVarianceRad2 > 0)
+        {
+            state = state with { TiltRad = state.TiltRad + context.Random.NextNormal(0.0, Math.Sqrt(crossing.TiltVarianceRad2)) };
+        }
+
+        if (crossing.BandLeft is { } band)
+        {
+            context.Record("probe.debris_band_crossed", Severity.Notice,
+                RecordField.Of("top_m", band.TopM),
+                RecordField.Of("bottom_m", band.BottomM),
+                RecordField.Of("debris_on_head_m", state.DebrisOnHeadM),
+                RecordField.Of("tilt_rad", state.TiltRad));
+        }
+
+        return state;
+    }
+
     /// <summary>Overlapping dips: the bus delivers the smallest share any dip in force leaves.</summary>
     private static ProbeState WithDips(ProbeState state, ImmutableSortedDictionary<string, double> dips) =>
         state with { ActiveDips = dips, PowerFraction = dips.IsEmpty ? 1.0 : dips.Values.Min() };
@@ -172,7 +199,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         }
 
         state = state with { DepthTriggers = state.DepthTriggers.RemoveAll(t => state.DepthM >= t.DepthM) };
-        state = CheckTilt(state, context);
+        state = CheckTilt(CrossDebris(state, context), context);
 
         if (IsMoving(state.Regime) && state.DepthM >= _scenario.Shell.ThicknessM)
         {

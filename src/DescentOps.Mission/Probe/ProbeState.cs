@@ -38,7 +38,14 @@ public sealed record ProbeState(
     double TiltRad,
     double LateralDriftM,
     double SegmentLossFraction,
-    double SteeringW);
+    double SteeringW)
+{
+    /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
+    public double DebrisAccountedToM { get; init; }
+
+    /// <summary>Thickness of the debris deposit collected on the head so far.</summary>
+    public double DebrisOnHeadM { get; init; }
+}
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

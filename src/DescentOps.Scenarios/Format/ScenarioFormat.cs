@@ -45,6 +45,7 @@ public static class ScenarioFormat
                     new QuantityField("top", "Depth of the band's top.", Length, 0, 200_000),
                     new QuantityField("bottom", "Depth of the band's bottom.", Length, 0, 200_000),
                     new NumberField("volume_fraction", "Debris volume per volume of ice (0 to 0.99).", 0, 0.99),
+                    new QuantityField("tilt_scatter", "Random tilt the band gives the head: the tilt change over a depth dz in the band is normal with standard deviation tilt_scatter * sqrt(dz / 1 m) (a random walk in depth; default 0).", Angle, 0, Math.PI / 18, Required: false),
                 ]), MinItems: 0, MaxItems: 100, Required: false),
             ]),
             new SectionField("probe", "The melt probe.",

@@ -59,7 +59,7 @@ public static class ScenarioLoader
             {
                 FracturedToM = shell.OptionalQuantity("fractured_to") ?? 0.0,
                 Layers = [.. shell.List("layers").Select(l => new ShellLayerModel(l.Quantity("top"), l.Quantity("bottom"), l.Quantity("salinity")))],
-                DebrisBands = [.. shell.List("debris_bands").Select(b => new DebrisBandModel(b.Quantity("top"), b.Quantity("bottom"), b.Number("volume_fraction")))],
+                DebrisBands = [.. shell.List("debris_bands").Select(b => new DebrisBandModel(b.Quantity("top"), b.Quantity("bottom"), b.Number("volume_fraction"), b.OptionalQuantity("tilt_scatter") ?? 0.0))],
             },
             new ProbeModel(
                 probe.Text("name"),
