@@ -19,6 +19,18 @@ public sealed class ShellStructureTests
     }
 
     [Fact]
+    public void AConvectingLayerIsReadAndOneThatLeavesNoRoomIsRefused()
+    {
+        var convection = ScenarioLoader.LoadText(ScenarioText.Default, "s.yaml").Shell.Convection;
+        Assert.Equal(new Model.ConvectionModel(1600, 255, 80), convection);
+
+        var text = ScenarioText.DefaultWith("    basal_boundary: 80 m", "    basal_boundary: 900 m");
+        var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "s.yaml")).Errors);
+        Assert.Equal("shell.convection.top", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "top: 1.6 km"), error.Location.Line);
+    }
+
+    [Fact]
     public void OverlappingLayersAreRefusedAtTheSecondOne()
     {
         var text = ScenarioText.DefaultWith("      salinity: 8 g/kg", "      salinity: 8 g/kg\n    - top: 400 m\n      bottom: 500 m\n      salinity: 3 g/kg");

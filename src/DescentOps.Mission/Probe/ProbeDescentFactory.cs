@@ -26,7 +26,8 @@ public static class ProbeDescentFactory
             Layers(scenario.Shell),
             [.. scenario.Shell.DebrisBands.Select(b => new DebrisBand(b.TopM, b.BottomM, b.VolumeFraction))],
             conductivityCoefficientWPerM,
-            fracturedToDepthM: scenario.Shell.FracturedToM);
+            fracturedToDepthM: scenario.Shell.FracturedToM,
+            convection: scenario.Shell.Convection is { } c ? new ConvectiveLayer(c.TopM, c.TemperatureK, c.BasalBoundaryM) : null);
     }
 
     /// <summary>The scenario's salty layers, and under them the basal layer wherever a scenario layer leaves it free.</summary>

@@ -7,7 +7,7 @@ namespace DescentOps.Physics.Shell;
 /// and pressure depend on each other, so they are iterated to 1e-6 K (it converges in two or three passes).
 /// </summary>
 /// <remarks>
-/// MODEL: purely conductive, no internal (tidal) heating, no convecting sublayer; a salty layer changes the melting
+/// MODEL: conductive (optionally over a convecting layer, <see cref="ConvectiveLayer"/>), no internal (tidal) heating; a salty layer changes the melting
 /// point, not the conductivity; debris changes nothing thermal here, it is carried for the probe's debris load.
 /// </remarks>
 public sealed class IceShell
@@ -26,7 +26,8 @@ public sealed class IceShell
         IReadOnlyList<DebrisBand>? debrisBands = null,
         double conductivityCoefficientWPerM = Ice.IceConductivity.ReciprocalCoefficientWPerM,
         int integrationSteps = HydrostaticPressure.DefaultSteps,
-        double fracturedToDepthM = 0.0)
+        double fracturedToDepthM = 0.0,
+        ConvectiveLayer? convection = null)
     {
         ThicknessM = ValidRange.RequirePositive(thicknessM, nameof(thicknessM), "m", Model);
         GravityMPerS2 = ValidRange.RequirePositive(gravityMPerS2, nameof(gravityMPerS2), "m/s²", Model);
@@ -40,21 +41,35 @@ public sealed class IceShell
         var baseSalinity = SalinityGPerKg(thicknessM);
         var meanDensityGuess = 920.0;
         var baseK = SalineIce.MeltingTemperatureK(baseSalinity, HydrostaticPressure.ConstantDensityPa(meanDensityGuess, thicknessM, gravityMPerS2, surfacePressurePa));
-        PlaneConductiveLid lid;
+        Convection = convection is null ? null : CheckConvection(convection, surfaceTemperatureK, thicknessM);
         double[] profile;
         var iterations = 0;
         while (true)
         {
-            lid = new PlaneConductiveLid(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM);
-            profile = HydrostaticPressure.Profile(lid.TemperatureK, thicknessM, gravityMPerS2, surfacePressurePa, integrationSteps);
+            var temperatures = new ShellProfile(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM, Convection);
+            profile = HydrostaticPressure.Profile(temperatures.TemperatureK, thicknessM, gravityMPerS2, surfacePressurePa, integrationSteps);
             var next = SalineIce.MeltingTemperatureK(baseSalinity, profile[^1]);
             var change = Math.Abs(next - baseK);
             baseK = next;
             if (change < 1e-6 || ++iterations >= 20) break;
         }
 
-        Lid = new PlaneConductiveLid(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM);
+        if (Convection is { } layer && layer.TemperatureK >= baseK)
+        {
+            throw new ArgumentOutOfRangeException(nameof(convection), layer.TemperatureK, FormattableString.Invariant($"The convecting layer's temperature {layer.TemperatureK:R} K is outside the valid range (surface, {baseK:R}) K of {Model}: it must stay below the base's melting point."));
+        }
+
+        Profile = new ShellProfile(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM, Convection);
         pressureProfilePa = profile;
+    }
+
+    private static ConvectiveLayer CheckConvection(ConvectiveLayer layer, double surfaceTemperatureK, double thicknessM)
+    {
+        ValidRange.Require(layer.TopDepthM, 0.0, thicknessM, nameof(ConvectiveLayer.TopDepthM), "m", Model);
+        ValidRange.Require(layer.BasalBoundaryM, 0.0, thicknessM - layer.TopDepthM, nameof(ConvectiveLayer.BasalBoundaryM), "m", Model);
+        ValidRange.Require(layer.TemperatureK, surfaceTemperatureK, Ice.TriplePoint.TemperatureK, nameof(ConvectiveLayer.TemperatureK), "K", Model);
+        if (layer.TopDepthM <= 0) throw new ArgumentOutOfRangeException(nameof(layer), layer.TopDepthM, $"A convecting layer needs a conductive lid above it: its top depth must be positive in {Model}.");
+        return layer;
     }
 
     public double ThicknessM { get; }
@@ -66,22 +81,27 @@ public sealed class IceShell
     /// <summary>Bottom of the open-fractured zone below the surface (0: none); it matters to the liquid-onset depth.</summary>
     public double FracturedToDepthM { get; }
 
-    public double SurfaceTemperatureK => Lid.SurfaceTemperatureK;
+    /// <summary>The convecting layer under the lid, if the shell has one.</summary>
+    public ConvectiveLayer? Convection { get; }
+
+    /// <summary>The temperature profile: the conductive lid, and the convecting layer under it if there is one.</summary>
+    public ShellProfile Profile { get; }
+
+    public double SurfaceTemperatureK => Profile.SurfaceTemperatureK;
 
     /// <summary>Pressure-melting temperature at the base, with the base layer's salt.</summary>
-    public double BaseTemperatureK => Lid.BaseTemperatureK;
+    public double BaseTemperatureK => Profile.BaseTemperatureK;
 
     public double BasePressurePa => pressureProfilePa[^1];
 
-    public double HeatFluxWPerM2 => Lid.HeatFluxWPerM2;
-
-    public PlaneConductiveLid Lid { get; }
+    /// <summary>Heat flux conducted up through the lid to the surface.</summary>
+    public double HeatFluxWPerM2 => Profile.Lid.HeatFluxWPerM2;
 
     public IReadOnlyList<IceLayer> Layers => layers;
 
     public IReadOnlyList<DebrisBand> DebrisBands => debrisBands;
 
-    public double TemperatureK(double depthM) => Lid.TemperatureK(depthM);
+    public double TemperatureK(double depthM) => Profile.TemperatureK(depthM);
 
     /// <summary>Hydrostatic pressure, linear between the integration nodes.</summary>
     public double PressurePa(double depthM)

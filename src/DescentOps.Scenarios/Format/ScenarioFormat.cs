@@ -34,6 +34,12 @@ public static class ScenarioFormat
                 new QuantityField("surface_temperature", "Ice temperature at the surface.", Temperature, 20, 273.15),
                 new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (mass of salt per mass of seawater); it sets the freezing point at the base.", MassFraction, 0, 0.04),
                 new QuantityField("fractured_to", "Bottom of an open-fractured zone below the surface of an airless body: vapour and melt escape through it, so melting (rather than sublimating) cannot start above it (default: no such zone).", Length, 0, 200_000, Required: false),
+                new SectionField("convection", "A warm convecting layer under the conductive lid (default: none, the whole shell conducts).",
+                [
+                    new QuantityField("top", "Depth of the lid's base, where the convecting layer begins.", Length, 0, 200_000, MinExclusive: true),
+                    new QuantityField("temperature", "Temperature of the convecting layer's well-mixed core (published interiors: about 250-265 K).", Temperature, 20, 273.15),
+                    new QuantityField("basal_boundary", "Thickness of the bottom boundary layer across which the ice warms linearly to the melting point (default: a tenth of the convecting layer).", Length, 0, 200_000, Required: false),
+                ], Required: false),
                 new ListField("layers", "Salty layers of the shell; ice outside them is fresh. Salt lowers the melting point the head must reach.", new SectionField("layer", "One salty layer.",
                 [
                     new QuantityField("top", "Depth of the layer's top.", Length, 0, 200_000),

@@ -58,6 +58,9 @@ public static class ScenarioLoader
             new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity"))
             {
                 FracturedToM = shell.OptionalQuantity("fractured_to") ?? 0.0,
+                Convection = shell.OptionalSection("convection") is { } c
+                    ? new ConvectionModel(c.Quantity("top"), c.Quantity("temperature"), c.OptionalQuantity("basal_boundary") ?? ((shell.Quantity("thickness") - c.Quantity("top")) / 10))
+                    : null,
                 Layers = [.. shell.List("layers").Select(l => new ShellLayerModel(l.Quantity("top"), l.Quantity("bottom"), l.Quantity("salinity")))],
                 DebrisBands = [.. shell.List("debris_bands").Select(b => new DebrisBandModel(b.Quantity("top"), b.Quantity("bottom"), b.Number("volume_fraction"), b.OptionalQuantity("tilt_scatter") ?? 0.0))],
             },
@@ -187,6 +190,19 @@ public static class ScenarioLoader
         var shell = root.Section("shell");
         CheckIntervals(shell.List("layers"), scenario.Shell.Layers.Select(l => (l.TopM, l.BottomM)).ToList(), "shell.layers", scenario.Shell.ThicknessM, errors);
         CheckIntervals(shell.List("debris_bands"), scenario.Shell.DebrisBands.Select(b => (b.TopM, b.BottomM)).ToList(), "shell.debris_bands", scenario.Shell.ThicknessM, errors);
+        if (scenario.Shell.Convection is { } convection && shell.OptionalSection("convection") is { } section)
+        {
+            if (convection.TopM + convection.BasalBoundaryM >= scenario.Shell.ThicknessM)
+            {
+                errors.Add(new ScenarioError(section.LocationOf("top"), "shell.convection.top", "the lid and the basal boundary layer leave no room for the convecting layer within the shell"));
+            }
+
+            if (convection.TemperatureK <= scenario.Shell.SurfaceTemperatureK)
+            {
+                errors.Add(new ScenarioError(section.LocationOf("temperature"), "shell.convection.temperature", "a convecting layer is warmer than the surface"));
+            }
+        }
+
         if (scenario.Shell.FracturedToM > scenario.Shell.ThicknessM)
         {
             errors.Add(new ScenarioError(shell.LocationOf("fractured_to"), "shell.fractured_to", "the fractured zone cannot reach below the shell's thickness"));

@@ -9,6 +9,8 @@ public sealed record ShellModel(double ThicknessM, double SurfaceTemperatureK, d
 {
     public double FracturedToM { get; init; }
 
+    public ConvectionModel? Convection { get; init; }
+
     public IReadOnlyList<ShellLayerModel> Layers { get; init; } = [];
 
     public IReadOnlyList<DebrisBandModel> DebrisBands { get; init; } = [];
