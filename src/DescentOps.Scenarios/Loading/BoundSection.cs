@@ -44,6 +44,8 @@ public sealed class BoundSection
 
     public BoundSection Section(string name) => Get<BoundSection>(name);
 
+    public BoundSection? OptionalSection(string name) => GetOptionalRef<BoundSection>(name);
+
     public IReadOnlyList<BoundSection> List(string name) => GetOptionalRef<IReadOnlyList<BoundSection>>(name) ?? [];
 
     private T Get<T>(string name)
