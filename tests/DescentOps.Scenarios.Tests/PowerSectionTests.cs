@@ -6,15 +6,9 @@ namespace DescentOps.Scenarios.Tests;
 /// <summary>The optional power section: its values in SI, its defaults, and a located error for each inconsistency.</summary>
 public sealed class PowerSectionTests
 {
-    private const string File = "bad.yaml";
+    private const string File = MalformedScenarioTests.File;
 
-    private static ScenarioError SingleError(string text)
-    {
-        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
-        var error = Assert.Single(exception.Errors);
-        Assert.Equal(File, error.Location.File);
-        return error;
-    }
+    private static ScenarioError SingleError(string text) => MalformedScenarioTests.SingleError(text);
 
     /// <summary>The fixture with its whole power section removed.</summary>
     private static string WithoutPower()
