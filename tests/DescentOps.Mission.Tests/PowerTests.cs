@@ -153,6 +153,48 @@ public sealed class PowerTests
     }
 
     [Fact]
+    public async Task AFissionSourceHoldsItsOutputAndRecordsTheCoreHeatBehindIt()
+    {
+        var text = Edit(WithoutRules(Text), "  source: radioisotope\n  thermal_power: 40 kW\n  conversion_efficiency: 0.25\n  degradation_per_year: 0.01\n  fuel_age: 1 yr\n",
+            "  source: fission\n  electric_power: 10 kW\n  conversion_efficiency: 0.25\n");
+        var scenario = ScenarioLoader.LoadText(text, "fission.yaml");
+        scenario = scenario with { Run = scenario.Run with { UntilS = 30 * Day } };
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+
+        // Computed: 10 kW electric at 25 % conversion needs 40 kW of core heat.
+        var started = sink.OfKind("probe.power").Single();
+        Assert.Equal("Fission", TextField(started, "source"));
+        Assert.Equal(40_000, CollectingSink.Field(started, "source_thermal_power_w"), 9);
+        // The output does not decay; during the dip the bus gets 30 % of it.
+        var frames = sink.OfKind("probe.telemetry").ToList();
+        Assert.All(frames.Where(f => f.Time.SecondsSinceEpoch < 20 * Day), f => Assert.Equal(10_000, CollectingSink.Field(f, "source_power_w"), 9));
+        Assert.All(frames.Where(f => f.Time.SecondsSinceEpoch > 20 * Day && f.Time.SecondsSinceEpoch < 22 * Day), f => Assert.Equal(3_000, CollectingSink.Field(f, "source_power_w"), 9));
+    }
+
+    [Fact]
+    public async Task WithoutAPowerSectionFramesReportAnEmptyBatteryAndTheBusPowerDrawn()
+    {
+        var scenario = BuiltInScenarios.Default();
+        Assert.Null(scenario.Power);
+        scenario = scenario with { Run = scenario.Run with { UntilS = 2 * Day } };
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        var frame = sink.OfKind("probe.telemetry").Last();
+        // The log keeps its old fields: no bus figures without a power system.
+        Assert.DoesNotContain(frame.Fields.ToArray(), f => f.Name == "battery_soc" || f.Name == "source_j");
+        Assert.Empty(sink.OfKind("probe.power"));
+        Assert.Empty(sink.OfKind("probe.load_shed"));
+        // What the first frame carries to rules, computed: no battery, and head 6 kW + wall 3 kW + electronics 60 W drawn.
+        var probe = new ProbeComponent(scenario);
+        Assert.Contains(("probe.battery_soc", 0.0), FrameReadings(probe));
+        var expectedW = scenario.Probe.HeadPowerW + scenario.Probe.WallPowerW + scenario.Probe.ElectronicsPowerW;
+        Assert.Contains(("probe.bus_power_available", expectedW), FrameReadings(probe));
+    }
+
+    /// <summary>The readings of the probe's first frame, the probe run alone for its first second.</summary>
+    private static IReadOnlyList<(string Point, double Value)> FrameReadings(ProbeComponent probe) =>
+        CatalogueAgreementTests.FirstFrame(probe).Readings;
+
+    [Fact]
     public void AShedCommandForALoadTheBusDoesNotHaveIsRefusedAtItsPlace()
     {
         var text = Edit(Text, "shed_load(load = sampling-pump)", "shed_load(load = kettle)");
