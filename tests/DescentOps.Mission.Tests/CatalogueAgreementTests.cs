@@ -22,19 +22,19 @@ public sealed class CatalogueAgreementTests
         Assert.Equal(formatPoints, cataloguePoints);
         Assert.IsType<DiscretePointSpec>(catalogue.FindPoint("probe.regime"));
 
-        var framePoints = FrameReadingNames(new Probe.ProbeComponent(scenario)).Order(StringComparer.Ordinal).ToList();
+        var framePoints = FirstFrame(new Probe.ProbeComponent(scenario)).Readings.Select(r => r.Point).Order(StringComparer.Ordinal).ToList();
         Assert.Equal(formatPoints, framePoints);
     }
 
-    /// <summary>Runs the probe alone for its first second and reads the point names of the frame it sends.</summary>
-    private static IEnumerable<string> FrameReadingNames(Probe.ProbeComponent probe)
+    /// <summary>Runs the probe alone for its first second and returns the first frame it sends.</summary>
+    internal static TelemetryFrame FirstFrame(Probe.ProbeComponent probe)
     {
         var caught = new List<TelemetryFrame>();
         var setup = new Engine.Running.KernelSetup(
             [probe, new FrameCatcher(MissionIds.Tether, caught), new FrameCatcher(MissionIds.Autonomy, caught), new FrameCatcher(MissionIds.FaultInjector, caught)],
             1, Primitives.Time.SimTime.FromSecondsSinceEpoch(1), Engine.Journaling.NullJournalSink.Instance);
         Engine.Running.SequentialKernel.Run(setup);
-        return caught.First().Readings.Select(r => r.Point);
+        return caught.First();
     }
 
     /// <summary>Stands in for the probe's neighbours and keeps the frames it is sent.</summary>

@@ -5,9 +5,10 @@ namespace DescentOps.Scenarios.Tests;
 /// <summary>Each malformed input gets one clear error with its file, line, column and field path.</summary>
 public sealed class MalformedScenarioTests
 {
-    private const string File = "bad.yaml";
+    internal const string File = "bad.yaml";
 
-    private static ScenarioError SingleError(string text)
+    /// <summary>Loads <paramref name="text"/> as "bad.yaml", expecting exactly one error, located in that file.</summary>
+    internal static ScenarioError SingleError(string text)
     {
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
         var error = Assert.Single(exception.Errors);

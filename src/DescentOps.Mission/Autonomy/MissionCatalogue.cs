@@ -14,11 +14,17 @@ public static class MissionCatalogue
     public const string Head = "probe.head";
     public const string Wall = "probe.wall";
 
+    /// <summary>The probe's power bus, target of the load commands (only with a power system).</summary>
+    public const string Bus = "probe.bus";
+
     public static IReadOnlyList<string> Regimes { get; } = [.. Enum.GetNames<Probe.ProbeRegime>()];
 
     public static TelemetryCatalogue For(Scenario scenario)
     {
         var maxPowerW = Math.Max(scenario.Probe.MaxHeadPowerW, scenario.Probe.MaxWallPowerW);
+        var power = scenario.Power is { } p ? new Probe.ProbePowerSystem(p, scenario.Probe) : null;
+        // Without a power system the bus offers exactly what it delivers, at most both heaters and the electronics.
+        var maxBusW = power?.MaxAvailablePowerW() ?? scenario.Probe.MaxHeadPowerW + scenario.Probe.MaxWallPowerW + scenario.Probe.ElectronicsPowerW;
         TelemetryPointSpec[] points =
         [
             new NumericPointSpec("probe.depth", Dimension.Length, 0, scenario.Shell.ThicknessM),
@@ -29,6 +35,8 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.wall_power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW),
             new NumericPointSpec("probe.energy_used", Dimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
             new NumericPointSpec("probe.tilt", Dimension.Angle, -Math.PI / 2, Math.PI / 2),
+            new NumericPointSpec("probe.battery_soc", Dimension.Dimensionless, 0, 1),
+            new NumericPointSpec("probe.bus_power_available", Dimension.Power, 0, maxBusW),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
@@ -39,7 +47,19 @@ public static class MissionCatalogue
             new(MissionIds.Probe, "pause_descent", []),
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),
+            .. power is null ? [] : BusCommands(power),
         ];
         return new TelemetryCatalogue(points, commands);
+    }
+
+    /// <summary>Switching a bus load off and on again, by the names the scenario gives its loads.</summary>
+    private static CommandSpec[] BusCommands(Probe.ProbePowerSystem power)
+    {
+        string[] names = [.. power.LoadModels.Select(l => l.Name)];
+        return
+        [
+            new(new(Bus), "shed_load", [new WordArgumentSpec("load", names)]),
+            new(new(Bus), "restore_load", [new WordArgumentSpec("load", names)]),
+        ];
     }
 }

@@ -6,6 +6,7 @@ using DescentOps.Mission.Messages;
 using DescentOps.Physics.Attitude;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
+using DescentOps.Physics.Power;
 using DescentOps.Physics.Refreezing;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
@@ -16,7 +17,9 @@ namespace DescentOps.Mission.Probe;
 /// The descending probe. Between events it moves at the constant rate the descent model gives for its depth
 /// and power; a telemetry frame goes up the tether every interval; the end of the sublimation zone and the
 /// crossing into the ocean are events at the exact instant the depth reaches them. A probe that stops long
-/// enough for its water gap to freeze is held by the ice until its wall heaters melt it free.
+/// enough for its water gap to freeze is held by the ice until its wall heaters melt it free. With a power system
+/// (<see cref="ProbePowerSystem"/>) the heaters get what the bus allocates them, which a power dip, a flat battery or
+/// a shed command can take away.
 /// </summary>
 public sealed class ProbeComponent : SimComponent<ProbeState>
 {
@@ -27,6 +30,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private readonly ProbeDescentModel _descent;
     private readonly SimDuration _frameInterval;
     private readonly bool _watchedByFaults;
+    private readonly ProbePowerSystem? _power;
 
     public ProbeComponent(Scenario scenario)
         : base(MissionIds.Probe, FailurePolicy.AbortRun)
@@ -35,6 +39,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         _descent = ProbeDescentFactory.Model(scenario);
         _frameInterval = SimDuration.FromSeconds(scenario.Probe.TelemetryIntervalS);
         _watchedByFaults = Faults.FaultInjectorComponent.WatchesTrueState(scenario);
+        _power = scenario.Power is { } power ? new ProbePowerSystem(power, scenario.Probe) : null;
     }
 
     /// <summary>The descent model this probe runs on (exposed for the physics benchmark and tests).</summary>
@@ -42,7 +47,13 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     public override ProbeState InitialState => new(
         ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
-        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal), 0.0, 0.0, 0.0, 0.0);
+        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal), 0.0, 0.0, 0.0, 0.0,
+        _power is null ? null : new ProbeBusState(
+            _power.InitialStateOfCharge,
+            PowerBus.Allocate(0.0, 0.0, 0.0, null, []),
+            ImmutableSortedSet<string>.Empty.WithComparer(StringComparer.Ordinal),
+            BusEnergy.Zero,
+            false));
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -56,6 +67,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                     RecordField.Of("liquid_onset_depth_m", _descent.LiquidOnsetDepthM),
                     RecordField.Of("head_power_w", _scenario.Probe.HeadPowerW),
                     RecordField.Of("wall_power_w", _scenario.Probe.WallPowerW));
+                RecordPowerSystem(state, context);
                 var initial = state with { Regime = _descent.LiquidOnsetDepthM > 0 ? ProbeRegime.Sublimating : ProbeRegime.Melting };
                 return Replan(Retune(initial, context), context);
 
@@ -113,6 +125,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     {
         var action = command.Command;
         double Power() => action.Arguments.Single(a => a.Name == "power").ValueSi!.Value;
+        string Load() => action.Arguments.Single(a => a.Name == "load").Word!;
         var next = (action.Target.Name, action.Command) switch
         {
             (Autonomy.MissionCatalogue.Head, "set_power") => state with { HeadSetpointW = Math.Min(Power(), _scenario.Probe.MaxHeadPowerW) },
@@ -121,6 +134,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             ("probe", "pause_descent") => state with { Paused = true },
             ("probe", "resume_descent") => state with { Paused = false },
             ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = _scenario.Probe.MaxWallPowerW },
+            (Autonomy.MissionCatalogue.Bus, "shed_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Add(Load()) } },
+            (Autonomy.MissionCatalogue.Bus, "restore_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Remove(Load()) } },
             _ => throw new InvalidOperationException($"The probe has no command {action}."),
         };
         context.Record("command.executed", Severity.Notice,
@@ -218,6 +233,20 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private ProbeState Advance(ProbeState state, SimTime now)
     {
         var seconds = (now - state.LastUpdate).TotalSeconds;
+        var bus = state.Bus;
+        var busEnergyJ = 0.0;
+        if (bus is not null)
+        {
+            var step = PowerBus.Advance(bus.Allocation, bus.StateOfCharge, _power!.Battery, seconds);
+            busEnergyJ = step.Energy.LoadsJ;
+            bus = bus with
+            {
+                StateOfCharge = step.StateOfCharge,
+                Energy = bus.Energy.Plus(step.Energy),
+                BatteryLockedOut = step.StateOfCharge <= 0 || (bus.BatteryLockedOut && step.StateOfCharge < ProbePowerSystem.ReconnectStateOfCharge),
+            };
+        }
+
         var depth = Math.Min(state.DepthM + (state.VelocityMPerS * Math.Cos(state.TiltRad) * seconds), _scenario.Shell.ThicknessM);
         return state with
         {
@@ -225,7 +254,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             DepthM = depth,
             LateralDriftM = state.LateralDriftM + (state.VelocityMPerS * Math.Sin(state.TiltRad) * seconds),
             TiltRad = state.TiltRad + (TiltRateRadPerS(state) * seconds),
-            EnergyUsedJ = state.EnergyUsedJ + (BusPowerW(state) * seconds),
+            EnergyUsedJ = state.EnergyUsedJ + (bus is null ? BusPowerW(state) * seconds : busEnergyJ),
+            Bus = bus,
         };
     }
 
@@ -243,7 +273,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         var area = Math.PI * _scenario.Probe.RadiusM * _scenario.Probe.RadiusM;
         var density = Physics.Ice.IceIh.DensityKgPerM3(rate.IceTemperatureK, Math.Max(rate.PressurePa, 0));
         var meltEnthalpy = (rate.SensibleW + rate.LatentW) / (density * area * v);
-        var differenceW = (state.SegmentLossFraction * state.HeadSetpointW * state.PowerFraction / 2) - (state.SteeringW * state.PowerFraction);
+        var scale = HeadScale(state);
+        var differenceW = (state.SegmentLossFraction * state.HeadSetpointW * scale / 2) - (state.SteeringW * scale);
         var turn = TiltDynamics.HeadTurnRateRadPerS(differenceW, _scenario.Probe.RadiusM, density, meltEnthalpy);
         var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, _scenario.Probe.FreezeGapM, _scenario.Probe.LengthM);
         return TiltDynamics.TiltRateRadPerS(state.TiltRad, 0.0, turn, 0.0, _scenario.Probe.LengthM / v, limit);
@@ -252,6 +283,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     /// <summary>Sets regime and velocity for the depth and power now in force, logging every change of regime.</summary>
     private ProbeState Retune(ProbeState state, ComponentContext context)
     {
+        state = Rebus(state, context);
         switch (state.Regime)
         {
             case ProbeRegime.AtOcean:
@@ -399,6 +431,17 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             if (crossing < next) next = SimTime.Max(crossing, context.Now);
         }
 
+        if (state.Bus is { } bus && _power!.Battery is { } battery)
+        {
+            // The bus changes when the battery runs dry: a step at that instant (rounded up to a tick) reallocates it.
+            var emptyS = PowerBus.TimeToEmptyS(bus.Allocation, bus.StateOfCharge, battery);
+            if (emptyS < MaxTimerS)
+            {
+                var empty = context.Now + new SimDuration((long)Math.Ceiling(emptyS * SimDuration.TicksPerSecond));
+                if (empty < next) next = empty;
+            }
+        }
+
         var handle = context.ScheduleSelf(next - context.Now, ProbeStepDue.Instance, MissionPriority.Physics);
         return state with { PendingStep = handle };
     }
@@ -427,7 +470,22 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         }
 
         var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
-        context.Record("probe.telemetry", Severity.Debug,
+        context.Record("probe.telemetry", Severity.Debug, [.. TelemetryFields(state, frame, truth)]);
+        context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        if (_watchedByFaults)
+        {
+            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);
+        }
+
+        return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
+    }
+
+    /// <summary>The true values of a frame as logged; the bus figures only for a probe with a power system.</summary>
+    private IEnumerable<RecordField> TelemetryFields(ProbeState state, TelemetryFrame frame, IReadOnlyList<(string Point, double Value)> truth)
+    {
+        IEnumerable<RecordField> fields =
+        [
             RecordField.Of("frame", frame.Sequence),
             RecordField.Of("regime", frame.Regime),
             RecordField.Of("depth_m", state.DepthM),
@@ -437,14 +495,27 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("wall_power_w", WallPowerW(state)),
             RecordField.Of("energy_used_j", state.EnergyUsedJ),
             RecordField.Of("tilt_rad", state.TiltRad),
-            RecordField.Of("lateral_drift_m", state.LateralDriftM));
-        context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
-        context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
-        if (_watchedByFaults)
-        {
-            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);
-        }
-        return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
+            RecordField.Of("lateral_drift_m", state.LateralDriftM),
+        ];
+        if (state.Bus is not { } bus) return fields;
+        var e = bus.Energy;
+        return fields.Concat(
+        [
+            RecordField.Of("battery_soc", bus.StateOfCharge),
+            RecordField.Of("bus_power_available_w", bus.Allocation.AvailablePowerW),
+            RecordField.Of("bus_load_w", bus.Allocation.Loads.SuppliedPowerW),
+            RecordField.Of("source_power_w", bus.Allocation.SourcePowerW),
+            RecordField.Of("harvest_power_w", bus.Allocation.HarvestPowerW),
+            RecordField.Of("source_j", e.SourceJ),
+            RecordField.Of("harvest_j", e.HarvestJ),
+            RecordField.Of("battery_out_j", e.BatteryOutJ),
+            RecordField.Of("battery_in_j", e.BatteryInJ),
+            RecordField.Of("loads_j", e.LoadsJ),
+            RecordField.Of("unserved_j", e.UnservedJ),
+            RecordField.Of("curtailed_j", e.CurtailedJ),
+            RecordField.Of("battery_loss_j", e.BatteryLossJ),
+            RecordField.Of("self_discharge_j", e.SelfDischargeJ),
+        ]);
     }
 
     /// <summary>What the probe's sensors would read if none were faulty, in the catalogue's point names and SI units.</summary>
@@ -457,6 +528,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         ("probe.wall_power", WallPowerW(state)),
         ("probe.energy_used", state.EnergyUsedJ),
         ("probe.tilt", state.TiltRad),
+        ("probe.battery_soc", state.Bus?.StateOfCharge ?? 0.0),
+        ("probe.bus_power_available", state.Bus?.Allocation.AvailablePowerW ?? BusPowerW(state)),
     ];
 
     private ProbeState Breakthrough(ProbeState state, ComponentContext context)
@@ -505,11 +578,73 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
-    private static double HeadPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * state.PowerFraction * (1 - (state.SegmentLossFraction / 2));
+    /// <summary>What the head heater asks of the bus: its set point less a failed segment's share; nothing at rest.</summary>
+    private static double HeadDemandW(ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * (1 - (state.SegmentLossFraction / 2));
 
-    private static double WallPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW * state.PowerFraction;
+    private static double WallDemandW(ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW;
 
-    private double BusPowerW(ProbeState state) => HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW;
+    /// <summary>Share of the head's set point its segments get: the dip's share without a bus, all or nothing with one.</summary>
+    private double HeadScale(ProbeState state) =>
+        state.Bus is null ? state.PowerFraction : IsRunning(state.Bus, _power!.HeadLoad) ? 1.0 : 0.0;
+
+    private double HeadPowerW(ProbeState state) => HeadDemandW(state) * HeadScale(state);
+
+    private double WallPowerW(ProbeState state) =>
+        state.Bus is null ? WallDemandW(state) * state.PowerFraction : IsRunning(state.Bus, _power!.WallLoad) ? WallDemandW(state) : 0.0;
+
+    private double BusPowerW(ProbeState state) =>
+        state.Bus is null ? HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW : state.Bus.Allocation.Loads.SuppliedPowerW;
+
+    private static bool IsRunning(ProbeBusState bus, string load) => bus.Allocation.Loads.Running.Any(l => l.Name == load);
+
+    /// <summary>
+    /// Reallocates the bus for the instant: the source as decayed and dipped, the turbine once in the ocean, the
+    /// heaters' demands now, less what telecommands switched off. Every load that stops or starts is logged with why.
+    /// </summary>
+    private ProbeState Rebus(ProbeState state, ComponentContext context)
+    {
+        if (state.Bus is not { } bus) return state;
+        var loads = _power!.Loads(HeadDemandW(state), WallDemandW(state), bus.SwitchedOff);
+        var allocation = _power.Allocate(context.Now.SecondsSinceEpoch, state.PowerFraction, state.Regime == ProbeRegime.AtOcean, bus.StateOfCharge, bus.BatteryLockedOut, loads);
+        var isStart = bus.Allocation.Loads.Running.Count == 0 && bus.Allocation.Loads.Shed.Count == 0;
+        foreach (var model in _power.LoadModels)
+        {
+            var wasOff = isStart ? null : OffCause(bus.Allocation, model.Name);
+            var isOff = OffCause(allocation, model.Name);
+            if (wasOff == isOff) continue;
+            var demandW = _power.Loads(HeadDemandW(state), WallDemandW(state), ImmutableSortedSet<string>.Empty).Single(l => l.Name == model.Name).PowerW;
+            context.Record(isOff is null ? "probe.load_restored" : "probe.load_shed", isOff is null ? Severity.Notice : Severity.Warning,
+                RecordField.Of("load", model.Name),
+                RecordField.Of("priority", model.Priority),
+                RecordField.Of("demand_w", demandW),
+                RecordField.Of("available_w", allocation.AvailablePowerW),
+                RecordField.Of("battery_soc", bus.StateOfCharge),
+                RecordField.Of("cause", isOff ?? wasOff ?? ""));
+        }
+
+        return state with { Bus = bus with { Allocation = allocation } };
+    }
+
+    /// <summary>
+    /// Why a load gets no power under an allocation: "bus" when it was shed, "command" when it was switched off (a
+    /// switched-off load asks for nothing, so it is in neither list); null when it runs.
+    /// </summary>
+    private static string? OffCause(BusAllocation allocation, string load) =>
+        allocation.Loads.Shed.Any(l => l.Name == load) ? "bus"
+        : allocation.Loads.Running.Any(l => l.Name == load) ? null
+        : "command";
+
+    private void RecordPowerSystem(ProbeState state, ComponentContext context)
+    {
+        if (_power is null) return;
+        context.Record("probe.power", Severity.Info,
+            RecordField.Of("source", _power.SourceKind.ToString()),
+            RecordField.Of("source_power_w", _power.SourcePowerW(0.0)),
+            RecordField.Of("source_thermal_power_w", _power.SourceThermalPowerW(0.0)),
+            RecordField.Of("battery_capacity_j", _power.Battery?.EffectiveCapacityJ ?? 0.0),
+            RecordField.Of("battery_soc", state.Bus!.StateOfCharge),
+            RecordField.Of("loads", string.Join(", ", _power.LoadModels.Select(l => $"{l.Name}:{l.Priority}"))));
+    }
 }

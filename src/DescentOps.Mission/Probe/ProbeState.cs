@@ -11,6 +11,7 @@ namespace DescentOps.Mission.Probe;
 /// The probe moves along its axis, tilted by <see cref="TiltRad"/> from the vertical in its steering plane, so depth
 /// grows at v·cos θ and <see cref="LateralDriftM"/> at v·sin θ.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
+/// <see cref="Bus"/> is null for a probe without a power system (a dip then scales the heater power directly).
 /// </summary>
 public sealed record ProbeState(
     ProbeRegime Regime,
@@ -38,7 +39,8 @@ public sealed record ProbeState(
     double TiltRad,
     double LateralDriftM,
     double SegmentLossFraction,
-    double SteeringW)
+    double SteeringW,
+    ProbeBusState? Bus = null)
 {
     /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
     public double DebrisAccountedToM { get; init; }

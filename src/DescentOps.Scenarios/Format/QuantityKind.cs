@@ -19,6 +19,9 @@ public enum QuantityKind
     Frequency,
     AbsorbedDose,
     Density,
+
+    /// <summary>A dimensionless share (a state of charge), written as a percentage or a plain fraction.</summary>
+    Ratio,
 }
 
 public static class QuantityKindInfo
@@ -39,6 +42,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => typeof(Frequency),
         QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
         QuantityKind.Density => typeof(Density),
+        QuantityKind.Ratio => typeof(Ratio),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -59,6 +63,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz",
         QuantityKind.AbsorbedDose => "Gy",
         QuantityKind.Density => "kg/m³",
+        QuantityKind.Ratio => "1",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -79,6 +84,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz, kHz, MHz, GHz",
         QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
         QuantityKind.Density => "kg/m³, g/cm³",
+        QuantityKind.Ratio => "%",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }

@@ -17,6 +17,8 @@ public static class ProbeTelemetryPoints
         ("probe.wall_power", QuantityKind.Power),
         ("probe.energy_used", QuantityKind.Energy),
         ("probe.tilt", QuantityKind.Angle),
+        ("probe.battery_soc", QuantityKind.Ratio),
+        ("probe.bus_power_available", QuantityKind.Power),
     ];
 
     public static QuantityKind? KindOf(string name) =>

@@ -1,6 +1,9 @@
 namespace DescentOps.Scenarios.Model;
 
-/// <summary>A loaded, validated scenario: every quantity in SI units, every reference resolved.</summary>
+/// <summary>
+/// A loaded, validated scenario: every quantity in SI units, every reference resolved. <see cref="Power"/> is null
+/// when the scenario has no power section.
+/// </summary>
 public sealed record Scenario(
     string Name,
     string Description,
@@ -14,4 +17,5 @@ public sealed record Scenario(
     RulesSource Rules,
     RunModel Run,
     string SourceName,
-    string SourceText);
+    string SourceText,
+    PowerModel? Power = null);

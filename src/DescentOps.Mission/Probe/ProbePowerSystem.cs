@@ -1,0 +1,105 @@
+using DescentOps.Physics.Power;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Probe;
+
+/// <summary>
+/// The probe's power system as a scenario describes it, turned into the Physics models: the source's output at a
+/// time, the turbine's output in the ocean, the battery, and the bus loads for the demands of the moment. Pure: the
+/// probe component keeps the state and calls this.
+/// </summary>
+public sealed class ProbePowerSystem
+{
+    /// <summary>
+    /// Pack voltage used to turn bus power into cell current: 28 V, a usual spacecraft bus (common practice, no
+    /// source). State of charge and every energy figure are independent of it; only coulomb counts would change.
+    /// </summary>
+    public const double NominalVoltageV = 28.0;
+
+    /// <summary>
+    /// An emptied battery rejoins the bus once recharged to this share, 10 % (a rule of thumb of ours, no source): a bus
+    /// controller with hysteresis, so a battery at the edge does not switch a heater on and off every few seconds.
+    /// </summary>
+    public const double ReconnectStateOfCharge = 0.10;
+
+    private readonly PowerModel _power;
+    private readonly ProbeModel _probe;
+
+    public ProbePowerSystem(PowerModel power, ProbeModel probe)
+    {
+        _power = power;
+        _probe = probe;
+        Battery = power.Battery is { } b
+            ? new BusBattery(
+                BatteryParameters.LithiumIon(b.CapacityJ / NominalVoltageV) with { CoulombicEfficiency = b.ChargeEfficiency },
+                NominalVoltageV,
+                b.DischargeEfficiency,
+                b.MaxDischargePowerW,
+                b.MaxChargePowerW,
+                b.CellTemperatureK)
+            : null;
+        HeadLoad = power.Loads.Single(l => l.Role == BusLoadRole.HeadHeater).Name;
+        WallLoad = power.Loads.Single(l => l.Role == BusLoadRole.WallHeater).Name;
+    }
+
+    public BusBattery? Battery { get; }
+
+    public double InitialStateOfCharge => _power.Battery?.InitialStateOfCharge ?? 0.0;
+
+    /// <summary>Name of the head heater's load on the bus.</summary>
+    public string HeadLoad { get; }
+
+    /// <summary>Name of the wall heater's load on the bus.</summary>
+    public string WallLoad { get; }
+
+    public IEnumerable<BusLoadModel> LoadModels => _power.Loads;
+
+    public PowerSourceKind SourceKind => _power.Source;
+
+    /// <summary>Electric output of the source <paramref name="elapsedS"/> into the run, before any dip.</summary>
+    public double SourcePowerW(double elapsedS) => _power.Source switch
+    {
+        PowerSourceKind.Radioisotope => RadioisotopeHeatSource.Output(_power.ThermalPowerW, _power.ConversionEfficiency, _power.DegradationPerYear, _power.FuelAgeS + elapsedS).ElectricPowerW,
+        _ => _power.ElectricPowerW,
+    };
+
+    /// <summary>Heat the source releases (the radioisotope's decay heat, or the core heat behind the fission output).</summary>
+    public double SourceThermalPowerW(double elapsedS) => _power.Source switch
+    {
+        PowerSourceKind.Radioisotope => RadioisotopeHeatSource.Output(_power.ThermalPowerW, _power.ConversionEfficiency, _power.DegradationPerYear, _power.FuelAgeS + elapsedS).ThermalPowerW,
+        _ => FissionSource.AtElectricOutput(_power.ElectricPowerW, _power.ConversionEfficiency).ThermalPowerW,
+    };
+
+    /// <summary>The turbine's output: only in the ocean, where the current passes the rotor.</summary>
+    public double HarvestPowerW(bool inOcean)
+    {
+        if (!inOcean || _power.Turbine is not { } t) return 0.0;
+        var areaM2 = Math.PI * t.RotorDiameterM * t.RotorDiameterM / 4;
+        return CurrentTurbine.ElectricPowerW(t.CurrentSpeedMPerS, t.WaterDensityKgPerM3, areaM2, t.PowerCoefficient, t.DrivetrainEfficiency, t.CutInSpeedMPerS, t.RatedSpeedMPerS);
+    }
+
+    /// <summary>Most the bus could ever offer: the source when new, the battery's limit and the turbine's rated output.</summary>
+    public double MaxAvailablePowerW()
+    {
+        var turbine = _power.Turbine is { } t
+            ? CurrentTurbine.ElectricPowerW(t.RatedSpeedMPerS, t.WaterDensityKgPerM3, Math.PI * t.RotorDiameterM * t.RotorDiameterM / 4, t.PowerCoefficient, t.DrivetrainEfficiency, t.CutInSpeedMPerS, t.RatedSpeedMPerS)
+            : 0.0;
+        return SourcePowerW(0.0) + (_power.Battery?.MaxDischargePowerW ?? 0.0) + turbine;
+    }
+
+    /// <summary>The loads that ask for power now; a load switched off by telecommand does not ask.</summary>
+    public IReadOnlyList<PoweredLoad> Loads(double headDemandW, double wallDemandW, IReadOnlySet<string> switchedOff) =>
+    [
+        .. _power.Loads.Where(l => !switchedOff.Contains(l.Name)).Select(l => new PoweredLoad(l.Name, l.Priority, l.Role switch
+        {
+            BusLoadRole.HeadHeater => headDemandW,
+            BusLoadRole.WallHeater => wallDemandW,
+            BusLoadRole.Electronics => _probe.ElectronicsPowerW,
+            _ => l.PowerW,
+        })),
+    ];
+
+    /// <summary>Allocates the bus: the source scaled by the power dips in force, the turbine, the battery unless locked out.</summary>
+    public BusAllocation Allocate(double elapsedS, double dipFraction, bool inOcean, double stateOfCharge, bool batteryLockedOut, IReadOnlyList<PoweredLoad> loads) =>
+        PowerBus.Allocate(SourcePowerW(elapsedS) * dipFraction, HarvestPowerW(inOcean), stateOfCharge, Battery, loads, !batteryLockedOut);
+}

@@ -1,0 +1,12 @@
+namespace DescentOps.Scenarios.Model;
+
+/// <summary>What a bus load is. Heater loads draw their set points, electronics the probe's electronics power.</summary>
+public enum BusLoadRole
+{
+    HeadHeater,
+    WallHeater,
+    Electronics,
+
+    /// <summary>A load of constant power given in the scenario (a pump, an instrument).</summary>
+    Fixed,
+}
