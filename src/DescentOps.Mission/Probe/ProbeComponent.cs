@@ -40,7 +40,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     public override ProbeState InitialState => new(
         ProbeRegime.Melting, SimTime.Epoch, 0.0, 0.0, 0.0, 1.0, 0.0, 0, SimTime.Epoch, null, null, false, null, null, 0, 0,
-        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal), 0.0, 0.0, 0.0, 0.0);
+        _scenario.Probe.HeadPowerW, _scenario.Probe.WallPowerW, false, [], [], ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal), 0.0, 0.0, 0.0, 0.0,
+        HeldAtSurface: _scenario.Station.Dwell is not null);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -68,6 +69,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
             case FaultCleared { Fault.Kind: FaultKind.PowerDip } cleared:
                 return Replan(Retune(WithDips(Advance(state, context.Now), state.ActiveDips.Remove(cleared.Fault.Name)), context), context);
+
+            case DescentCleared cleared:
+                context.Record("probe.descent_started", Severity.Notice,
+                    RecordField.Of("dwell_s", cleared.DwellS),
+                    RecordField.Of("log_reduction", cleared.LogReduction));
+                return Replan(Retune(Advance(state, context.Now) with { HeldAtSurface = false }, context), context);
 
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
@@ -223,6 +230,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     /// <summary>Sets regime and velocity for the depth and power now in force, logging every change of regime.</summary>
     private ProbeState Retune(ProbeState state, ComponentContext context)
     {
+        if (state.HeldAtSurface) return state with { VelocityMPerS = 0.0 };
         switch (state.Regime)
         {
             case ProbeRegime.AtOcean:
@@ -473,10 +481,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
     private static double HeadPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * state.PowerFraction * (1 - (state.SegmentLossFraction / 2));
+        state.Regime == ProbeRegime.AtOcean || state.Paused || state.HeldAtSurface ? 0.0 : state.HeadSetpointW * state.PowerFraction * (1 - (state.SegmentLossFraction / 2));
 
     private static double WallPowerW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW * state.PowerFraction;
+        state.Regime == ProbeRegime.AtOcean || state.HeldAtSurface ? 0.0 : state.WallSetpointW * state.PowerFraction;
 
     private double BusPowerW(ProbeState state) => HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW;
 }

@@ -10,6 +10,7 @@ namespace DescentOps.Mission.Probe;
 /// at which a frozen-in probe was found unable to melt free, so the (costly) estimate is redone only when that changes.
 /// The probe moves along its axis, tilted by <see cref="TiltRad"/> from the vertical in its steering plane, so depth
 /// grows at v·cos θ and <see cref="LateralDriftM"/> at v·sin θ.
+/// <see cref="HeldAtSurface"/> keeps the probe still, heaters off, until the station ends the surface dwell.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
 /// </summary>
 public sealed record ProbeState(
@@ -38,7 +39,8 @@ public sealed record ProbeState(
     double TiltRad,
     double LateralDriftM,
     double SegmentLossFraction,
-    double SteeringW);
+    double SteeringW,
+    bool HeldAtSurface = false);
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

@@ -19,6 +19,9 @@ public enum QuantityKind
     Frequency,
     AbsorbedDose,
     Density,
+
+    /// <summary>Absorbed dose per time, written as a dose over one unit of duration ("5 Gy/d"); UnitsNet has no such quantity.</summary>
+    AbsorbedDoseRate,
 }
 
 public static class QuantityKindInfo
@@ -39,6 +42,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => typeof(Frequency),
         QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
         QuantityKind.Density => typeof(Density),
+        QuantityKind.AbsorbedDoseRate => throw new ArgumentException("A dose rate is parsed as a dose over a duration, not by UnitsNet.", nameof(kind)),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -59,6 +63,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz",
         QuantityKind.AbsorbedDose => "Gy",
         QuantityKind.Density => "kg/m³",
+        QuantityKind.AbsorbedDoseRate => "Gy/s",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -79,6 +84,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz, kHz, MHz, GHz",
         QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
         QuantityKind.Density => "kg/m³, g/cm³",
+        QuantityKind.AbsorbedDoseRate => "Gy/d, mGy/h, rad/h, krad/yr",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }
