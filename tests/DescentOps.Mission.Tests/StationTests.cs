@@ -70,6 +70,13 @@ public sealed class StationTests
         Assert.Equal(failureGy / siliconGyPerS, failed.Time.SecondsSinceEpoch, 5);
         Assert.Equal(failureGy, Number(failed, "dose_gy_si"), 9);
 
+        // The data rate against the reference's link check: 33.94 dB-Hz at 5.2 AU with these radios (DS-8, CALC,
+        // links-power-ocean note), scaled by the square of the distance to 6.1e8 km; one 4096-bit frame takes 4096 / R.
+        var rateBitPerS = Math.Pow(10.0, 3.394) * Math.Pow(5.2 * 149_597_870_700.0 / 6.1e11, 2);
+        var link = sink.OfKind("station.link").Single();
+        Assert.Equal(rateBitPerS, Number(link, "data_rate_bit_s"), rateBitPerS * 0.012);
+        Assert.Equal(4096 / rateBitPerS, Number(link, "frame_time_s"), 0.012 * 4096 / rateBitPerS);
+
         // Before breakthrough.
         Assert.NotNull(summary.BreakthroughTimeS);
         Assert.True(failed.Time.SecondsSinceEpoch < summary.BreakthroughTimeS!.Value);
@@ -157,6 +164,7 @@ public sealed class StationTests
         // Frame 1 leaves the probe at 0, the station at 2 s (window open, no radio: no time on the air), reaches home
         // at 2 s + 3 h; the rule fires on it and its command reaches the station a light time later, at 6 h + 2 s:
         // home set at 5 h, so it waits for the next rise, one turn after the first, at 10 h.
+        Assert.Equal(lightS, Number(sink.OfKind("station.started").Single(), "one_way_light_time_s"), 6);
         var fired = sink.OfKind("rule.fired").First();
         Assert.Equal(forwardS + lightS, fired.Time.SecondsSinceEpoch, 6);
         var queued = sink.OfKind("station.command_queued").First();
