@@ -6,15 +6,7 @@ namespace DescentOps.Scenarios.Tests;
 /// <summary>The station's optional parts: read into SI, absent means today's plain relay, and bad input is located.</summary>
 public sealed class StationSectionTests
 {
-    private const string File = "bad.yaml";
-
-    private static ScenarioError SingleError(string text)
-    {
-        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
-        var error = Assert.Single(exception.Errors);
-        Assert.Equal(File, error.Location.File);
-        return error;
-    }
+    private static ScenarioError SingleError(string text) => MalformedScenarioTests.SingleError(text);
 
     [Fact]
     public void TheFixtureReadsEveryStationPartInSi()
