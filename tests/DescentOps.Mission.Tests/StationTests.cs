@@ -286,4 +286,31 @@ public sealed class StationTests
         var worst = queuedSink.OfKind("ground.telemetry").Max(r => Number(r, "latency_s"));
         Assert.InRange(worst, lightS + longestS - 600.0, lightS + longestS + 3.0);
     }
+
+    [Fact]
+    public async Task AScheduledUpsetHoldsFramesForItsRecoveryTimeAndTheSummaryMeasuresIt()
+    {
+        // Test inputs: an upset fault at day 2 lasting 3 h on the plain relay of the default scenario, run for 3 days.
+        const double startS = 2 * Day, recoveryS = 3 * 3600.0;
+        var text = Edit(
+            MissionHarness.DefaultText,
+            ("  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.4\n",
+             "  - name: discharge-day-2\n    kind: station_upset\n    at: 2 d\n    duration: 3 h\n"),
+            ("until: 400 d", "until: 3 d"));
+        var (summary, sink) = await RunAsync(text);
+
+        var upset = sink.OfKind("station.upset").Single();
+        Assert.Equal(startS, upset.Time.SecondsSinceEpoch, 6);
+        Assert.Equal("fault 'discharge-day-2'", TextField(upset, "cause"));
+        var recovered = sink.OfKind("station.upset_recovered").Single();
+        Assert.Equal(startS + recoveryS, recovered.Time.SecondsSinceEpoch, 6);
+
+        // Day 2 falls on a frame (a 10-minute multiple): frames sampled at 2 d, 2 d + 10 min, ... 2 d + 2 h 50 min
+        // (18 of them) wait and go at the end of the recovery; none is lost.
+        Assert.Equal(0, summary.FramesLost);
+        var held = sink.OfKind("station.link_resumed").Single();
+        Assert.Equal(18, CollectingSink.IntegerField(held, "frames_queued"));
+        Assert.Equal(recoveryS, Number(held, "waited_s"), 3);
+        Assert.Equal(recoveryS, Assert.Single(summary.Faults).RecoveredAfterS!.Value, 6);
+    }
 }

@@ -29,7 +29,7 @@ public sealed class StationComponent : SimComponent<StationState>
     private readonly StationDose? _dose;
     private readonly HomeLink _link;
 
-    /// <summary>Whether frames and commands go through the queues: only when windows or upsets can hold them up.</summary>
+    /// <summary>Whether frames and commands go through the queues: only when windows or upsets (discharges or faults) can hold them up.</summary>
     private readonly bool _queued;
 
     public StationComponent(Scenario scenario)
@@ -41,7 +41,7 @@ public sealed class StationComponent : SimComponent<StationState>
         _delayHome = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS + OneWayLightTimeS);
         _forwarding = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS);
         _dose = scenario.Station.Radiation is { } radiation ? new StationDose(radiation) : null;
-        _queued = scenario.Station.Link is not null || scenario.Station.Charging is not null;
+        _queued = scenario.Station.Link is not null || scenario.Station.Charging is not null || scenario.Faults.Any(f => f.Kind == FaultKind.StationUpset);
     }
 
     public double OneWayLightTimeS { get; }
@@ -81,7 +81,12 @@ public sealed class StationComponent : SimComponent<StationState>
             case StationDoseLimit limit:
                 return DieOfDose(state, limit, context);
             case StationUpset:
-                return Upset(state, context);
+                ScheduleNextUpset(_station.Charging!, context);
+                return Upset(state, _station.Charging!.RecoveryTimeS, "discharge", context);
+            case FaultStarted { Fault.Kind: FaultKind.StationUpset } fault:
+                return Upset(state, fault.Fault.DurationS!.Value, $"fault '{fault.Fault.Name}'", context);
+            case FaultCleared { Fault.Kind: FaultKind.StationUpset }:
+                return state;
             case StationUpsetOver over:
                 return RecoverFromUpset(state, over, context);
             case DwellOver:
@@ -162,7 +167,7 @@ public sealed class StationComponent : SimComponent<StationState>
 
     private StationState Enqueue(StationState state, TelemetryFrame frame, ComponentContext context)
     {
-        var cause = Recovering(state, context) && !_station.Charging!.QueueWhileRecovering ? "station recovering from an upset"
+        var cause = Recovering(state, context) && !QueueWhileRecovering ? "station recovering from an upset"
             : state.FramesQueued >= _station.FrameQueueCapacity ? "frame queue full"
             : null;
         if (cause is not null)
@@ -180,7 +185,7 @@ public sealed class StationComponent : SimComponent<StationState>
 
     private StationState Enqueue(StationState state, Telecommand command, ComponentContext context)
     {
-        if (Recovering(state, context) && !_station.Charging!.QueueWhileRecovering) return LoseCommand(state, command, "station recovering from an upset", context);
+        if (Recovering(state, context) && !QueueWhileRecovering) return LoseCommand(state, command, "station recovering from an upset", context);
         if (state.CommandsQueued >= _station.CommandQueueCapacity) return LoseCommand(state, command, "station command queue full", context);
         var opens = _link.NextOpeningS(context.Now.SecondsSinceEpoch);
         context.Record("station.command_queued", Severity.Notice,
@@ -211,14 +216,14 @@ public sealed class StationComponent : SimComponent<StationState>
         var now = context.Now;
         var ready = state.RecoveringUntil is { } until && until > now ? until : now;
         var commandAt = state.CommandsQueued > 0 ? _link.NextOpeningS(ready.SecondsSinceEpoch) : double.PositiveInfinity;
-        var frameReady = state.FramesQueued > 0 ? SimTime.Max(SimTime.Max(ready, state.TransmitterFreeAt), state.Frames.Peek().ReadyAt) : SimTime.MaxValue;
+        var frameOwnReady = state.FramesQueued > 0 ? SimTime.Max(SimTime.Max(now, state.TransmitterFreeAt), state.Frames.Peek().ReadyAt) : now;
+        var frameReady = SimTime.Max(frameOwnReady, ready);
         var frameAt = state.FramesQueued > 0 ? _link.NextFrameStartS(frameReady.SecondsSinceEpoch) : double.PositiveInfinity;
         var atS = Math.Min(commandAt, frameAt);
         if (double.IsInfinity(atS) || atS - now.SecondsSinceEpoch >= MaxTimerS) return state;
 
         var at = SimTime.Max(now, CeilingTick(atS));
-        var unhindered = state.FramesQueued > 0 ? SimTime.Max(frameReady, now) : now;
-        if (state.WaitingSince is null && at > unhindered)
+        if (state.WaitingSince is null && at > frameOwnReady)
         {
             context.Record("station.link_waiting", Severity.Notice,
                 RecordField.Of("reason", Recovering(state, context) ? "station recovering from an upset" : "home out of view"),
@@ -311,22 +316,25 @@ public sealed class StationComponent : SimComponent<StationState>
         };
     }
 
-    private StationState Upset(StationState state, ComponentContext context)
+    /// <summary>A reset: nothing is relayed until the recovery is over; an upset during a recovery extends it.</summary>
+    private StationState Upset(StationState state, double recoveryS, string cause, ComponentContext context)
     {
         if (state.Failed) return state;
-        var charging = _station.Charging!;
-        var until = context.Now + SimDuration.FromSeconds(charging.RecoveryTimeS);
+        var until = context.Now + SimDuration.FromSeconds(recoveryS);
         if (state.RecoveringUntil is { } earlier && earlier > until) until = earlier;
         context.Record("station.upset", Severity.Warning,
             RecordField.Of("upset", state.Upsets + 1),
-            RecordField.Of("recovery_time_s", charging.RecoveryTimeS),
-            RecordField.Of("arrivals", charging.QueueWhileRecovering ? "queued" : "lost"),
+            RecordField.Of("cause", cause),
+            RecordField.Of("recovery_time_s", recoveryS),
+            RecordField.Of("arrivals", QueueWhileRecovering ? "queued" : "lost"),
             RecordField.Of("frames_queued", (long)state.FramesQueued));
         if (state.PendingService is { } pending) context.Cancel(pending);
         context.ScheduleSelf(until - context.Now, new StationUpsetOver(until), MissionPriority.Fault);
-        ScheduleNextUpset(charging, context);
         return state with { Upsets = state.Upsets + 1, RecoveringUntil = until, PendingService = null };
     }
+
+    /// <summary>What the scenario's charging part says, or queue when only upset faults reset the station.</summary>
+    private bool QueueWhileRecovering => _station.Charging?.QueueWhileRecovering ?? true;
 
     private StationState RecoverFromUpset(StationState state, StationUpsetOver over, ComponentContext context)
     {

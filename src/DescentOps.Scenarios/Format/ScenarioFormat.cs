@@ -122,7 +122,7 @@ public static class ScenarioFormat
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [
                 new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),
-                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "heater_segment_failure", "tilt_kick"]),
+                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "heater_segment_failure", "tilt_kick", "station_upset"]),
                 new QuantityField("at", "Simulated time after the start of the run when the fault begins (give this or at_depth).", Duration, 0, 1000 * Year, Required: false),
                 new QuantityField("at_depth", "Head depth at which the fault begins (give this or at).", Length, 0, 200_000, Required: false),
                 new QuantityField("duration", "How long the fault lasts; omit for a fault that stays.", Duration, 0, 1000 * Year, Required: false, MinExclusive: true),

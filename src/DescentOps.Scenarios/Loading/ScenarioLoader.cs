@@ -296,6 +296,11 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a broken fibre does not heal: a tether_break takes no duration"));
         }
 
+        if (fault.Kind == FaultKind.StationUpset && fault.DurationS is null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a station_upset needs its recovery time as the duration"));
+        }
+
         if ((fault.AtS is null) == (fault.AtDepthM is null))
         {
             errors.Add(new ScenarioError(section.Location, $"{path}.at", "give exactly one trigger: 'at' (a time) or 'at_depth' (a depth)"));
@@ -339,6 +344,7 @@ public static class ScenarioLoader
         "sensor_dropout" => FaultKind.SensorDropout,
         "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
         "tilt_kick" => FaultKind.TiltKick,
+        "station_upset" => FaultKind.StationUpset,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -351,6 +357,7 @@ public static class ScenarioLoader
         FaultKind.SensorBias => "sensor_bias",
         FaultKind.SensorDropout => "sensor_dropout",
         FaultKind.HeaterSegmentFailure => "heater_segment_failure",
+        FaultKind.StationUpset => "station_upset",
         _ => "tilt_kick",
     };
 
