@@ -313,4 +313,23 @@ public sealed class StationTests
         Assert.Equal(recoveryS, Number(held, "waited_s"), 3);
         Assert.Equal(recoveryS, Assert.Single(summary.Faults).RecoveredAfterS!.Value, 6);
     }
+
+    [Fact]
+    public void AFrameGoesOnlyIfItFitsWholeBeforeTheWindowCloses()
+    {
+        // The windowed geometry above (up for [0, 5 h) of each 10 h) with a radio whose rate the link equation sets.
+        var text = Edit(
+            WindowedDefault(""),
+            ("    start_hour_angle: -90 deg\n", "    start_hour_angle: -90 deg\n    radio:\n      transmit_power: 20 W\n      dish_diameter: 1 m\n      ground_dish_diameter: 34 m\n      frequency: 8.4 GHz\n      system_noise_temperature: 40 K\n      line_loss: 1\n      required_eb_n0: 2.5\n      margin: 3\n      frame_bits: 10000\n"));
+        var link = new HomeLink(ScenarioLoader.LoadText(text, "radio.yaml"));
+        var frameS = link.FrameTimeS;
+        Assert.Equal(10_000 / link.DataRateBitPerS, frameS, 9);
+        Assert.InRange(frameS, 1.0, 3600.0);
+
+        const double closesS = 5 * 3600.0, opensS = 10 * 3600.0;
+        Assert.Equal(closesS - (2 * frameS), link.NextFrameStartS(closesS - (2 * frameS)), 6);
+        Assert.Equal(closesS - frameS, link.NextFrameStartS(closesS - frameS), 6);
+        Assert.Equal(opensS, link.NextFrameStartS(closesS - (frameS / 2)), 3);
+        Assert.Equal(opensS, link.NextFrameStartS(closesS + 1.0), 3);
+    }
 }
