@@ -53,7 +53,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             PowerBus.Allocate(0.0, 0.0, 0.0, null, []),
             ImmutableSortedSet<string>.Empty.WithComparer(StringComparer.Ordinal),
             BusEnergy.Zero,
-            false));
+            false),
+        HeldAtSurface: _scenario.Station.Dwell is not null);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -82,6 +83,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
             case FaultCleared { Fault.Kind: FaultKind.PowerDip } cleared:
                 return Replan(Retune(WithDips(Advance(state, context.Now), state.ActiveDips.Remove(cleared.Fault.Name)), context), context);
+
+            case DescentCleared cleared:
+                context.Record("probe.descent_started", Severity.Notice,
+                    RecordField.Of("dwell_s", cleared.DwellS),
+                    RecordField.Of("log_reduction", cleared.LogReduction));
+                return Replan(Retune(Advance(state, context.Now) with { HeldAtSurface = false }, context), context);
 
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
@@ -284,6 +291,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private ProbeState Retune(ProbeState state, ComponentContext context)
     {
         state = Rebus(state, context);
+        if (state.HeldAtSurface) return state with { VelocityMPerS = 0.0 };
         switch (state.Regime)
         {
             case ProbeRegime.AtOcean:
@@ -578,12 +586,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
     private static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
-    /// <summary>What the head heater asks of the bus: its set point less a failed segment's share; nothing at rest.</summary>
+    /// <summary>What the head heater asks of the bus: its set point less a failed segment's share; nothing at rest or while held at the surface.</summary>
     private static double HeadDemandW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean || state.Paused ? 0.0 : state.HeadSetpointW * (1 - (state.SegmentLossFraction / 2));
+        state.Regime == ProbeRegime.AtOcean || state.Paused || state.HeldAtSurface ? 0.0 : state.HeadSetpointW * (1 - (state.SegmentLossFraction / 2));
 
     private static double WallDemandW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean ? 0.0 : state.WallSetpointW;
+        state.Regime == ProbeRegime.AtOcean || state.HeldAtSurface ? 0.0 : state.WallSetpointW;
 
     /// <summary>Share of the head's set point its segments get: the dip's share without a bus, all or nothing with one.</summary>
     private double HeadScale(ProbeState state) =>

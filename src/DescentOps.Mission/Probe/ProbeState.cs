@@ -10,6 +10,7 @@ namespace DescentOps.Mission.Probe;
 /// at which a frozen-in probe was found unable to melt free, so the (costly) estimate is redone only when that changes.
 /// The probe moves along its axis, tilted by <see cref="TiltRad"/> from the vertical in its steering plane, so depth
 /// grows at v·cos θ and <see cref="LateralDriftM"/> at v·sin θ.
+/// <see cref="HeldAtSurface"/> keeps the probe still, heaters off, until the station ends the surface dwell.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
 /// <see cref="Bus"/> is null for a probe without a power system (a dip then scales the heater power directly).
 /// </summary>
@@ -40,7 +41,8 @@ public sealed record ProbeState(
     double LateralDriftM,
     double SegmentLossFraction,
     double SteeringW,
-    ProbeBusState? Bus = null)
+    ProbeBusState? Bus = null,
+    bool HeldAtSurface = false)
 {
     /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
     public double DebrisAccountedToM { get; init; }

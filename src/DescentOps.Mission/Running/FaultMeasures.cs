@@ -53,6 +53,9 @@ public sealed class FaultMeasures
             case "station.recovered":
                 foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
                 break;
+            case "station.upset_recovered":
+                foreach (var f in _faults.Where(f => f.Kind == "StationUpset" && f.RecoveredS is null && t > f.StartS)) f.RecoveredS = t;
+                break;
         }
     }
 
@@ -69,6 +72,7 @@ public sealed class FaultMeasures
             {
                 "PowerDip" => "descent back to 90 % of its pre-fault speed",
                 "StationFailure" => "station relaying again",
+                "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",
                 "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it",
                 _ => "none: a sensor fault leaves the physical state alone",

@@ -47,6 +47,9 @@ public sealed class MissionSummarySink : IJournalSink
             case "tether.frame_lost" or "station.frame_lost":
                 _framesLost++;
                 break;
+            case "station.data_lost" when Text(record, "data") == "telemetry":
+                _framesLost += record.Fields.First(f => f.Name == "count").Integer;
+                break;
             case "fault.injected":
                 _faults++;
                 break;
@@ -71,6 +74,8 @@ public sealed class MissionSummarySink : IJournalSink
         result.RecordsWritten,
         result.ComponentFailures,
         _faultMeasures.Measures());
+
+    private static string? Text(JournalRecord record, string name) => record.Fields.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault();
 
     private static double Field(JournalRecord record, string name)
     {

@@ -22,6 +22,8 @@ public enum QuantityKind
 
     /// <summary>A dimensionless share (a state of charge), written as a percentage or a plain fraction.</summary>
     Ratio,
+    /// <summary>Absorbed dose per time, written as a dose over one unit of duration ("5 Gy/d"); UnitsNet has no such quantity.</summary>
+    AbsorbedDoseRate,
 }
 
 public static class QuantityKindInfo
@@ -43,6 +45,7 @@ public static class QuantityKindInfo
         QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
         QuantityKind.Density => typeof(Density),
         QuantityKind.Ratio => typeof(Ratio),
+        QuantityKind.AbsorbedDoseRate => throw new ArgumentException("A dose rate is parsed as a dose over a duration, not by UnitsNet.", nameof(kind)),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -64,6 +67,7 @@ public static class QuantityKindInfo
         QuantityKind.AbsorbedDose => "Gy",
         QuantityKind.Density => "kg/m³",
         QuantityKind.Ratio => "1",
+        QuantityKind.AbsorbedDoseRate => "Gy/s",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -85,6 +89,7 @@ public static class QuantityKindInfo
         QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
         QuantityKind.Density => "kg/m³, g/cm³",
         QuantityKind.Ratio => "%",
+        QuantityKind.AbsorbedDoseRate => "Gy/d, mGy/h, rad/h, krad/yr",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }

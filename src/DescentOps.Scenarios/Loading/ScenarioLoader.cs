@@ -24,6 +24,21 @@ public static class ScenarioLoader
     /// <summary>Ocean water density for the turbine when a scenario gives none: 1030 kg/m³ (common practice for seawater, no source).</summary>
     public const double DefaultWaterDensityKgPerM3 = 1030;
 
+    /// <summary>Share of the surface dose carried by electrons when the scenario does not say: 0.9 (a modelling default of ours, no published value).</summary>
+    public const double DefaultElectronShare = 0.9;
+
+    /// <summary>Electron dose attenuation length in ice: 2 cm (RULE: within the 1–5 cm the electrons' CSDA ranges suggest, from memory).</summary>
+    public const double DefaultElectronLengthM = 0.02;
+
+    /// <summary>Photon dose attenuation length in ice: 15.37 cm, 1/(μ/ρ·ρ) with μ/ρ 0.0707 cm²/g at 1 MeV (from memory) and ρ 0.92 g/cm³.</summary>
+    public const double DefaultPhotonLengthM = 0.1537;
+
+    /// <summary>Aperture efficiency of the station's dish: 0.55 (RULE, common practice for a small dish).</summary>
+    public const double DefaultDishEfficiency = 0.55;
+
+    /// <summary>Aperture efficiency of the ground antenna: 0.6 (RULE, common practice for a large dish).</summary>
+    public const double DefaultGroundDishEfficiency = 0.6;
+
     public static Scenario LoadFile(string path)
     {
         string text;
@@ -84,7 +99,7 @@ public static class ScenarioLoader
                 probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power"),
                 probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad),
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
-            new StationModel(station.Text("name"), station.Quantity("forwarding_delay")),
+            BuildStation(station),
             [.. root.List("vehicles").Select(v => new VehicleModel(
                 v.Text("name"),
                 v.Quantity("battery"),
@@ -156,6 +171,55 @@ public static class ScenarioLoader
         },
         (int)load.Integer("priority"),
         load.OptionalQuantity("power") ?? 0.0);
+
+    private static StationModel BuildStation(BoundSection station)
+    {
+        var radiation = station.OptionalSection("radiation");
+        var link = station.OptionalSection("link");
+        var radio = link?.OptionalSection("radio");
+        var dwell = station.OptionalSection("dwell");
+        var charging = station.OptionalSection("charging");
+        return new StationModel(
+            station.Text("name"),
+            station.Quantity("forwarding_delay"),
+            radiation is null ? null : new StationRadiationModel(
+                radiation.Quantity("dose_rate"),
+                radiation.OptionalQuantity("shielding") ?? 0.0,
+                radiation.OptionalNumber("electron_share") ?? DefaultElectronShare,
+                radiation.OptionalQuantity("electron_length") ?? DefaultElectronLengthM,
+                radiation.OptionalQuantity("photon_length") ?? DefaultPhotonLengthM,
+                radiation.Text("failure_model") == "weibull" ? DoseFailureModel.Weibull : DoseFailureModel.Lognormal,
+                radiation.Quantity("failure_dose"),
+                radiation.Number("failure_spread")),
+            link is null ? null : new StationLinkModel(
+                link.Quantity("rotation_period"),
+                link.Quantity("latitude"),
+                link.OptionalQuantity("home_declination") ?? 0.0,
+                link.OptionalQuantity("elevation_mask") ?? 0.0,
+                link.OptionalQuantity("start_hour_angle") ?? 0.0,
+                link.OptionalQuantity("planet_radius"),
+                link.OptionalQuantity("orbit_radius"),
+                link.OptionalQuantity("planet_hour_angle") ?? 0.0,
+                radio is null ? null : new StationRadioModel(
+                    radio.Quantity("transmit_power"),
+                    radio.Quantity("dish_diameter"),
+                    radio.OptionalNumber("dish_efficiency") ?? DefaultDishEfficiency,
+                    radio.Quantity("ground_dish_diameter"),
+                    radio.OptionalNumber("ground_dish_efficiency") ?? DefaultGroundDishEfficiency,
+                    radio.Quantity("frequency"),
+                    radio.Quantity("system_noise_temperature"),
+                    radio.Number("line_loss"),
+                    radio.Number("required_eb_n0"),
+                    radio.Number("margin"),
+                    radio.Integer("frame_bits"))),
+            dwell is null ? null : new SurfaceDwellModel(dwell.Quantity("duration"), dwell.Quantity("d_value")),
+            charging is null ? null : new StationChargingModel(
+                charging.Quantity("upset_interval"),
+                charging.Quantity("recovery_time"),
+                (charging.OptionalText("during_recovery") ?? "queue") == "queue"),
+            station.OptionalInteger("frame_queue_capacity"),
+            station.OptionalInteger("command_queue_capacity"));
+    }
 
     /// <summary>Reads a branch change file (see <see cref="ChangeFormat"/>), with the same located errors as a scenario.</summary>
     public static ScenarioChange LoadChange(string text, string sourceName)
@@ -277,6 +341,7 @@ public static class ScenarioLoader
         }
 
         if (scenario.Power is { } power) CheckPower(power, root.Section("power"), errors);
+        CheckStation(scenario.Station, root.Section("station"), errors);
     }
 
     /// <summary>The cross-field rules of the power section: the source's own fields, and a bus that has every heater.</summary>
@@ -354,6 +419,42 @@ public static class ScenarioLoader
         }
     }
 
+    /// <summary>The station's parts that depend on each other, or whose range depends on a choice.</summary>
+    private static void CheckStation(StationModel station, BoundSection section, List<ScenarioError> errors)
+    {
+        if (station.Radiation is { } radiation)
+        {
+            var at = section.Section("radiation").LocationOf("failure_spread");
+            if (radiation.FailureModel == DoseFailureModel.Weibull && radiation.FailureSpread < 0.1)
+            {
+                errors.Add(new ScenarioError(at, "station.radiation.failure_spread", $"a Weibull shape must be 0.1 to 50, not {radiation.FailureSpread.ToString(System.Globalization.CultureInfo.InvariantCulture)}"));
+            }
+
+            if (radiation.FailureModel == DoseFailureModel.Lognormal && radiation.FailureSpread > 5)
+            {
+                errors.Add(new ScenarioError(at, "station.radiation.failure_spread", $"a lognormal log standard deviation must be 0.001 to 5, not {radiation.FailureSpread.ToString(System.Globalization.CultureInfo.InvariantCulture)}"));
+            }
+        }
+
+        if (station.Link is { } link)
+        {
+            var linkSection = section.Section("link");
+            if ((link.PlanetRadiusM is null) != (link.OrbitRadiusM is null))
+            {
+                errors.Add(new ScenarioError(linkSection.Location, "station.link.orbit_radius", "give planet_radius and orbit_radius together, or neither"));
+            }
+            else if (link.PlanetRadiusM >= link.OrbitRadiusM)
+            {
+                errors.Add(new ScenarioError(linkSection.LocationOf("orbit_radius"), "station.link.orbit_radius", "the orbit must lie outside the planet (orbit_radius above planet_radius)"));
+            }
+        }
+
+        if (station.Dwell is not null && station.Radiation is null)
+        {
+            errors.Add(new ScenarioError(section.Section("dwell").Location, "station.dwell", "a surface dwell sterilises by dose: give station.radiation with its dose_rate"));
+        }
+    }
+
     /// <summary>The cross-field rules of one fault, shared by scenarios and branch change files.</summary>
     internal static void CheckFault(FaultModel fault, BoundSection section, string path, List<ScenarioError> errors)
     {
@@ -365,6 +466,11 @@ public static class ScenarioLoader
         if (fault.Kind == FaultKind.TetherBreak && fault.DurationS is not null)
         {
             errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a broken fibre does not heal: a tether_break takes no duration"));
+        }
+
+        if (fault.Kind == FaultKind.StationUpset && fault.DurationS is null)
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a station_upset needs its recovery time as the duration"));
         }
 
         var triggers = (fault.AtS is null ? 0 : 1) + (fault.AtDepthM is null ? 0 : 1) + (fault.When is null ? 0 : 1) + (fault.IsRandom ? 1 : 0);
@@ -421,6 +527,7 @@ public static class ScenarioLoader
         "sensor_dropout" => FaultKind.SensorDropout,
         "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
         "tilt_kick" => FaultKind.TiltKick,
+        "station_upset" => FaultKind.StationUpset,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -433,6 +540,7 @@ public static class ScenarioLoader
         FaultKind.SensorBias => "sensor_bias",
         FaultKind.SensorDropout => "sensor_dropout",
         FaultKind.HeaterSegmentFailure => "heater_segment_failure",
+        FaultKind.StationUpset => "station_upset",
         _ => "tilt_kick",
     };
 

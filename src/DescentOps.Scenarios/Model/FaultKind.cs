@@ -26,4 +26,7 @@ public enum FaultKind
 
     /// <summary>A sudden change of tilt as the head meets a debris band or an inclined layer.</summary>
     TiltKick,
+
+    /// <summary>A discharge resets the surface station, which relays nothing until its recovery time (the fault's duration) is over.</summary>
+    StationUpset,
 }

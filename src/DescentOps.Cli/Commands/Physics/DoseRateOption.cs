@@ -4,9 +4,8 @@ using DescentOps.Scenarios.Format;
 namespace DescentOps.Cli.Commands.Physics;
 
 /// <summary>
-/// An absorbed-dose-rate option such as "0.5 Gy/d", "20 mrad/h" or "1e-6 Gy/s". UnitsNet has a dose but no dose
-/// rate, so the text is split at its last '/' and each side read with the shared parser: a dose, and one unit of a
-/// duration.
+/// An absorbed-dose-rate option such as "0.5 Gy/d", "20 mrad/h" or "1e-6 Gy/s", read by the shared parser that
+/// scenario files use.
 /// </summary>
 internal sealed class DoseRateOption(string name, string description)
 {
@@ -24,14 +23,7 @@ internal sealed class DoseRateOption(string name, string description)
     {
         ArgumentNullException.ThrowIfNull(parse);
         var text = (parse.GetValue(Option) ?? throw new UsageException($"{Name} is required.")).Trim();
-        var slash = text.LastIndexOf('/');
-        if (slash > 0
-            && QuantityParser.TryParseSi(QuantityKind.AbsorbedDose, text[..slash], out var doseGy, out _)
-            && QuantityParser.TryParseSi(QuantityKind.Duration, "1 " + text[(slash + 1)..].Trim(), out var perS, out _)
-            && perS > 0)
-        {
-            return doseGy / perS;
-        }
+        if (QuantityParser.TryParseSi(QuantityKind.AbsorbedDoseRate, text, out var gyPerS, out _)) return gyPerS;
 
         throw new UsageException($"{Name}: '{text}' is not a dose rate (write e.g. '0.5 Gy/d' or '20 mrad/h')");
     }
