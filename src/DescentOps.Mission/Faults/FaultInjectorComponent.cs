@@ -33,7 +33,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         FaultKind.PowerDip => MissionIds.Probe,
         FaultKind.TetherBreak => MissionIds.Tether,
         FaultKind.StationFailure or FaultKind.StationUpset => MissionIds.Station,
-        FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout => MissionIds.Probe,
+        FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise => MissionIds.Probe,
         FaultKind.HeaterSegmentFailure or FaultKind.TiltKick => MissionIds.Probe,
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };

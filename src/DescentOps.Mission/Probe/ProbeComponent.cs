@@ -112,10 +112,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case ArmDepthTrigger arm:
                 return Replan(state with { DepthTriggers = state.DepthTriggers.Add(new ArmedDepthTrigger(arm.FaultIndex, arm.DepthM)) }, context);
 
-            case FaultStarted { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
+            case FaultStarted { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise } sensor:
                 return StartSensorFault(Advance(state, context.Now), sensor.Fault, context);
 
-            case FaultCleared { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout } sensor:
+            case FaultCleared { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise } sensor:
                 context.Record("probe.sensor_restored", Severity.Notice, RecordField.Of("fault", sensor.Fault.Name), RecordField.Of("point", sensor.Fault.Point ?? ""));
                 return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Fault.Name == sensor.Fault.Name) };
 
@@ -471,6 +471,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                     break;
                 case FaultKind.SensorBias:
                     reported.Add((point, value + fault.Fault.ValueSi!.Value));
+                    break;
+                case FaultKind.SensorNoise:
+                    // Drawn from the probe's stream only while the fault lasts, so runs without it keep their draws.
+                    reported.Add((point, value + context.Random.NextNormal(0.0, fault.Fault.ValueSi!.Value)));
                     break;
                 case FaultKind.SensorDropout:
                     break;

@@ -178,7 +178,7 @@ public static class ScenarioFormat
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [
                 new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),
-                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "heater_segment_failure", "tilt_kick", "station_upset"]),
+                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "sensor_noise", "heater_segment_failure", "tilt_kick", "station_upset"]),
                 new QuantityField("at", "Trigger: simulated time after the start of the run when the fault begins (give exactly one of at, at_depth, when, mean_interval).", Duration, 0, 1000 * Year, Required: false),
                 new QuantityField("at_depth", "Trigger: head depth at which the fault begins.", Length, 0, 200_000, Required: false),
                 new TextField("when", "Trigger: a condition in the rule language on the probe's true state (not its sensors), e.g. 'probe.ice_temperature above 250 K for 2 samples'; checked on every frame, the fault begins the first time it holds.", Required: false),
@@ -189,7 +189,7 @@ public static class ScenarioFormat
                 new NumberField("remaining_fraction", "For power_dip: the share of heater power left during the dip; for heater_segment_failure: the share one head half keeps (0 to 1).", 0, 1, Required: false),
                 new QuantityField("angle", "For tilt_kick: the sudden change of tilt (a debris band or an inclined layer under the head).", Angle, -Math.PI / 4, Math.PI / 4, Required: false),
                 new ChoiceField("point", "For sensor faults: the telemetry point that lies.", [.. Model.ProbeTelemetryPoints.Numeric.Select(p => p.Name)], Required: false),
-                new TextField("value", "For sensor_stuck (optional: the reading at the fault's start otherwise) and sensor_bias: a quantity in the point's unit, e.g. '0.5 m/h'.", Required: false),
+                new TextField("value", "For sensor_stuck (optional: the reading at the fault's start otherwise), sensor_bias (the offset) and sensor_noise (the noise's standard deviation): a quantity in the point's unit, e.g. '0.5 m/h'.", Required: false),
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
             new SectionField("run", "Run settings; the command line may override them.",

@@ -489,7 +489,7 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.LocationOf("occurrences"), $"{path}.occurrences", "a fault that stays happens once: give a duration for more than one occurrence"));
         }
 
-        var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout;
+        var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise;
         if (isSensor && fault.Point is null)
         {
             errors.Add(new ScenarioError(section.Location, $"{path}.point", $"a {KindWord(fault.Kind)} fault names the telemetry point that lies"));
@@ -510,6 +510,11 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_bias needs the offset as a value"));
         }
 
+        if (fault.Kind == FaultKind.SensorNoise && (fault.ValueSi is null || fault.ValueSi <= 0))
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_noise needs a positive standard deviation as its value"));
+        }
+
         if (fault.ValueSi is { } v && double.IsNaN(v) && fault.Point is { } point)
         {
             var kind = ProbeTelemetryPoints.KindOf(point)!.Value;
@@ -525,6 +530,7 @@ public static class ScenarioLoader
         "sensor_stuck" => FaultKind.SensorStuck,
         "sensor_bias" => FaultKind.SensorBias,
         "sensor_dropout" => FaultKind.SensorDropout,
+        "sensor_noise" => FaultKind.SensorNoise,
         "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
         "tilt_kick" => FaultKind.TiltKick,
         "station_upset" => FaultKind.StationUpset,
@@ -539,6 +545,7 @@ public static class ScenarioLoader
         FaultKind.SensorStuck => "sensor_stuck",
         FaultKind.SensorBias => "sensor_bias",
         FaultKind.SensorDropout => "sensor_dropout",
+        FaultKind.SensorNoise => "sensor_noise",
         FaultKind.HeaterSegmentFailure => "heater_segment_failure",
         FaultKind.StationUpset => "station_upset",
         _ => "tilt_kick",

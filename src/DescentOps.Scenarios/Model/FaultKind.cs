@@ -21,6 +21,9 @@ public enum FaultKind
     /// <summary>A telemetry point is missing from every frame.</summary>
     SensorDropout,
 
+    /// <summary>A telemetry point reports its true value plus normal noise of the given standard deviation, drawn each frame.</summary>
+    SensorNoise,
+
     /// <summary>One half of the head heater keeps only part of its power: the head melts unevenly and the probe turns.</summary>
     HeaterSegmentFailure,
 
