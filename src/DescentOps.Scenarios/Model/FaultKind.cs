@@ -26,4 +26,7 @@ public enum FaultKind
 
     /// <summary>A sudden change of tilt as the head meets a debris band or an inclined layer.</summary>
     TiltKick,
+
+    /// <summary>A vehicle meets what can lose it: a failing battery, entrapment, or the loss of its acoustic link.</summary>
+    VehicleLoss,
 }

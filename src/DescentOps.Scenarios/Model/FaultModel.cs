@@ -4,7 +4,7 @@ namespace DescentOps.Scenarios.Model;
 /// One fault. It starts at <see cref="AtS"/> or when the probe's head reaches <see cref="AtDepthM"/> (exactly one of
 /// the two is set). <see cref="DurationS"/> is null for a fault that stays; <see cref="RemainingFraction"/> is what a
 /// power dip leaves of the heater power; sensor faults name their <see cref="Point"/> and, in SI, their
-/// <see cref="ValueSi"/> (the stuck reading or the bias).
+/// <see cref="ValueSi"/> (the stuck reading or the bias); a vehicle loss names its <see cref="Vehicle"/> and <see cref="Cause"/>.
 /// </summary>
 public sealed record FaultModel(
     string Name,
@@ -15,4 +15,6 @@ public sealed record FaultModel(
     double RemainingFraction,
     string? Point = null,
     double? ValueSi = null,
-    double? AngleRad = null);
+    double? AngleRad = null,
+    string? Vehicle = null,
+    VehicleLossCause? Cause = null);

@@ -1,6 +1,9 @@
 namespace DescentOps.Scenarios.Model;
 
-/// <summary>A loaded, validated scenario: every quantity in SI units, every reference resolved.</summary>
+/// <summary>
+/// A loaded, validated scenario: every quantity in SI units, every reference resolved. Without <see cref="Acoustics"/>
+/// the vehicles' link to the probe is always up.
+/// </summary>
 public sealed record Scenario(
     string Name,
     string Description,
@@ -14,4 +17,5 @@ public sealed record Scenario(
     RulesSource Rules,
     RunModel Run,
     string SourceName,
-    string SourceText);
+    string SourceText,
+    AcousticsModel? Acoustics = null);
