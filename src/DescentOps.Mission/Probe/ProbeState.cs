@@ -38,7 +38,8 @@ public sealed record ProbeState(
     double TiltRad,
     double LateralDriftM,
     double SegmentLossFraction,
-    double SteeringW);
+    double SteeringW,
+    int VehiclesLost = 0);
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);
