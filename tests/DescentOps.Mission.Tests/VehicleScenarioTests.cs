@@ -174,13 +174,19 @@ public sealed class VehicleScenarioTests
         Assert.Equal(13, CollectingSink.IntegerField(sink.OfKind("vehicle.data_lost").Single(), "messages"));
     }
 
-    [Fact]
-    public async Task ARecallFromAnOnBoardRuleBringsTheVehicleHomeEarly()
+    [Theory]
+    [InlineData("board")]
+    [InlineData("ground")]
+    public async Task ARecallFromARuleBringsTheVehicleHomeEarly(string placement)
     {
-        const string rules = "rules: |\n  autonomy E3\n  rule recall-at-ocean {\n    runs on board\n    severity low\n    when probe.regime is AtOcean for 6 samples\n    then { send vehicle-minnow-1 recall_vehicle }\n  }\n\n";
+        var rules = $"rules: |\n  autonomy E3\n  rule recall-at-ocean {{\n    runs on {placement}\n    severity low\n    when probe.regime is AtOcean for 6 samples\n    then {{ send vehicle-minnow-1 recall_vehicle }}\n  }}\n\n";
         var (summary, sink) = await RunAsync(Edit(Drift, "run:\n", rules + "run:\n"));
 
         Assert.Single(sink.OfKind("rule.fired"));
+        // From the ground the command goes up the light time and down the fibre, then through the probe's modem.
+        var executed = sink.OfKind("command.executed").Single();
+        Assert.Equal("vehicle-minnow-1", executed.Source.Name);
+        Assert.Equal(placement, Text(executed, "placement"));
         Assert.Single(sink.OfKind("vehicle.recalled"));
         Assert.Equal("recalled", Text(sink.OfKind("vehicle.returning").Single(), "reason"));
         Assert.Equal("recalled", Text(sink.OfKind("vehicle.task_complete").Single(), "reason"));
