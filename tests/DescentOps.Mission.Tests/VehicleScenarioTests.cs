@@ -160,6 +160,23 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
+    public async Task AnEntrapmentThatEndsLeavesTheVehicleToComeHomeAndTheSummaryMeasuresTheRecovery()
+    {
+        var fault = "faults:\n  - name: minnow-1-caught\n    kind: vehicle_loss\n    at: 1.8 d\n    duration: 3 h\n    vehicle: minnow-1\n    cause: entrapment\n\n";
+        var (summary, sink) = await RunAsync(Edit(Drift, "run:\n", fault + "run:\n"));
+
+        var entrapped = sink.OfKind("vehicle.entrapped").Single();
+        var freed = sink.OfKind("vehicle.freed").Single();
+        // Computed: held for the fault's 3 h, drawing only the 8 W hotel load meanwhile.
+        Assert.Equal(3 * 3600.0, (freed.Time - entrapped.Time).TotalSeconds, 6);
+        Assert.Equal(8.0 * 3 * 3600, CollectingSink.Field(entrapped, "battery_j") - CollectingSink.Field(freed, "battery_j"), 3);
+        Assert.Empty(sink.OfKind("vehicle.lost"));
+        Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
+        var measure = summary.Faults.Single();
+        Assert.Equal(sink.OfKind("vehicle.docked").Single().Time.SecondsSinceEpoch - (1.8 * 86400), measure.RecoveredAfterS!.Value, 6);
+    }
+
+    [Fact]
     public async Task ADeadLinkLongerThanTheToleranceLosesTheVehicleAndItsHeldData()
     {
         var fault = "faults:\n  - name: minnow-1-modem\n    kind: vehicle_loss\n    at: 1.7 d\n    vehicle: minnow-1\n    cause: out_of_range\n\n";
