@@ -99,4 +99,17 @@ public sealed class VehicleFormatTests
         var text = ScenarioText.DefaultWith("      return_at: 0.4", "      return_at: 0.1");
         Assert.Equal("vehicles[1].dock.return_at", SingleError(text).FieldPath);
     }
+
+    [Fact]
+    public void ABranchCannotStrikeAVehicleTheParentDoesNotHave()
+    {
+        var parent = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
+        const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: minnow-1\n    cause: battery\n";
+        Assert.Contains(parent.Vehicles, v => v.Name == "minnow-1");
+        Assert.Equal("minnow-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Vehicle);
+
+        var unknown = ScenarioLoader.LoadChange(known.Replace("minnow-1", "minnow-7", StringComparison.Ordinal), "change.yaml");
+        var exception = Assert.Throws<ScenarioException>(() => unknown.ApplyTo(parent));
+        Assert.Contains("minnow-7", Assert.Single(exception.Errors).Message);
+    }
 }
