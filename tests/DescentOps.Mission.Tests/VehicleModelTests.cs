@@ -127,4 +127,20 @@ public sealed class VehicleModelTests
         var lossier = base10.Link with { AbsorptionDbPerKm = base10.Link.AbsorptionDbPerKm + 1.0 };
         Assert.True(SonarEquation.MaximumRange(lossier, VehicleAcousticLink.SearchLimitM).RangeM < base10.MaximumRangeM);
     }
+
+    [Fact]
+    public void TheLinkReproducesPublishedSeawaterValuesAtTheSurfaceOfStandardSeawater()
+    {
+        // 35.16504 g/kg is practical salinity 35 (TEOS-10 reference ratio); 0 °C; no overburden.
+        var acoustics = new AcousticsModel(10e3, 160.0, 50.0, 2000.0, 10.0, 1.5, 273.15, 8.0, AbsorptionFormula.FrancoisGarrison, 600.0);
+        var link = VehicleAcousticLink.For(acoustics, 0.03516504, 0.0);
+        Assert.Equal(35.0, link.PracticalSalinity, 12);
+        Assert.Equal(0.0, link.EarthEquivalentDepthM, 12);
+        // Francois and Garrison (1982), JASA 72(3) and 72(6), at 0 °C, S 35, 10 kHz, pH 8: 1.295 dB/km as evaluated in
+        // the project's reference note (the printed table gives 1.29), the value the physics tests assert; 1e-3 relative.
+        Assert.Equal(1.295, link.Link.AbsorptionDbPerKm, 1.295e-3);
+        // UNESCO 1983 table as reprinted in Pond and Pickard (1986), "Introductory Dynamical Oceanography": 1449.1 m/s
+        // at S 35, 0 °C, 0 dbar, printed to 0.1 m/s.
+        Assert.Equal(1449.1, link.SoundSpeedMPerS, 0.05);
+    }
 }

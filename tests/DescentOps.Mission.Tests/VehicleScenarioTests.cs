@@ -204,6 +204,9 @@ public sealed class VehicleScenarioTests
         var executed = sink.OfKind("command.executed").Single();
         Assert.Equal("vehicle-minnow-1", executed.Source.Name);
         Assert.Equal(placement, Text(executed, "placement"));
+        // On board it acts at once; from the ground it waits at least the one-way light time, 6.1e8 km / c.
+        var latencyS = CollectingSink.Field(executed, "latency_s");
+        Assert.True(placement == "board" ? latencyS == 0.0 : latencyS > 6.1e11 / 299_792_458.0, $"{placement}: {latencyS} s");
         Assert.Single(sink.OfKind("vehicle.recalled"));
         Assert.Equal("recalled", Text(sink.OfKind("vehicle.returning").Single(), "reason"));
         Assert.Equal("recalled", Text(sink.OfKind("vehicle.task_complete").Single(), "reason"));

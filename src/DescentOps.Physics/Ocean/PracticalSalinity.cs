@@ -12,6 +12,8 @@ public static class PracticalSalinity
     public static double FromAbsoluteKgPerKg(double saltMassFractionKgPerKg)
     {
         ValidRange.Require(saltMassFractionKgPerKg, 0.0, 0.1, nameof(saltMassFractionKgPerKg), "kg/kg", "the reference-composition salinity conversion");
-        return saltMassFractionKgPerKg * 1e3 * 35.0 / ReferenceSalinityOf35GPerKg;
+        // One multiplication and one division: the reference salinity itself then maps to 35 exactly, not to a hair
+        // above the top of the absorption fits' salinity range.
+        return saltMassFractionKgPerKg * 35e3 / ReferenceSalinityOf35GPerKg;
     }
 }
