@@ -6,7 +6,7 @@ namespace DescentOps.Mission.Autonomy;
 
 /// <summary>
 /// What rules may read and command in a mission: the probe's telemetry points with their physical ranges, and the
-/// telecommands the probe obeys with the ranges of their arguments. The ranges come from the scenario (a depth
+/// telecommands the probe obeys with the ranges of their arguments, and the recall of each vehicle (sent through the probe's modem). The ranges come from the scenario (a depth
 /// cannot exceed the shell, a power its heater's maximum), so the checker can refuse a threshold no probe could reach.
 /// </summary>
 public static class MissionCatalogue
@@ -48,6 +48,8 @@ public static class MissionCatalogue
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),
             .. power is null ? [] : BusCommands(power),
+            // Each vehicle is its own actuator, so that rules recalling different vehicles never exclude each other.
+            .. scenario.Vehicles.Select(v => new CommandSpec(MissionIds.Vehicle(v.Name), Vehicles.VehicleComponent.RecallCommand, [])),
         ];
         return new TelemetryCatalogue(points, commands);
     }

@@ -28,14 +28,16 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
 
     public override FaultInjectorState InitialState => new(0, 0);
 
-    public static ComponentId TargetOf(FaultKind kind) => kind switch
+    /// <summary>The component a fault acts on; a vehicle loss strikes the vehicle it names.</summary>
+    public static ComponentId TargetOf(FaultModel fault) => fault.Kind switch
     {
         FaultKind.PowerDip => MissionIds.Probe,
         FaultKind.TetherBreak => MissionIds.Tether,
         FaultKind.StationFailure or FaultKind.StationUpset => MissionIds.Station,
         FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise => MissionIds.Probe,
         FaultKind.HeaterSegmentFailure or FaultKind.TiltKick => MissionIds.Probe,
-        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+        FaultKind.VehicleLoss => MissionIds.Vehicle(fault.Vehicle ?? throw new ArgumentException("A vehicle_loss names its vehicle.", nameof(fault))),
+        _ => throw new ArgumentOutOfRangeException(nameof(fault), fault.Kind, null),
     };
 
     public override FaultInjectorState Handle(FaultInjectorState state, object message, ComponentContext context)
@@ -72,7 +74,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             case FaultDue { IsEnd: true } due:
                 var ended = _faults[due.Index];
                 context.Record("fault.cleared", Severity.Notice, RecordField.Of("fault", ended.Name));
-                context.Schedule(TargetOf(ended.Kind), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
+                context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
                 return state with { Cleared = state.Cleared + 1 };
             default:
                 throw new InvalidOperationException($"The fault injector cannot handle {message.GetType().Name}.");
@@ -129,10 +131,10 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         context.Record("fault.injected", Severity.Alarm,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("kind", fault.Kind.ToString()),
-            RecordField.Of("target", TargetOf(fault.Kind).Name),
+            RecordField.Of("target", TargetOf(fault).Name),
             RecordField.Of("point", fault.Point ?? ""),
             RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
-        context.Schedule(TargetOf(fault.Kind), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
+        context.Schedule(TargetOf(fault), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
         if (fault.DurationS is { } duration)
         {
             context.ScheduleSelf(SimDuration.FromSeconds(duration), new FaultDue(index, true), MissionPriority.Fault);

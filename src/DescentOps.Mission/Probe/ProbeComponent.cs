@@ -106,6 +106,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case FaultCleared { Fault.Kind: FaultKind.TiltKick }:
                 return state;
 
+            case Telecommand command when command.Command.Target.Name.StartsWith("vehicle-", StringComparison.Ordinal):
+                // Commands for a vehicle arrive over the fibre and go on through the probe's acoustic modem.
+                context.Schedule(command.Command.Target, SimDuration.Zero, command, MissionPriority.Command);
+                return state;
+
             case Telecommand command:
                 return Replan(Retune(Execute(Advance(state, context.Now), command, context), context), context);
 
@@ -552,7 +557,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("vehicles", _scenario.Vehicles.Count));
         foreach (var vehicle in _scenario.Vehicles)
         {
-            context.Schedule(MissionIds.Vehicle(vehicle.Name), SimDuration.Zero, new ReleaseVehicle(state.DepthM), MissionPriority.Command);
+            context.Schedule(MissionIds.Vehicle(vehicle.Name), SimDuration.Zero, new ReleaseVehicle(state.DepthM, _descent.Shell.BasePressurePa, _descent.Shell.BaseTemperatureK), MissionPriority.Command);
         }
 
         if (_scenario.Vehicles.Count == 0)
@@ -575,9 +580,25 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         var next = Advance(state, context.Now) with
         {
             VehiclesActive = state.VehiclesActive - 1,
-            VehiclesFinished = state.VehiclesFinished + 1,
+            VehiclesFinished = state.VehiclesFinished + (finished.Lost ? 0 : 1),
+            VehiclesLost = state.VehiclesLost + (finished.Lost ? 1 : 0),
         };
-        if (next.VehiclesFinished == _scenario.Vehicles.Count)
+        if (next.VehiclesLost > 0 && next.VehiclesFinished + next.VehiclesLost == _scenario.Vehicles.Count)
+        {
+            context.Record("probe.mission_complete", Severity.Notice,
+                RecordField.Of("vehicles_finished", next.VehiclesFinished),
+                RecordField.Of("energy_used_j", next.EnergyUsedJ),
+                RecordField.Of("vehicles_lost", next.VehiclesLost));
+            if (next.VehiclesFinished == 0)
+            {
+                context.StopRun(RunOutcomeKind.MissionLost, $"all {next.VehiclesLost} vehicles lost");
+            }
+            else
+            {
+                context.StopRun(RunOutcomeKind.Completed, $"{next.VehiclesFinished} vehicles finished their tasks, {next.VehiclesLost} lost");
+            }
+        }
+        else if (next.VehiclesFinished == _scenario.Vehicles.Count)
         {
             context.Record("probe.mission_complete", Severity.Notice,
                 RecordField.Of("vehicles_finished", next.VehiclesFinished),

@@ -42,7 +42,8 @@ public sealed record ProbeState(
     double SegmentLossFraction,
     double SteeringW,
     ProbeBusState? Bus = null,
-    bool HeldAtSurface = false)
+    bool HeldAtSurface = false,
+    int VehiclesLost = 0)
 {
     /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
     public double DebrisAccountedToM { get; init; }

@@ -7,7 +7,7 @@ namespace DescentOps.Mission.Running;
 /// a power dip is recovered when a frame shows the probe melting at 90 % or more of the speed in the last frame
 /// before the fault (a rule of thumb of ours: "back to nominal" within a typical telemetry noise band); a station
 /// failure when the station reports recovered; a tilt fault when the tilt, having left 1 degree of vertical, is
-/// back within it; a tether break never (no relays yet); a sensor fault does not
+/// back within it; a vehicle loss when that vehicle next docks (never if it is lost); a tether break never (no relays yet); a sensor fault does not
 /// move the physical state, so it has no recovery, only detection.
 /// </summary>
 public sealed class FaultMeasures
@@ -26,7 +26,7 @@ public sealed class FaultMeasures
         switch (record.Kind)
         {
             case "fault.injected":
-                _faults.Add(new Open(Text(record, "fault"), Text(record, "kind"), t, _lastSpeedMPerS));
+                _faults.Add(new Open(Text(record, "fault"), Text(record, "kind"), t, _lastSpeedMPerS) { Target = Text(record, "target") });
                 break;
             case "rule.fired":
                 foreach (var f in _faults) f.DetectedS ??= t > f.StartS || t == f.StartS ? t : null;
@@ -49,6 +49,9 @@ public sealed class FaultMeasures
                 }
 
                 _lastSpeedMPerS = speed;
+                break;
+            case "vehicle.docked":
+                foreach (var f in _faults.Where(f => f.Kind == "VehicleLoss" && f.RecoveredS is null && f.Target == record.Source.Name && t >= f.StartS)) f.RecoveredS = t;
                 break;
             case "station.recovered":
                 foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
@@ -75,6 +78,7 @@ public sealed class FaultMeasures
                 "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",
                 "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it",
+                "VehicleLoss" => "the vehicle back in its dock",
                 _ => "none: a sensor fault leaves the physical state alone",
             })),
     ];
@@ -93,5 +97,6 @@ public sealed class FaultMeasures
         public double? ActionS { get; set; }
         public double? RecoveredS { get; set; }
         public bool LeftUpright { get; set; }
+        public string Target { get; init; } = "";
     }
 }

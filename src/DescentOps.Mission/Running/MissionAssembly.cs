@@ -25,7 +25,7 @@ public static class MissionAssembly
             new GroundTeamComponent(scenario, rules),
             new OnboardAutonomyComponent(rules),
             new FaultInjectorComponent(scenario),
-            .. scenario.Vehicles.Select(v => new VehicleComponent(v)),
+            .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario)),
         ];
     }
 }

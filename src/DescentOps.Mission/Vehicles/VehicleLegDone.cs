@@ -1,4 +1,4 @@
 namespace DescentOps.Mission.Vehicles;
 
-/// <summary>The vehicle's own timer: the current leg of its profile (down or up) is over.</summary>
-public sealed record VehicleLegDone(double EnergyJ);
+/// <summary>The vehicle's own timer: the leg under way is over, or (<see cref="BatteryEmpty"/>) its battery ran flat on it.</summary>
+public sealed record VehicleLegDone(bool BatteryEmpty);

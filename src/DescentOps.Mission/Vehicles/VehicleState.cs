@@ -1,4 +1,35 @@
+using DescentOps.Engine.Scheduling;
+
 namespace DescentOps.Mission.Vehicles;
 
-/// <summary>A vehicle's committed state: where it is in its profile and what is left in its battery.</summary>
-public sealed record VehicleState(bool Released, bool Finished, bool Descending, double BatteryJ, int ProfilesCompleted, double InterfaceDepthM);
+/// <summary>
+/// A vehicle's committed state. Battery, position and distance run are as of the start of <see cref="Leg"/> (or of the
+/// last stop when there is none): a leg is only committed at its end or when something interrupts it, so that the
+/// figures at a leg's end come from the planned leg itself and not from the rounding of event times.
+/// </summary>
+public sealed record VehicleState(
+    VehiclePhase Phase,
+    double BatteryJ,
+    OceanVector Position,
+    VehicleLeg? Leg,
+    VehicleLeg? Suspended,
+    int ProfilesCompleted,
+    int Cycle,
+    int LegIndex,
+    int Sortie,
+    double InterfaceDepthM,
+    double BasePressurePa,
+    double BaseTemperatureK,
+    double WaterDistanceM,
+    double EnergyUsedJ,
+    double EnergyChargedJ,
+    VehicleLinkState Link,
+    bool Recalled,
+    bool RecallHeld,
+    EventHandle? PendingTimer,
+    EventHandle? PendingTick)
+{
+    public bool Released => Phase != VehiclePhase.Stowed;
+
+    public bool Finished => Phase == VehiclePhase.Done;
+}

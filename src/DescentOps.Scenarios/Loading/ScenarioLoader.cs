@@ -39,6 +39,18 @@ public static class ScenarioLoader
     /// <summary>Aperture efficiency of the ground antenna: 0.6 (RULE, common practice for a large dish).</summary>
     public const double DefaultGroundDishEfficiency = 0.6;
 
+    /// <summary>Buoyancy pump efficiency when none is given: 0.5 (a rule of thumb, no source).</summary>
+    public const double DefaultPumpEfficiency = 0.5;
+
+    /// <summary>Spreading exponent when none is given: 1.5, the usual compromise for a bounded channel (common practice, no source).</summary>
+    public const double DefaultSpreadingExponent = 1.5;
+
+    /// <summary>pH when none is given: 8, about that of terrestrial seawater (from memory; an alien ocean's pH is unknown).</summary>
+    public const double DefaultPH = 8.0;
+
+    /// <summary>Time between a vehicle's data messages when none is given: 10 min (a modelling default, no source).</summary>
+    public const double DefaultMessageIntervalS = 600.0;
+
     public static Scenario LoadFile(string path)
     {
         string text;
@@ -100,21 +112,14 @@ public static class ScenarioLoader
                 probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad),
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
             BuildStation(station),
-            [.. root.List("vehicles").Select(v => new VehicleModel(
-                v.Text("name"),
-                v.Quantity("battery"),
-                v.Number("reserve"),
-                v.Quantity("hotel_power"),
-                v.Quantity("propulsion_power"),
-                v.Quantity("speed"),
-                v.Quantity("profile_depth"),
-                v.OptionalNumber("speed_variation") ?? 0.0))],
+            [.. root.List("vehicles").Select(BuildVehicle)],
             [.. root.List("faults").Select(BuildFault)],
             Rules(root, text),
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
             text,
-            root.OptionalSection("power") is { } power ? BuildPower(power) : null);
+            root.OptionalSection("power") is { } power ? BuildPower(power) : null,
+            BuildAcoustics(root.OptionalSection("acoustics")));
     }
 
     private static PowerModel BuildPower(BoundSection power)
@@ -221,6 +226,65 @@ public static class ScenarioLoader
             station.OptionalInteger("command_queue_capacity"));
     }
 
+    /// <summary>A vehicle; a missing speed or propulsion power reads as 0 here and is refused by the consistency check.</summary>
+    private static VehicleModel BuildVehicle(BoundSection v)
+    {
+        var glider = v.OptionalSection("glider");
+        var hull = v.OptionalSection("hull");
+        var current = v.OptionalSection("current");
+        var navigation = v.OptionalSection("navigation");
+        var dock = v.OptionalSection("dock");
+        var graver = Physics.Vehicles.GliderCoefficients.Graver2005;
+        var propeller = Physics.Vehicles.PropelledVehicle.Default;
+        return new VehicleModel(
+            v.Text("name"),
+            v.Quantity("battery"),
+            v.Number("reserve"),
+            v.Quantity("hotel_power"),
+            v.OptionalQuantity("propulsion_power") ?? 0.0,
+            v.OptionalQuantity("speed") ?? 0.0,
+            v.Quantity("profile_depth"),
+            v.OptionalNumber("speed_variation") ?? 0.0,
+            v.OptionalText("kind") == "glider" ? VehicleKind.Glider : VehicleKind.Propeller,
+            v.OptionalText("task") switch
+            {
+                "ice_mapping" => VehicleTask.IceMapping,
+                "seafloor_survey" => VehicleTask.SeafloorSurvey,
+                "sampling" => VehicleTask.Sampling,
+                _ => VehicleTask.WaterColumn,
+            },
+            v.OptionalQuantity("heading") ?? 0.0,
+            v.OptionalQuantity("track_length") ?? VehicleModel.DefaultTrackLengthM,
+            v.OptionalQuantity("sample_time") ?? VehicleModel.DefaultSampleTimeS,
+            glider is null ? null : new GliderSettings(
+                glider.Quantity("net_buoyancy"),
+                glider.Quantity("glide_angle"),
+                glider.OptionalNumber("lift_slope") ?? graver.LiftSlopeKgPerMRad,
+                glider.OptionalNumber("drag_offset") ?? graver.DragOffsetKgPerM,
+                glider.OptionalNumber("drag_quadratic") ?? graver.DragQuadraticKgPerMRad2,
+                glider.OptionalNumber("pump_efficiency") ?? DefaultPumpEfficiency),
+            hull is null ? null : new HullSettings(
+                hull.Quantity("diameter"),
+                hull.OptionalNumber("drag_coefficient") ?? propeller.DragCoefficient,
+                hull.OptionalNumber("propulsive_efficiency") ?? propeller.PropulsiveEfficiency),
+            current is null ? null : new OceanCurrent(current.Quantity("speed"), current.Quantity("direction")),
+            navigation is null ? null : new NavigationSettings(navigation.Number("error_per_distance"), navigation.OptionalNumber("random_walk") ?? 0.0),
+            dock is null ? null : new DockSettings(dock.Number("return_at"), dock.Quantity("charging_power"), (int)(dock.OptionalInteger("sorties") ?? 1)),
+            v.OptionalQuantity("max_out_of_range") ?? VehicleModel.DefaultMaxOutOfRangeS);
+    }
+
+    private static AcousticsModel? BuildAcoustics(BoundSection? a) => a is null ? null : new AcousticsModel(
+        a.Quantity("frequency"),
+        a.Number("source_level"),
+        a.Number("noise_level"),
+        a.Quantity("bandwidth"),
+        a.Number("detection_threshold"),
+        a.OptionalNumber("spreading") ?? DefaultSpreadingExponent,
+        a.Quantity("ocean_temperature"),
+        a.OptionalNumber("ph") ?? DefaultPH,
+        a.OptionalText("absorption") == "ainslie_mccolm" ? AbsorptionFormula.AinslieMcColm : AbsorptionFormula.FrancoisGarrison,
+        a.OptionalQuantity("message_interval") ?? DefaultMessageIntervalS);
+
     /// <summary>Reads a branch change file (see <see cref="ChangeFormat"/>), with the same located errors as a scenario.</summary>
     public static ScenarioChange LoadChange(string text, string sourceName)
     {
@@ -281,6 +345,14 @@ public static class ScenarioLoader
         f.OptionalText("point"),
         SensorValue(f),
         f.OptionalQuantity("angle"),
+        f.OptionalText("vehicle"),
+        f.OptionalText("cause") switch
+        {
+            "battery" => VehicleLossCause.Battery,
+            "entrapment" => VehicleLossCause.Entrapment,
+            "out_of_range" => VehicleLossCause.OutOfRange,
+            _ => null,
+        },
         f.OptionalText("when"),
         f.OptionalText("when") is null ? null : f.LocationOf("when"),
         f.OptionalQuantity("mean_interval"),
@@ -316,16 +388,16 @@ public static class ScenarioLoader
         var shell = root.Section("shell");
         CheckIntervals(shell.List("layers"), scenario.Shell.Layers.Select(l => (l.TopM, l.BottomM)).ToList(), "shell.layers", scenario.Shell.ThicknessM, errors);
         CheckIntervals(shell.List("debris_bands"), scenario.Shell.DebrisBands.Select(b => (b.TopM, b.BottomM)).ToList(), "shell.debris_bands", scenario.Shell.ThicknessM, errors);
-        if (scenario.Shell.Convection is { } convection && shell.OptionalSection("convection") is { } section)
+        if (scenario.Shell.Convection is { } convection && shell.OptionalSection("convection") is { } convectionSection)
         {
             if (convection.TopM + convection.BasalBoundaryM >= scenario.Shell.ThicknessM)
             {
-                errors.Add(new ScenarioError(section.LocationOf("top"), "shell.convection.top", "the lid and the basal boundary layer leave no room for the convecting layer within the shell"));
+                errors.Add(new ScenarioError(convectionSection.LocationOf("top"), "shell.convection.top", "the lid and the basal boundary layer leave no room for the convecting layer within the shell"));
             }
 
             if (convection.TemperatureK <= scenario.Shell.SurfaceTemperatureK)
             {
-                errors.Add(new ScenarioError(section.LocationOf("temperature"), "shell.convection.temperature", "a convecting layer is warmer than the surface"));
+                errors.Add(new ScenarioError(convectionSection.LocationOf("temperature"), "shell.convection.temperature", "a convecting layer is warmer than the surface"));
             }
         }
 
@@ -338,10 +410,89 @@ public static class ScenarioLoader
         for (var i = 0; i < scenario.Faults.Count; i++)
         {
             CheckFault(scenario.Faults[i], faults[i], $"faults[{i}]", errors);
+            if (scenario.Faults[i].Vehicle is { } name && scenario.Vehicles.All(v => v.Name != name))
+            {
+                errors.Add(new ScenarioError(faults[i].LocationOf("vehicle"), $"faults[{i}].vehicle", $"there is no vehicle named '{name}'"));
+            }
+        }
+
+        var vehicles = root.List("vehicles");
+        for (var i = 0; i < scenario.Vehicles.Count; i++)
+        {
+            CheckVehicle(scenario.Vehicles[i], vehicles[i], $"vehicles[{i}]", errors);
+        }
+
+        if (scenario.Acoustics is { } acoustics && root.OptionalSection("acoustics") is { } section)
+        {
+            // The absorption and sound-speed fits have validity ranges of their own; the ocean must lie inside them.
+            Refused(section.Location, "acoustics", errors, () =>
+            {
+                var s = Physics.Ocean.PracticalSalinity.FromAbsoluteKgPerKg(scenario.Shell.OceanSalinityKgPerKg);
+                _ = acoustics.Formula == AbsorptionFormula.AinslieMcColm
+                    ? Physics.Acoustics.SeawaterAbsorption.AinslieMcColmDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH)
+                    : Physics.Acoustics.SeawaterAbsorption.FrancoisGarrisonDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH);
+                _ = Physics.Ocean.SoundSpeed.UnescoMPerS(s, acoustics.OceanTemperatureK, 0.0);
+            });
         }
 
         if (scenario.Power is { } power) CheckPower(power, root.Section("power"), errors);
         CheckStation(scenario.Station, root.Section("station"), errors);
+    }
+
+    /// <summary>A propeller needs its speed and one source of power; a glider its trim, which must be one it can fly.</summary>
+    private static void CheckVehicle(VehicleModel vehicle, BoundSection section, string path, List<ScenarioError> errors)
+    {
+        if (vehicle.Kind == VehicleKind.Propeller)
+        {
+            if (section.OptionalQuantity("speed") is null)
+            {
+                errors.Add(new ScenarioError(section.Location, $"{path}.speed", "a propeller vehicle needs its speed"));
+            }
+
+            if ((section.OptionalQuantity("propulsion_power") is null) == (vehicle.Hull is null))
+            {
+                errors.Add(new ScenarioError(section.Location, $"{path}.propulsion_power", "a propeller vehicle takes either propulsion_power or a hull section, exactly one"));
+            }
+
+            if (vehicle.Glider is not null)
+            {
+                errors.Add(new ScenarioError(section.LocationOf("glider"), $"{path}.glider", "a glider section needs kind: glider"));
+            }
+        }
+        else
+        {
+            if (vehicle.Glider is not { } glider)
+            {
+                errors.Add(new ScenarioError(section.Location, $"{path}.glider", "a glider needs its glider section (net_buoyancy, glide_angle)"));
+                return;
+            }
+
+            if (section.OptionalQuantity("speed") is not null || section.OptionalQuantity("propulsion_power") is not null || vehicle.Hull is not null)
+            {
+                errors.Add(new ScenarioError(section.Location, $"{path}.speed", "a glider's speed follows from its buoyancy and trim: it takes no speed, propulsion_power or hull"));
+            }
+
+            var coefficients = new Physics.Vehicles.GliderCoefficients(0.0, glider.LiftSlopeKgPerMRad, glider.DragOffsetKgPerM, glider.DragQuadraticKgPerMRad2);
+            Refused(section.LocationOf("glider"), $"{path}.glider.glide_angle", errors, () => Physics.Vehicles.SteadyGlide.AngleOfAttackRad(coefficients, glider.GlideAngleRad));
+        }
+
+        if (vehicle.Dock is { } dock && dock.ReturnAtFraction < vehicle.ReserveFraction)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("dock"), $"{path}.dock.return_at", "return_at must not be below the reserve: the reserve is what the way home is paid from"));
+        }
+    }
+
+    /// <summary>Runs a physics model on the scenario's values and turns its range refusal into a located error.</summary>
+    private static void Refused(SourceLocation at, string path, List<ScenarioError> errors, Action model)
+    {
+        try
+        {
+            model();
+        }
+        catch (ArgumentOutOfRangeException exception)
+        {
+            errors.Add(new ScenarioError(at, path, exception.Message.Split(" (Parameter", StringSplitOptions.None)[0]));
+        }
     }
 
     /// <summary>The cross-field rules of the power section: the source's own fields, and a bus that has every heater.</summary>
@@ -505,6 +656,13 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.angle", fault.Kind == FaultKind.TiltKick ? "a tilt_kick needs its angle" : "'angle' belongs to a tilt_kick"));
         }
 
+        if ((fault.Kind == FaultKind.VehicleLoss) != (fault.Vehicle is not null && fault.Cause is not null))
+        {
+            errors.Add(new ScenarioError(section.Location, $"{path}.vehicle", fault.Kind == FaultKind.VehicleLoss
+                ? "a vehicle_loss names its vehicle and its cause (battery, entrapment or out_of_range)"
+                : "'vehicle' and 'cause' belong to a vehicle_loss"));
+        }
+
         if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
         {
             errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_bias needs the offset as a value"));
@@ -534,6 +692,7 @@ public static class ScenarioLoader
         "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
         "tilt_kick" => FaultKind.TiltKick,
         "station_upset" => FaultKind.StationUpset,
+        "vehicle_loss" => FaultKind.VehicleLoss,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -548,6 +707,7 @@ public static class ScenarioLoader
         FaultKind.SensorNoise => "sensor_noise",
         FaultKind.HeaterSegmentFailure => "heater_segment_failure",
         FaultKind.StationUpset => "station_upset",
+        FaultKind.VehicleLoss => "vehicle_loss",
         _ => "tilt_kick",
     };
 

@@ -32,4 +32,7 @@ public enum FaultKind
 
     /// <summary>A discharge resets the surface station, which relays nothing until its recovery time (the fault's duration) is over.</summary>
     StationUpset,
+
+    /// <summary>A vehicle meets what can lose it: a failing battery, entrapment, or the loss of its acoustic link.</summary>
+    VehicleLoss,
 }

@@ -2,7 +2,7 @@ namespace DescentOps.Scenarios.Model;
 
 /// <summary>
 /// A loaded, validated scenario: every quantity in SI units, every reference resolved. <see cref="Power"/> is null
-/// when the scenario has no power section.
+/// when the scenario has no power section; without <see cref="Acoustics"/> the vehicles' link to the probe is always up.
 /// </summary>
 public sealed record Scenario(
     string Name,
@@ -18,4 +18,5 @@ public sealed record Scenario(
     RunModel Run,
     string SourceName,
     string SourceText,
-    PowerModel? Power = null);
+    PowerModel? Power = null,
+    AcousticsModel? Acoustics = null);

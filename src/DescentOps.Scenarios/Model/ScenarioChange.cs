@@ -15,6 +15,13 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
                 $"the parent scenario has no fault named {string.Join(", ", missing)}")]);
         }
 
+        var stranger = AddFaults.FirstOrDefault(f => f.Vehicle is { } v && parent.Vehicles.All(p => p.Name != v));
+        if (stranger is not null)
+        {
+            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "add_faults",
+                $"fault '{stranger.Name}' names vehicle '{stranger.Vehicle}', which the parent scenario does not have")]);
+        }
+
         var faults = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).Concat(AddFaults).ToList();
         var clash = faults.GroupBy(f => f.Name).FirstOrDefault(g => g.Count() > 1);
         if (clash is not null)

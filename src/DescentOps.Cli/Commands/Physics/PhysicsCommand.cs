@@ -22,5 +22,6 @@ public static class PhysicsCommand
             StationSubcommand.Create(),
             LightTimeSubcommand.Create(),
             VehicleSubcommand.Create(),
+            GliderSubcommand.Create(),
         };
 }

@@ -1,0 +1,115 @@
+using DescentOps.Scenarios.Loading;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Scenarios.Tests;
+
+/// <summary>The vehicle and acoustics fields: read as written, defaults that keep the original vehicle, and located errors.</summary>
+public sealed class VehicleFormatTests
+{
+    private const string File = "bad.yaml";
+
+    private static ScenarioError SingleError(string text)
+    {
+        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
+        return Assert.Single(exception.Errors);
+    }
+
+    [Fact]
+    public void TheFixturesVehiclesAreReadInSi()
+    {
+        var scenario = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
+        var original = scenario.Vehicles[0];
+        Assert.False(original.UsesExtendedModel);
+        Assert.Equal(VehicleModel.DefaultMaxOutOfRangeS, original.MaxOutOfRangeS);
+
+        var surveyor = scenario.Vehicles[1];
+        Assert.Equal(VehicleTask.SeafloorSurvey, surveyor.Task);
+        Assert.Equal(Math.PI / 4, surveyor.HeadingRad, 12);
+        Assert.Equal(0.02, surveyor.Current!.SpeedMPerS, 12);
+        Assert.Equal(new DockSettings(0.4, 200.0, 3), surveyor.Dock);
+        Assert.Equal(6 * 3600.0, surveyor.MaxOutOfRangeS, 9);
+        Assert.Equal(1200.0, surveyor.SampleTimeS, 9);
+
+        var glider = scenario.Vehicles[2];
+        Assert.Equal(VehicleKind.Glider, glider.Kind);
+        Assert.Equal(25 * Math.PI / 180, glider.Glider!.GlideAngleRad, 12);
+
+        Assert.Equal(12e3, scenario.Acoustics!.FrequencyHz, 9);
+        Assert.Equal(AbsorptionFormula.AinslieMcColm, scenario.Acoustics.Formula);
+        var fault = scenario.Faults.Single(f => f.Kind == FaultKind.VehicleLoss);
+        Assert.Equal(("minnow-2", VehicleLossCause.Entrapment), (fault.Vehicle, fault.Cause));
+    }
+
+    [Fact]
+    public void AGliderWithoutItsTrimIsRefusedAtTheVehicle()
+    {
+        var text = ScenarioText.DefaultWith("    glider:\n      net_buoyancy: 0.3 kg\n      glide_angle: 25 deg\n      lift_slope: 132.5\n      drag_offset: 2.15\n      drag_quadratic: 25\n      pump_efficiency: 0.5\n", "");
+        var error = SingleError(text);
+        Assert.Equal("vehicles[2].glider", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "- name: minnow-3"), error.Location.Line);
+    }
+
+    [Fact]
+    public void AGlideShallowerThanTheWingCanFlyIsRefused()
+    {
+        // Shallowest glide atan(2·√(25 · 2.15)/132.5) ≈ 6.3° (computed); 5° cannot be trimmed.
+        var text = ScenarioText.DefaultWith("      glide_angle: 25 deg", "      glide_angle: 5 deg");
+        var error = SingleError(text);
+        Assert.Equal("vehicles[2].glider.glide_angle", error.FieldPath);
+        Assert.Contains("steady glide", error.Message);
+    }
+
+    [Fact]
+    public void APropellerVehicleTakesPropulsionPowerOrAHullNotBoth()
+    {
+        var text = ScenarioText.DefaultWith("    speed: 0.35 m/s\n", "    speed: 0.35 m/s\n    propulsion_power: 30 W\n");
+        Assert.Equal("vehicles[1].propulsion_power", SingleError(text).FieldPath);
+    }
+
+    [Fact]
+    public void AVehicleLossNamesAVehicleThatExists()
+    {
+        var text = ScenarioText.DefaultWith("    vehicle: minnow-2\n", "    vehicle: minnow-9\n");
+        var error = SingleError(text);
+        Assert.Equal("faults[1].vehicle", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "vehicle: minnow-9"), error.Location.Line);
+    }
+
+    [Fact]
+    public void AVehicleLossNeedsItsCause()
+    {
+        var text = ScenarioText.DefaultWith("    cause: entrapment\n", "");
+        Assert.Equal("faults[1].vehicle", SingleError(text).FieldPath);
+    }
+
+    [Fact]
+    public void AnOceanOutsideTheAbsorptionFitIsRefusedAtTheAcousticsSection()
+    {
+        // The fixture's ocean holds 12 g/kg (practical salinity about 11.9); Francois-Garrison was fitted for 30 to 35.
+        var text = ScenarioText.DefaultWith("  absorption: ainslie_mccolm", "  absorption: francois_garrison");
+        var error = SingleError(text);
+        Assert.Equal("acoustics", error.FieldPath);
+        Assert.Contains("Francois-Garrison", error.Message);
+        Assert.Equal(ScenarioText.LineOf(text, "  frequency: 12 kHz"), error.Location.Line);
+    }
+
+    [Fact]
+    public void AReturnLevelBelowTheReserveIsRefused()
+    {
+        var text = ScenarioText.DefaultWith("      return_at: 0.4", "      return_at: 0.1");
+        Assert.Equal("vehicles[1].dock.return_at", SingleError(text).FieldPath);
+    }
+
+    [Fact]
+    public void ABranchCannotStrikeAVehicleTheParentDoesNotHave()
+    {
+        var parent = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
+        const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: minnow-1\n    cause: battery\n";
+        Assert.Contains(parent.Vehicles, v => v.Name == "minnow-1");
+        Assert.Equal("minnow-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Vehicle);
+
+        var unknown = ScenarioLoader.LoadChange(known.Replace("minnow-1", "minnow-7", StringComparison.Ordinal), "change.yaml");
+        var exception = Assert.Throws<ScenarioException>(() => unknown.ApplyTo(parent));
+        Assert.Contains("minnow-7", Assert.Single(exception.Errors).Message);
+    }
+}
