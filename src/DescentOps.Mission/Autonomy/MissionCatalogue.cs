@@ -29,6 +29,7 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.wall_power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW),
             new NumericPointSpec("probe.energy_used", Dimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
             new NumericPointSpec("probe.tilt", Dimension.Angle, -Math.PI / 2, Math.PI / 2),
+            new NumericPointSpec("probe.buffer_fill", Dimension.Dimensionless, 0, 1),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
@@ -39,6 +40,7 @@ public static class MissionCatalogue
             new(MissionIds.Probe, "pause_descent", []),
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),
+            new(MissionIds.Probe, "drop_relay", []),
         ];
         return new TelemetryCatalogue(points, commands);
     }

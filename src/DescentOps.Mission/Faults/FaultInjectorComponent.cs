@@ -26,7 +26,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     public static ComponentId TargetOf(FaultKind kind) => kind switch
     {
         FaultKind.PowerDip => MissionIds.Probe,
-        FaultKind.TetherBreak => MissionIds.Tether,
+        FaultKind.TetherBreak or FaultKind.SpoolJam or FaultKind.RelayFailure => MissionIds.Tether,
         FaultKind.StationFailure => MissionIds.Station,
         FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout => MissionIds.Probe,
         FaultKind.HeaterSegmentFailure or FaultKind.TiltKick => MissionIds.Probe,
@@ -73,6 +73,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             RecordField.Of("kind", fault.Kind.ToString()),
             RecordField.Of("target", TargetOf(fault.Kind).Name),
             RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("relay", fault.RelayNumber is { } relay ? $"relay-{relay}" : ""),
             RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
         context.Schedule(TargetOf(fault.Kind), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
         if (fault.DurationS is { } duration)

@@ -69,6 +69,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case FaultCleared { Fault.Kind: FaultKind.PowerDip } cleared:
                 return Replan(Retune(WithDips(Advance(state, context.Now), state.ActiveDips.Remove(cleared.Fault.Name)), context), context);
 
+            case LinkBufferFill fill:
+                return state with { BufferFill = fill.Fraction };
+
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
 
@@ -119,6 +122,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             ("probe", "pause_descent") => state with { Paused = true },
             ("probe", "resume_descent") => state with { Paused = false },
             ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = _scenario.Probe.MaxWallPowerW },
+            ("probe", "drop_relay") => LetRelayGo(state, command, context),
             _ => throw new InvalidOperationException($"The probe has no command {action}."),
         };
         context.Record("command.executed", Severity.Notice,
@@ -131,6 +135,13 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("wall_setpoint_w", next.WallSetpointW),
             RecordField.Of("paused", next.Paused));
         return next;
+    }
+
+    /// <summary>A relay leaves the probe at its head depth; the link takes it from there.</summary>
+    private static ProbeState LetRelayGo(ProbeState state, Telecommand command, ComponentContext context)
+    {
+        context.Schedule(MissionIds.Tether, SimDuration.Zero, new DropRelay(state.DepthM, command.Origin), MissionPriority.Command);
+        return state;
     }
 
     /// <summary>Beyond the scenario's tilt limit the probe is lost: the run ends as MissionLost.</summary>
@@ -408,7 +419,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("wall_power_w", WallPowerW(state)),
             RecordField.Of("energy_used_j", state.EnergyUsedJ),
             RecordField.Of("tilt_rad", state.TiltRad),
-            RecordField.Of("lateral_drift_m", state.LateralDriftM));
+            RecordField.Of("lateral_drift_m", state.LateralDriftM),
+            RecordField.Of("buffer_fill", state.BufferFill));
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + _frameInterval };
@@ -424,6 +436,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         ("probe.wall_power", WallPowerW(state)),
         ("probe.energy_used", state.EnergyUsedJ),
         ("probe.tilt", state.TiltRad),
+        ("probe.buffer_fill", state.BufferFill),
     ];
 
     private ProbeState Breakthrough(ProbeState state, ComponentContext context)

@@ -11,6 +11,7 @@ namespace DescentOps.Mission.Probe;
 /// The probe moves along its axis, tilted by <see cref="TiltRad"/> from the vertical in its steering plane, so depth
 /// grows at v·cos θ and <see cref="LateralDriftM"/> at v·sin θ.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
+/// <see cref="BufferFill"/> is the share of the probe-end frame buffer in use, as the link last told it.
 /// </summary>
 public sealed record ProbeState(
     ProbeRegime Regime,
@@ -38,7 +39,8 @@ public sealed record ProbeState(
     double TiltRad,
     double LateralDriftM,
     double SegmentLossFraction,
-    double SteeringW);
+    double SteeringW,
+    double BufferFill = 0.0);
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>
 public sealed record ArmedDepthTrigger(int FaultIndex, double DepthM);

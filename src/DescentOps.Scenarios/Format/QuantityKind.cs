@@ -19,6 +19,9 @@ public enum QuantityKind
     Frequency,
     AbsorbedDose,
     Density,
+
+    /// <summary>A dimensionless share (a buffer's fill): a bare number or a percentage.</summary>
+    Fraction,
 }
 
 public static class QuantityKindInfo
@@ -39,6 +42,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => typeof(Frequency),
         QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
         QuantityKind.Density => typeof(Density),
+        QuantityKind.Fraction => typeof(Ratio),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -59,6 +63,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz",
         QuantityKind.AbsorbedDose => "Gy",
         QuantityKind.Density => "kg/m³",
+        QuantityKind.Fraction => "1",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 
@@ -79,6 +84,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz, kHz, MHz, GHz",
         QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
         QuantityKind.Density => "kg/m³, g/cm³",
+        QuantityKind.Fraction => "%, or a bare number",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };
 }

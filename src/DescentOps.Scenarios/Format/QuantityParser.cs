@@ -13,6 +13,14 @@ public static partial class QuantityParser
     public static bool TryParseSi(QuantityKind kind, string text, out double valueSi, out string error)
     {
         var trimmed = text.Trim();
+        if (kind == QuantityKind.Fraction && NumberOnly().IsMatch(trimmed))
+        {
+            // A share needs no unit: "0.5" is a half, as "50 %" is.
+            valueSi = double.Parse(trimmed, CultureInfo.InvariantCulture);
+            error = "";
+            return true;
+        }
+
         if (Quantity.TryParse(CultureInfo.InvariantCulture, kind.UnitsNetType(), trimmed, out IQuantity? quantity))
         {
             // UnitsNet's base unit is SI for every kind used here except angles (degrees there, radians here).

@@ -38,11 +38,15 @@ public sealed class BoundSection
 
     public long Integer(string name) => Get<long>(name);
 
+    public long? OptionalInteger(string name) => GetOptional<long>(name);
+
     public string Text(string name) => Get<string>(name);
 
     public string? OptionalText(string name) => GetOptionalRef<string>(name);
 
     public BoundSection Section(string name) => Get<BoundSection>(name);
+
+    public BoundSection? OptionalSection(string name) => GetOptionalRef<BoundSection>(name);
 
     public IReadOnlyList<BoundSection> List(string name) => GetOptionalRef<IReadOnlyList<BoundSection>>(name) ?? [];
 

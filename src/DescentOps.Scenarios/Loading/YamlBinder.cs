@@ -92,7 +92,8 @@ internal sealed partial class YamlBinder
             if (BindSection(sequence.Children[i], spec.Item, $"{path}[{i}]") is { } item) items.Add(item);
         }
 
-        var duplicate = items.GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
+        // Entries without a name (a relay's drop depth) have nothing to clash.
+        var duplicate = spec.Item.Find("name") is null ? null : items.GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
         if (duplicate is not null)
         {
             var second = duplicate.Skip(1).First();

@@ -26,4 +26,10 @@ public enum FaultKind
 
     /// <summary>A sudden change of tilt as the head meets a debris band or an inclined layer.</summary>
     TiltKick,
+
+    /// <summary>A dropped radio relay stops receiving and sending; the frames it holds wait in it.</summary>
+    RelayFailure,
+
+    /// <summary>The spool jams and the paying-out fibre snaps: a tether break with its own cause.</summary>
+    SpoolJam,
 }

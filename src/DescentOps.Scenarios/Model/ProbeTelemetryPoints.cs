@@ -17,6 +17,7 @@ public static class ProbeTelemetryPoints
         ("probe.wall_power", QuantityKind.Power),
         ("probe.energy_used", QuantityKind.Energy),
         ("probe.tilt", QuantityKind.Angle),
+        ("probe.buffer_fill", QuantityKind.Fraction),
     ];
 
     public static QuantityKind? KindOf(string name) =>

@@ -14,4 +14,5 @@ public sealed record Scenario(
     RulesSource Rules,
     RunModel Run,
     string SourceName,
-    string SourceText);
+    string SourceText,
+    RelayPlanModel? Relays = null);
