@@ -48,12 +48,12 @@ public sealed class TetherComponent : SimComponent<TetherState>
     public override TetherState InitialState => new(
         0.0, false, null, 0, 0, 0, true,
         FrameHold<TelemetryFrame>.Empty(_tether.BufferFrames), FrameHold<Telecommand>.Empty(_tether.BufferFrames),
-        [], 0, [], null, 0, 0, 0.0);
+        [], 0, [], null, 0, 0, 0.0, 0.0);
 
     public override TetherState Handle(TetherState state, object message, ComponentContext context) => message switch
     {
         RunStarted => Start(state, context),
-        TelemetryFrame frame => Report(Route(Fibre(DropPlanned(PayOut(state, frame.PaidOutM, context), context), context) with { FramesProduced = state.FramesProduced + 1 }, frame, context), context),
+        TelemetryFrame frame => Report(OnFrame(state, frame, context), context),
         Telecommand command => Report(CarryDown(state, command, context), context),
         DropRelay drop => Report(Route(Drop(state, drop.DepthM, drop.Origin, context), null, context), context),
         RelayBatteryDue due => Report(Route(BatteryFlat(state, due.Number, context), null, context), context),
@@ -79,6 +79,13 @@ public sealed class TetherComponent : SimComponent<TetherState>
             RecordField.Of("relays_carried", _plan?.Carried ?? 0),
             RecordField.Of("relay_drops_planned", _plannedDropsM.Count));
         return state;
+    }
+
+    /// <summary>A frame from the probe: the fibre pays out to its depth, relays due there go, then the frame is routed.</summary>
+    private TetherState OnFrame(TetherState state, TelemetryFrame frame, ComponentContext context)
+    {
+        var paidOut = PayOut(state, frame.PaidOutM, context) with { ProbeDepthM = frame.PaidOutM, FramesProduced = state.FramesProduced + 1 };
+        return Route(Fibre(DropPlanned(paidOut, context), context), frame, context);
     }
 
     private TetherState PayOut(TetherState state, double depthM, ComponentContext context)
@@ -117,7 +124,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     /// <summary>The relays whose drop depth the head has passed go into the channel.</summary>
     private TetherState DropPlanned(TetherState state, ComponentContext context)
     {
-        while (state.NextPlannedDrop < _plannedDropsM.Count && _plannedDropsM[state.NextPlannedDrop] <= state.PaidOutM)
+        while (state.NextPlannedDrop < _plannedDropsM.Count && _plannedDropsM[state.NextPlannedDrop] <= state.ProbeDepthM)
         {
             state = Drop(state with { NextPlannedDrop = state.NextPlannedDrop + 1 }, _plannedDropsM[state.NextPlannedDrop], "plan", context);
         }
@@ -154,26 +161,27 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private static TetherState BatteryFlat(TetherState state, int number, ComponentContext context)
     {
         var relay = state.Relays.Single(r => r.Number == number);
-        context.Record("relay.battery_flat", Severity.Alarm,
-            RecordField.Of("relay", relay.Name),
-            RecordField.Of("depth_m", relay.DepthM),
-            RecordField.Of("frames_held", relay.Hold.Count));
         foreach (var frame in relay.Hold.Items)
         {
             LostFrame(frame, relay.Name, "the relay's battery went flat", context);
         }
 
         var dead = relay with { Dead = true, Hold = relay.Hold.Cleared() };
-        return state with { Relays = state.Relays.Replace(relay, dead), FramesLost = state.FramesLost + relay.Hold.Count };
+        var next = state with { Relays = state.Relays.Replace(relay, dead), FramesLost = state.FramesLost + relay.Hold.Count };
+        context.Record("relay.battery_flat", Severity.Alarm, WithLedger(next,
+            RecordField.Of("relay", relay.Name),
+            RecordField.Of("depth_m", relay.DepthM),
+            RecordField.Of("frames_lost_with_it", relay.Hold.Count)));
+        return next;
     }
 
     private static TetherState RelayFault(TetherState state, FaultModel fault, bool starts, ComponentContext context)
     {
         var number = fault.RelayNumber!.Value;
-        context.Record(starts ? "relay.failed" : "relay.recovered", starts ? Severity.Alarm : Severity.Notice,
+        context.Record(starts ? "relay.failed" : "relay.recovered", starts ? Severity.Alarm : Severity.Notice, WithLedger(state,
             RecordField.Of("relay", $"relay-{number}"),
             RecordField.Of("fault", fault.Name),
-            RecordField.Of("dropped", state.Relays.Any(r => r.Number == number)));
+            RecordField.Of("dropped", state.Relays.Any(r => r.Number == number))));
         return state with { FailedRelays = starts ? state.FailedRelays.Add(number) : state.FailedRelays.Remove(number) };
     }
 
@@ -197,9 +205,8 @@ public sealed class TetherComponent : SimComponent<TetherState>
         if (incoming is null) return state;
 
         var chain = Chain(state);
-        // The frame being sent needs no buffer of its own when the first hop can take it at once.
-        var passes = chain.HopCloses[0] && (chain.Holds.Count == 1 || chain.Holds[1].Room > 0);
-        if (state.ProbeHold.Room > 0 || passes)
+        // The frame being sent needs no buffer of its own when it can leave the probe at once.
+        if (state.ProbeHold.Room > 0 || StoreAndForward.CanLeave(chain.Holds, chain.HopCloses, 0))
         {
             var hold = state.ProbeHold with { Capacity = state.ProbeHold.Capacity + 1 };
             state = SettleRelays(state with { ProbeHold = hold.Offer(incoming)! }, context);
@@ -214,7 +221,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private ChainNow Chain(TetherState state)
     {
         var working = state.Relays.Where(r => !r.Dead && !state.FailedRelays.Contains(r.Number)).Reverse().ToList();
-        var depths = new List<double>(working.Count + 1) { state.PaidOutM };
+        var depths = new List<double>(working.Count + 1) { state.ProbeDepthM };
         depths.AddRange(working.Select(r => r.DepthM));
         var closes = new bool[depths.Count];
         var margins = new double[depths.Count];
@@ -249,11 +256,11 @@ public sealed class TetherComponent : SimComponent<TetherState>
         if (_radio is not null && pathUp != state.RelayPathUp)
         {
             var open = Array.IndexOf(chain.HopCloses, false);
-            context.Record(pathUp ? "relay.path_up" : "relay.path_down", pathUp ? Severity.Notice : Severity.Alarm,
+            context.Record(pathUp ? "relay.path_up" : "relay.path_down", pathUp ? Severity.Notice : Severity.Alarm, WithLedger(state,
                 RecordField.Of("relays_working", chain.Working.Count),
                 RecordField.Of("open_hop_from", open < 0 ? "" : open == 0 ? "probe" : chain.Working[open - 1].Name),
                 RecordField.Of("open_hop_margin_db", open < 0 ? 0.0 : chain.Margins[open]),
-                RecordField.Of("frames_held", state.FramesHeld));
+                RecordField.Of("frames_released", settled.Delivered.Count)));
         }
 
         state = state with { RelayPathUp = pathUp };
@@ -304,6 +311,20 @@ public sealed class TetherComponent : SimComponent<TetherState>
         return state with { ReportedFill = fill };
     }
 
+    /// <summary>
+    /// The frame ledger carried by every record of a change in the link, so a post-mortem can see what the link held at
+    /// that moment: produced = by fibre + by relays + held + lost.
+    /// </summary>
+    private static RecordField[] WithLedger(TetherState state, params RecordField[] fields) =>
+    [
+        .. fields,
+        RecordField.Of("frames_produced", state.FramesProduced),
+        RecordField.Of("frames_by_fibre", state.FramesCarried),
+        RecordField.Of("frames_by_relays", state.FramesByRelays),
+        RecordField.Of("frames_held", state.FramesHeld),
+        RecordField.Of("frames_lost", state.FramesLost),
+    ];
+
     private SimDuration FibreDelay(TetherState state) => SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS);
 
     /// <summary>
@@ -323,10 +344,10 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private static TetherState Break(TetherState state, string cause, ComponentContext context)
     {
         if (state.Broken) return state;
-        context.Record("tether.broken", Severity.Alarm,
+        context.Record("tether.broken", Severity.Alarm, WithLedger(state,
             RecordField.Of("cause", cause),
             RecordField.Of("paid_out_m", state.PaidOutM),
-            RecordField.Of("frames_carried", state.FramesCarried));
+            RecordField.Of("frames_carried", state.FramesCarried)));
         return state with { Broken = true, BrokenAtDepthM = state.PaidOutM, FibreUp = false };
     }
 

@@ -8,6 +8,7 @@ namespace DescentOps.Mission.Tether;
 /// carried; the frames held at the probe end and the commands held at the surface end while no path is up; the relays
 /// dropped so far (in drop order), those failed by a fault, and whether the relay chain reaches the surface (null while
 /// the fibre carries the frames and nobody looks).
+/// <see cref="ProbeDepthM"/> is the head's depth from the latest frame, which goes on growing after the fibre parts.
 /// <see cref="FramesProduced"/> = <see cref="FramesCarried"/> (by fibre) + <see cref="FramesByRelays"/> + held + <see cref="FramesLost"/>.
 /// </summary>
 public sealed record TetherState(
@@ -26,7 +27,8 @@ public sealed record TetherState(
     bool? RelayPathUp,
     long FramesProduced,
     long FramesByRelays,
-    double ReportedFill)
+    double ReportedFill,
+    double ProbeDepthM)
 {
     public long FramesHeld => ProbeHold.Count + Relays.Sum(r => (long)r.Hold.Count);
 }
