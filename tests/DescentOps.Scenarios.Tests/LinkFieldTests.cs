@@ -8,13 +8,7 @@ public sealed class LinkFieldTests
 {
     private const string File = "bad.yaml";
 
-    private static ScenarioError SingleError(string text)
-    {
-        var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
-        var error = Assert.Single(exception.Errors);
-        Assert.Equal(File, error.Location.File);
-        return error;
-    }
+    private static ScenarioError SingleError(string text) => MalformedScenarioTests.SingleError(text);
 
     [Fact]
     public void WithoutTheNewFieldsTheLinkIsTodaysHealthyFibreWithNoBufferAndNoRelays()

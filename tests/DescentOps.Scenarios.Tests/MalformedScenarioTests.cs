@@ -7,7 +7,7 @@ public sealed class MalformedScenarioTests
 {
     private const string File = "bad.yaml";
 
-    private static ScenarioError SingleError(string text)
+    internal static ScenarioError SingleError(string text)
     {
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
         var error = Assert.Single(exception.Errors);
