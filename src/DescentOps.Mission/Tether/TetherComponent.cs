@@ -251,7 +251,8 @@ public sealed class TetherComponent : SimComponent<TetherState>
         }
 
         state = state with { ProbeHold = settled.Holds[0], Relays = relays, FramesByRelays = state.FramesByRelays + settled.Delivered.Count };
-        var pathUp = chain.Working.Count > 0 && chain.HopCloses.All(c => c);
+        // The probe's own radio is the chain's bottom end: in cold ice it may reach the surface before any relay is down.
+        var pathUp = _radio is not null && chain.HopCloses.All(c => c);
         if (state.FibreUp) return state with { RelayPathUp = null };
         if (_radio is not null && pathUp != state.RelayPathUp)
         {
