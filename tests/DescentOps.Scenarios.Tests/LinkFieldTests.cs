@@ -37,6 +37,17 @@ public sealed class LinkFieldTests
     }
 
     [Fact]
+    public void WithAnIntervalAndNoCountTheProbeCarriesOneRelayPerWholeIntervalAboveTheOcean()
+    {
+        // Computed: a 2.5 km shell and 400 m intervals give drops at 400, 800, ..., 2400 m: six relays; 500 m intervals
+        // give 500 ... 2000 m (2500 m is the ocean): four.
+        string Plan(string interval) => ScenarioText.DefaultWith("  carried: 3\n  drops:\n    - depth: 600 m\n    - depth: 1200 m\n", $"  interval: {interval}\n")
+            .Replace("    relay: relay-2", "    relay: relay-1", StringComparison.Ordinal);
+        Assert.Equal(6, ScenarioLoader.LoadText(Plan("400 m"), File).Relays!.Carried);
+        Assert.Equal(4, ScenarioLoader.LoadText(Plan("500 m"), File).Relays!.Carried);
+    }
+
+    [Fact]
     public void ARelayFailureMustNameARelayTheProbeCarries()
     {
         var beyond = ScenarioText.DefaultWith("    relay: relay-2", "    relay: relay-4");

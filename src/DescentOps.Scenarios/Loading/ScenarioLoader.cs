@@ -85,7 +85,7 @@ public static class ScenarioLoader
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
             text,
-            RelayPlan(root.OptionalSection("relays")));
+            RelayPlan(root.OptionalSection("relays"), shell.Quantity("thickness")));
     }
 
     private static FibreOpticsModel Optics(BoundSection tether)
@@ -109,14 +109,17 @@ public static class ScenarioLoader
     /// The relays, with the defaults of the physics reference's relay example (30 dBm, 0 dBi, 100 MHz, 10 kHz, NF 5 dB,
     /// SNR 10 dB, margin 6 dB) and its 3 dB rule for borehole losses.
     /// </summary>
-    private static RelayPlanModel? RelayPlan(BoundSection? relays)
+    private static RelayPlanModel? RelayPlan(BoundSection? relays, double shellThicknessM)
     {
         if (relays is null) return null;
         var drops = relays.List("drops").Select(d => d.Quantity("depth")).Order().ToList();
         var interval = relays.OptionalQuantity("interval");
+        // Without a count, the probe carries one relay for each planned drop: each listed depth, or each whole interval
+        // above the ocean.
+        var planned = interval is { } every ? (int)Math.Min(1000, Math.Ceiling(shellThicknessM / every) - 1) : drops.Count;
         var carried = relays.OptionalInteger("carried");
         return new RelayPlanModel(
-            (int)(carried ?? drops.Count),
+            (int)(carried ?? Math.Max(planned, 0)),
             interval,
             drops,
             relays.OptionalNumber("transmit_power") ?? 30.0,
