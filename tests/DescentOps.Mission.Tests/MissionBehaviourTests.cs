@@ -159,7 +159,7 @@ public sealed class MissionBehaviourTests
         var broken = sink.OfKind("tether.broken").Single();
         Assert.Equal(60 * 86400.0, broken.Time.SecondsSinceEpoch, 6);
         var framesAfter = sink.OfKind("probe.telemetry").Count(r => r.Time >= broken.Time);
-        Assert.Equal(framesAfter, sink.OfKind("tether.frame_lost").Count());
+        Assert.Equal(framesAfter, sink.OfKind("data.lost").Count());
         Assert.Equal(framesAfter, summary.FramesLost);
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
     }

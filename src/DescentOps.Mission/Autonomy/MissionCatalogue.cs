@@ -37,6 +37,7 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.tilt", Dimension.Angle, -Math.PI / 2, Math.PI / 2),
             new NumericPointSpec("probe.battery_soc", Dimension.Dimensionless, 0, 1),
             new NumericPointSpec("probe.bus_power_available", Dimension.Power, 0, maxBusW),
+            new NumericPointSpec("probe.buffer_fill", Dimension.Dimensionless, 0, 1),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
@@ -47,6 +48,7 @@ public static class MissionCatalogue
             new(MissionIds.Probe, "pause_descent", []),
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),
+            new(MissionIds.Probe, "drop_relay", []),
             .. power is null ? [] : BusCommands(power),
             // Each vehicle is its own actuator, so that rules recalling different vehicles never exclude each other.
             .. scenario.Vehicles.Select(v => new CommandSpec(MissionIds.Vehicle(v.Name), Vehicles.VehicleComponent.RecallCommand, [])),

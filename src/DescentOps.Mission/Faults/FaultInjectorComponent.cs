@@ -32,7 +32,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     public static ComponentId TargetOf(FaultModel fault) => fault.Kind switch
     {
         FaultKind.PowerDip => MissionIds.Probe,
-        FaultKind.TetherBreak => MissionIds.Tether,
+        FaultKind.TetherBreak or FaultKind.SpoolJam or FaultKind.RelayFailure => MissionIds.Tether,
         FaultKind.StationFailure or FaultKind.StationUpset => MissionIds.Station,
         FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise => MissionIds.Probe,
         FaultKind.HeaterSegmentFailure or FaultKind.TiltKick => MissionIds.Probe,
@@ -133,6 +133,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             RecordField.Of("kind", fault.Kind.ToString()),
             RecordField.Of("target", TargetOf(fault).Name),
             RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("relay", fault.RelayNumber is { } relay ? $"relay-{relay}" : ""),
             RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
         context.Schedule(TargetOf(fault), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
         if (fault.DurationS is { } duration)

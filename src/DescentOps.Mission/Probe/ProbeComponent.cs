@@ -90,6 +90,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                     RecordField.Of("log_reduction", cleared.LogReduction));
                 return Replan(Retune(Advance(state, context.Now) with { HeldAtSurface = false }, context), context);
 
+            case LinkBufferFill fill:
+                return state with { BufferFill = fill.Fraction };
+
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
 
@@ -148,6 +151,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = _scenario.Probe.MaxWallPowerW },
             (Autonomy.MissionCatalogue.Bus, "shed_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Add(Load()) } },
             (Autonomy.MissionCatalogue.Bus, "restore_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Remove(Load()) } },
+            ("probe", "drop_relay") => LetRelayGo(state, command, context),
             _ => throw new InvalidOperationException($"The probe has no command {action}."),
         };
         context.Record("command.executed", Severity.Notice,
@@ -160,6 +164,13 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("wall_setpoint_w", next.WallSetpointW),
             RecordField.Of("paused", next.Paused));
         return next;
+    }
+
+    /// <summary>A relay leaves the probe at its head depth; the link takes it from there.</summary>
+    private static ProbeState LetRelayGo(ProbeState state, Telecommand command, ComponentContext context)
+    {
+        context.Schedule(MissionIds.Tether, SimDuration.Zero, new DropRelay(state.DepthM, command.Origin), MissionPriority.Command);
+        return state;
     }
 
     /// <summary>Beyond the scenario's tilt limit the probe is lost: the run ends as MissionLost.</summary>
@@ -513,6 +524,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("energy_used_j", state.EnergyUsedJ),
             RecordField.Of("tilt_rad", state.TiltRad),
             RecordField.Of("lateral_drift_m", state.LateralDriftM),
+            RecordField.Of("buffer_fill", state.BufferFill),
         ];
         if (state.Bus is not { } bus) return fields;
         var e = bus.Energy;
@@ -547,6 +559,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         ("probe.tilt", state.TiltRad),
         ("probe.battery_soc", state.Bus?.StateOfCharge ?? 0.0),
         ("probe.bus_power_available", state.Bus?.Allocation.AvailablePowerW ?? BusPowerW(state)),
+        ("probe.buffer_fill", state.BufferFill),
     ];
 
     private ProbeState Breakthrough(ProbeState state, ComponentContext context)

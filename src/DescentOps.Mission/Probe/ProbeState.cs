@@ -13,6 +13,7 @@ namespace DescentOps.Mission.Probe;
 /// <see cref="HeldAtSurface"/> keeps the probe still, heaters off, until the station ends the surface dwell.
 /// <see cref="ActiveDips"/> holds the power dips in force by name; <see cref="PowerFraction"/> is the smallest share they leave.
 /// <see cref="Bus"/> is null for a probe without a power system (a dip then scales the heater power directly).
+/// <see cref="BufferFill"/> is the share of the probe-end frame buffer in use, as the link last told it.
 /// </summary>
 public sealed record ProbeState(
     ProbeRegime Regime,
@@ -43,7 +44,8 @@ public sealed record ProbeState(
     double SteeringW,
     ProbeBusState? Bus = null,
     bool HeldAtSurface = false,
-    int VehiclesLost = 0)
+    int VehiclesLost = 0,
+    double BufferFill = 0.0)
 {
     /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
     public double DebrisAccountedToM { get; init; }

@@ -53,6 +53,12 @@ public sealed class FaultMeasures
             case "vehicle.docked":
                 foreach (var f in _faults.Where(f => f.Kind == "VehicleLoss" && f.RecoveredS is null && f.Target == record.Source.Name && t >= f.StartS)) f.RecoveredS = t;
                 break;
+            case "relay.path_up":
+                foreach (var f in _faults.Where(f => f.Kind is "TetherBreak" or "SpoolJam" && f.RecoveredS is null && t >= f.StartS)) f.RecoveredS = t;
+                break;
+            case "relay.recovered":
+                foreach (var f in _faults.Where(f => f.Kind == "RelayFailure" && f.RecoveredS is null && f.Name == Text(record, "fault"))) f.RecoveredS = t;
+                break;
             case "station.recovered":
                 foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
                 break;
@@ -77,6 +83,8 @@ public sealed class FaultMeasures
                 "StationFailure" => "station relaying again",
                 "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",
+                "TetherBreak" or "SpoolJam" => "frames going home again by the relays (the fibre itself stays broken)",
+                "RelayFailure" => "the relay working again",
                 "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it",
                 "VehicleLoss" => "the vehicle back in its dock",
                 _ => "none: a sensor fault leaves the physical state alone",

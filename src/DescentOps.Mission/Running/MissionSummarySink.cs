@@ -44,7 +44,8 @@ public sealed class MissionSummarySink : IJournalSink
             case "ground.telemetry":
                 _framesReceived++;
                 break;
-            case "tether.frame_lost" or "station.frame_lost":
+            case "data.lost" when record.Fields.Any(f => f.Name == "kind" && f.Text == "telemetry"):
+            case "station.frame_lost":
                 _framesLost++;
                 break;
             case "station.data_lost" when Text(record, "data") == "telemetry":

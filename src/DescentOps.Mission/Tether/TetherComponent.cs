@@ -1,37 +1,92 @@
+using System.Collections.Immutable;
 using DescentOps.Engine.Components;
 using DescentOps.Engine.Journaling;
 using DescentOps.Mission.Messages;
+using DescentOps.Mission.Probe;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
 
 namespace DescentOps.Mission.Tether;
 
 /// <summary>
-/// The fibre from the probe to the surface. It pays out as the probe descends (the fibre freezes into the
-/// borehole behind it, so paid-out length equals depth), carries each frame up after the light's travel
-/// time along the fibre, and parts when the spool runs out or a fault breaks it.
+/// The link from the probe to the surface. The fibre pays out as the probe descends (it freezes into the borehole
+/// behind it, so paid-out length equals depth), carries each frame up after the light's travel time while its optical
+/// budget closes, and parts when the spool runs out, jams, or a fault breaks it. Radio relays dropped into the melt
+/// channel form a backup chain to a receiver at the surface; while the fibre is down, frames cross every hop that
+/// closes and wait in the probe's or a relay's buffer below one that does not. Every frame that cannot be kept is
+/// logged as <c>data.lost</c>.
 /// </summary>
 public sealed class TetherComponent : SimComponent<TetherState>
 {
     private const int MilestonesPerSpool = 10;
     private readonly TetherModel _tether;
+    private readonly TetherOptics _optics;
+    private readonly RelayPlanModel? _plan;
+    private readonly RelayRadio? _radio;
+    private readonly IReadOnlyList<double> _plannedDropsM;
 
     public TetherComponent(Scenario scenario)
         : base(MissionIds.Tether, FailurePolicy.RestartFromLastState)
     {
+        ArgumentNullException.ThrowIfNull(scenario);
         _tether = scenario.Tether;
+        _optics = new TetherOptics(scenario.Tether);
+        _plan = scenario.Relays;
+        if (_plan is not null)
+        {
+            _radio = new RelayRadio(_plan, ProbeDescentFactory.Shell(scenario).TemperatureK);
+            _plannedDropsM = _plan.IntervalM is { } interval
+                ? [.. Enumerable.Range(1, _plan.Carried).Select(k => k * interval).TakeWhile(d => d < scenario.Shell.ThicknessM)]
+                : _plan.DropDepthsM;
+        }
+        else
+        {
+            _plannedDropsM = [];
+        }
     }
 
-    public override TetherState InitialState => new(0.0, false, null, 0, 0, 0);
+    public override TetherState InitialState => new(
+        0.0, false, null, 0, 0, 0, true,
+        FrameHold<TelemetryFrame>.Empty(_tether.BufferFrames), FrameHold<Telecommand>.Empty(_tether.BufferFrames),
+        [], 0, [], null, 0, 0, 0.0, 0.0);
 
     public override TetherState Handle(TetherState state, object message, ComponentContext context) => message switch
     {
-        RunStarted => state,
-        TelemetryFrame frame => Carry(PayOut(state, frame.PaidOutM, context), frame, context),
-        Telecommand command => CarryDown(state, command, context),
-        FaultStarted { Fault.Kind: FaultKind.TetherBreak } fault => Break(state, $"fault '{fault.Fault.Name}'", context),
+        RunStarted => Start(state, context),
+        TelemetryFrame frame => Report(OnFrame(state, frame, context), context),
+        Telecommand command => Report(CarryDown(state, command, context), context),
+        DropRelay drop => Report(Route(Drop(state, drop.DepthM, drop.Origin, context), null, context), context),
+        RelayBatteryDue due => Report(Route(BatteryFlat(state, due.Number, context), null, context), context),
+        FaultStarted { Fault.Kind: FaultKind.TetherBreak } fault => Report(Route(Break(state, $"fault '{fault.Fault.Name}'", context), null, context), context),
+        FaultStarted { Fault.Kind: FaultKind.SpoolJam } fault => Report(Route(Break(state, $"spool jam (fault '{fault.Fault.Name}')", context), null, context), context),
+        FaultStarted { Fault.Kind: FaultKind.RelayFailure } fault => Report(Route(RelayFault(state, fault.Fault, true, context), null, context), context),
+        FaultCleared { Fault.Kind: FaultKind.RelayFailure } fault => Report(Route(RelayFault(state, fault.Fault, false, context), null, context), context),
         _ => throw new InvalidOperationException($"The tether cannot handle {message.GetType().Name}."),
     };
+
+    private TetherState Start(TetherState state, ComponentContext context)
+    {
+        var full = _optics.Budget(_tether.LengthM);
+        var empty = _optics.Budget(0.0);
+        context.Record("tether.link_budget", Severity.Info,
+            RecordField.Of("transceiver", _optics.Transceiver.Name),
+            RecordField.Of("wavelength_m", _optics.Transceiver.WavelengthM),
+            RecordField.Of("line_rate_bit_s", _optics.Transceiver.LineRateBitPerS),
+            RecordField.Of("attenuation_db_per_km", _optics.AttenuationDbPerKm),
+            RecordField.Of("g652d_maximum_db_per_km", _optics.G652DMaximumDbPerKm),
+            RecordField.Of("margin_at_start_db", empty.MarginDb),
+            RecordField.Of("margin_at_full_payout_db", full.MarginDb),
+            RecordField.Of("relays_carried", _plan?.Carried ?? 0),
+            RecordField.Of("relay_drops_planned", _plannedDropsM.Count));
+        return state;
+    }
+
+    /// <summary>A frame from the probe: the fibre pays out to its depth, relays due there go, then the frame is routed.</summary>
+    private TetherState OnFrame(TetherState state, TelemetryFrame frame, ComponentContext context)
+    {
+        var paidOut = PayOut(state, frame.PaidOutM, context) with { ProbeDepthM = frame.PaidOutM, FramesProduced = state.FramesProduced + 1 };
+        return Route(Fibre(DropPlanned(paidOut, context), context), frame, context);
+    }
 
     private TetherState PayOut(TetherState state, double depthM, ComponentContext context)
     {
@@ -52,44 +107,251 @@ public sealed class TetherComponent : SimComponent<TetherState>
         return state with { PaidOutM = depthM, PayoutMilestone = Math.Max(milestone, state.PayoutMilestone) };
     }
 
-    private TetherState Carry(TetherState state, TelemetryFrame frame, ComponentContext context)
+    /// <summary>The fibre's budget at the current payout; a change of verdict is logged, and commands held wait no longer.</summary>
+    private TetherState Fibre(TetherState state, ComponentContext context)
     {
-        if (state.Broken)
-        {
-            context.Record("tether.frame_lost", Severity.Warning,
-                RecordField.Of("frame", frame.Sequence),
-                RecordField.Of("broken_at_m", state.BrokenAtDepthM ?? 0.0));
-            return state with { FramesLost = state.FramesLost + 1 };
-        }
-
-        var delay = SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS);
-        context.Schedule(MissionIds.Station, delay, frame, MissionPriority.Telemetry);
-        return state with { FramesCarried = state.FramesCarried + 1 };
+        if (state.Broken) return state;
+        var budget = _optics.Budget(state.PaidOutM);
+        if (budget.LinkUp == state.FibreUp) return state;
+        context.Record(budget.LinkUp ? "tether.link_up" : "tether.link_down", budget.LinkUp ? Severity.Notice : Severity.Alarm,
+            RecordField.Of("paid_out_m", state.PaidOutM),
+            RecordField.Of("margin_db", budget.MarginDb),
+            RecordField.Of("received_power_dbm", budget.ReceivedPowerDbm));
+        var next = state with { FibreUp = budget.LinkUp };
+        return budget.LinkUp ? FlushCommands(next, FibreDelay(next), context) : next;
     }
 
-    /// <summary>A telecommand from the station goes down the fibre to the probe, or is lost at the break.</summary>
-    private TetherState CarryDown(TetherState state, Telecommand command, ComponentContext context)
+    /// <summary>The relays whose drop depth the head has passed go into the channel.</summary>
+    private TetherState DropPlanned(TetherState state, ComponentContext context)
     {
-        if (state.Broken)
+        while (state.NextPlannedDrop < _plannedDropsM.Count && _plannedDropsM[state.NextPlannedDrop] <= state.ProbeDepthM)
         {
-            context.Record("command.lost", Severity.Alarm,
-                RecordField.Of("command", command.Command.ToString()),
-                RecordField.Of("origin", command.Origin),
-                RecordField.Of("where", "tether broken"));
+            state = Drop(state with { NextPlannedDrop = state.NextPlannedDrop + 1 }, _plannedDropsM[state.NextPlannedDrop], "plan", context);
+        }
+
+        return state;
+    }
+
+    private TetherState Drop(TetherState state, double depthM, string origin, ComponentContext context)
+    {
+        if (_plan is null || _radio is null || state.Relays.Count >= _plan.Carried)
+        {
+            context.Record("relay.none_left", Severity.Warning,
+                RecordField.Of("carried", _plan?.Carried ?? 0),
+                RecordField.Of("origin", origin));
             return state;
         }
 
-        context.Schedule(MissionIds.Probe, SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS), command, MissionPriority.Command);
+        var relay = new RelayState(state.Relays.Count + 1, depthM, context.Now, false, FrameHold<TelemetryFrame>.Empty(_plan.BufferFrames));
+        var lifeS = _plan.BatteryEnergyJ / _plan.PowerDrawW;
+        context.Record("relay.dropped", Severity.Notice,
+            RecordField.Of("relay", relay.Name),
+            RecordField.Of("depth_m", depthM),
+            RecordField.Of("ice_temperature_k", _radio.IceTemperatureK(depthM)),
+            RecordField.Of("attenuation_db_per_km", _radio.AttenuationDbPerM(depthM) * 1e3),
+            RecordField.Of("range_m", _radio.RangeM(depthM)),
+            RecordField.Of("battery_life_s", lifeS),
+            RecordField.Of("origin", origin),
+            RecordField.Of("relays_left", _plan.Carried - relay.Number));
+        context.ScheduleSelf(SimDuration.FromSeconds(lifeS), new RelayBatteryDue(relay.Number), MissionPriority.Physics);
+        return state with { Relays = state.Relays.Add(relay) };
+    }
+
+    /// <summary>A relay whose battery is flat stops; whatever it held is gone.</summary>
+    private static TetherState BatteryFlat(TetherState state, int number, ComponentContext context)
+    {
+        var relay = state.Relays.Single(r => r.Number == number);
+        foreach (var frame in relay.Hold.Items)
+        {
+            LostFrame(frame, relay.Name, "the relay's battery went flat", context);
+        }
+
+        var dead = relay with { Dead = true, Hold = relay.Hold.Cleared() };
+        var next = state with { Relays = state.Relays.Replace(relay, dead), FramesLost = state.FramesLost + relay.Hold.Count };
+        context.Record("relay.battery_flat", Severity.Alarm, WithLedger(next,
+            RecordField.Of("relay", relay.Name),
+            RecordField.Of("depth_m", relay.DepthM),
+            RecordField.Of("frames_lost_with_it", relay.Hold.Count)));
+        return next;
+    }
+
+    private static TetherState RelayFault(TetherState state, FaultModel fault, bool starts, ComponentContext context)
+    {
+        var number = fault.RelayNumber!.Value;
+        context.Record(starts ? "relay.failed" : "relay.recovered", starts ? Severity.Alarm : Severity.Notice, WithLedger(state,
+            RecordField.Of("relay", $"relay-{number}"),
+            RecordField.Of("fault", fault.Name),
+            RecordField.Of("dropped", state.Relays.Any(r => r.Number == number))));
+        return state with { FailedRelays = starts ? state.FailedRelays.Add(number) : state.FailedRelays.Remove(number) };
+    }
+
+    /// <summary>
+    /// Sends what can go: by fibre while it is up, else up the relay chain as far as the hops close; then offers the new
+    /// frame, if any, to the probe end. A frame that finds the probe's buffer full (or no buffer and no path) is lost.
+    /// </summary>
+    private TetherState Route(TetherState state, TelemetryFrame? incoming, ComponentContext context)
+    {
+        if (state.FibreUp)
+        {
+            var fibreDelay = FibreDelay(state);
+            foreach (var held in state.ProbeHold.Items) context.Schedule(MissionIds.Station, fibreDelay, held, MissionPriority.Telemetry);
+            var carried = state.FramesCarried + state.ProbeHold.Count + (incoming is null ? 0 : 1);
+            if (incoming is not null) context.Schedule(MissionIds.Station, fibreDelay, incoming, MissionPriority.Telemetry);
+            state = state with { ProbeHold = state.ProbeHold.Cleared(), FramesCarried = carried };
+            return state.Relays.Any(r => r.Hold.Count > 0) ? SettleRelays(state, context) : state;
+        }
+
+        state = SettleRelays(state, context);
+        if (incoming is null) return state;
+
+        var chain = Chain(state);
+        // The frame being sent needs no buffer of its own when it can leave the probe at once.
+        if (state.ProbeHold.Room > 0 || StoreAndForward.CanLeave(chain.Holds, chain.HopCloses, 0))
+        {
+            var hold = state.ProbeHold with { Capacity = state.ProbeHold.Capacity + 1 };
+            state = SettleRelays(state with { ProbeHold = hold.Offer(incoming)! }, context);
+            return state with { ProbeHold = state.ProbeHold with { Capacity = hold.Capacity - 1 } };
+        }
+
+        LostFrame(incoming, "probe", state.ProbeHold.Capacity == 0 ? "no path home and no buffer" : "the probe's buffer is full", context);
+        return state with { FramesLost = state.FramesLost + 1 };
+    }
+
+    /// <summary>The chain as it stands: the probe end, then every working relay from the deepest up, and each hop's verdict.</summary>
+    private ChainNow Chain(TetherState state)
+    {
+        var working = state.Relays.Where(r => !r.Dead && !state.FailedRelays.Contains(r.Number)).Reverse().ToList();
+        var depths = new List<double>(working.Count + 1) { state.ProbeDepthM };
+        depths.AddRange(working.Select(r => r.DepthM));
+        var closes = new bool[depths.Count];
+        var margins = new double[depths.Count];
+        for (var i = 0; i < depths.Count; i++)
+        {
+            margins[i] = _radio is null ? double.NegativeInfinity : _radio.HopMarginDb(i + 1 < depths.Count ? depths[i + 1] : 0.0, depths[i]);
+            closes[i] = margins[i] >= 0.0;
+        }
+
+        List<FrameHold<TelemetryFrame>> holds = [state.ProbeHold, .. working.Select(r => r.Hold)];
+        return new ChainNow(working, depths, closes, margins, holds);
+    }
+
+    private TetherState SettleRelays(TetherState state, ComponentContext context)
+    {
+        var chain = Chain(state);
+        var settled = StoreAndForward.Settle(chain.Holds, chain.HopCloses);
+        foreach (var (frame, from) in settled.Delivered)
+        {
+            context.Schedule(MissionIds.Station, RelayDelay(chain, from), frame, MissionPriority.Telemetry);
+        }
+
+        var relays = state.Relays;
+        for (var i = 0; i < chain.Working.Count; i++)
+        {
+            relays = relays.Replace(chain.Working[i], chain.Working[i] with { Hold = settled.Holds[i + 1] });
+        }
+
+        state = state with { ProbeHold = settled.Holds[0], Relays = relays, FramesByRelays = state.FramesByRelays + settled.Delivered.Count };
+        // The probe's own radio is the chain's bottom end: in cold ice it may reach the surface before any relay is down.
+        var pathUp = _radio is not null && chain.HopCloses.All(c => c);
+        if (state.FibreUp) return state with { RelayPathUp = null };
+        if (_radio is not null && pathUp != state.RelayPathUp)
+        {
+            var open = Array.IndexOf(chain.HopCloses, false);
+            context.Record(pathUp ? "relay.path_up" : "relay.path_down", pathUp ? Severity.Notice : Severity.Alarm, WithLedger(state,
+                RecordField.Of("relays_working", chain.Working.Count),
+                RecordField.Of("open_hop_from", open < 0 ? "" : open == 0 ? "probe" : chain.Working[open - 1].Name),
+                RecordField.Of("open_hop_margin_db", open < 0 ? 0.0 : chain.Margins[open]),
+                RecordField.Of("frames_released", settled.Delivered.Count)));
+        }
+
+        state = state with { RelayPathUp = pathUp };
+        return pathUp ? FlushCommands(state, RelayDelay(chain, 0), context) : state;
+    }
+
+    /// <summary>A telecommand from the station goes down the fibre, or down the relay chain, or waits at the surface end.</summary>
+    private TetherState CarryDown(TetherState state, Telecommand command, ComponentContext context)
+    {
+        if (state.FibreUp)
+        {
+            context.Schedule(MissionIds.Probe, FibreDelay(state), command, MissionPriority.Command);
+            return state;
+        }
+
+        if (state.RelayPathUp == true && state.CommandHold.Count == 0)
+        {
+            var chain = Chain(state);
+            if (chain.HopCloses.All(c => c))
+            {
+                context.Schedule(MissionIds.Probe, RelayDelay(chain, 0), command, MissionPriority.Command);
+                return state;
+            }
+        }
+
+        if (state.CommandHold.Offer(command) is { } held) return state with { CommandHold = held };
+        context.Record("data.lost", Severity.Alarm,
+            RecordField.Of("kind", "telecommand"),
+            RecordField.Of("command", command.Command.ToString()),
+            RecordField.Of("origin", command.Origin),
+            RecordField.Of("where", "surface"),
+            RecordField.Of("cause", state.CommandHold.Capacity == 0 ? (state.Broken ? "tether broken" : "fibre link down") + ", no relay path and no buffer" : "the surface end's command buffer is full"));
         return state;
     }
+
+    private static TetherState FlushCommands(TetherState state, SimDuration delay, ComponentContext context)
+    {
+        foreach (var command in state.CommandHold.Items) context.Schedule(MissionIds.Probe, delay, command, MissionPriority.Command);
+        return state with { CommandHold = state.CommandHold.Cleared() };
+    }
+
+    /// <summary>The probe reports its buffer's fill in its next frame; it is told only when the fill changes.</summary>
+    private static TetherState Report(TetherState state, ComponentContext context)
+    {
+        var fill = state.ProbeHold.Fill;
+        if (fill == state.ReportedFill) return state;
+        context.Schedule(MissionIds.Probe, SimDuration.Zero, new LinkBufferFill(fill), MissionPriority.Telemetry);
+        return state with { ReportedFill = fill };
+    }
+
+    /// <summary>
+    /// The frame ledger carried by every record of a change in the link, so a post-mortem can see what the link held at
+    /// that moment: produced = by fibre + by relays + held + lost.
+    /// </summary>
+    private static RecordField[] WithLedger(TetherState state, params RecordField[] fields) =>
+    [
+        .. fields,
+        RecordField.Of("frames_produced", state.FramesProduced),
+        RecordField.Of("frames_by_fibre", state.FramesCarried),
+        RecordField.Of("frames_by_relays", state.FramesByRelays),
+        RecordField.Of("frames_held", state.FramesHeld),
+        RecordField.Of("frames_lost", state.FramesLost),
+    ];
+
+    private SimDuration FibreDelay(TetherState state) => SimDuration.FromSeconds(state.PaidOutM / _tether.SignalSpeedMPerS);
+
+    /// <summary>
+    /// From node <paramref name="from"/> to the surface: the depths fall monotonically up the chain, so the hops add up to
+    /// the node's depth; each relay passed adds its forwarding delay.
+    /// </summary>
+    private SimDuration RelayDelay(ChainNow chain, int from) =>
+        SimDuration.FromSeconds(_radio!.PropagationS(chain.Depths[from]) + ((chain.Depths.Count - Math.Max(from, 1)) * _plan!.ForwardingDelayS));
+
+    private static void LostFrame(TelemetryFrame frame, string where, string cause, ComponentContext context) =>
+        context.Record("data.lost", Severity.Warning,
+            RecordField.Of("kind", "telemetry"),
+            RecordField.Of("frame", frame.Sequence),
+            RecordField.Of("where", where),
+            RecordField.Of("cause", cause));
 
     private static TetherState Break(TetherState state, string cause, ComponentContext context)
     {
         if (state.Broken) return state;
-        context.Record("tether.broken", Severity.Alarm,
+        context.Record("tether.broken", Severity.Alarm, WithLedger(state,
             RecordField.Of("cause", cause),
             RecordField.Of("paid_out_m", state.PaidOutM),
-            RecordField.Of("frames_carried", state.FramesCarried));
-        return state with { Broken = true, BrokenAtDepthM = state.PaidOutM };
+            RecordField.Of("frames_carried", state.FramesCarried)));
+        return state with { Broken = true, BrokenAtDepthM = state.PaidOutM, FibreUp = false };
     }
+
+    /// <summary>The relay chain at one instant, bottom up.</summary>
+    private sealed record ChainNow(IReadOnlyList<RelayState> Working, IReadOnlyList<double> Depths, bool[] HopCloses, double[] Margins, IReadOnlyList<FrameHold<TelemetryFrame>> Holds);
 }

@@ -1,4 +1,34 @@
+using System.Collections.Immutable;
+using DescentOps.Mission.Messages;
+
 namespace DescentOps.Mission.Tether;
 
-/// <summary>The tether's committed state: how much fibre is out, whether it still carries light, what it carried.</summary>
-public sealed record TetherState(double PaidOutM, bool Broken, double? BrokenAtDepthM, long FramesCarried, long FramesLost, int PayoutMilestone);
+/// <summary>
+/// The link's committed state: how much fibre is out, whether it still carries light and its budget closes, what it
+/// carried; the frames held at the probe end and the commands held at the surface end while no path is up; the relays
+/// dropped so far (in drop order), those failed by a fault, and whether the relay chain reaches the surface (null while
+/// the fibre carries the frames and nobody looks).
+/// <see cref="ProbeDepthM"/> is the head's depth from the latest frame, which goes on growing after the fibre parts.
+/// <see cref="FramesProduced"/> = <see cref="FramesCarried"/> (by fibre) + <see cref="FramesByRelays"/> + held + <see cref="FramesLost"/>.
+/// </summary>
+public sealed record TetherState(
+    double PaidOutM,
+    bool Broken,
+    double? BrokenAtDepthM,
+    long FramesCarried,
+    long FramesLost,
+    int PayoutMilestone,
+    bool FibreUp,
+    FrameHold<TelemetryFrame> ProbeHold,
+    FrameHold<Telecommand> CommandHold,
+    ImmutableList<RelayState> Relays,
+    int NextPlannedDrop,
+    ImmutableSortedSet<int> FailedRelays,
+    bool? RelayPathUp,
+    long FramesProduced,
+    long FramesByRelays,
+    double ReportedFill,
+    double ProbeDepthM)
+{
+    public long FramesHeld => ProbeHold.Count + Relays.Sum(r => (long)r.Hold.Count);
+}

@@ -21,6 +21,8 @@ public static class ReportPlots
             [new("probe.telemetry", "energy_used_j", "energy used", Scale: 1 / JoulesPerMegawattHour)]),
         new("ground-latency", "Telemetry latency at ground", "one-way latency (min)",
             [new("ground.telemetry", "latency_s", "latency", Scale: 1.0 / 60)]),
+        new("buffer-fill", "Frames held at the probe", "buffer fill (%)",
+            [new("probe.telemetry", "buffer_fill", "probe buffer", Scale: 100)]),
         new("vehicle-battery", "Vehicle battery", "battery (MJ)",
             [new("vehicle.profile", "battery_j", "battery", Scale: 1e-6, PerSource: true)]),
     ];

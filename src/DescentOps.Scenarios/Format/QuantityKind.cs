@@ -20,7 +20,7 @@ public enum QuantityKind
     AbsorbedDose,
     Density,
 
-    /// <summary>A dimensionless share (a state of charge), written as a percentage or a plain fraction.</summary>
+    /// <summary>A dimensionless share (a state of charge, a buffer's fill): a percentage or a bare number.</summary>
     Ratio,
     /// <summary>Absorbed dose per time, written as a dose over one unit of duration ("5 Gy/d"); UnitsNet has no such quantity.</summary>
     AbsorbedDoseRate,
@@ -88,7 +88,7 @@ public static class QuantityKindInfo
         QuantityKind.Frequency => "Hz, kHz, MHz, GHz",
         QuantityKind.AbsorbedDose => "Gy, mGy, rad, krad",
         QuantityKind.Density => "kg/m³, g/cm³",
-        QuantityKind.Ratio => "%",
+        QuantityKind.Ratio => "%, or a bare number",
         QuantityKind.AbsorbedDoseRate => "Gy/d, mGy/h, rad/h, krad/yr",
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
     };

@@ -14,6 +14,14 @@ public static partial class QuantityParser
     {
         var trimmed = text.Trim();
         if (kind == QuantityKind.AbsorbedDoseRate) return TryParseDoseRate(trimmed, out valueSi, out error);
+        if (kind == QuantityKind.Ratio && NumberOnly().IsMatch(trimmed))
+        {
+            // A share needs no unit: "0.5" is a half, as "50 %" is.
+            valueSi = double.Parse(trimmed, CultureInfo.InvariantCulture);
+            error = "";
+            return true;
+        }
+
         if (Quantity.TryParse(CultureInfo.InvariantCulture, kind.UnitsNetType(), trimmed, out IQuantity? quantity))
         {
             // UnitsNet's base unit is SI for every kind used here except angles (degrees there, radians here).

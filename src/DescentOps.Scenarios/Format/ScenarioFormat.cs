@@ -14,6 +14,50 @@ public static class ScenarioFormat
     private const double Day = 86_400;
     private const double Year = 365.25 * Day;
 
+    /// <summary>
+    /// The tether's optical budget and the probe-end buffer. Every field is optional; the defaults (1000BASE-LX optics at
+    /// 1310 nm, typical fibre, two connectors, no buffer) give a link that closes over any spool of the demo scenarios.
+    /// </summary>
+    private static IReadOnlyList<FieldSpec> TetherLinkFields { get; } =
+    [
+        new ChoiceField("transceiver", "Optical transceiver class at both ends (default 1000base-lx): its wavelength, line rate, minimum launch power and receiver sensitivity.", ["100base-lx10", "1000base-lx", "10gbase-lr", "gbe-long-reach"], Required: false),
+        new NumberField("attenuation", "Cabled fibre attenuation in dB/km (default: typical fibre at the transceiver's wavelength, 0.35 dB/km at 1310 nm, 0.20 dB/km at 1550 nm).", 0, 10, Required: false),
+        new NumberField("transmit_power", "Launch power in dBm (default: the transceiver class minimum).", -40, 20, Required: false),
+        new NumberField("receiver_sensitivity", "Receiver sensitivity in dBm (default: the transceiver class value).", -60, 0, Required: false),
+        new IntegerField("splices", "Fusion splices along the fibre (default 0).", 0, 10_000, Required: false),
+        new NumberField("splice_loss", "Loss per splice in dB (default 0.05).", 0, 3, Required: false),
+        new IntegerField("connectors", "Mated connector pairs (default 2).", 0, 100, Required: false),
+        new NumberField("connector_loss", "Loss per connector pair in dB (default 0.3).", 0, 3, Required: false),
+        new NumberField("bend_loss", "Macro-bend loss at the spool and in the borehole, in dB (default 0).", 0, 30, Required: false),
+        new NumberField("pack_loss", "Extra loss in dB while fibre is still wound on the spool (default 0).", 0, 30, Required: false),
+        new NumberField("required_margin", "Margin in dB a frame needs to get through (default 0: margin >= 0).", 0, 30, Required: false),
+        new IntegerField("buffer_frames", "Frames the probe holds while no path home is up; also the frames the surface end holds for commands going down (default 0: nothing is held).", 0, 10_000_000, Required: false),
+    ];
+
+    /// <summary>The radio relay transceivers the probe drops into its melt channel, a backup path when the fibre fails.</summary>
+    private static SectionField Relays { get; } = new("relays", "Radio relay transceivers the probe carries and drops into the melt channel; when the fibre is down, frames go home relay by relay if every hop closes.",
+    [
+        new IntegerField("carried", "Relays on board (default: as many as the drops planned).", 0, 1000, Required: false),
+        new QuantityField("interval", "Drop a relay every time the head has gone this much deeper (give this or drops, or neither to drop only by telecommand).", Length, 0, 200_000, Required: false, MinExclusive: true),
+        new ListField("drops", "Depths at which relays are dropped.", new SectionField("drop", "One planned drop.",
+        [
+            new QuantityField("depth", "Head depth of the drop.", Length, 0, 200_000, MinExclusive: true),
+        ]), MinItems: 1, MaxItems: 1000, Required: false),
+        new NumberField("transmit_power", "Radio transmit power in dBm (default 30).", -30, 60, Required: false),
+        new NumberField("antenna_gain", "Gain of each antenna embedded in ice, in dBi (default 0).", -20, 20, Required: false),
+        new QuantityField("frequency", "Carrier frequency (default 100 MHz).", Frequency, 1e6, 1e9, Required: false),
+        new QuantityField("bandwidth", "Receiver bandwidth (default 10 kHz).", Frequency, 1, 1e8, Required: false),
+        new NumberField("noise_figure", "Receiver noise figure in dB (default 5).", 0, 30, Required: false),
+        new NumberField("required_snr", "Signal-to-noise ratio in dB the modem needs (default 10).", -10, 40, Required: false),
+        new NumberField("required_margin", "Margin in dB a hop needs on top of the SNR (default 6).", 0, 40, Required: false),
+        new NumberField("misc_loss", "Borehole geometry, refrozen interfaces and detuning, in dB (default 3).", 0, 60, Required: false),
+        new ChoiceField("conductivity", "Parameter set of the ice conductivity (default m07-std, MacGregor et al. 2007).", ["m07-std", "m07-adj", "w97"], Required: false),
+        new QuantityField("battery", "Usable battery energy of each relay at the drop.", Energy, 0, 1e10, MinExclusive: true),
+        new QuantityField("power_draw", "Power each relay draws from the drop until its battery is empty.", Power, 0, 1e4, MinExclusive: true),
+        new IntegerField("buffer_frames", "Frames each relay holds while the path above it is down (default 0).", 0, 10_000_000, Required: false),
+        new QuantityField("forwarding_delay", "Time each relay takes to pass a frame on (default 0 s).", Duration, 0, 3600, Required: false),
+    ], Required: false);
+
     public static SectionField Root { get; } = new(
         "",
         "A DescentOps scenario: the icy body, its ice shell, the probe, tether, station and vehicles, the faults to inject and the run settings.",
@@ -109,6 +153,7 @@ public static class ScenarioFormat
             [
                 new QuantityField("length", "Fibre length on the spool.", Length, 0, 300_000, MinExclusive: true),
                 new QuantityField("signal_speed", "Speed of light in the fibre (about c/1.468 in silica fibre).", Speed, 1e7, 299_792_458),
+                .. TetherLinkFields,
             ]),
             new SectionField("station", "The surface station.",
             [
@@ -225,10 +270,11 @@ public static class ScenarioFormat
                 new ChoiceField("absorption", "francois_garrison (default) or ainslie_mccolm.", ["francois_garrison", "ainslie_mccolm"], Required: false),
                 new QuantityField("message_interval", "Time between a vehicle's data messages (default 10 min).", Duration, 1, Day, Required: false),
             ], Required: false),
+            Relays,
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [
                 new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),
-                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "sensor_noise", "heater_segment_failure", "tilt_kick", "station_upset", "vehicle_loss"]),
+                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "sensor_noise", "heater_segment_failure", "tilt_kick", "station_upset", "vehicle_loss", "relay_failure", "spool_jam"]),
                 new QuantityField("at", "Trigger: simulated time after the start of the run when the fault begins (give exactly one of at, at_depth, when, mean_interval).", Duration, 0, 1000 * Year, Required: false),
                 new QuantityField("at_depth", "Trigger: head depth at which the fault begins.", Length, 0, 200_000, Required: false),
                 new TextField("when", "Trigger: a condition in the rule language on the probe's true state (not its sensors), e.g. 'probe.ice_temperature above 250 K for 2 samples'; checked on every frame, the fault begins the first time it holds.", Required: false),
@@ -242,6 +288,7 @@ public static class ScenarioFormat
                 new TextField("vehicle", "For vehicle_loss: the vehicle it strikes.", Required: false),
                 new ChoiceField("cause", "For vehicle_loss: battery (the charge falls to remaining_fraction), entrapment (held until the fault clears) or out_of_range (the acoustic link is dead until it clears).", ["battery", "entrapment", "out_of_range"], Required: false),
                 new TextField("value", "For sensor_stuck (optional: the reading at the fault's start otherwise), sensor_bias (the offset) and sensor_noise (the noise's standard deviation): a quantity in the point's unit, e.g. '0.5 m/h'.", Required: false),
+                new TextField("relay", "For relay_failure: the relay that fails, by name ('relay-2') or number ('2'); relays are numbered from the surface in the order they are dropped.", Required: false),
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
             new SectionField("run", "Run settings; the command line may override them.",

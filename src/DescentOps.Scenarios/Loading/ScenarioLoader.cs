@@ -110,7 +110,7 @@ public static class ScenarioLoader
                 probe.OptionalQuantity("max_head_power") ?? probe.Quantity("head_power"),
                 probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power"),
                 probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad),
-            new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed")),
+            new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed"), Optics(tether), (int)(tether.OptionalInteger("buffer_frames") ?? 0)),
             BuildStation(station),
             [.. root.List("vehicles").Select(BuildVehicle)],
             [.. root.List("faults").Select(BuildFault)],
@@ -119,7 +119,57 @@ public static class ScenarioLoader
             sourceName,
             text,
             root.OptionalSection("power") is { } power ? BuildPower(power) : null,
-            BuildAcoustics(root.OptionalSection("acoustics")));
+            BuildAcoustics(root.OptionalSection("acoustics")),
+            RelayPlan(root.OptionalSection("relays"), shell.Quantity("thickness")));
+    }
+
+    private static FibreOpticsModel Optics(BoundSection tether)
+    {
+        var d = FibreOpticsModel.Default;
+        return new FibreOpticsModel(
+            tether.OptionalText("transceiver") ?? d.Transceiver,
+            tether.OptionalNumber("attenuation"),
+            tether.OptionalNumber("transmit_power"),
+            tether.OptionalNumber("receiver_sensitivity"),
+            (int)(tether.OptionalInteger("splices") ?? d.SpliceCount),
+            tether.OptionalNumber("splice_loss") ?? d.SpliceLossDb,
+            (int)(tether.OptionalInteger("connectors") ?? d.ConnectorCount),
+            tether.OptionalNumber("connector_loss") ?? d.ConnectorLossDb,
+            tether.OptionalNumber("bend_loss") ?? d.BendLossDb,
+            tether.OptionalNumber("pack_loss") ?? d.PackLossDb,
+            tether.OptionalNumber("required_margin") ?? d.RequiredMarginDb);
+    }
+
+    /// <summary>
+    /// The relays, with the defaults of the physics reference's relay example (30 dBm, 0 dBi, 100 MHz, 10 kHz, NF 5 dB,
+    /// SNR 10 dB, margin 6 dB) and its 3 dB rule for borehole losses.
+    /// </summary>
+    private static RelayPlanModel? RelayPlan(BoundSection? relays, double shellThicknessM)
+    {
+        if (relays is null) return null;
+        var drops = relays.List("drops").Select(d => d.Quantity("depth")).Order().ToList();
+        var interval = relays.OptionalQuantity("interval");
+        // Without a count, the probe carries one relay for each planned drop: each listed depth, or each whole interval
+        // above the ocean.
+        var planned = interval is { } every ? (int)Math.Min(1000, Math.Ceiling(shellThicknessM / every) - 1) : drops.Count;
+        var carried = relays.OptionalInteger("carried");
+        return new RelayPlanModel(
+            (int)(carried ?? Math.Max(planned, 0)),
+            interval,
+            drops,
+            relays.OptionalNumber("transmit_power") ?? 30.0,
+            relays.OptionalNumber("antenna_gain") ?? 0.0,
+            relays.OptionalQuantity("frequency") ?? 100e6,
+            relays.OptionalQuantity("bandwidth") ?? 10e3,
+            relays.OptionalNumber("noise_figure") ?? 5.0,
+            relays.OptionalNumber("required_snr") ?? 10.0,
+            relays.OptionalNumber("required_margin") ?? 6.0,
+            relays.OptionalNumber("misc_loss") ?? 3.0,
+            relays.OptionalText("conductivity") ?? "m07-std",
+            relays.Quantity("battery"),
+            relays.Quantity("power_draw"),
+            (int)(relays.OptionalInteger("buffer_frames") ?? 0),
+            relays.OptionalQuantity("forwarding_delay") ?? 0.0);
     }
 
     private static PowerModel BuildPower(BoundSection power)
@@ -357,7 +407,16 @@ public static class ScenarioLoader
         f.OptionalText("when") is null ? null : f.LocationOf("when"),
         f.OptionalQuantity("mean_interval"),
         f.OptionalQuantity("not_before") ?? 0.0,
-        (int)(f.OptionalInteger("occurrences") ?? 1));
+        (int)(f.OptionalInteger("occurrences") ?? 1),
+        RelayNumber(f));
+
+    /// <summary>"relay-2" or "2" is relay number 2; 0 marks a name that does not parse (reported by <see cref="CheckFault"/>).</summary>
+    private static int? RelayNumber(BoundSection fault)
+    {
+        if (fault.OptionalText("relay") is not { } text) return null;
+        var digits = text.StartsWith("relay-", StringComparison.Ordinal) ? text["relay-".Length..] : text;
+        return int.TryParse(digits, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var n) && n >= 1 ? n : 0;
+    }
 
     /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
     private static double? SensorValue(BoundSection fault)
@@ -413,6 +472,23 @@ public static class ScenarioLoader
             if (scenario.Faults[i].Vehicle is { } name && scenario.Vehicles.All(v => v.Name != name))
             {
                 errors.Add(new ScenarioError(faults[i].LocationOf("vehicle"), $"faults[{i}].vehicle", $"there is no vehicle named '{name}'"));
+            }
+            if (scenario.Faults[i].RelayNumber is > 0 and var n && n > (scenario.Relays?.Carried ?? 0))
+            {
+                errors.Add(new ScenarioError(faults[i].LocationOf("relay"), $"faults[{i}].relay", $"the probe carries {scenario.Relays?.Carried ?? 0} relays, so there is no relay {n}"));
+            }
+        }
+
+        if (scenario.Relays is { } plan && root.OptionalSection("relays") is { } relays)
+        {
+            if (plan.IntervalM is not null && plan.DropDepthsM.Count > 0)
+            {
+                errors.Add(new ScenarioError(relays.LocationOf("interval"), "relays.interval", "give 'interval' or 'drops', not both"));
+            }
+
+            if (plan.DropDepthsM.Count > plan.Carried)
+            {
+                errors.Add(new ScenarioError(relays.LocationOf("carried"), "relays.carried", $"{plan.DropDepthsM.Count} drops are planned but only {plan.Carried} relays are carried"));
             }
         }
 
@@ -614,9 +690,18 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a power_dip needs a duration"));
         }
 
-        if (fault.Kind == FaultKind.TetherBreak && fault.DurationS is not null)
+        if (fault.Kind is FaultKind.TetherBreak or FaultKind.SpoolJam && fault.DurationS is not null)
         {
-            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a broken fibre does not heal: a tether_break takes no duration"));
+            errors.Add(new ScenarioError(section.Location, $"{path}.duration", $"a broken fibre does not heal: a {KindWord(fault.Kind)} takes no duration"));
+        }
+
+        if ((fault.Kind == FaultKind.RelayFailure) != (fault.RelayNumber is not null))
+        {
+            errors.Add(new ScenarioError(section.LocationOf("relay"), $"{path}.relay", fault.Kind == FaultKind.RelayFailure ? "a relay_failure names its relay" : $"'relay' belongs to a relay_failure, not to a {KindWord(fault.Kind)}"));
+        }
+        else if (fault.RelayNumber == 0)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("relay"), $"{path}.relay", $"'{section.OptionalText("relay")}' is not a relay: write its name ('relay-2') or its number ('2')"));
         }
 
         if (fault.Kind == FaultKind.StationUpset && fault.DurationS is null)
@@ -693,6 +778,8 @@ public static class ScenarioLoader
         "tilt_kick" => FaultKind.TiltKick,
         "station_upset" => FaultKind.StationUpset,
         "vehicle_loss" => FaultKind.VehicleLoss,
+        "relay_failure" => FaultKind.RelayFailure,
+        "spool_jam" => FaultKind.SpoolJam,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -708,6 +795,8 @@ public static class ScenarioLoader
         FaultKind.HeaterSegmentFailure => "heater_segment_failure",
         FaultKind.StationUpset => "station_upset",
         FaultKind.VehicleLoss => "vehicle_loss",
+        FaultKind.RelayFailure => "relay_failure",
+        FaultKind.SpoolJam => "spool_jam",
         _ => "tilt_kick",
     };
 

@@ -35,4 +35,10 @@ public enum FaultKind
 
     /// <summary>A vehicle meets what can lose it: a failing battery, entrapment, or the loss of its acoustic link.</summary>
     VehicleLoss,
+
+    /// <summary>A dropped radio relay stops receiving and sending; the frames it holds wait in it.</summary>
+    RelayFailure,
+
+    /// <summary>The spool jams and the paying-out fibre snaps: a tether break with its own cause.</summary>
+    SpoolJam,
 }

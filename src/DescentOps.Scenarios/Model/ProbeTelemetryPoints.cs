@@ -19,6 +19,7 @@ public static class ProbeTelemetryPoints
         ("probe.tilt", QuantityKind.Angle),
         ("probe.battery_soc", QuantityKind.Ratio),
         ("probe.bus_power_available", QuantityKind.Power),
+        ("probe.buffer_fill", QuantityKind.Ratio),
     ];
 
     public static QuantityKind? KindOf(string name) =>

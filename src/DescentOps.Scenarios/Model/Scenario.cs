@@ -19,4 +19,5 @@ public sealed record Scenario(
     string SourceName,
     string SourceText,
     PowerModel? Power = null,
-    AcousticsModel? Acoustics = null);
+    AcousticsModel? Acoustics = null,
+    RelayPlanModel? Relays = null);
