@@ -46,6 +46,6 @@ public sealed class TetherLinkRunTests
         var percent = MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 50 %\n    at: 2 d\nrun:\n"));
         Assert.Equal(0.5, percent.Faults.Single(f => f.Name == "fill-stuck").ValueSi!.Value, 12);
         var wrong = Assert.Throws<ScenarioException>(() => MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 3 m\n    at: 2 d\nrun:\n")));
-        Assert.Contains("fraction", Assert.Single(wrong.Errors).Message);
+        Assert.Contains("ratio", Assert.Single(wrong.Errors).Message);
     }
 }

@@ -10,6 +10,9 @@ public sealed class LinkFieldTests
 
     private static ScenarioError SingleError(string text) => MalformedScenarioTests.SingleError(text);
 
+    /// <summary>Where the every-field fixture lists its relay failure among its faults.</summary>
+    private static int RelayFault => ScenarioLoader.LoadText(ScenarioText.Default, File).Faults.ToList().FindIndex(f => f.Kind == Model.FaultKind.RelayFailure);
+
     [Fact]
     public void WithoutTheNewFieldsTheLinkIsTodaysHealthyFibreWithNoBufferAndNoRelays()
     {
@@ -52,7 +55,7 @@ public sealed class LinkFieldTests
     {
         var beyond = ScenarioText.DefaultWith("    relay: relay-2", "    relay: relay-4");
         var error = SingleError(beyond);
-        Assert.Equal("faults[1].relay", error.FieldPath);
+        Assert.Equal($"faults[{RelayFault}].relay", error.FieldPath);
         Assert.Equal(ScenarioText.LineOf(beyond, "relay: relay-4"), error.Location.Line);
         Assert.Contains("carries 3 relays", error.Message);
 
@@ -60,9 +63,9 @@ public sealed class LinkFieldTests
         Assert.Contains("is not a relay", SingleError(unreadable).Message);
 
         var missing = ScenarioText.DefaultWith("    relay: relay-2\n", "");
-        Assert.Equal("faults[1].relay", SingleError(missing).FieldPath);
+        Assert.Equal($"faults[{RelayFault}].relay", SingleError(missing).FieldPath);
 
-        Assert.Equal(2, ScenarioLoader.LoadText(ScenarioText.DefaultWith("    relay: relay-2", "    relay: 2"), File).Faults[1].RelayNumber);
+        Assert.Equal(2, ScenarioLoader.LoadText(ScenarioText.DefaultWith("    relay: relay-2", "    relay: 2"), File).Faults[RelayFault].RelayNumber);
     }
 
     [Fact]
@@ -76,7 +79,7 @@ public sealed class LinkFieldTests
         Assert.Equal("relays.carried", error.FieldPath);
 
         var healing = ScenarioText.DefaultWith("    kind: relay_failure\n    relay: relay-2\n", "    kind: spool_jam\n");
-        Assert.Equal("faults[1].duration", SingleError(healing).FieldPath);
+        Assert.Equal($"faults[{RelayFault}].duration", SingleError(healing).FieldPath);
 
         var badClass = ScenarioText.DefaultWith("  transceiver: 1000base-lx", "  transceiver: 40gbase-er4");
         Assert.Equal("tether.transceiver", SingleError(badClass).FieldPath);
