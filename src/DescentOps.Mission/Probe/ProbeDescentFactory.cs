@@ -30,13 +30,19 @@ public static class ProbeDescentFactory
             convection: scenario.Shell.Convection is { } c ? new ConvectiveLayer(c.TopM, c.TemperatureK, c.BasalBoundaryM) : null);
     }
 
-    /// <summary>The scenario's salty layers, and under them the basal layer wherever a scenario layer leaves it free.</summary>
+    /// <summary>The scenario's salty layers, and the basal layer in whatever parts of the bottom metre they leave free.</summary>
     private static IReadOnlyList<IceLayer> Layers(ShellModel shell)
     {
         var layers = shell.Layers.Select(l => new IceLayer(l.TopM, l.BottomM, l.SalinityKgPerKg * 1000.0)).ToList();
         var basal = BasalLayer(shell);
-        var top = layers.Select(l => l.BottomDepthM).Where(b => b > basal.TopDepthM).DefaultIfEmpty(basal.TopDepthM).Max();
-        if (top < basal.BottomDepthM) layers.Add(basal with { TopDepthM = top });
+        var from = basal.TopDepthM;
+        foreach (var layer in layers.Where(l => l.BottomDepthM > basal.TopDepthM).OrderBy(l => l.TopDepthM).ToList())
+        {
+            if (layer.TopDepthM > from) layers.Add(basal with { TopDepthM = from, BottomDepthM = layer.TopDepthM });
+            from = Math.Max(from, layer.BottomDepthM);
+        }
+
+        if (from < basal.BottomDepthM) layers.Add(basal with { TopDepthM = from });
         return layers;
     }
 

@@ -53,9 +53,13 @@ public sealed class HomeLink
     public double NextFrameStartS(double timeS)
     {
         var start = NextOpeningS(timeS);
-        if (double.IsInfinity(start) || ClosingS(start) >= start + FrameTimeS) return start;
-        // A frame longer than a whole window would never go; it goes at the next opening and overruns it.
-        var next = NextOpeningS(ClosingS(start) + 1e-6);
-        return next;
+        if (double.IsInfinity(start)) return start;
+        var closing = ClosingS(start);
+        if (closing >= start + FrameTimeS) return start;
+        // A frame longer than a whole window would never go: at an opening it goes anyway and overruns the window.
+        // "At an opening" allows a second: edges carry a few microseconds of rounding slack, and within a second of
+        // the opening almost the whole window is still ahead, so a frame that does not fit then never fits.
+        var atOpening = !IsOpen(start - 1.0);
+        return atOpening ? start : NextOpeningS(closing + 1e-6);
     }
 }

@@ -92,11 +92,13 @@ public sealed class StationComponent : SimComponent<StationState>
             case DwellOver:
                 EndDwell(context);
                 return state;
+            case FaultStarted { Fault.Kind: FaultKind.StationFailure } when state.Failed:
+                return state;
             case FaultStarted { Fault.Kind: FaultKind.StationFailure } fault:
                 context.Record("station.failed", Severity.Critical,
                     RecordField.Of("fault", fault.Fault.Name),
                     RecordField.Of("frames_forwarded", state.FramesForwarded));
-                return state.Failed ? state : DropQueues(state, "station failed", context) with { Failed = true, FailureCause = "fault" };
+                return DropQueues(state, "station failed", context) with { Failed = true, FailureCause = "fault" };
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } when state.FailureCause == "dose":
                 return state;
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } fault:
