@@ -596,27 +596,22 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             VehiclesFinished = state.VehiclesFinished + (finished.Lost ? 0 : 1),
             VehiclesLost = state.VehiclesLost + (finished.Lost ? 1 : 0),
         };
-        if (next.VehiclesLost > 0 && next.VehiclesFinished + next.VehiclesLost == _scenario.Vehicles.Count)
+        if (next.VehiclesFinished + next.VehiclesLost < _scenario.Vehicles.Count) return next;
+
+        // Older logs carry no vehicles_lost field: it is written only when a vehicle was lost.
+        RecordField[] fields = next.VehiclesLost > 0
+            ? [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ), RecordField.Of("vehicles_lost", next.VehiclesLost)]
+            : [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ)];
+        context.Record("probe.mission_complete", Severity.Notice, fields);
+        if (next.VehiclesFinished == 0)
         {
-            context.Record("probe.mission_complete", Severity.Notice,
-                RecordField.Of("vehicles_finished", next.VehiclesFinished),
-                RecordField.Of("energy_used_j", next.EnergyUsedJ),
-                RecordField.Of("vehicles_lost", next.VehiclesLost));
-            if (next.VehiclesFinished == 0)
-            {
-                context.StopRun(RunOutcomeKind.MissionLost, $"all {next.VehiclesLost} vehicles lost");
-            }
-            else
-            {
-                context.StopRun(RunOutcomeKind.Completed, $"{next.VehiclesFinished} vehicles finished their tasks, {next.VehiclesLost} lost");
-            }
+            context.StopRun(RunOutcomeKind.MissionLost, $"all {next.VehiclesLost} vehicles lost");
         }
-        else if (next.VehiclesFinished == _scenario.Vehicles.Count)
+        else
         {
-            context.Record("probe.mission_complete", Severity.Notice,
-                RecordField.Of("vehicles_finished", next.VehiclesFinished),
-                RecordField.Of("energy_used_j", next.EnergyUsedJ));
-            context.StopRun(RunOutcomeKind.Completed, $"all {next.VehiclesFinished} vehicles finished their tasks");
+            context.StopRun(RunOutcomeKind.Completed, next.VehiclesLost > 0
+                ? $"{next.VehiclesFinished} vehicles finished their tasks, {next.VehiclesLost} lost"
+                : $"all {next.VehiclesFinished} vehicles finished their tasks");
         }
 
         return next;
