@@ -96,6 +96,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case VehicleFinished finished:
                 return OnVehicleFinished(state, finished, context);
 
+            case DockLoad dock:
+                var demands = dock.PowerW > 0 ? state.DockDemandsW.SetItem(dock.Vehicle, dock.PowerW) : state.DockDemandsW.Remove(dock.Vehicle);
+                return Replan(Retune(Advance(state, context.Now) with { DockDemandsW = demands }, context), context);
+
             case FaultStarted { Fault.Kind: FaultKind.HeaterSegmentFailure } segment:
                 return Replan(Retune(Advance(state, context.Now) with { SegmentLossFraction = 1 - segment.Fault.RemainingFraction }, context), context);
 
@@ -647,7 +651,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private ProbeState Rebus(ProbeState state, ComponentContext context)
     {
         if (state.Bus is not { } bus) return state;
-        var loads = _power!.Loads(HeadDemandW(state), WallDemandW(state), bus.SwitchedOff);
+        var loads = _power!.Loads(HeadDemandW(state), WallDemandW(state), bus.SwitchedOff, state.DockDemandsW);
         var allocation = _power.Allocate(context.Now.SecondsSinceEpoch, state.PowerFraction, state.Regime == ProbeRegime.AtOcean, bus.StateOfCharge, bus.BatteryLockedOut, loads);
         var isStart = bus.Allocation.Loads.Running.Count == 0 && bus.Allocation.Loads.Shed.Count == 0;
         foreach (var model in _power.LoadModels)
@@ -665,7 +669,28 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 RecordField.Of("cause", isOff ?? wasOff ?? ""));
         }
 
-        return state with { Bus = bus with { Allocation = allocation } };
+        return Redock(state with { Bus = bus with { Allocation = allocation } }, context);
+    }
+
+    /// <summary>Tells each docked vehicle when what the bus gives its charger changes: its request while the load runs, else nothing.</summary>
+    private ProbeState Redock(ProbeState state, ComponentContext context)
+    {
+        var granted = state.DockGrantedW;
+        foreach (var (vehicle, demandW) in state.DockDemandsW)
+        {
+            var powerW = IsRunning(state.Bus!, ProbePowerSystem.DockLoadName(vehicle)) ? demandW : 0.0;
+            if (granted.TryGetValue(vehicle, out var before) && before == powerW) continue;
+            context.Record("probe.dock_power", Severity.Info,
+                RecordField.Of("vehicle", vehicle),
+                RecordField.Of("request_w", demandW),
+                RecordField.Of("granted_w", powerW),
+                RecordField.Of("available_w", state.Bus!.Allocation.AvailablePowerW));
+            context.Schedule(MissionIds.Vehicle(vehicle), SimDuration.Zero, new DockPower(powerW), MissionPriority.Command);
+            granted = granted.SetItem(vehicle, powerW);
+        }
+
+        foreach (var gone in granted.Keys.Where(v => !state.DockDemandsW.ContainsKey(v)).ToList()) granted = granted.Remove(gone);
+        return state with { DockGrantedW = granted };
     }
 
     /// <summary>

@@ -87,8 +87,11 @@ public sealed class ProbePowerSystem
         return SourcePowerW(0.0) + (_power.Battery?.MaxDischargePowerW ?? 0.0) + turbine;
     }
 
-    /// <summary>The loads that ask for power now; a load switched off by telecommand does not ask.</summary>
-    public IReadOnlyList<PoweredLoad> Loads(double headDemandW, double wallDemandW, IReadOnlySet<string> switchedOff) =>
+    /// <summary>
+    /// The loads that ask for power now; a load switched off by telecommand does not ask. Docked vehicles' chargers
+    /// come last of all (one priority below the least important scenario load): the probe's own descent goes first.
+    /// </summary>
+    public IReadOnlyList<PoweredLoad> Loads(double headDemandW, double wallDemandW, IReadOnlySet<string> switchedOff, IReadOnlyDictionary<string, double>? dockDemandsW = null) =>
     [
         .. _power.Loads.Where(l => !switchedOff.Contains(l.Name)).Select(l => new PoweredLoad(l.Name, l.Priority, l.Role switch
         {
@@ -97,7 +100,14 @@ public sealed class ProbePowerSystem
             BusLoadRole.Electronics => _probe.ElectronicsPowerW,
             _ => l.PowerW,
         })),
+        .. (dockDemandsW ?? new Dictionary<string, double>()).Select(d => new PoweredLoad(DockLoadName(d.Key), DockPriority, d.Value)),
     ];
+
+    /// <summary>Priority of a docked vehicle's charger: after every load of the scenario's bus.</summary>
+    public int DockPriority => _power.Loads.Max(l => l.Priority) + 1;
+
+    /// <summary>The bus name of a docked vehicle's charger.</summary>
+    public static string DockLoadName(string vehicle) => "dock-" + vehicle;
 
     /// <summary>Allocates the bus: the source scaled by the power dips in force, the turbine, the battery unless locked out.</summary>
     public BusAllocation Allocate(double elapsedS, double dipFraction, bool inOcean, double stateOfCharge, bool batteryLockedOut, IReadOnlyList<PoweredLoad> loads) =>

@@ -52,6 +52,12 @@ public sealed record ProbeState(
 
     /// <summary>Thickness of the debris deposit collected on the head so far.</summary>
     public double DebrisOnHeadM { get; init; }
+
+    /// <summary>Charging power each docked vehicle asks of the bus, by vehicle name.</summary>
+    public ImmutableSortedDictionary<string, double> DockDemandsW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
+
+    /// <summary>What the bus last granted each docked vehicle, as the vehicle was told.</summary>
+    public ImmutableSortedDictionary<string, double> DockGrantedW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 }
 
 /// <summary>A fault that starts when the head reaches a depth.</summary>

@@ -28,6 +28,9 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     private readonly double _salinityKgPerKg;
     private readonly double _gravityMPerS2;
 
+    /// <summary>With a power system on the probe the dock's charger draws on the probe's bus, which may shed it.</summary>
+    private readonly bool _dockOnProbeBus;
+
     public VehicleComponent(VehicleModel vehicle, Scenario scenario)
         : base(MissionIds.Vehicle(vehicle.Name), FailurePolicy.RestartFromLastState)
     {
@@ -36,6 +39,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         _acoustics = scenario.Acoustics;
         _salinityKgPerKg = scenario.Shell.OceanSalinityKgPerKg;
         _gravityMPerS2 = scenario.Body.GravityMPerS2;
+        _dockOnProbeBus = scenario.Power is not null;
     }
 
     public override VehicleState InitialState => new(
@@ -56,6 +60,8 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
                 return done.BatteryEmpty ? Lost(state, state.Leg.Held ? "flat battery while entrapped" : "flat battery", context) : EndLeg(state, context);
             case VehicleCharged:
                 return Charged(state with { PendingTimer = null }, context);
+            case DockPower power:
+                return OnDockPower(state, power, context);
             case VehicleMessageDue:
                 return MessageDue(state with { PendingTick = null }, context);
             case FaultStarted { Fault.Kind: FaultKind.VehicleLoss } fault:
@@ -279,6 +285,17 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         if (state.Sortie >= dock.Sorties) return Finish(state, "all sorties flown", context);
         if (dock.ChargingPowerW <= 0) return Finish(state, "docked; no charging", context);
 
+        if (_dockOnProbeBus)
+        {
+            // The charger asks the probe's bus; charging starts when the bus grants it (DockPower).
+            context.Record("vehicle.charging", Severity.Info,
+                RecordField.Of("battery_j", state.BatteryJ),
+                RecordField.Of("charging_power_w", dock.ChargingPowerW),
+                RecordField.Of("fed_by", "probe bus"));
+            context.Schedule(MissionIds.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, dock.ChargingPowerW), MissionPriority.Command);
+            return state with { Phase = VehiclePhase.Charging, PendingTimer = null, DockChargeW = 0.0, DockChargeSince = context.Now };
+        }
+
         var seconds = Math.Max(0.0, _vehicle.BatteryEnergyJ - state.BatteryJ) / dock.ChargingPowerW;
         context.Record("vehicle.charging", Severity.Info,
             RecordField.Of("battery_j", state.BatteryJ),
@@ -288,9 +305,44 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         return state with { Phase = VehiclePhase.Charging, PendingTimer = handle };
     }
 
+    /// <summary>
+    /// The probe's bus changed what the charger gets: the energy charged at the old power is booked, and the battery is
+    /// expected full at the new power, or not at all while the charger is shed.
+    /// </summary>
+    private VehicleState OnDockPower(VehicleState state, DockPower power, ComponentContext context)
+    {
+        if (state.Phase != VehiclePhase.Charging) return state;
+        var gainedJ = Math.Min(state.DockChargeW * (context.Now - state.DockChargeSince).TotalSeconds, Math.Max(0.0, _vehicle.BatteryEnergyJ - state.BatteryJ));
+        if (state.PendingTimer is { } timer) context.Cancel(timer);
+        state = state with
+        {
+            BatteryJ = state.BatteryJ + gainedJ,
+            EnergyChargedJ = state.EnergyChargedJ + gainedJ,
+            DockChargeW = power.PowerW,
+            DockChargeSince = context.Now,
+            PendingTimer = null,
+        };
+        context.Record("vehicle.dock_power", Severity.Info,
+            RecordField.Of("granted_w", power.PowerW),
+            RecordField.Of("battery_j", state.BatteryJ));
+        if (power.PowerW <= 0) return state;
+        var seconds = Math.Max(0.0, _vehicle.BatteryEnergyJ - state.BatteryJ) / power.PowerW;
+        return state with { PendingTimer = context.ScheduleSelf(SimDuration.FromSeconds(seconds), new VehicleCharged(), MissionPriority.Physics) };
+    }
+
+    /// <summary>Gives the probe's bus its power back when the charger stops drawing.</summary>
+    private void ReleaseDock(VehicleState state, ComponentContext context)
+    {
+        if (_dockOnProbeBus && state.Phase == VehiclePhase.Charging)
+        {
+            context.Schedule(MissionIds.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, 0.0), MissionPriority.Command);
+        }
+    }
+
     private VehicleState Charged(VehicleState state, ComponentContext context)
     {
         if (state.Phase != VehiclePhase.Charging) return state;
+        ReleaseDock(state, context);
         var charged = _vehicle.BatteryEnergyJ - state.BatteryJ;
         state = state with
         {
@@ -313,6 +365,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     private VehicleState Finish(VehicleState state, string reason, ComponentContext context)
     {
+        ReleaseDock(state, context);
         context.Record("vehicle.task_complete", Severity.Notice,
             RecordField.Of("reason", reason),
             RecordField.Of("profiles", state.ProfilesCompleted),
@@ -325,6 +378,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     private VehicleState Lost(VehicleState state, string reason, ComponentContext context)
     {
+        ReleaseDock(state, context);
         state = Interrupt(state, context);
         var held = state.Link.Held;
         context.Record("vehicle.lost", Severity.Critical,

@@ -1,4 +1,5 @@
 using DescentOps.Engine.Scheduling;
+using DescentOps.Primitives.Time;
 
 namespace DescentOps.Mission.Vehicles;
 
@@ -32,4 +33,10 @@ public sealed record VehicleState(
     public bool Released => Phase != VehiclePhase.Stowed;
 
     public bool Finished => Phase == VehiclePhase.Done;
+
+    /// <summary>Power the probe's bus gives the dock's charger now (charging on the probe's bus only).</summary>
+    public double DockChargeW { get; init; }
+
+    /// <summary>Since when <see cref="DockChargeW"/> has held, so the energy charged at it can be booked.</summary>
+    public SimTime DockChargeSince { get; init; }
 }
