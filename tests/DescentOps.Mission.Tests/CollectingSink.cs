@@ -14,4 +14,10 @@ internal sealed class CollectingSink : IJournalSink
     public static double Field(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Number;
 
     public static long IntegerField(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Integer;
+
+    public static string TextField(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Text ?? "";
+
+    /// <summary>A text field holding numbers separated by spaces, as the injector logs the random faults' draws.</summary>
+    public static IReadOnlyList<double> NumbersField(JournalRecord record, string name) =>
+        [.. TextField(record, name).Split(' ').Select(s => double.Parse(s, System.Globalization.CultureInfo.InvariantCulture))];
 }

@@ -14,14 +14,6 @@ public sealed class ContingencyTests
 {
     private static string Text(string name) => BuiltInScenarios.Text(name);
 
-    private static string WithoutRules(string text)
-    {
-        var start = text.IndexOf("rules: |", StringComparison.Ordinal);
-        var end = text.IndexOf("\nrun:", StringComparison.Ordinal);
-        Assert.True(start > 0 && end > start);
-        return text[..start] + text[(end + 1)..];
-    }
-
     private static Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(string text, string name) =>
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));
 
@@ -29,7 +21,7 @@ public sealed class ContingencyTests
     public async Task AFrozenInProbeIsFreedByTheWallBoostRuleAndStaysHeldWithoutIt()
     {
         var (withRules, sinkWith) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
-        var (withoutRules, sinkWithout) = await RunAsync(WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
+        var (withoutRules, sinkWithout) = await RunAsync(MissionHarness.WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
 
         Assert.Equal(RunOutcomeKind.Completed, withRules.Outcome.Kind);
         Assert.NotNull(withRules.BreakthroughTimeS);
@@ -132,7 +124,7 @@ public sealed class ContingencyTests
     public async Task AFailedHeadSegmentTurnsTheProbePastItsLimitUnlessARuleSteersBack()
     {
         var (steered, steeredSink) = await RunAsync(Text("tilt-steering.yaml"), "steered.yaml");
-        var (unsteered, unsteeredSink) = await RunAsync(WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
+        var (unsteered, unsteeredSink) = await RunAsync(MissionHarness.WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
 
         Assert.Equal(RunOutcomeKind.Completed, steered.Outcome.Kind);
         Assert.NotNull(Assert.Single(steered.Faults).RecoveredAfterS);
@@ -146,7 +138,7 @@ public sealed class ContingencyTests
     [Fact]
     public async Task AnUnevenHeadTurnsTheProbeAtTheKinematicLimitOfItsClearance()
     {
-        var scenario = ScenarioLoader.LoadText(WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
+        var scenario = ScenarioLoader.LoadText(MissionHarness.WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);
         var frames = sink.OfKind("probe.telemetry").Where(r => r.Time.SecondsSinceEpoch > 21 * 86400).Take(2).ToList();
 

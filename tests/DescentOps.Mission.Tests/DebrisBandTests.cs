@@ -17,7 +17,8 @@ public sealed class DebrisBandTests
         Assert.Equal(25, crossing.BandDepthM, 12);
         Assert.Equal(((5 * 0.003) + (20 * 0.0005)) / 0.6, crossing.DebrisM, 12);
         Assert.Equal((0.01 * 0.01 * 5) + (0.02 * 0.02 * 20), crossing.TiltVarianceRad2, 12);
-        Assert.Equal(bands[0], crossing.BandLeft);
+        Assert.Equal([bands[0]], crossing.BandsLeft);
+        Assert.Equal(bands, DebrisCrossing.Between(bands, 0, 300).BandsLeft);
         Assert.Equal(0, DebrisCrossing.Between(bands, 110, 200).BandDepthM);
     }
 

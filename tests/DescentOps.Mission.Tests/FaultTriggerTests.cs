@@ -1,4 +1,3 @@
-using System.Globalization;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
@@ -24,8 +23,7 @@ public sealed class FaultTriggerTests
             ("until: 400 d", "until: " + until));
 
     private static IReadOnlyList<double> DrawnStartsS(CollectingSink sink, string fault) =>
-        [.. sink.OfKind("fault.drawn").Where(r => r.Fields.Single(f => f.Name == "fault").Text == fault)
-            .SelectMany(r => r.Fields.Single(f => f.Name == "starts_s").Text!.Split(' ')).Select(s => double.Parse(s, CultureInfo.InvariantCulture))];
+        [.. sink.OfKind("fault.drawn").Where(r => CollectingSink.TextField(r, "fault") == fault).SelectMany(r => CollectingSink.NumbersField(r, "starts_s"))];
 
     [Fact]
     public async Task AConditionTriggerFiresOnTheFirstFrameCompletingItsPersistenceOnTheTrueState()

@@ -25,6 +25,15 @@ internal static class MissionHarness
         return ScenarioLoader.LoadText(text, "edited.yaml");
     }
 
+    /// <summary>A scenario's text with its rules block taken out: the same faults, met without the rules.</summary>
+    public static string WithoutRules(string text)
+    {
+        var start = text.IndexOf("rules: |", StringComparison.Ordinal);
+        var end = text.IndexOf("\nrun:", StringComparison.Ordinal);
+        Assert.True(start > 0 && end > start);
+        return text[..start] + text[(end + 1)..];
+    }
+
     public static async Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(Scenario scenario, KernelChoice kernel = KernelChoice.Sequential, long? seed = null)
     {
         var sink = new CollectingSink();

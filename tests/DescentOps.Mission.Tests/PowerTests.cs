@@ -19,14 +19,6 @@ public sealed class PowerTests
 
     private static string Text => BuiltInScenarios.Text(ScenarioName);
 
-    private static string WithoutRules(string text)
-    {
-        var start = text.IndexOf("rules: |", StringComparison.Ordinal);
-        var end = text.IndexOf("\nrun:", StringComparison.Ordinal);
-        Assert.True(start > 0 && end > start);
-        return text[..start] + text[(end + 1)..];
-    }
-
     private static string Edit(string text, string line, string replacement)
     {
         Assert.Contains(line, text);
@@ -45,7 +37,7 @@ public sealed class PowerTests
     public async Task SheddingKeepsTheHeadMeltingThroughTheDipAndWithoutTheRuleTheProbeFreezesIn()
     {
         var (shed, shedSink) = await RunAsync(Text, "with.yaml");
-        var (unshed, unshedSink) = await RunAsync(WithoutRules(Text), "without.yaml");
+        var (unshed, unshedSink) = await RunAsync(MissionHarness.WithoutRules(Text), "without.yaml");
 
         // With the rule: it fires on the first frame of the dip, the pump goes off by command, and the probe never
         // stops; the head keeps melting on the source alone.
@@ -110,7 +102,7 @@ public sealed class PowerTests
         // Contrived to isolate the turbine: the source fails at breakthrough for good (a long dip to nothing), the
         // current is 0.5 m/s, the rules are removed. The pack runs flat on the electronics and the pump, which the
         // turbine's two watts cannot feed, so the bus sheds them and all the harvest goes to the pack.
-        var text = WithoutRules(Text);
+        var text = MissionHarness.WithoutRules(Text);
         text = Edit(text, "    current_speed: 0.15 m/s", "    current_speed: 0.5 m/s");
         text = Edit(text, "    at: 20 d\n    duration: 2 d\n    remaining_fraction: 0.3", "    at_depth: 2500 m\n    duration: 30 d\n    remaining_fraction: 0");
         var scenario = ScenarioLoader.LoadText(text, "turbine.yaml");
@@ -155,7 +147,7 @@ public sealed class PowerTests
     [Fact]
     public async Task AFissionSourceHoldsItsOutputAndRecordsTheCoreHeatBehindIt()
     {
-        var text = Edit(WithoutRules(Text), "  source: radioisotope\n  thermal_power: 40 kW\n  conversion_efficiency: 0.25\n  degradation_per_year: 0.01\n  fuel_age: 1 yr\n",
+        var text = Edit(MissionHarness.WithoutRules(Text), "  source: radioisotope\n  thermal_power: 40 kW\n  conversion_efficiency: 0.25\n  degradation_per_year: 0.01\n  fuel_age: 1 yr\n",
             "  source: fission\n  electric_power: 10 kW\n  conversion_efficiency: 0.25\n");
         var scenario = ScenarioLoader.LoadText(text, "fission.yaml");
         scenario = scenario with { Run = scenario.Run with { UntilS = 30 * Day } };

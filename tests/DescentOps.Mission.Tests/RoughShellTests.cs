@@ -12,20 +12,12 @@ public sealed class RoughShellTests
 {
     private static string Text => BuiltInScenarios.Text("rough-shell.yaml");
 
-    private static string WithoutRules(string text)
-    {
-        var start = text.IndexOf("rules: |", StringComparison.Ordinal);
-        var end = text.IndexOf("\nrun:", StringComparison.Ordinal);
-        Assert.True(start > 0 && end > start);
-        return text[..start] + text[(end + 1)..];
-    }
-
     [Fact]
     public async Task SteeringRulesBringTheProbeThroughAndWithoutThemTheSameFaultsLoseIt()
     {
         var scenario = ScenarioLoader.LoadText(Text, "rough-shell.yaml");
         var (steered, sink) = await MissionHarness.RunAsync(scenario);
-        var (unsteered, sinkWithout) = await MissionHarness.RunAsync(ScenarioLoader.LoadText(WithoutRules(Text), "without.yaml"));
+        var (unsteered, sinkWithout) = await MissionHarness.RunAsync(ScenarioLoader.LoadText(MissionHarness.WithoutRules(Text), "without.yaml"));
 
         Assert.Equal(RunOutcomeKind.Completed, steered.Outcome.Kind);
         Assert.NotNull(steered.BreakthroughTimeS);
@@ -54,9 +46,8 @@ public sealed class RoughShellTests
         Assert.Equal(firstWarm.Time.SecondsSinceEpoch + 3600, triggered.Time.SecondsSinceEpoch);
 
         // Three random sags, drawn at the start, each injected at its drawn time.
-        var drawn = Assert.Single(sink.OfKind("fault.drawn")).Fields.Single(f => f.Name == "starts_s").Text!.Split(' ')
-            .Select(s => double.Parse(s, System.Globalization.CultureInfo.InvariantCulture)).ToList();
-        var sags = sink.OfKind("fault.injected").Where(r => r.Fields.Single(f => f.Name == "fault").Text == "random-bus-sag")
+        var drawn = CollectingSink.NumbersField(Assert.Single(sink.OfKind("fault.drawn")), "starts_s");
+        var sags = sink.OfKind("fault.injected").Where(r => CollectingSink.TextField(r, "fault") == "random-bus-sag")
             .Select(r => r.Time.SecondsSinceEpoch).ToList();
         Assert.Equal(3, drawn.Count);
         Assert.Equal(drawn, sags);

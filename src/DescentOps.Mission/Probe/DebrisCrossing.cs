@@ -8,7 +8,7 @@ namespace DescentOps.Mission.Probe;
 /// n_p = 0.4, a rule of thumb from the physics reference, no published value), and the variance of the random tilt
 /// change (σ² dz per band: a random walk in depth, MODEL: no published calibration exists).
 /// </summary>
-public readonly record struct DebrisCrossing(double BandDepthM, double DebrisM, double TiltVarianceRad2, DebrisBandModel? BandLeft)
+public readonly record struct DebrisCrossing(double BandDepthM, double DebrisM, double TiltVarianceRad2, IReadOnlyList<DebrisBandModel> BandsLeft)
 {
     /// <summary>Porosity of the debris deposit on the head (rule of thumb, see the type's summary).</summary>
     public const double DepositPorosity = 0.4;
@@ -16,7 +16,7 @@ public readonly record struct DebrisCrossing(double BandDepthM, double DebrisM, 
     public static DebrisCrossing Between(IReadOnlyList<DebrisBandModel> bands, double fromDepthM, double toDepthM)
     {
         double bandDepth = 0, debris = 0, variance = 0;
-        DebrisBandModel? left = null;
+        var left = new List<DebrisBandModel>();
         foreach (var band in bands)
         {
             var overlap = Math.Min(toDepthM, band.BottomM) - Math.Max(fromDepthM, band.TopM);
@@ -24,7 +24,7 @@ public readonly record struct DebrisCrossing(double BandDepthM, double DebrisM, 
             bandDepth += overlap;
             debris += overlap * band.VolumeFraction / (1 - DepositPorosity);
             variance += band.TiltScatterRad * band.TiltScatterRad * overlap;
-            if (fromDepthM < band.BottomM && toDepthM >= band.BottomM) left = band;
+            if (fromDepthM < band.BottomM && toDepthM >= band.BottomM) left.Add(band);
         }
 
         return new DebrisCrossing(bandDepth, debris, variance, left);

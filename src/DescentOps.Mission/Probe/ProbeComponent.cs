@@ -205,7 +205,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             state = state with { TiltRad = state.TiltRad + context.Random.NextNormal(0.0, Math.Sqrt(crossing.TiltVarianceRad2)) };
         }
 
-        if (crossing.BandLeft is { } band)
+        foreach (var band in crossing.BandsLeft)
         {
             context.Record("probe.debris_band_crossed", Severity.Notice,
                 RecordField.Of("top_m", band.TopM),

@@ -59,33 +59,30 @@ public sealed class ProbePowerSystem
     /// <summary>Electric output of the source <paramref name="elapsedS"/> into the run, before any dip.</summary>
     public double SourcePowerW(double elapsedS) => _power.Source switch
     {
-        PowerSourceKind.Radioisotope => RadioisotopeHeatSource.Output(_power.ThermalPowerW, _power.ConversionEfficiency, _power.DegradationPerYear, _power.FuelAgeS + elapsedS).ElectricPowerW,
+        PowerSourceKind.Radioisotope => Radioisotope(elapsedS).ElectricPowerW,
         _ => _power.ElectricPowerW,
     };
 
     /// <summary>Heat the source releases (the radioisotope's decay heat, or the core heat behind the fission output).</summary>
     public double SourceThermalPowerW(double elapsedS) => _power.Source switch
     {
-        PowerSourceKind.Radioisotope => RadioisotopeHeatSource.Output(_power.ThermalPowerW, _power.ConversionEfficiency, _power.DegradationPerYear, _power.FuelAgeS + elapsedS).ThermalPowerW,
+        PowerSourceKind.Radioisotope => Radioisotope(elapsedS).ThermalPowerW,
         _ => FissionSource.AtElectricOutput(_power.ElectricPowerW, _power.ConversionEfficiency).ThermalPowerW,
     };
 
     /// <summary>The turbine's output: only in the ocean, where the current passes the rotor.</summary>
-    public double HarvestPowerW(bool inOcean)
-    {
-        if (!inOcean || _power.Turbine is not { } t) return 0.0;
-        var areaM2 = Math.PI * t.RotorDiameterM * t.RotorDiameterM / 4;
-        return CurrentTurbine.ElectricPowerW(t.CurrentSpeedMPerS, t.WaterDensityKgPerM3, areaM2, t.PowerCoefficient, t.DrivetrainEfficiency, t.CutInSpeedMPerS, t.RatedSpeedMPerS);
-    }
+    public double HarvestPowerW(bool inOcean) =>
+        inOcean && _power.Turbine is { } t ? TurbinePowerW(t, t.CurrentSpeedMPerS) : 0.0;
 
     /// <summary>Most the bus could ever offer: the source when new, the battery's limit and the turbine's rated output.</summary>
-    public double MaxAvailablePowerW()
-    {
-        var turbine = _power.Turbine is { } t
-            ? CurrentTurbine.ElectricPowerW(t.RatedSpeedMPerS, t.WaterDensityKgPerM3, Math.PI * t.RotorDiameterM * t.RotorDiameterM / 4, t.PowerCoefficient, t.DrivetrainEfficiency, t.CutInSpeedMPerS, t.RatedSpeedMPerS)
-            : 0.0;
-        return SourcePowerW(0.0) + (_power.Battery?.MaxDischargePowerW ?? 0.0) + turbine;
-    }
+    public double MaxAvailablePowerW() =>
+        SourcePowerW(0.0) + (_power.Battery?.MaxDischargePowerW ?? 0.0) + (_power.Turbine is { } t ? TurbinePowerW(t, t.RatedSpeedMPerS) : 0.0);
+
+    private RadioisotopeOutput Radioisotope(double elapsedS) =>
+        RadioisotopeHeatSource.Output(_power.ThermalPowerW, _power.ConversionEfficiency, _power.DegradationPerYear, _power.FuelAgeS + elapsedS);
+
+    private static double TurbinePowerW(TurbineModel turbine, double currentSpeedMPerS) =>
+        CurrentTurbine.ElectricPowerW(currentSpeedMPerS, turbine.WaterDensityKgPerM3, Math.PI * turbine.RotorDiameterM * turbine.RotorDiameterM / 4, turbine.PowerCoefficient, turbine.DrivetrainEfficiency, turbine.CutInSpeedMPerS, turbine.RatedSpeedMPerS);
 
     /// <summary>
     /// The loads that ask for power now; a load switched off by telecommand does not ask. Docked vehicles' chargers

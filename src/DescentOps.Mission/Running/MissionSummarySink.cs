@@ -44,7 +44,7 @@ public sealed class MissionSummarySink : IJournalSink
             case "ground.telemetry":
                 _framesReceived++;
                 break;
-            case "data.lost" when record.Fields.Any(f => f.Name == "kind" && f.Text == "telemetry"):
+            case "data.lost" when Text(record, "kind") == "telemetry":
             case "station.frame_lost":
                 _framesLost++;
                 break;

@@ -304,7 +304,7 @@ public sealed class StationComponent : SimComponent<StationState>
                 RecordField.Of("cause", cause));
         }
 
-        foreach (var waiting in state.Commands) LoseCommand(state, waiting.Command, cause, context);
+        foreach (var waiting in state.Commands) state = LoseCommand(state, waiting.Command, cause, context);
         return state with
         {
             Frames = [],
@@ -312,7 +312,6 @@ public sealed class StationComponent : SimComponent<StationState>
             FramesQueued = 0,
             Commands = [],
             CommandsQueued = 0,
-            CommandsLost = state.CommandsLost + state.CommandsQueued,
             PendingService = null,
             WaitingSince = null,
         };
