@@ -26,8 +26,14 @@ public static class MissionRunner
         KernelChoice kernel = KernelChoice.Actors,
         Action<KernelProgress>? progress = null)
     {
-        var summary = new MissionSummarySink(journal);
-        var setup = new KernelSetup(MissionAssembly.Components(scenario), seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress);
+        var (drawn, inputs) = UncertainDraw.Draw(scenario, seed);
+        scenario = drawn;
+        var rules = Autonomy.MissionRules.Compile(scenario);
+        var rulePoints = rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
+        var detectedBy = scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
+        var summary = new MissionSummarySink(journal, new FaultMeasures(rulePoints, detectedBy), new RunFigures(scenario.Probe.TelemetryIntervalS));
+        if (inputs.Count > 0) summary.Write(UncertainDraw.Record(inputs));
+        var setup = new KernelSetup(MissionAssembly.Components(scenario, rules), seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress);
         RunResult result;
         if (kernel == KernelChoice.Sequential)
         {
@@ -46,6 +52,7 @@ public static class MissionRunner
             }
         }
 
-        return summary.Summarize(result);
+        var figures = summary.Summarize(result) with { Inputs = inputs, RuleNames = [.. rules.Rules.Select(r => r.Name)] };
+        return figures with { Criteria = CriterionResult.Judge(scenario.Criteria, figures) };
     }
 }

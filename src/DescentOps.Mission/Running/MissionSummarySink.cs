@@ -18,14 +18,26 @@ public sealed class MissionSummarySink : IJournalSink
     private long _framesReceived;
     private long _framesLost;
     private int _profiles;
-    private readonly FaultMeasures _faultMeasures = new();
+    private readonly FaultMeasures _faultMeasures;
+    private readonly RunFigures _figures;
 
-    public MissionSummarySink(IJournalSink next) => _next = next;
+    public MissionSummarySink(IJournalSink next)
+        : this(next, new FaultMeasures(), new RunFigures(600))
+    {
+    }
+
+    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures, RunFigures figures)
+    {
+        _next = next;
+        _faultMeasures = faultMeasures;
+        _figures = figures;
+    }
 
     public void Write(JournalRecord record)
     {
         _next.Write(record);
         _faultMeasures.Observe(record);
+        _figures.Observe(record);
         switch (record.Kind)
         {
             case "probe.telemetry":
@@ -60,7 +72,10 @@ public sealed class MissionSummarySink : IJournalSink
         }
     }
 
-    public MissionSummary Summarize(RunResult result) => new(
+    public MissionSummary Summarize(RunResult result)
+    {
+        _figures.Finish(result.FinalTime.SecondsSinceEpoch);
+        return new MissionSummary(
         result.Outcome,
         result.FinalTime.SecondsSinceEpoch,
         _breakthroughS,
@@ -74,7 +89,17 @@ public sealed class MissionSummarySink : IJournalSink
         result.EventsDelivered,
         result.RecordsWritten,
         result.ComponentFailures,
-        _faultMeasures.Measures());
+        _faultMeasures.Measures())
+        {
+            TimeStoppedS = _figures.TimeStoppedS,
+            LongestStopS = _figures.LongestStopS,
+            TimeFrozenS = _figures.TimeFrozenS,
+            TimeBlindS = _figures.TimeBlindS,
+            FramesHeldMax = _figures.FramesHeldMax,
+            VehiclesLost = _figures.VehiclesLost,
+            RuleFirings = new Dictionary<string, int>(_figures.RuleFirings, StringComparer.Ordinal),
+        };
+    }
 
     private static string? Text(JournalRecord record, string name) => record.Fields.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault();
 

@@ -71,7 +71,7 @@ public static class ScenarioLoader
     {
         var errors = new List<ScenarioError>();
         var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths);
-        var scenario = Build(root, sourceName, text);
+        var scenario = DescentOps.Scenarios.Campaign.CampaignSections.Read(Build(root, sourceName, text), root, text, errors);
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -408,7 +408,10 @@ public static class ScenarioLoader
         f.OptionalQuantity("mean_interval"),
         f.OptionalQuantity("not_before") ?? 0.0,
         (int)(f.OptionalInteger("occurrences") ?? 1),
-        RelayNumber(f));
+        RelayNumber(f))
+    {
+        DetectedBy = DescentOps.Scenarios.Campaign.CampaignSections.RuleNames(f.OptionalText("detected_by")),
+    };
 
     /// <summary>"relay-2" or "2" is relay number 2; 0 marks a name that does not parse (reported by <see cref="CheckFault"/>).</summary>
     private static int? RelayNumber(BoundSection fault)

@@ -20,4 +20,11 @@ public sealed record Scenario(
     string SourceText,
     PowerModel? Power = null,
     AcousticsModel? Acoustics = null,
-    RelayPlanModel? Relays = null);
+    RelayPlanModel? Relays = null)
+{
+    /// <summary>Values drawn per run from the run's own stream (the <c>uncertain</c> section).</summary>
+    public IReadOnlyList<Campaign.UncertainInput> Uncertain { get; init; } = [];
+
+    /// <summary>Named pass/fail criteria over a run (the <c>criteria</c> section).</summary>
+    public IReadOnlyList<Campaign.MissionCriterion> Criteria { get; init; } = [];
+}
