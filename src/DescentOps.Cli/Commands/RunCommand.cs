@@ -113,12 +113,20 @@ public static class RunCommand
             ("telemetry frames", string.Create(c, $"{s.FramesSent} sent, {s.FramesReceivedOnGround} received on ground, {s.FramesLost} lost")),
             ("vehicle profiles", s.VehicleProfiles.ToString(c)),
             ("component failures", s.ComponentFailures.ToString(c)),
+            ("stopped", string.Create(c, $"{s.TimeStoppedS / 3600:F1} h in all, longest {s.LongestStopS / 3600:F1} h, frozen in {s.TimeFrozenS / 3600:F1} h")),
+            ("ground blind", string.Create(c, $"{s.TimeBlindS / 3600:F1} h; at most {s.FramesHeldMax} frames held; {s.VehiclesLost} vehicle(s) lost")),
             ("events", string.Create(c, $"{s.EventsDelivered} delivered, {s.RecordsWritten} logged")),
             ("wall time", string.Create(c, $"{wall.TotalSeconds:F2} s")),
             ("speed-up", string.Create(c, $"{s.FinalTimeS / Math.Max(wall.TotalSeconds, 1e-6):E2} x real time")),
             ("event log", path),
         };
         foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
+        foreach (var criterion in s.Criteria)
+        {
+            Console.Out.WriteLine(string.Create(c, $"  criterion {criterion.Name,-13}{(criterion.Passed ? "met" : "NOT met")}: {criterion.Requirement} (measured {(criterion.Value is { } v ? v.ToString("G6", c) : "none")})"));
+        }
+
+        if (s.Criteria.Count > 0) Console.Out.WriteLine($"  {"success",-22}{(s.Success ? "yes" : "no")}");
         foreach (var f in s.Faults)
         {
             Console.Out.WriteLine(string.Create(c, $"  fault {f.Fault} ({f.Kind}, at {f.StartS / 86400:F3} d): detected {After(f.DetectedAfterS)}, first action {After(f.FirstActionAfterS)}, recovered {After(f.RecoveredAfterS)} [{f.Recovery}]"));
