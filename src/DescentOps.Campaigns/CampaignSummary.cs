@@ -41,7 +41,7 @@ public static class CampaignSummary
         return root;
     }
 
-    public static string ToJson(JsonObject summary) => summary.ToJsonString(new JsonSerializerOptions { WriteIndented = true }) + "\n";
+    public static string ToJson(JsonObject summary) => summary.ToJsonString(new JsonSerializerOptions { WriteIndented = true, Encoder = System.Text.Encodings.Web.JavaScriptEncoder.UnsafeRelaxedJsonEscaping }) + "\n";
 
     /// <summary>The 95 % Wilson half-width of a variant's success rate, for the precision stop.</summary>
     public static double HalfWidth(int successes, int n)

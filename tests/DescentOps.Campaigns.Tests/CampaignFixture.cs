@@ -1,0 +1,63 @@
+using System.CommandLine;
+using DescentOps.Cli.Commands;
+using Microsoft.Data.Sqlite;
+
+namespace DescentOps.Campaigns.Tests;
+
+/// <summary>Runs the command line in this process (as the tool does, minus its exit-code mapping) and reads a campaign's tables.</summary>
+internal static class CampaignFixture
+{
+    public static string Scenario => Path.Combine(AppContext.BaseDirectory, "short-stall.yaml");
+
+    public static string NoBoost => Path.Combine(AppContext.BaseDirectory, "no-boost.yaml");
+
+    public static string TempDir()
+    {
+        var dir = Path.Combine(Path.GetTempPath(), "descentops-campaign-tests", Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(dir);
+        return dir;
+    }
+
+    public static async Task<int> CliAsync(params string[] args)
+    {
+        var root = new RootCommand("test") { RunCommand.Create(), CampaignCommand.Create() };
+        var parse = root.Parse(args);
+        if (parse.Errors.Count > 0) return 2;
+        return await parse.InvokeAsync(new InvocationConfiguration { EnableDefaultExceptionHandler = false });
+    }
+
+    /// <summary>Every table's rows, ordered by their key, as text: two equal dumps mean equal tables.</summary>
+    public static string Dump(string dir)
+    {
+        using var connection = new SqliteConnection($"Data Source={Path.Combine(dir, "campaign.sqlite")};Pooling=False");
+        connection.Open();
+        var text = new System.Text.StringBuilder();
+        foreach (var (table, order) in new[]
+        {
+            ("runs", "variant, run_index"), ("inputs", "variant, run_index, path"), ("criteria", "variant, run_index, criterion"),
+            ("fault_measures", "variant, run_index, ordinal"), ("rule_firings", "variant, run_index, rule"),
+        })
+        {
+            using var command = connection.CreateCommand();
+            command.CommandText = $"SELECT * FROM {table} ORDER BY {order}";
+            using var reader = command.ExecuteReader();
+            text.Append(table).Append('\n');
+            while (reader.Read())
+            {
+                for (var i = 0; i < reader.FieldCount; i++) text.Append(reader.IsDBNull(i) ? "NULL" : Convert.ToString(reader.GetValue(i), System.Globalization.CultureInfo.InvariantCulture)).Append('|');
+                text.Append('\n');
+            }
+        }
+
+        return text.ToString();
+    }
+
+    public static void Execute(string dir, string sql)
+    {
+        using var connection = new SqliteConnection($"Data Source={Path.Combine(dir, "campaign.sqlite")};Pooling=False");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        command.ExecuteNonQuery();
+    }
+}
