@@ -144,6 +144,7 @@ public static class CampaignReport
                 dot.LegendText = v["name"]!.GetValue<string>();
             }
 
+            plot.Axes.Bottom.SetTicks([.. Enumerable.Range(0, variants.Count).Select(i => (double)i)], [.. variants.Select(v => v!["name"]!.GetValue<string>())]);
             plot.Axes.SetLimits(-0.5, variants.Count - 0.5, 0, 1.05);
             plot.ShowLegend(Alignment.LowerRight);
         });

@@ -11,12 +11,20 @@ internal static class CampaignFixture
 
     public static string NoBoost => Path.Combine(AppContext.BaseDirectory, "no-boost.yaml");
 
+    /// <summary>A fresh folder under one test root that is emptied when the test process starts.</summary>
     public static string TempDir()
     {
-        var dir = Path.Combine(Path.GetTempPath(), "descentops-campaign-tests", Guid.NewGuid().ToString("N"));
+        var dir = Path.Combine(Root.Value, Guid.NewGuid().ToString("N"));
         Directory.CreateDirectory(dir);
         return dir;
     }
+
+    private static readonly Lazy<string> Root = new(() =>
+    {
+        var root = Path.Combine(Path.GetTempPath(), "descentops-campaign-tests");
+        if (Directory.Exists(root)) Directory.Delete(root, recursive: true);
+        return root;
+    });
 
     public static async Task<int> CliAsync(params string[] args)
     {

@@ -132,4 +132,14 @@ public sealed class CampaignTests
         Assert.Equal(values[1].ValueSi, drawn.Shell.SurfaceTemperatureK, 9);
         Assert.InRange(values[1].ValueSi, 120, 140);
     }
+
+    [Fact]
+    public void AVariantKeepsItsRulesAndFaultsWhenTheInputsAreDrawn()
+    {
+        var scenario = ScenarioLoader.LoadFile(CampaignFixture.Scenario);
+        var variant = CampaignPlan.ApplyVariant(scenario, new CampaignVariant("no-boost", File.ReadAllText(CampaignFixture.NoBoost)));
+        var (drawn, _) = Mission.Running.UncertainDraw.Draw(variant, 3);
+        Assert.DoesNotContain("frozen-in-boost-wall", drawn.Rules.Text, StringComparison.Ordinal);
+        Assert.Equal(variant.Faults.Select(f => f.Name), drawn.Faults.Select(f => f.Name));
+    }
 }

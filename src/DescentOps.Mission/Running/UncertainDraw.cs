@@ -44,7 +44,10 @@ public static class UncertainDraw
 
         var patched = ScenarioPatch.Apply(scenario.SourceText, [.. values.Select(v => (v.Path, v.Text))]);
         var drawn = ScenarioLoader.LoadText(patched, scenario.SourceName);
-        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain }, values);
+        // The text is the scenario as written; a variant or a branch changed the rules and the fault list after loading.
+        // Keep those changes: the rules as given, the faults in the given list, each with its drawn values if it has any.
+        var faults = scenario.Faults.Select(f => drawn.Faults.FirstOrDefault(d => d.Name == f.Name && d.Kind == f.Kind) is { } d ? d : f).ToList();
+        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults }, values);
     }
 
     /// <summary>The journal record of the draws, at the start of the run.</summary>
