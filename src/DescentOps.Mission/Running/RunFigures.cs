@@ -18,6 +18,7 @@ public sealed class RunFigures(double telemetryIntervalS)
     private bool _moved;
     private double _currentStopS;
     private double? _lastGroundS;
+    private double? _firstFrameS;
 
     public double TimeStoppedS { get; private set; }
     public double LongestStopS { get; private set; }
@@ -50,7 +51,7 @@ public sealed class RunFigures(double telemetryIntervalS)
                 _lastFrameS = t;
                 _lastRegime = Text(record, "regime");
                 _moved |= Number(record, "depth_m") > 0;
-                _lastGroundS ??= t;
+                _firstFrameS ??= t;
                 break;
             case "ground.telemetry":
                 if (_lastGroundS is { } last && t - last > _blindAfterS) TimeBlindS += t - last;
@@ -76,10 +77,14 @@ public sealed class RunFigures(double telemetryIntervalS)
         }
     }
 
-    /// <summary>Closes the books at the end of the run: a blind stretch still open counts.</summary>
+    /// <summary>
+    /// Closes the books at the end of the run: a blind stretch still open counts, and a ground that never heard a frame
+    /// was blind from the first frame on. Gaps are counted from the first frame home, so the light time is not blindness.
+    /// </summary>
     public void Finish(double endS)
     {
         if (_lastGroundS is { } last && endS - last > _blindAfterS) TimeBlindS += endS - last;
+        else if (_lastGroundS is null && _firstFrameS is { } first && endS - first > _blindAfterS) TimeBlindS += endS - first;
         _lastGroundS = endS;
     }
 
