@@ -32,11 +32,28 @@ public static class CampaignBenchmark
         var log = Path.Combine(Path.GetTempPath(), $"descentops-bench-{Environment.ProcessId}.jsonl");
         var process = Process.Start(new ProcessStartInfo("dotnet", $"\"{cli}\" run {name} --log \"{log}\"") { RedirectStandardOutput = true, RedirectStandardError = true })!;
         var wall = Stopwatch.StartNew();
-        await process.StandardOutput.ReadToEndAsync().ConfigureAwait(false);
+        var reading = process.StandardOutput.ReadToEndAsync();
+        var processCpuS = 0.0;
+
+        // Linux forgets a process's CPU time once it has exited, so it is sampled while the run lasts (to within 20 ms).
+        while (!process.HasExited)
+        {
+            try
+            {
+                processCpuS = process.TotalProcessorTime.TotalSeconds;
+            }
+            catch (InvalidOperationException)
+            {
+                break;
+            }
+
+            Thread.Sleep(20);
+        }
+
+        await reading.ConfigureAwait(false);
         await process.WaitForExitAsync().ConfigureAwait(false);
         wall.Stop();
         var processWallS = wall.Elapsed.TotalSeconds;
-        var processCpuS = process.TotalProcessorTime.TotalSeconds;
         File.Delete(log);
         output.WriteLine(string.Create(c, $"  one `descentops run` process        {processWallS,8:F2} s wall  {processCpuS,8:F2} s CPU"));
 
