@@ -71,8 +71,8 @@ public sealed class StationTests
         Assert.Equal(failureGy, Number(failed, "dose_gy_si"), 9);
 
         // The data rate against the reference's link check: 33.94 dB-Hz at 5.2 AU with these radios (DS-8, CALC,
-        // links-power-ocean note), scaled by the square of the distance to 6.1e8 km; one 4096-bit frame takes 4096 / R.
-        var rateBitPerS = Math.Pow(10.0, 3.394) * Math.Pow(5.2 * 149_597_870_700.0 / 6.1e11, 2);
+        // links-power-ocean note), scaled by the square of the distance to 1.08e9 km; one 4096-bit frame takes 4096 / R.
+        var rateBitPerS = Math.Pow(10.0, 3.394) * Math.Pow(5.2 * 149_597_870_700.0 / 1.08e12, 2);
         var link = sink.OfKind("station.link").Single();
         Assert.Equal(rateBitPerS, Number(link, "data_rate_bit_s"), rateBitPerS * 0.012);
         Assert.Equal(4096 / rateBitPerS, Number(link, "frame_time_s"), 0.012 * 4096 / rateBitPerS);

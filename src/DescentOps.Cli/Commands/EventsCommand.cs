@@ -13,7 +13,7 @@ public static class EventsCommand
     {
         var logArgument = new Argument<string>("LOG") { Description = "The event log to read." };
         var kindOption = new Option<string[]>("--kind") { Description = "Event kind, exact or a prefix ending in '.' or '*' (repeatable), e.g. tether. or probe.breakthrough.", AllowMultipleArgumentsPerToken = true };
-        var sourceOption = new Option<string[]>("--source") { Description = "Source component (repeatable), e.g. probe, tether, vehicle-minnow-1.", AllowMultipleArgumentsPerToken = true };
+        var sourceOption = new Option<string[]>("--source") { Description = "Source component (repeatable), e.g. probe, tether, vehicle-wisp-1.", AllowMultipleArgumentsPerToken = true };
         var severityOption = new Option<Severity>("--severity") { Description = "Lowest severity shown: debug, info, notice, warning, alarm, critical.", DefaultValueFactory = _ => Severity.Debug };
         var fromOption = new Option<string?>("--from") { Description = "Start of the time window, simulated time with a unit (e.g. '40 d')." };
         var toOption = new Option<string?>("--to") { Description = "End of the time window, inclusive (e.g. '41 d')." };
