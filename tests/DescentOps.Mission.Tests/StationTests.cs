@@ -88,6 +88,15 @@ public sealed class StationTests
         Assert.True(queuedLost > 0, "home was out of view when the station died, so frames were waiting");
         Assert.True(lostAfter > 0);
         Assert.Equal(summary.FramesSent, summary.FramesReceivedOnGround + queuedLost + lostAfter);
+
+        // The frames lost after the death are one episode: one warning, the rest at info, each frame still recorded
+        // with its running count.
+        var frameLost = sink.OfKind("station.frame_lost").ToList();
+        Assert.Single(frameLost, r => r.Severity == Severity.Warning);
+        Assert.Equal(frameLost.Count, CollectingSink.IntegerField(frameLost[^1], "lost_in_episode"));
+        // The ground is blind from the death to the end (frames taken after its last received frame), at least.
+        Assert.True(summary.TimeBlindS >= summary.FinalTimeS - failed.Time.SecondsSinceEpoch - 3600, $"{summary.TimeBlindS} s blind");
+        Assert.Equal(0, summary.FramesHeldOrInFlight);
         Assert.Equal(queuedLost + lostAfter, summary.FramesLost);
 
         // The ground sees nothing sampled after the death, so its rule stays blind to the day-80 power sag.

@@ -103,7 +103,7 @@ public sealed class VehicleScenarioTests
 
         // The glider in still water flew both its sorties, so the run completes with one vehicle lost.
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
-        Assert.Equal("1 vehicles finished their tasks, 1 lost", summary.Outcome.Reason);
+        Assert.Equal("1 vehicle finished its task, 1 lost", summary.Outcome.Reason);
         Assert.Equal(2, sink.OfKind("vehicle.docked").Count(r => r.Source.Name == "vehicle-wisp-1"));
         Assert.Single(sink.OfKind("vehicle.sortie"));
     }
@@ -156,7 +156,7 @@ public sealed class VehicleScenarioTests
         Assert.Equal("vehicle-wisp-1", sink.OfKind("fault.injected").Single().Fields.Single(f => f.Name == "target").Text);
         Assert.Equal(reason, Text(sink.OfKind("vehicle.lost").Single(), "reason"));
         Assert.Equal(RunOutcomeKind.MissionLost, summary.Outcome.Kind);
-        Assert.Equal("all 1 vehicles lost", summary.Outcome.Reason);
+        Assert.Equal("the vehicle was lost", summary.Outcome.Reason);
     }
 
     [Fact]

@@ -108,14 +108,16 @@ public static class RunCommand
             ("simulated time", Days(s.FinalTimeS)),
             ("time to breakthrough", s.BreakthroughTimeS is { } b ? Days(b) : "not reached"),
             ("final depth", string.Create(c, $"{s.FinalDepthM:F1} m of {scenario.Shell.ThicknessM:F0} m")),
-            ("energy used", string.Create(c, $"{s.EnergyUsedJ / 3.6e9:F2} MWh ({s.EnergyUsedJ:E3} J)")),
+            ("energy used", string.Create(c, $"{s.EnergyUsedJ / 3.6e9:F2} MWh ({s.EnergyUsedJ:F0} J)")),
             ("faults injected", s.FaultsInjected.ToString(c)),
-            ("telemetry frames", string.Create(c, $"{s.FramesSent} sent, {s.FramesReceivedOnGround} received on ground, {s.FramesLost} lost")),
+            ("telemetry frames", string.Create(c, $"{s.FramesSent} sent = {s.FramesReceivedOnGround} received on ground + {s.FramesLost} lost + {s.FramesHeldOrInFlight} held or in flight at the end")),
+            ("time stopped", Hours(s.TimeStoppedS)),
+            ("time blind", Hours(s.TimeBlindS) + " (the ground saw nothing of the probe)"),
             ("vehicle profiles", s.VehicleProfiles.ToString(c)),
             ("component failures", s.ComponentFailures.ToString(c)),
             ("events", string.Create(c, $"{s.EventsDelivered} delivered, {s.RecordsWritten} logged")),
             ("wall time", string.Create(c, $"{wall.TotalSeconds:F2} s")),
-            ("speed-up", string.Create(c, $"{s.FinalTimeS / Math.Max(wall.TotalSeconds, 1e-6):E2} x real time")),
+            ("speed-up", string.Create(c, $"{s.FinalTimeS / Math.Max(wall.TotalSeconds, 1e-6):F0} x real time")),
             ("event log", path),
         };
         foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
@@ -127,6 +129,9 @@ public static class RunCommand
 
     private static string After(double? seconds) =>
         seconds is { } s ? string.Create(CultureInfo.InvariantCulture, $"after {s / 3600:F2} h") : "never";
+
+    private static string Hours(double seconds) =>
+        string.Create(CultureInfo.InvariantCulture, $"{seconds / 3600:F2} h");
 
     private static string Days(double seconds) =>
         string.Create(CultureInfo.InvariantCulture, $"{seconds / 86400:F3} d ({seconds:F0} s)");
