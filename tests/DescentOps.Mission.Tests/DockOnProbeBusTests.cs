@@ -43,7 +43,7 @@ public sealed class DockOnProbeBusTests
         Assert.Equal(100.0, CollectingSink.Field(granted, "granted_w"));
         // Computed: the glider (0.1 kWh = 360 kJ) docks with the logged charge and fills at 100 W.
         var (dockedS, batteryJ) = Docked(sink);
-        Assert.Equal(dockedS + ((360_000 - batteryJ) / 100.0), SecondSortieS(sink), 5);
+        Assert.Equal(dockedS + ((360_000 - batteryJ) / 100.0), SecondSortieS(sink), 2e-6); // to the microsecond tick
         // On the bus (heaters off in the ocean): electronics + the 300 W science load + the 100 W charger while it
         // charges, and the charger's 100 W given back once the battery is full.
         var baseW = scenario.Probe.ElectronicsPowerW + 300;

@@ -334,8 +334,8 @@ public sealed class PhysicsCommandTests
         var l = await JsonAsync("light-time", "--distance", "1 au");
         AssertFields(l, "one_way_s");
         Assert.Equal(499.004783836, Number(l, "one_way_s"), 1e-9);
-        var km = await JsonAsync("light-time", "--distance", "6.1e8 km");
-        AssertRelative(6.1e11 / SpeedOfLightMPerS, Number(km, "one_way_s"), 1e-15);
+        var km = await JsonAsync("light-time", "--distance", "1.08e9 km");
+        AssertRelative(1.08e12 / SpeedOfLightMPerS, Number(km, "one_way_s"), 1e-15);
     }
 
     // ---- vehicle ----

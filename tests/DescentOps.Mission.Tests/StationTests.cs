@@ -148,7 +148,7 @@ public sealed class StationTests
     /// </summary>
     private static string WindowedDefault(string rules) => Edit(
         MissionHarness.DefaultText,
-        ("distance_to_ground: 6.1e8 km", "distance_to_ground: 3237758546.4 km"),
+        ("distance_to_ground: 1.08e9 km", "distance_to_ground: 3237758546.4 km"),
         ("  forwarding_delay: 2 s\n", "  forwarding_delay: 2 s\n  link:\n    rotation_period: 10 h\n    latitude: 0 deg\n    start_hour_angle: -90 deg\n"),
         ("faults:", rules + "\nfaults:"),
         ("until: 400 d", "until: 2 d"));
