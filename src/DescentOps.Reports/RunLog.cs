@@ -1,5 +1,6 @@
 using System.Text;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
+using DescentOps.Records.Kinds;
 using DescentOps.Journal;
 using DescentOps.Reports.Plotting;
 
@@ -171,8 +172,8 @@ public sealed class RunLog
 
             switch (e.Kind)
             {
-                case "probe.telemetry": LastTelemetry = e.Data; break;
-                case "probe.breakthrough": BreakthroughTimeS ??= e.TimeSeconds; break;
+                case ProbeRecords.Telemetry: LastTelemetry = e.Data; break;
+                case ProbeRecords.Breakthrough: BreakthroughTimeS ??= e.TimeSeconds; break;
                 case "vehicle.lost":
                     var reason = e.Data.FirstOrDefault(f => f.Name == "reason" && f.Kind == RecordFieldKind.Text).Text ?? "no reason given";
                     VehiclesLost.Add(new VehicleLoss(e.Source, e.TimeSeconds, reason));

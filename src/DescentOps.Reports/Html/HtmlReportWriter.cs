@@ -1,7 +1,8 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal;
 using DescentOps.Reports.Plotting;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Html;
 
