@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using DescentOps.Primitives.Units;
 using DescentOps.Scenarios.Format;
 using YamlDotNet.RepresentationModel;
 
@@ -119,9 +120,9 @@ internal sealed partial class YamlBinder
     private object? BindNumber(YamlNode node, NumberField spec, string path)
     {
         if (Scalar(node, path, "a number") is not { } text) return null;
-        if (!double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+        if (!StrictNumber.TryParse(text, out var value, out var error))
         {
-            Error(node, path, $"'{text}' is not a number");
+            Error(node, path, error);
             return null;
         }
 
@@ -133,7 +134,7 @@ internal sealed partial class YamlBinder
         if (Scalar(node, path, "a whole number") is not { } text) return null;
         if (!long.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value))
         {
-            Error(node, path, $"'{text}' is not a whole number");
+            Error(node, path, StrictNumber.WhyNot(text.Trim(), StrictNumber.Length(text.Trim())) ?? $"'{text}' is not a whole number");
             return null;
         }
 
