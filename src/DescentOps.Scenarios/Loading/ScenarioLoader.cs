@@ -56,6 +56,11 @@ public static class ScenarioLoader
         string text;
         try
         {
+            if (new FileInfo(path).Length > YamlBounds.MaxBytes)
+            {
+                throw new ScenarioException([new ScenarioError(new SourceLocation(path, 1, 1), "", $"the file is {new FileInfo(path).Length:N0} bytes; a scenario may hold at most {YamlBounds.MaxBytes:N0}")]);
+            }
+
             text = File.ReadAllText(path, Encoding.UTF8);
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
@@ -355,6 +360,7 @@ public static class ScenarioLoader
         var parser = new Parser(new StringReader(text));
         try
         {
+            YamlBounds.Check(text, sourceName);
             stream.Load(parser);
         }
         catch (YamlException exception)
