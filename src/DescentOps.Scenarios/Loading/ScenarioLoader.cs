@@ -75,8 +75,8 @@ public static class ScenarioLoader
     public static Scenario LoadText(string text, string sourceName, ISet<string>? readPaths = null)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths);
-        var scenario = Build(root, sourceName, text);
+        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
+        var scenario = Build(root, sourceName, text) with { FieldLocations = locations };
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -344,7 +344,7 @@ public static class ScenarioLoader
     public static ScenarioChange LoadChange(string text, string sourceName)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null);
+        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out _);
         var added = root.List("add_faults");
         var faults = added.Select(BuildFault).ToList();
         for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
@@ -354,7 +354,7 @@ public static class ScenarioLoader
     }
 
     /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
-    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths)
+    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths, out IReadOnlyDictionary<string, SourceLocation> locations)
     {
         var stream = new YamlStream();
         var parser = new Parser(new StringReader(text));
@@ -383,6 +383,7 @@ public static class ScenarioLoader
 
         var binder = new YamlBinder(sourceName, errors, readPaths);
         var root = binder.BindSection(stream.Documents[0].RootNode, spec, "");
+        locations = binder.Locations;
         if (errors.Count > 0 || root is null)
         {
             throw new ScenarioException([.. errors.OrderBy(e => e.Location.Line).ThenBy(e => e.Location.Column)]);

@@ -16,6 +16,9 @@ internal sealed partial class YamlBinder
     private readonly List<ScenarioError> _errors;
     private readonly ISet<string>? _readPaths;
 
+    /// <summary>Where every bound field's value stands, by field path.</summary>
+    public Dictionary<string, SourceLocation> Locations { get; } = new(StringComparer.Ordinal);
+
     public YamlBinder(string file, List<ScenarioError> errors, ISet<string>? readPaths)
     {
         _file = file;
@@ -51,6 +54,7 @@ internal sealed partial class YamlBinder
             }
 
             locations[key] = Locate(valueNode);
+            Locations[fieldPath] = locations[key];
             if (BindValue(valueNode, field, fieldPath) is { } value) values[key] = value;
         }
 
