@@ -1,5 +1,5 @@
 using System.Text;
-using DescentOps.Rules.Checking;
+using DescentOps.Rules.Text;
 
 namespace DescentOps.Rules.Tests;
 
@@ -19,7 +19,7 @@ public sealed class HostileRuleSetTests
               then { send probe pause_descent enable broken } }
             rule broken { runs on board severity high starts disabled
               when probe.tail_temp above 600 K
-              then { send probe enter_safe_mode } }
+              then { send probe.wall set_power(power = 1 kW) } }
             """;
         var result = TestCatalogue.Check(text);
         var error = Assert.Single(result.Errors);
