@@ -62,3 +62,18 @@ public sealed class YamlBoundsTests
         Assert.Equal(0.12, ScenarioLoader.LoadText(text, "ok.yaml").Probe.RadiusM, 12);
     }
 }
+
+/// <summary>Names are one line: a block scalar's trailing line break is refused, not carried into every log.</summary>
+public sealed class OneLineNameTests
+{
+    [Theory]
+    [InlineData("  name: Spindle", "  name: |\n    Spindle", "probe.name")]
+    [InlineData("  - name: minnow-1", "  - name: \"minnow-1\\n\"", "vehicles[0].name")]
+    [InlineData("scenario: longfall-tarn-flats", "scenario: |\n  longfall-tarn-flats", "scenario")]
+    public void A_name_with_a_line_break_is_refused(string line, string replacement, string field)
+    {
+        var error = MalformedScenarioTests.SingleError(ScenarioText.DefaultWith(line, replacement));
+        Assert.Equal(field, error.FieldPath);
+        Assert.Contains("line break", error.Message);
+    }
+}

@@ -442,10 +442,11 @@ public static class ScenarioLoader
         var lines = text.Split('\n');
         var valueLine = at.Line - 1 < lines.Length ? lines[at.Line - 1] : "";
         var startsBlock = at.Column - 1 < valueLine.Length && valueLine[at.Column - 1] is '|' or '>';
-        if (!startsBlock) return new RulesSource(rules, at, at.Column - 1);
+        var positions = ScalarPositionMap.Build(text, at, rules);
+        if (!startsBlock) return new RulesSource(rules, at, at.Column - 1) { Positions = positions };
         var first = Array.FindIndex(lines, at.Line, l => l.Trim().Length > 0);
         var indent = first < 0 ? 0 : lines[first].Length - lines[first].TrimStart(' ').Length;
-        return new RulesSource(rules, new SourceLocation(at.File, at.Line + 1, 1), indent);
+        return new RulesSource(rules, new SourceLocation(at.File, at.Line + 1, 1), indent) { Positions = positions };
     }
 
     /// <summary>Rules that tie fields together, which the per-field bounds cannot express.</summary>

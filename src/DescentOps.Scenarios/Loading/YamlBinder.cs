@@ -99,7 +99,8 @@ internal sealed partial class YamlBinder
 
         // Named entries (vehicles, faults) must be told apart; unnamed ones (depth intervals) need not be.
         if (!spec.Item.Fields.Any(f => f.Name == "name")) return items;
-        var duplicate = items.GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
+        // An entry whose name was refused has none here; it is reported already.
+        var duplicate = items.Where(i => i.OptionalText("name") is not null).GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
         if (duplicate is not null)
         {
             var second = duplicate.Skip(1).First();
@@ -162,6 +163,13 @@ internal sealed partial class YamlBinder
     private string? BindText(YamlNode node, TextField spec, string path)
     {
         if (Scalar(node, path, "text") is not { } text) return null;
+        // A name, identifier or word is one line: "Spindle\n" from a block scalar would name a different probe in every log.
+        if (spec.Name is not ("description" or "rules" or "when") && text.AsSpan().IndexOfAny('\n', '\r') >= 0)
+        {
+            Error(node, path, $"'{text.ReplaceLineEndings("\\n")}' holds a line break; this field is one line of text");
+            return null;
+        }
+
         if (spec.IsIdentifier && !Identifier().IsMatch(text))
         {
             Error(node, path, $"'{text}' is not an identifier (lowercase letters, digits and '-', starting with a letter)");
