@@ -1,8 +1,8 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Physics.Descent;
+using DescentOps.Records;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 
@@ -40,7 +40,7 @@ public static class MissionPreflight
         try
         {
             // The first telemetry interval of the run itself, without rules (their errors are the rule checker's).
-            var sink = new DiscardingSink();
+            var sink = NullJournalSink.Instance;
             var start = scenario with { Rules = RulesSource.None };
             var summary = MissionRunner.RunAsync(start, scenario.Run.Seed, scenario.Probe.TelemetryIntervalS, sink, KernelChoice.Sequential).GetAwaiter().GetResult();
             if (summary.Outcome.Kind is RunOutcomeKind.ComponentFailed or RunOutcomeKind.KernelFault)
@@ -122,11 +122,4 @@ public static class MissionPreflight
             "pressurePa" or "thicknessM" => "shell.thickness",
             _ => "probe",
         };
-
-    private sealed class DiscardingSink : IJournalSink
-    {
-        public void Write(JournalRecord record)
-        {
-        }
-    }
 }
