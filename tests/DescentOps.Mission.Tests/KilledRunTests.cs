@@ -20,7 +20,7 @@ public sealed class KilledRunTests
         var partial = log + JournalWriter.PartialSuffix;
 
         var start = new ProcessStartInfo("dotnet") { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
-        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "--log", log, "--kernel", "sequential" }) start.ArgumentList.Add(a);
+        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "--log", log, "--kernel", "sequential", "--no-log-limit" }) start.ArgumentList.Add(a);
         using var process = Process.Start(start)!;
         var guard = Stopwatch.StartNew();
         while ((!File.Exists(partial) || new FileInfo(partial).Length < 2_000_000) && guard.Elapsed < TimeSpan.FromMinutes(2) && !process.HasExited)

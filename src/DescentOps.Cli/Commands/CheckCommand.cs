@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Faults;
+using DescentOps.Mission.Running;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Text;
 using DescentOps.Scenarios.Model;
@@ -30,6 +31,7 @@ public static class CheckCommand
             Scenario scenario;
             RuleCheckResult result;
             Func<SourceLocation, string> where;
+            var scenarioWarnings = new List<DescentOps.Scenarios.Loading.ScenarioError>();
             if (isRuleSet)
             {
                 scenario = ScenarioSource.Load(parse.GetValue(scenarioOption));
@@ -47,9 +49,26 @@ public static class CheckCommand
                     return (int)ExitCode.InvalidInput;
                 }
 
+                // Everything a run would refuse once under way is refused here too.
+                var preflight = MissionPreflight.Errors(scenario);
+                foreach (var error in preflight) Console.Out.WriteLine($"error: {error}");
+                if (preflight.Count > 0)
+                {
+                    Console.Out.WriteLine($"{path}: {preflight.Count} errors a run would stop on");
+                    return (int)ExitCode.InvalidInput;
+                }
+
+                scenarioWarnings.AddRange(MissionPreflight.Warnings(scenario));
+                var logBytes = LogSizeEstimate.UpperBoundBytes(scenario, scenario.Run.UntilS);
+                if (logBytes > LogSizeEstimate.DefaultLimitBytes)
+                {
+                    scenarioWarnings.Add(new(scenario.LocationOf("run.until"), "run.until", $"the log may grow to {LogSizeEstimate.Describe(logBytes)} by the time limit; 'run' refuses that unless given {RunCommand.NoLogLimitOption}"));
+                }
+
                 if (scenario.Rules.IsEmpty)
                 {
-                    Console.Out.WriteLine($"{path}: scenario valid; it holds no rules");
+                    foreach (var warning in scenarioWarnings) Console.Out.WriteLine($"warning: {warning}");
+                    Console.Out.WriteLine($"{path}: scenario valid{(scenarioWarnings.Count > 0 ? $", {scenarioWarnings.Count} warnings" : "")}; it holds no rules");
                     return (int)ExitCode.Ok;
                 }
 
@@ -58,14 +77,15 @@ public static class CheckCommand
             }
 
             foreach (var error in result.Errors) Console.Out.WriteLine($"error: {where(error.Location)}: {error.Code}: {error.Message}");
-            if (result.Warnings.Count > 0)
+            if (result.Warnings.Count + scenarioWarnings.Count > 0)
             {
                 Console.Out.WriteLine();
+                foreach (var warning in scenarioWarnings) Console.Out.WriteLine($"warning: {warning}");
                 foreach (var warning in result.Warnings) Console.Out.WriteLine($"warning: {where(warning.Location)}: {warning.Code}: {warning.Message}");
             }
 
             var rules = result.RuleSet?.Rules.Count ?? 0;
-            Console.Out.WriteLine($"{path}: {result.Errors.Count} errors, {result.Warnings.Count} warnings{(result.Succeeded ? $", {rules} rules ready" : "")}");
+            Console.Out.WriteLine($"{path}: {result.Errors.Count} errors, {result.Warnings.Count + scenarioWarnings.Count} warnings{(result.Succeeded ? $", {rules} rules ready" : "")}");
             return (int)(result.Succeeded ? ExitCode.Ok : ExitCode.InvalidInput);
         });
         return command;

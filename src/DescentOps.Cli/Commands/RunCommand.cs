@@ -15,6 +15,9 @@ namespace DescentOps.Cli.Commands;
 /// <summary><c>descentops run [SCENARIO] [--seed N] [--until DURATION] [--log PATH]</c>: one mission, one log.</summary>
 public static class RunCommand
 {
+    /// <summary>The option that lets a run write a log larger than <see cref="LogSizeEstimate.DefaultLimitBytes"/>.</summary>
+    public const string NoLogLimitOption = "--no-log-limit";
+
     public static Command Create()
     {
         var scenarioArgument = new Argument<string?>("SCENARIO")
@@ -39,16 +42,22 @@ public static class RunCommand
             DefaultValueFactory = _ => KernelChoice.Actors,
         };
 
+        var noLogLimitOption = new Option<bool>(NoLogLimitOption)
+        {
+            Description = "Run even when the log could grow past 2 GB by the time limit (estimated from the telemetry interval before the run starts).",
+        };
+
         var command = new Command("run", "Run a scenario and write its event log.")
         {
-            scenarioArgument, seedOption, untilOption, logOption, kernelOption,
+            scenarioArgument, seedOption, untilOption, logOption, kernelOption, noLogLimitOption,
         };
         command.SetAction((parse, cancel) => ExecuteAsync(
             parse.GetValue(scenarioArgument),
             parse.GetValue(seedOption),
             parse.GetValue(untilOption),
             parse.GetValue(logOption),
-            parse.GetValue(kernelOption)));
+            parse.GetValue(kernelOption),
+            parse.GetValue(noLogLimitOption)));
         return command;
     }
 
@@ -56,7 +65,7 @@ public static class RunCommand
     public static RunManifest ManifestFor(Scenario scenario, long seed, double untilS) =>
         new(ToolInfo.Version, scenario.Name, scenario.SourceText, seed, untilS, RandomStream.AlgorithmName);
 
-    private static async Task<int> ExecuteAsync(string? scenarioArgument, long? seedOverride, string? untilText, string? logPath, KernelChoice kernel)
+    private static async Task<int> ExecuteAsync(string? scenarioArgument, long? seedOverride, string? untilText, string? logPath, KernelChoice kernel, bool noLogLimit)
     {
         var scenario = ScenarioSource.Load(scenarioArgument);
         var seed = seedOverride ?? scenario.Run.Seed;
@@ -69,6 +78,7 @@ public static class RunCommand
             }
         }
 
+        RunPreflight.Check(scenario, untilS, untilText is null ? null : "--until", noLogLimit);
         var path = Path.GetFullPath(logPath ?? Path.Combine("logs", $"{scenario.Name}-seed{seed}.jsonl"));
         Directory.CreateDirectory(Path.GetDirectoryName(path)!);
         var manifest = ManifestFor(scenario, seed, untilS);
