@@ -18,11 +18,16 @@ public static class AtomicFile
         var full = Path.GetFullPath(path);
         var directory = Path.GetDirectoryName(full);
         if (!string.IsNullOrEmpty(directory)) Directory.CreateDirectory(directory);
-        var partial = full + PartialSuffix;
-        File.Delete(partial);
+        // A temporary name of its own, never an existing file's (a symbolic link there is not followed, another
+        // writer's temporary file is not taken over).
+        var partial = $"{full}.{Convert.ToHexStringLower(System.Security.Cryptography.RandomNumberGenerator.GetBytes(4))}{PartialSuffix}";
+        using (new FileStream(partial, FileMode.CreateNew, FileAccess.Write))
+        {
+        }
+
         try
         {
-            if (startFromExisting && File.Exists(full)) File.Copy(full, partial);
+            if (startFromExisting && File.Exists(full)) File.Copy(full, partial, overwrite: true);
             write(partial);
             File.Move(partial, full, overwrite: true);
         }
