@@ -18,12 +18,9 @@ public static class AtomicFile
         var full = Path.GetFullPath(path);
         var directory = Path.GetDirectoryName(full);
         if (!string.IsNullOrEmpty(directory)) Directory.CreateDirectory(directory);
-        // A temporary name of its own, never an existing file's (a symbolic link there is not followed, another
-        // writer's temporary file is not taken over).
-        var partial = $"{full}.{Convert.ToHexStringLower(System.Security.Cryptography.RandomNumberGenerator.GetBytes(4))}{PartialSuffix}";
-        using (new FileStream(partial, FileMode.CreateNew, FileAccess.Write))
-        {
-        }
+        // A temporary name of its own, drawn at random: not a fixed name where a link could be planted in advance,
+        // and never another writer's temporary file.
+        var partial = $"{full}.{Convert.ToHexStringLower(System.Security.Cryptography.RandomNumberGenerator.GetBytes(8))}{PartialSuffix}";
 
         try
         {

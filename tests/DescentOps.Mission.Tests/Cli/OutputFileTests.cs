@@ -44,7 +44,7 @@ public sealed class OutputFileTests
         await InProcessCli.RunAsync(folder, "run", "--until", "1 d");
         await InProcessCli.RunAsync(folder, "run", "--until", "2 d");
 
-        var logs = Directory.GetFiles(Path.Combine(folder, "logs")).Select(Path.GetFileName).Order(StringComparer.Ordinal).ToArray();
+        var logs = Directory.GetFiles(Path.Combine(folder, "logs")).Select(f => Path.GetFileName(f)!).Order(StringComparer.Ordinal).ToArray();
         Assert.Equal(["longfall-tarn-flats-seed20261202-2.jsonl", "longfall-tarn-flats-seed20261202.jsonl"], logs);
         // The first log is the one-day run, untouched by the second.
         Assert.Contains("\"final_t\":86400", File.ReadLines(Path.Combine(folder, "logs", "longfall-tarn-flats-seed20261202.jsonl")).Last(), StringComparison.Ordinal);
@@ -68,7 +68,7 @@ public sealed class OutputFileTests
         Assert.NotEqual(0, intoNewFolder);
         Assert.NotEqual(0, besidePartial);
         Assert.False(Directory.Exists(Path.Combine(folder, "new")));
-        Assert.Equal(["w.jsonl" + JournalWriter.PartialSuffix], Directory.GetFiles(Path.Combine(folder, "keep")).Select(Path.GetFileName));
+        Assert.Equal(["w.jsonl" + JournalWriter.PartialSuffix], Directory.GetFiles(Path.Combine(folder, "keep")).Select(f => Path.GetFileName(f)!));
         Assert.Equal("an earlier crashed run\n", await File.ReadAllTextAsync(crashed));
     }
 
