@@ -1,6 +1,7 @@
 using System.CommandLine;
 using DescentOps.Cli.Files;
 using DescentOps.Cli.Running;
+using DescentOps.Cli.Terminal;
 using DescentOps.Reports;
 using DescentOps.Reports.Export;
 
@@ -45,7 +46,17 @@ public static class ExportCommand
                 // A database gathers runs, so an existing one is added to, not replaced; but never the log itself.
                 var database = output ?? SqliteExport.DefaultPath(path);
                 if (OutputPaths.SameFile(database, path)) throw new OutputRefusedException($"{database} is also an input of this command; refusing to write over it.");
-                var sqlite = SqliteExport.Write(path, database);
+                var progress = new ProgressLine("  export ");
+                SqliteExportResult sqlite;
+                try
+                {
+                    sqlite = SqliteExport.Write(path, database, share => progress.Fraction(share, "of the log exported"));
+                }
+                finally
+                {
+                    progress.Done();
+                }
+
                 var how = sqlite.Replaced ? "replaced the same run already there as" : "added as";
                 Console.Out.WriteLine($"export: {Path.GetFullPath(database)}: {how} run {sqlite.RunId} ({sqlite.Events} events, {sqlite.Fields} fields{(sqlite.TruncatedAtLine is { } at ? $", truncated at line {at}" : "")})");
             }

@@ -13,18 +13,21 @@ namespace DescentOps.Reports.Export;
 /// </summary>
 public static class SqliteExport
 {
-    public static SqliteExportResult Write(string logPath, string databasePath)
+    /// <param name="logPath">The log to export.</param>
+    /// <param name="databasePath">The database to add it to (created if missing).</param>
+    /// <param name="progress">Called now and then with the share of the log read (0 to 1).</param>
+    public static SqliteExportResult Write(string logPath, string databasePath, Action<double>? progress = null)
     {
-        if (File.Exists(databasePath)) return Into(logPath, databasePath, fresh: false);
+        if (File.Exists(databasePath)) return Into(logPath, databasePath, fresh: false, progress);
         SqliteExportResult? result = null;
-        AtomicFile.Write(databasePath, partial => result = Into(logPath, partial, fresh: true));
+        AtomicFile.Write(databasePath, partial => result = Into(logPath, partial, fresh: true, progress));
         return result!;
     }
 
     /// <summary>The default database: the log's path with <c>.sqlite</c> in place of its extension.</summary>
     public static string DefaultPath(string logPath) => Path.ChangeExtension(logPath, ".sqlite");
 
-    private static SqliteExportResult Into(string logPath, string databasePath, bool fresh)
+    private static SqliteExportResult Into(string logPath, string databasePath, bool fresh, Action<double>? progress)
     {
         // No pooling: a pooled connection would keep the file open and the rename onto the final name would race it.
         var connectionString = new SqliteConnectionStringBuilder { DataSource = databasePath, Pooling = false, Mode = SqliteOpenMode.ReadWriteCreate }.ToString();
@@ -37,7 +40,9 @@ public static class SqliteExport
         Execute(db, null, "PRAGMA cache_size = -65536"); // 64 MiB of page cache: index pages stay in memory while rows go in
         PrepareSchema(db, withIndexes: !fresh);
 
-        using var reader = JournalReader.Open(logPath);
+        using var file = new FileStream(logPath, FileMode.Open, FileAccess.Read, FileShare.Read, bufferSize: 0, FileOptions.SequentialScan);
+        var length = Math.Max(1.0, file.Length);
+        using var reader = new JournalReader(file, leaveOpen: true);
         if (!reader.TryRead(out var first) || first is not ManifestEntry manifestEntry)
         {
             throw new InvalidDataException($"{logPath}: the log has no intact manifest line.");
@@ -86,7 +91,7 @@ public static class SqliteExport
             }
 
             var e = (EventEntry)entry;
-            events++;
+            if (++events % 8192 == 0) progress?.Invoke(file.Position / length);
             insertEvent.Parameters["$seq"].Value = e.Sequence;
             insertEvent.Parameters["$t"].Value = e.TimeSeconds;
             insertEvent.Parameters["$source"].Value = e.Source;
