@@ -20,6 +20,12 @@ public sealed class SteppedKernel
         _hosts = setup.Components.ToDictionary(c => c.Id, c => new ComponentHost(c, setup.Seed));
     }
 
+    /// <summary>
+    /// Told of every event delivered, after its round is committed (a view of what reached a component; never part of
+    /// the run, so it cannot change the journal).
+    /// </summary>
+    public Action<SimTime, Primitives.Identity.ComponentId, object>? Delivered { get; set; }
+
     /// <summary>The instant of the last round handled.</summary>
     public SimTime Now => _core.Now;
 
@@ -38,6 +44,13 @@ public sealed class SteppedKernel
             _results.Clear();
             foreach (var (target, events) in batches) _results.Add(_hosts[target].HandleBatch(_core.Now, events));
             _core.CommitRound(_results);
+            if (Delivered is { } tap)
+            {
+                foreach (var (target, events) in batches)
+                {
+                    foreach (var delivered in events) tap(_core.Now, target, delivered.Payload);
+                }
+            }
         }
 
         return _core.Outcome is null;
