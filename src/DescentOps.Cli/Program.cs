@@ -15,6 +15,7 @@ var root = new RootCommand("DescentOps: rehearse melt-probe missions against phy
     ReportCommand.Create(),
     ExportCommand.Create(),
     SchemaCommand.Create(),
+    RehearseCommand.Create(),
     DescentOps.Cli.Commands.Physics.PhysicsCommand.Create(),
 };
 

@@ -58,7 +58,7 @@ public sealed class RehearsalSession
 
     public Scenario Scenario { get; }
 
-    public SessionFeed Feed { get; } = new();
+    private SessionFeed Feed { get; } = new();
 
     public IReadOnlyList<RuleLimit> Limits { get; }
 
@@ -115,7 +115,17 @@ public sealed class RehearsalSession
         }
     }
 
-    public InputResult OfferFault(JsonObject body) => Offer(() =>
+    /// <summary>What is new in the feed for a view since <paramref name="cursor"/>; returns the next cursor.</summary>
+    public long ReadFeed(long cursor, bool supervisor, int max, List<string> into)
+    {
+        lock (_gate)
+        {
+            return Feed.Since(cursor, supervisor, max, into);
+        }
+    }
+
+    /// <summary>A fault to inject (its scenario fields), or <c>{"clear": NAME}</c> to end an active fault now.</summary>
+    public InputResult OfferFault(JsonObject body) => body.ContainsKey("clear") ? OfferClear(body) : Offer(() =>
     {
         var json = body.ToJsonString();
         var fault = FaultEntry.Parse(json, Scenario, NowS, _faultNames, out var error);
@@ -124,9 +134,10 @@ public sealed class RehearsalSession
         return Queue(OperatorInputKind.Fault, json);
     });
 
-    public InputResult OfferClear(JsonObject body) => Offer(() =>
+    private InputResult OfferClear(JsonObject body) => Offer(() =>
     {
-        if (!TryText(body, "name", 200, out var name, out var error)) return InputResult.Bad(error);
+        if (body.Count != 1) return InputResult.Bad("clear: give only the name of the fault to clear");
+        if (!TryText(body, "clear", 200, out var name, out var error)) return InputResult.Bad(error);
         if (!_view.ActiveFaults.Contains(name)) return InputResult.Bad($"name: no active fault is named '{name}'");
         return Queue(OperatorInputKind.Clear, new JsonObject { ["name"] = name }.ToJsonString());
     });

@@ -57,7 +57,7 @@ public static class BranchCommand
             using (var file = new FileStream(checking, FileMode.Create, FileAccess.Write, FileShare.Read))
             using (var writer = JournalWriter.Create(file, manifest))
             {
-                summary = await JournaledRun.RunAsync(scenario, manifest, writer).ConfigureAwait(false);
+                summary = await JournaledRun.RunAsync(scenario, manifest, writer, additions: Rehearsal.RehearsalLog.ForReplay(parent.Manifest, scenario, parentPath)).ConfigureAwait(false);
             }
 
             var diff = JournalDiff.Compare(parentPath, checking);

@@ -16,11 +16,12 @@ public static class JournaledRun
         RunManifest manifest,
         JournalWriter writer,
         KernelChoice kernel = KernelChoice.Actors,
-        Action<KernelProgress>? progress = null)
+        Action<KernelProgress>? progress = null,
+        RunAdditions? additions = null)
     {
         try
         {
-            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, writer, kernel, progress).ConfigureAwait(false);
+            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, writer, kernel, progress, additions).ConfigureAwait(false);
             writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
             return summary;
         }

@@ -15,7 +15,9 @@ public static class LogReplay
         using var comparison = new LineComparingStream(File.OpenRead(logged.Path), logged.IntactLines);
         using (var writer = JournalWriter.Create(comparison, logged.Manifest))
         {
-            await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, kernel).ConfigureAwait(false);
+            // A rehearsal's console inputs come back from the log itself.
+            var additions = Rehearsal.RehearsalLog.ForReplay(logged.Manifest, logged.Scenario, logged.Path);
+            await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, kernel, additions: additions).ConfigureAwait(false);
         }
 
         comparison.Finish();
