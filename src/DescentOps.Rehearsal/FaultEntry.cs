@@ -77,6 +77,12 @@ public static class FaultEntry
 
             return fault;
         }
+        catch (InvalidOperationException exception)
+        {
+            // The loader trips over some refused names instead of reporting them; a field error all the same.
+            error = $"fault: {exception.Message}";
+            return null;
+        }
         catch (ScenarioException exception)
         {
             var first = exception.Errors[0];
