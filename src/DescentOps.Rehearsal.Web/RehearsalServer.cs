@@ -147,6 +147,7 @@ public sealed class RehearsalServer : IAsyncDisposable
         });
 
         _app.MapGet("/", (HttpContext c) => Page(c, "index.html"));
+        _app.MapGet("/favicon.ico", () => Results.NoContent());
         _app.MapGet("/supervisor", (HttpContext c) => Page(c, "supervisor.html"));
         _app.MapGet("/team", (HttpContext c) => Page(c, "team.html"));
         _app.MapGet("/assets/{name}", (HttpContext c, string name) => Page(c, name));

@@ -8,7 +8,7 @@ const Plots = (() => {
       const box = Console_.el("div", {});
       container.append(box);
       const opts = {
-        title: s.title, width: Math.max(360, Math.min(620, container.clientWidth / 2 - 20)), height: 190,
+        title: s.title, width: 440, height: 190,
         scales: { x: { time: false } },
         axes: [{ label: "day" }, { label: s.unit, size: 64 }],
         series: [{ label: "day", value: (u, v) => v === null ? "—" : v.toFixed(3) }, ...s.lines.map((l) => ({ label: l.label, stroke: l.colour, width: 1.6, value: (u, v) => v === null ? "—" : v.toPrecision(4) }))],

@@ -16,6 +16,8 @@
   const events = document.getElementById("events");
   const progress = document.querySelector("#progress tbody");
   function showFrame(f) {
+    const table = document.getElementById("latest");
+    table.dataset.arrived = f.t; table.dataset.sampled = f.sampled;
     const body = document.querySelector("#latest tbody");
     body.replaceChildren(C.el("tr", {}, C.el("td", {}, "regime"), C.el("td", { class: "num", "data-point": "probe.regime" }, f.regime)));
     for (const [k, v] of Object.entries(f.values)) body.append(C.el("tr", {}, C.el("td", {}, k), C.el("td", { class: "num", "data-point": k, "data-value": v === null ? "" : String(v) }, C.value(k, v))));
