@@ -323,9 +323,9 @@ public sealed class RehearsalSession
     }
 
     /// <summary>Every record to the journal first, then to the views.</summary>
-    private sealed class Tee(Engine.Journaling.IJournalSink first, Engine.Journaling.IJournalSink second) : Engine.Journaling.IJournalSink
+    private sealed class Tee(DescentOps.Records.IJournalSink first, DescentOps.Records.IJournalSink second) : DescentOps.Records.IJournalSink
     {
-        public void Write(Engine.Journaling.JournalRecord record)
+        public void Write(DescentOps.Records.JournalRecord record)
         {
             first.Write(record);
             second.Write(record);

@@ -2,7 +2,7 @@ using System.Collections.Immutable;
 using System.Globalization;
 using System.Text;
 using System.Text.Json;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Identity;

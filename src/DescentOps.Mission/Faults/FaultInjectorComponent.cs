@@ -1,9 +1,10 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Faults;
 
@@ -104,7 +105,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         }
 
         foreach (var at in starts) context.ScheduleSelf(at, new FaultDue(index, false), MissionPriority.Fault);
-        context.Record("fault.drawn", Severity.Info,
+        context.Record(FaultRecords.Drawn, Severity.Info,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("mean_interval_s", fault.MeanIntervalS.Value),
             RecordField.Of("starts_s", string.Join(" ", starts.Select(t => t.TotalSeconds.ToString("R", System.Globalization.CultureInfo.InvariantCulture)))));
@@ -116,7 +117,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         foreach (var condition in _conditions)
         {
             if (step(condition) is not { } firing) continue;
-            context.Record("fault.triggered", Severity.Warning,
+            context.Record(FaultRecords.Triggered, Severity.Warning,
                 RecordField.Of("fault", _faults[condition.FaultIndex].Name),
                 RecordField.Of("condition", _faults[condition.FaultIndex].When ?? ""),
                 RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))));
@@ -133,7 +134,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     private FaultInjectorState End(FaultInjectorState state, int index, ComponentContext context)
     {
         var ended = FaultAt(state, index);
-        context.Record("fault.cleared", Severity.Notice, RecordField.Of("fault", ended.Name));
+        context.Record(FaultRecords.Cleared, Severity.Notice, RecordField.Of("fault", ended.Name));
         context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
         return state with { Cleared = state.Cleared + 1, Active = state.Active.Remove(index) };
     }
