@@ -24,6 +24,7 @@ public static class CliApp
         ReportCommand.Create(),
         ExportCommand.Create(),
         ScenariosCommand.Create(),
+        RehearseCommand.Create(),
         SchemaCommand.Create(),
         Commands.Physics.PhysicsCommand.Create(),
     };

@@ -67,8 +67,8 @@ public sealed class YamlBoundsTests
 public sealed class OneLineNameTests
 {
     [Theory]
-    [InlineData("  name: Spindle", "  name: |\n    Spindle", "probe.name")]
-    [InlineData("  - name: minnow-1", "  - name: \"minnow-1\\n\"", "vehicles[0].name")]
+    [InlineData("  name: Wendlow", "  name: |\n    Wendlow", "probe.name")]
+    [InlineData("  - name: wisp-1", "  - name: \"wisp-1\\n\"", "vehicles[0].name")]
     [InlineData("scenario: longfall-tarn-flats", "scenario: |\n  longfall-tarn-flats", "scenario")]
     public void A_name_with_a_line_break_is_refused(string line, string replacement, string field)
     {

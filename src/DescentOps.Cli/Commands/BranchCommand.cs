@@ -66,7 +66,7 @@ public static class BranchCommand
                 {
                     interruption.ThrowIfRequested();
                     progress.Fraction(p.Now.SinceEpoch.TotalSeconds / untilS, string.Create(CultureInfo.InvariantCulture, $"day {p.Now.SinceEpoch.TotalDays:F1} of at most {untilS / 86400:F0}"));
-                }).ConfigureAwait(false);
+                }, additions: Rehearsal.RehearsalLog.ForReplay(parent.Manifest, scenario, parentPath)).ConfigureAwait(false);
                 file.Flush(flushToDisk: true);
             }
 

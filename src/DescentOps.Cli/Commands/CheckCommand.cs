@@ -56,7 +56,7 @@ public static class CheckCommand
                     var logBytes = LogSizeEstimate.UpperBoundBytes(scenario, scenario.Run.UntilS);
                     if (logBytes > LogSizeEstimate.DefaultLimitBytes)
                     {
-                        warnings.Add(new Finding("", "", $"{scenario.LocationOf("run.until")}: run.until: the log may grow to {LogSizeEstimate.Describe(logBytes)} by the time limit; 'run' refuses that unless given {RunCommand.NoLogLimitOption}"));
+                        warnings.Add(new Finding("", "", new DescentOps.Scenarios.Loading.ScenarioError(scenario.LocationOf("run.until"), "run.until", $"the log may grow to {LogSizeEstimate.Describe(logBytes)} by the time limit; 'run' refuses that unless given {RunCommand.NoLogLimitOption}").ToString()));
                     }
                 }
 

@@ -19,12 +19,13 @@ public static class JournaledRun
         JournalWriter writer,
         KernelChoice kernel = KernelChoice.Actors,
         Action<KernelProgress>? progress = null,
-        IJournalSink? observer = null)
+        IJournalSink? observer = null,
+        RunAdditions? additions = null)
     {
         try
         {
             IJournalSink sink = observer is null ? writer : new TeeSink(writer, observer);
-            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, sink, kernel, progress).ConfigureAwait(false);
+            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, sink, kernel, progress, additions).ConfigureAwait(false);
             try
             {
                 writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));

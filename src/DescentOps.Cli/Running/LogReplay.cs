@@ -19,9 +19,11 @@ public static class LogReplay
         using var comparison = new LineComparingStream(File.OpenRead(logged.Path), logged.IntactLines);
         using (var writer = JournalWriter.Create(comparison, logged.Manifest))
         {
+            // A rehearsal's console inputs come back from the log itself.
+            var additions = Rehearsal.RehearsalLog.ForReplay(logged.Manifest, logged.Scenario, logged.Path);
             var total = Math.Max(1, logged.IntactLines);
             await JournaledRun.RunAsync(logged.Scenario, logged.Manifest, writer, kernel,
-                progress is null ? null : _ => progress(comparison.LinesMatched / (double)total)).ConfigureAwait(false);
+                progress is null ? null : _ => progress(comparison.LinesMatched / (double)total), additions: additions).ConfigureAwait(false);
         }
 
         comparison.Finish();

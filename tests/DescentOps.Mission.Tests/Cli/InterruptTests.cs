@@ -21,7 +21,7 @@ public sealed class InterruptTests
         string? Partial() => Directory.GetFiles(folder, "stopped.jsonl.*" + JournalWriter.PartialSuffix).SingleOrDefault();
 
         var start = new ProcessStartInfo("dotnet") { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
-        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "-o", log }) start.ArgumentList.Add(a);
+        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "-o", log, "--no-log-limit" }) start.ArgumentList.Add(a);
         using var process = Process.Start(start)!;
         var stdout = process.StandardOutput.ReadToEndAsync();
         var stderr = process.StandardError.ReadToEndAsync();
