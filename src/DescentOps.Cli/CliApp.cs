@@ -29,10 +29,7 @@ public static class CliApp
         Commands.Physics.PhysicsCommand.Create(),
     };
 
-    /// <summary>The seam tests use: the same as <see cref="InvokeAsync"/>.</summary>
-    public static Task<int> RunAsync(string[] args) => InvokeAsync(args);
-
-    public static async Task<int> InvokeAsync(string[] args)
+    public static async Task<int> RunAsync(string[] args)
     {
         try
         {

@@ -1,3 +1,3 @@
 using DescentOps.Cli;
 
-return await CliApp.InvokeAsync(args);
+return await CliApp.RunAsync(args);

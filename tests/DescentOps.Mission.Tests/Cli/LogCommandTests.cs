@@ -11,7 +11,7 @@ public sealed class LogCommandTests
 {
     private static async Task<string> ShortRunAsync(string folder, string name = "a.jsonl", string until = "1 d")
     {
-        var (exit, _, stderr) = await InProcessCli.RunAsync(folder, "run", "--until", until, "-o", name);
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "run", "--until", until, "-o", name);
         Assert.True(exit == 4, stderr); // a short run stops at its time limit
         return Path.Combine(folder, name);
     }
@@ -34,8 +34,8 @@ public sealed class LogCommandTests
         var log = await ShortRunAsync(folder);
         var forged = Forged(log);
 
-        var events = await InProcessCli.RunAsync(folder, "events", forged, "--kind", "probe.telemetry");
-        var diff = await InProcessCli.RunAsync(folder, "diff", log, forged);
+        var events = await InProcessTool.RunAsync(folder, "events", forged, "--kind", "probe.telemetry");
+        var diff = await InProcessTool.RunAsync(folder, "diff", log, forged);
 
         Assert.Equal(6, events.ExitCode); // ExitCode.VerificationFailed
         Assert.Equal(6, diff.ExitCode);
@@ -53,7 +53,7 @@ public sealed class LogCommandTests
     {
         var folder = ToolProcess.NewTempDirectory();
         string[] arguments = command == "diff" ? [command, "nothing.jsonl", "nothing.jsonl"] : [command, "nothing.jsonl"];
-        var (exit, _, stderr) = await InProcessCli.RunAsync(folder, arguments);
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, arguments);
         Assert.Equal(7, exit); // ExitCode.IoError
         Assert.Contains("no such log", stderr, StringComparison.Ordinal);
     }
@@ -63,7 +63,7 @@ public sealed class LogCommandTests
     [InlineData("check")]
     public async Task A_missing_scenario_is_the_same_failure_in_run_and_check(string command)
     {
-        var (exit, _, stderr) = await InProcessCli.RunAsync(ToolProcess.NewTempDirectory(), command, "nosuch.yaml");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), command, "nosuch.yaml");
         Assert.Equal(7, exit);
         Assert.Contains("no built-in scenario", stderr, StringComparison.Ordinal);
     }
@@ -71,7 +71,7 @@ public sealed class LogCommandTests
     [Fact]
     public async Task Check_accepts_a_built_in_scenario_by_name()
     {
-        var (exit, stdout, _) = await InProcessCli.RunAsync(ToolProcess.NewTempDirectory(), "check", "stall-wall-boost");
+        var (exit, stdout, _) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "check", "stall-wall-boost");
         Assert.Equal(0, exit);
         Assert.Contains("2 rules ready", stdout, StringComparison.Ordinal); // the scenario's two rules
     }
@@ -80,12 +80,12 @@ public sealed class LogCommandTests
     public async Task Json_answers_have_null_for_what_does_not_exist_never_NaN()
     {
         var folder = ToolProcess.NewTempDirectory();
-        var (runExit, runOut, _) = await InProcessCli.RunAsync(folder, "run", "--until", "1 d", "-o", "a.jsonl", "--json");
+        var (runExit, runOut, _) = await InProcessTool.RunAsync(folder, "run", "--until", "1 d", "-o", "a.jsonl", "--json");
         var log = Path.Combine(folder, "a.jsonl");
-        var verify = await InProcessCli.RunAsync(folder, "verify", log, "--json");
-        var diff = await InProcessCli.RunAsync(folder, "diff", log, log, "--json");
-        var check = await InProcessCli.RunAsync(folder, "check", "default", "--json");
-        var replay = await InProcessCli.RunAsync(folder, "replay", log, "--json", "--kernel", "sequential");
+        var verify = await InProcessTool.RunAsync(folder, "verify", log, "--json");
+        var diff = await InProcessTool.RunAsync(folder, "diff", log, log, "--json");
+        var check = await InProcessTool.RunAsync(folder, "check", "default", "--json");
+        var replay = await InProcessTool.RunAsync(folder, "replay", log, "--json", "--kernel", "sequential");
 
         Assert.Equal(4, runExit);
         foreach (var text in new[] { runOut, verify.Stdout, diff.Stdout, check.Stdout, replay.Stdout })
@@ -116,7 +116,7 @@ public sealed class LogCommandTests
     {
         var folder = ToolProcess.NewTempDirectory();
         var log = await ShortRunAsync(folder);
-        var (exit, _, stderr) = await InProcessCli.RunAsync(folder, "events", log, "--kind", "probe.telemetri", "--source", "prob");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "events", log, "--kind", "probe.telemetri", "--source", "prob");
         Assert.Equal(0, exit);
         Assert.Contains("its kinds are:", stderr, StringComparison.Ordinal);
         Assert.Contains("probe.telemetry (", stderr, StringComparison.Ordinal);
@@ -127,7 +127,7 @@ public sealed class LogCommandTests
     [Fact]
     public async Task Parse_errors_name_the_option_and_no_dotnet_type()
     {
-        var (exit, _, stderr) = await InProcessCli.RunAsync(ToolProcess.NewTempDirectory(), "run", "--seed", "twelve");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "run", "--seed", "twelve");
         Assert.Equal(2, exit);
         Assert.Contains("--seed", stderr, StringComparison.Ordinal);
         Assert.Contains("whole number", stderr, StringComparison.Ordinal);
@@ -138,10 +138,10 @@ public sealed class LogCommandTests
     public async Task Scenarios_are_listed_shown_and_copied_without_replacing_a_file()
     {
         var folder = ToolProcess.NewTempDirectory();
-        var list = await InProcessCli.RunAsync(folder, "scenarios", "list");
-        var show = await InProcessCli.RunAsync(folder, "scenarios", "show", "tilt-steering");
-        var copy = await InProcessCli.RunAsync(folder, "scenarios", "copy", "tilt-steering", "mine.yaml");
-        var again = await InProcessCli.RunAsync(folder, "scenarios", "copy", "default", "mine.yaml");
+        var list = await InProcessTool.RunAsync(folder, "scenarios", "list");
+        var show = await InProcessTool.RunAsync(folder, "scenarios", "show", "tilt-steering");
+        var copy = await InProcessTool.RunAsync(folder, "scenarios", "copy", "tilt-steering", "mine.yaml");
+        var again = await InProcessTool.RunAsync(folder, "scenarios", "copy", "default", "mine.yaml");
 
         Assert.Equal(0, list.ExitCode);
         foreach (var name in DescentOps.Scenarios.BuiltInScenarios.Names) Assert.Contains(name[..^".yaml".Length], list.Stdout, StringComparison.Ordinal);

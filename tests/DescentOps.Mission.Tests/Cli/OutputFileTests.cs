@@ -13,7 +13,7 @@ public sealed class OutputFileTests
         var scenario = Path.Combine(folder, "x.yaml");
         await File.WriteAllTextAsync(scenario, MissionHarness.DefaultText);
 
-        var (exit, _, stderr) = await InProcessCli.RunAsync(folder, "run", "x.yaml", "--until", "1 d", "--log", "x.yaml", "--force");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "run", "x.yaml", "--until", "1 d", "--log", "x.yaml", "--force");
 
         Assert.Equal(9, exit); // ExitCode.OutputRefused
         Assert.Contains("input", stderr, StringComparison.Ordinal);
@@ -27,12 +27,12 @@ public sealed class OutputFileTests
         var log = Path.Combine(folder, "out.jsonl");
         await File.WriteAllTextAsync(log, "someone's notes\n");
 
-        var (refused, _, stderr) = await InProcessCli.RunAsync(folder, "run", "--until", "1 d", "-o", "out.jsonl");
+        var (refused, _, stderr) = await InProcessTool.RunAsync(folder, "run", "--until", "1 d", "-o", "out.jsonl");
         Assert.Equal(9, refused);
         Assert.Contains("--force", stderr, StringComparison.Ordinal);
         Assert.Equal("someone's notes\n", await File.ReadAllTextAsync(log));
 
-        var (forced, _, _) = await InProcessCli.RunAsync(folder, "run", "--until", "1 d", "-o", "out.jsonl", "--force");
+        var (forced, _, _) = await InProcessTool.RunAsync(folder, "run", "--until", "1 d", "-o", "out.jsonl", "--force");
         Assert.Equal(4, forced); // stopped by its time limit
         Assert.True(JournalVerifier.Verify(log).Ok);
     }
@@ -41,8 +41,8 @@ public sealed class OutputFileTests
     public async Task Two_runs_of_the_same_scenario_and_seed_keep_both_logs()
     {
         var folder = ToolProcess.NewTempDirectory();
-        await InProcessCli.RunAsync(folder, "run", "--until", "1 d");
-        await InProcessCli.RunAsync(folder, "run", "--until", "2 d");
+        await InProcessTool.RunAsync(folder, "run", "--until", "1 d");
+        await InProcessTool.RunAsync(folder, "run", "--until", "2 d");
 
         var logs = Directory.GetFiles(Path.Combine(folder, "logs")).Select(f => Path.GetFileName(f)!).Order(StringComparer.Ordinal).ToArray();
         Assert.Equal(["longfall-tarn-flats-seed20261202-2.jsonl", "longfall-tarn-flats-seed20261202.jsonl"], logs);
@@ -62,8 +62,8 @@ public sealed class OutputFileTests
         var crashed = Path.Combine(folder, "keep", "w.jsonl" + JournalWriter.PartialSuffix);
         await File.WriteAllTextAsync(crashed, "an earlier crashed run\n");
 
-        var (intoNewFolder, _, _) = await InProcessCli.RunAsync(folder, "run", "warm.yaml", "-o", Path.Combine("new", "w.jsonl"));
-        var (besidePartial, _, _) = await InProcessCli.RunAsync(folder, "run", "warm.yaml", "-o", Path.Combine("keep", "w.jsonl"));
+        var (intoNewFolder, _, _) = await InProcessTool.RunAsync(folder, "run", "warm.yaml", "-o", Path.Combine("new", "w.jsonl"));
+        var (besidePartial, _, _) = await InProcessTool.RunAsync(folder, "run", "warm.yaml", "-o", Path.Combine("keep", "w.jsonl"));
 
         Assert.NotEqual(0, intoNewFolder);
         Assert.NotEqual(0, besidePartial);
@@ -76,13 +76,13 @@ public sealed class OutputFileTests
     public async Task A_report_is_not_written_over_an_existing_file_or_its_own_log()
     {
         var folder = ToolProcess.NewTempDirectory();
-        await InProcessCli.RunAsync(folder, "run", "--until", "1 d", "-o", "a.jsonl");
+        await InProcessTool.RunAsync(folder, "run", "--until", "1 d", "-o", "a.jsonl");
         var log = Path.Combine(folder, "a.jsonl");
         var before = await File.ReadAllBytesAsync(log);
 
-        var (ontoLog, _, _) = await InProcessCli.RunAsync(folder, "report", "a.jsonl", "-o", "a.jsonl", "--force");
+        var (ontoLog, _, _) = await InProcessTool.RunAsync(folder, "report", "a.jsonl", "-o", "a.jsonl", "--force");
         await File.WriteAllTextAsync(Path.Combine(folder, "a.html"), "kept\n");
-        var (ontoOther, _, _) = await InProcessCli.RunAsync(folder, "report", "a.jsonl");
+        var (ontoOther, _, _) = await InProcessTool.RunAsync(folder, "report", "a.jsonl");
 
         Assert.Equal(9, ontoLog);
         Assert.Equal(9, ontoOther);
