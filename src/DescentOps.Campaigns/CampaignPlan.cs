@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
@@ -30,7 +30,7 @@ public sealed class CampaignPlan
         {
             if (_scenarios.ContainsKey(variant.Name))
             {
-                throw new ScenarioException([new ScenarioError(new SourceLocation(variant.Name, 1, 1), "--versus", $"two variants are named '{variant.Name}'; rename a file")]);
+                throw new ScenarioException([new ScenarioError(new SourceLocation(variant.SourcePath ?? variant.Name, 1, 1), "--versus", $"two variants are named '{variant.Name}'; rename a file")]);
             }
 
             _scenarios[variant.Name] = ApplyVariant(scenario, variant);
@@ -59,5 +59,5 @@ public sealed class CampaignPlan
 
     /// <summary>The scenario a variant runs: the change applied, as <c>branch --with</c> would.</summary>
     public static Scenario ApplyVariant(Scenario scenario, CampaignVariant variant) =>
-        variant.ChangeText is null ? scenario : ScenarioLoader.LoadChange(variant.ChangeText, variant.Name).ApplyTo(scenario);
+        variant.ChangeText is null ? scenario : ScenarioLoader.LoadChange(variant.ChangeText, variant.SourcePath ?? variant.Name).ApplyTo(scenario);
 }

@@ -1,10 +1,9 @@
-using System.CommandLine;
-using DescentOps.Cli.Commands;
+using DescentOps.Cli;
 using Microsoft.Data.Sqlite;
 
 namespace DescentOps.Campaigns.Tests;
 
-/// <summary>Runs the command line in this process (as the tool does, minus its exit-code mapping) and reads a campaign's tables.</summary>
+/// <summary>Runs the command line in this process, as the tool runs it, and reads a campaign's tables.</summary>
 internal static class CampaignFixture
 {
     public static string Scenario => Path.Combine(AppContext.BaseDirectory, "short-stall.yaml");
@@ -26,12 +25,31 @@ internal static class CampaignFixture
         return root;
     });
 
-    public static async Task<int> CliAsync(params string[] args)
+    private static readonly SemaphoreSlim Turn = new(1, 1);
+
+    /// <summary>The exit code of the command line run in this process (<see cref="CliApp.RunAsync"/>, as the tool runs it).</summary>
+    public static async Task<int> CliAsync(params string[] args) => (await CliOutputAsync(args)).ExitCode;
+
+    /// <summary>The command line in this process with its output captured; the console is process-wide, so calls take turns.</summary>
+    public static async Task<(int ExitCode, string Stdout, string Stderr)> CliOutputAsync(params string[] args)
     {
-        var root = new RootCommand("test") { RunCommand.Create(), CampaignCommand.Create() };
-        var parse = root.Parse(args);
-        if (parse.Errors.Count > 0) return 2;
-        return await parse.InvokeAsync(new InvocationConfiguration { EnableDefaultExceptionHandler = false });
+        await Turn.WaitAsync();
+        var (oldOut, oldError) = (Console.Out, Console.Error);
+        using var stdout = new StringWriter();
+        using var stderr = new StringWriter();
+        try
+        {
+            Console.SetOut(stdout);
+            Console.SetError(stderr);
+            var exit = await CliApp.RunAsync(args);
+            return (exit, stdout.ToString(), stderr.ToString());
+        }
+        finally
+        {
+            Console.SetOut(oldOut);
+            Console.SetError(oldError);
+            Turn.Release();
+        }
     }
 
     /// <summary>Every table's rows, ordered by their key, as text: two equal dumps mean equal tables.</summary>

@@ -40,7 +40,7 @@ public sealed class CampaignTests
         }
 
         File.Delete(Path.Combine(cut, "summary.json"));
-        await Assert.ThrowsAsync<Cli.UsageException>(() => CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "5", "--seed", "5", "--versus", CampaignFixture.NoBoost, "--output", cut));
+        Assert.Equal(9, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "5", "--seed", "5", "--versus", CampaignFixture.NoBoost, "--output", cut)); // exists: output refused
         Assert.Equal(0, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "5", "--seed", "5", "--versus", CampaignFixture.NoBoost, "--output", cut, "--resume"));
         Assert.Equal(File.ReadAllText(Path.Combine(whole, "summary.json")), File.ReadAllText(Path.Combine(cut, "summary.json")));
         Assert.Equal(CampaignFixture.Dump(whole), CampaignFixture.Dump(cut));
@@ -82,13 +82,17 @@ public sealed class CampaignTests
     public async Task BadInputIsRefusedBeforeAnythingRuns()
     {
         var dir = CampaignFixture.TempDir();
-        await Assert.ThrowsAsync<Cli.UsageException>(() => CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "0", "--output", Path.Combine(dir, "a")));
+        var (exit, _, stderr) = await CampaignFixture.CliOutputAsync("campaign", CampaignFixture.Scenario, "--runs", "0", "--output", Path.Combine(dir, "a"));
+        Assert.Equal(2, exit);
+        Assert.Contains("--runs", stderr, StringComparison.Ordinal);
         Assert.False(Directory.Exists(Path.Combine(dir, "a")));
 
         var change = Path.Combine(dir, "bad-change.yaml");
         File.WriteAllText(change, "remove_faults:\n  - name: no-such-fault\n");
-        var refused = await Assert.ThrowsAsync<ScenarioException>(() => CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "2", "--versus", change, "--output", Path.Combine(dir, "b")));
-        Assert.Contains("no-such-fault", refused.Errors[0].ToString(), StringComparison.Ordinal);
+        (exit, _, stderr) = await CampaignFixture.CliOutputAsync("campaign", CampaignFixture.Scenario, "--runs", "2", "--versus", change, "--output", Path.Combine(dir, "b"));
+        Assert.Equal(3, exit);
+        Assert.Contains("no-such-fault", stderr, StringComparison.Ordinal);
+        Assert.Contains("bad-change.yaml", stderr, StringComparison.Ordinal);
         Assert.False(Directory.Exists(Path.Combine(dir, "b")));
     }
 

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text.Json;
 using System.Text.Json.Nodes;
 using DescentOps.Campaigns;
+using DescentOps.Cli.Files;
 using DescentOps.Cli.Running;
 using DescentOps.Cli.Terminal;
 using DescentOps.Engine.Randomness;
@@ -18,9 +19,6 @@ namespace DescentOps.Cli.Commands;
 /// </summary>
 public static class CampaignCommand
 {
-    /// <summary>Exit code of a campaign stopped by Ctrl-C: the runs done are kept for --resume (128 + SIGINT, the shell convention).</summary>
-    public const int Interrupted = 130;
-
     private const string Database = "campaign.sqlite";
 
     /// <summary>Indices per precision check: the stop is decided on whole blocks so it does not depend on which worker finished first.</summary>
@@ -84,7 +82,7 @@ public static class CampaignCommand
         foreach (var path in versus)
         {
             if (!File.Exists(path)) throw new ScenarioException([new ScenarioError(new SourceLocation(path, 1, 1), "--versus", "no such change file")]);
-            variants.Add(new CampaignVariant(Path.GetFileNameWithoutExtension(path), File.ReadAllText(path)));
+            variants.Add(new CampaignVariant(Path.GetFileNameWithoutExtension(path), File.ReadAllText(path), path));
         }
 
         var plan = new CampaignPlan(scenario, variants, seed, scenario.Run.UntilS, ToolInfo.Version, RandomStream.AlgorithmName);
@@ -104,7 +102,8 @@ public static class CampaignCommand
 
         var dir = Path.GetFullPath(output ?? Path.Combine("logs", $"{scenario.Name}-campaign-seed{seed}"));
         var dbPath = Path.Combine(dir, Database);
-        if (File.Exists(dbPath) && !resume) throw new UsageException($"--output: {dir} already holds a campaign; add --resume to continue it, or name another folder");
+        if (File.Exists(dbPath) && !resume) throw new OutputRefusedException($"{dir} already holds a campaign; add --resume to continue it, or name another folder with --output");
+        if (!File.Exists(dbPath) && resume) throw new UsageException($"--resume: {dir} holds no campaign to continue");
         Directory.CreateDirectory(dir);
         using var store = CampaignStore.Open(dbPath);
         var stored = store.Settings();
@@ -130,13 +129,8 @@ public static class CampaignCommand
         Console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"DescentOps {ToolInfo.Version}: campaign of '{scenario.Name}', {runs} runs x {variants.Count} variant(s), seed {seed}, {workers} worker(s){(done.Count > 0 ? $", {done.Count} run(s) already stored" : "")}"));
 
-        using var cancel = new CancellationTokenSource();
-        ConsoleCancelEventHandler onCancel = (_, e) =>
-        {
-            e.Cancel = true;
-            cancel.Cancel();
-        };
-        Console.CancelKeyPress += onCancel;
+        using var interruption = Interruption.Watch();
+        using var cancel = CancellationTokenSource.CreateLinkedTokenSource(interruption.Token);
         var progress = new CampaignProgress(runs * variants.Count, done.Count);
         var next = -1;
         var stopAt = runs;
@@ -203,12 +197,11 @@ public static class CampaignCommand
         threads.ForEach(t => t.Start());
         threads.ForEach(t => t.Join());
         progress.Done();
-        Console.CancelKeyPress -= onCancel;
         if (failure is not null) throw failure;
         if (cancel.IsCancellationRequested)
         {
             Console.Error.WriteLine($"descentops: campaign interrupted; {store.Done().Count} run(s) are stored in {dbPath}. Run the same command with --resume to continue.");
-            return Interrupted;
+            return (int)ExitCode.Interrupted;
         }
 
         if (stopAt < runs)
@@ -259,8 +252,9 @@ public static class CampaignCommand
         var dirArgument = new Argument<string>("DIR") { Description = "A campaign's results folder." };
         var runOption = new Option<int>("--run") { Description = "The run's index (from 0).", Required = true };
         var variantOption = new Option<string>("--variant") { Description = "The variant (default: baseline).", DefaultValueFactory = _ => CampaignVariant.BaselineName };
-        var outputOption = new Option<string?>("--output", "-o", "--log") { Description = "Where to write the log (default DIR/logs/<variant>-run<I>-seed<S>.jsonl)." };
-        var command = new Command("log", "Regenerate one run's event log, byte for byte as 'descentops run' writes it with that run's seed.") { dirArgument, runOption, variantOption, outputOption };
+        var outputOption = CommonOptions.Output("Where to write the log (default DIR/logs/<variant>-run<I>-seed<S>.jsonl).");
+        var forceOption = CommonOptions.Force();
+        var command = new Command("log", "Regenerate one run's event log, byte for byte as 'descentops run' writes it with that run's seed.") { dirArgument, runOption, variantOption, outputOption, forceOption };
         command.SetAction(async (parse, _) =>
         {
             var dir = parse.GetValue(dirArgument)!;
@@ -277,10 +271,10 @@ public static class CampaignCommand
             var index = parse.GetValue(runOption);
             if (index < 0) throw new UsageException("--run: an index from 0");
             var spec = plan.Spec(variant, index);
-            var path = Path.GetFullPath(parse.GetValue(outputOption) ?? LogPath(Path.Combine(dir, "logs"), spec));
+            var path = OutputPaths.Claim(parse.GetValue(outputOption) ?? LogPath(Path.Combine(dir, "logs"), spec), parse.GetValue(forceOption), Path.Combine(dir, Database));
             Directory.CreateDirectory(Path.GetDirectoryName(path)!);
             var manifest = plan.ManifestFor(variant, spec.Seed);
-            using (var writer = JournalWriter.Create(path, manifest))
+            using (var writer = JournalWriter.Create(path, manifest, replaceExisting: parse.GetValue(forceOption)))
             {
                 await JournaledRun.RunAsync(plan.ScenarioOf(variant), manifest, writer, KernelChoice.Sequential).ConfigureAwait(false);
             }

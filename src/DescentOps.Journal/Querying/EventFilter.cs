@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Journal.Querying;
 
@@ -24,6 +24,12 @@ public sealed record EventFilter(
         && MatchesAny(Kinds, entry.Kind)
         && MatchesAny(Sources, entry.Source)
         && (Field is null || entry.Data.Any(f => f.Name == Field));
+
+    /// <summary>Whether a kind passes the kind patterns (all kinds do when there are none).</summary>
+    public bool MatchesKind(string kind) => MatchesAny(Kinds, kind);
+
+    /// <summary>Whether a source passes the source patterns (all sources do when there are none).</summary>
+    public bool MatchesSource(string source) => MatchesAny(Sources, source);
 
     private static bool MatchesAny(IReadOnlyList<string> patterns, string value)
     {

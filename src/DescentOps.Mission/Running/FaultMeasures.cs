@@ -1,4 +1,5 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Running;
 
@@ -59,7 +60,7 @@ public sealed class FaultMeasures
         var t = record.Time.SecondsSinceEpoch;
         switch (record.Kind)
         {
-            case "fault.injected":
+            case FaultRecords.Injected:
                 var name = Text(record, "fault");
                 var kind = Text(record, "kind");
                 var affected = AffectedPoints(kind, Text(record, "point"));
@@ -68,15 +69,15 @@ public sealed class FaultMeasures
                 foreach (var rule in named) relevant.Add(rule);
                 _faults.Add(new Open(name, kind, t, _lastSpeedMPerS, relevant) { Target = Text(record, "target") });
                 break;
-            case "rule.fired":
+            case RuleRecords.Fired:
                 var firing = Text(record, "rule");
                 foreach (var f in _faults) if (f.DetectedS is null && t >= f.StartS && f.Rules.Contains(firing)) f.DetectedS = t;
                 break;
-            case "command.executed":
+            case CommandRecords.Executed:
                 var origin = Text(record, "origin");
                 foreach (var f in _faults) if (f.ActionS is null && t >= f.StartS && f.Rules.Contains(origin)) f.ActionS = t;
                 break;
-            case "probe.telemetry":
+            case ProbeRecords.Telemetry:
                 var speed = Number(record, "velocity_m_s");
                 var tilt = Math.Abs(Number(record, "tilt_rad"));
                 var regime = Text(record, "regime");
@@ -96,19 +97,19 @@ public sealed class FaultMeasures
 
                 _lastSpeedMPerS = speed;
                 break;
-            case "vehicle.docked":
+            case VehicleRecords.Docked:
                 foreach (var f in _faults.Where(f => f.Kind == "VehicleLoss" && f.RecoveredS is null && f.Target == record.Source.Name && t >= f.StartS)) f.RecoveredS = t;
                 break;
-            case "relay.path_up":
+            case RelayRecords.PathUp:
                 foreach (var f in _faults.Where(f => f.Kind == "SpoolJam" && f.RecoveredS is null && t >= f.StartS)) f.RecoveredS = t;
                 break;
-            case "relay.recovered":
+            case RelayRecords.Recovered:
                 foreach (var f in _faults.Where(f => f.Kind == "RelayFailure" && f.RecoveredS is null && f.Name == Text(record, "fault"))) f.RecoveredS = t;
                 break;
-            case "station.recovered":
+            case StationRecords.Recovered:
                 foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
                 break;
-            case "station.upset_recovered":
+            case StationRecords.UpsetRecovered:
                 foreach (var f in _faults.Where(f => f.Kind == "StationUpset" && f.RecoveredS is null && t > f.StartS)) f.RecoveredS = t;
                 break;
         }

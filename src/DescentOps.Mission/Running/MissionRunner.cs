@@ -1,6 +1,6 @@
 using Akka.Actor;
 using Akka.Configuration;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
@@ -24,16 +24,15 @@ public static class MissionRunner
         double untilS,
         IJournalSink journal,
         KernelChoice kernel = KernelChoice.Actors,
-        Action<KernelProgress>? progress = null)
+        Action<KernelProgress>? progress = null,
+        RunAdditions? additions = null)
     {
-        var (drawn, inputs) = UncertainDraw.Draw(scenario, seed);
-        scenario = drawn;
-        var rules = Autonomy.MissionRules.Compile(scenario);
-        var rulePoints = rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
-        var detectedBy = scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
-        var summary = new MissionSummarySink(journal, new FaultMeasures(rulePoints, detectedBy), new RunFigures(scenario.Probe.TelemetryIntervalS));
-        if (inputs.Count > 0) summary.Write(UncertainDraw.Record(inputs));
-        var setup = new KernelSetup(MissionAssembly.Components(scenario, rules), seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress);
+        var prepared = PreparedRun.For(scenario, seed);
+        var summary = prepared.SummarySink(journal);
+        var setup = new KernelSetup([.. MissionAssembly.Components(prepared.Scenario, prepared.Rules), .. additions?.Components ?? []], seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress)
+        {
+            Inputs = additions?.Inputs ?? [],
+        };
         RunResult result;
         if (kernel == KernelChoice.Sequential)
         {
@@ -52,7 +51,6 @@ public static class MissionRunner
             }
         }
 
-        var figures = summary.Summarize(result) with { Inputs = inputs, RuleNames = [.. rules.Rules.Select(r => r.Name)] };
-        return figures with { Criteria = CriterionResult.Judge(scenario.Criteria, figures) };
+        return prepared.Complete(summary.Summarize(result));
     }
 }

@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 
 namespace DescentOps.Mission.Running;
@@ -20,14 +20,19 @@ public sealed record MissionSummary(
     int ComponentFailures,
     IReadOnlyList<FaultMeasure> Faults)
 {
-    /// <summary>Total time stopped or frozen in before the ocean, after the probe first moved.</summary>
+    /// <summary>Frames sent that the ground has neither received nor lost when the run ends: held in a buffer or queue, or on their way.</summary>
+    public long FramesHeldOrInFlight => FramesSent - FramesReceivedOnGround - FramesLost;
+
+    /// <summary>Time the probe spent stopped or frozen in, not descending.</summary>
     public double TimeStoppedS { get; init; }
 
+    /// <summary>The longest single stretch stopped or frozen in.</summary>
     public double LongestStopS { get; init; }
 
+    /// <summary>Time the probe spent frozen in (part of <see cref="TimeStoppedS"/>).</summary>
     public double TimeFrozenS { get; init; }
 
-    /// <summary>Time the ground received no frame for more than three telemetry intervals.</summary>
+    /// <summary>Time the ground saw nothing of the probe: see <see cref="GroundBlindness"/>.</summary>
     public double TimeBlindS { get; init; }
 
     /// <summary>The most frames held at once in the link's buffers.</summary>
@@ -60,16 +65,17 @@ public sealed record MissionSummary(
         RecordField.Of("frames_sent", FramesSent),
         RecordField.Of("frames_received_on_ground", FramesReceivedOnGround),
         RecordField.Of("frames_lost", FramesLost),
-        RecordField.Of("vehicle_profiles", VehicleProfiles),
-        RecordField.Of("events_delivered", EventsDelivered),
-        RecordField.Of("records_written", RecordsWritten),
-        RecordField.Of("component_failures", ComponentFailures),
+        RecordField.Of("frames_held_or_in_flight", FramesHeldOrInFlight),
         RecordField.Of("time_stopped_s", TimeStoppedS),
         RecordField.Of("longest_stop_s", LongestStopS),
         RecordField.Of("time_frozen_s", TimeFrozenS),
         RecordField.Of("time_blind_s", TimeBlindS),
         RecordField.Of("frames_held_max", FramesHeldMax),
         RecordField.Of("vehicles_lost", VehiclesLost),
+        RecordField.Of("vehicle_profiles", VehicleProfiles),
+        RecordField.Of("events_delivered", EventsDelivered),
+        RecordField.Of("records_written", RecordsWritten),
+        RecordField.Of("component_failures", ComponentFailures),
         .. Faults.SelectMany(f => new[]
         {
             RecordField.Of($"fault.{f.Fault}.detected_after_s", f.DetectedAfterS ?? double.NaN),

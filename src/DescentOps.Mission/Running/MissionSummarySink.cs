@@ -1,5 +1,6 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Running;
 
@@ -19,18 +20,18 @@ public sealed class MissionSummarySink : IJournalSink
     private long _framesLost;
     private int _profiles;
     private readonly FaultMeasures _faultMeasures;
-    private readonly RunFigures _figures;
+    private readonly RunFigures _figures = new();
+    private readonly GroundBlindness _blind = new();
 
     public MissionSummarySink(IJournalSink next)
-        : this(next, new FaultMeasures(), new RunFigures(600))
+        : this(next, new FaultMeasures())
     {
     }
 
-    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures, RunFigures figures)
+    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures)
     {
         _next = next;
         _faultMeasures = faultMeasures;
-        _figures = figures;
     }
 
     public void Write(JournalRecord record)
@@ -40,33 +41,35 @@ public sealed class MissionSummarySink : IJournalSink
         _figures.Observe(record);
         switch (record.Kind)
         {
-            case "probe.telemetry":
+            case ProbeRecords.Telemetry:
                 _framesSent++;
+                _blind.FrameSent(record.Time.SecondsSinceEpoch);
                 _depthM = Field(record, "depth_m");
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "probe.breakthrough":
+            case ProbeRecords.Breakthrough:
                 _breakthroughS = record.Time.SecondsSinceEpoch;
                 _depthM = Field(record, "depth_m");
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "probe.mission_complete":
+            case ProbeRecords.MissionComplete:
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "ground.telemetry":
+            case GroundRecords.Telemetry:
                 _framesReceived++;
+                _blind.FrameReceived(record.Time.SecondsSinceEpoch, Field(record, "latency_s"));
                 break;
-            case "data.lost" when Text(record, "kind") == "telemetry":
-            case "station.frame_lost":
+            case DataRecords.Lost when Text(record, "kind") == "telemetry":
+            case StationRecords.FrameLost:
                 _framesLost++;
                 break;
-            case "station.data_lost" when Text(record, "data") == "telemetry":
+            case StationRecords.DataLost when Text(record, "data") == "telemetry":
                 _framesLost += record.Fields.First(f => f.Name == "count").Integer;
                 break;
-            case "fault.injected":
+            case FaultRecords.Injected:
                 _faults++;
                 break;
-            case "vehicle.profile":
+            case VehicleRecords.Profile:
                 _profiles++;
                 break;
         }
@@ -76,25 +79,25 @@ public sealed class MissionSummarySink : IJournalSink
     {
         _figures.Finish(result.FinalTime.SecondsSinceEpoch);
         return new MissionSummary(
-        result.Outcome,
-        result.FinalTime.SecondsSinceEpoch,
-        _breakthroughS,
-        _depthM,
-        _energyJ,
-        _faults,
-        _framesSent,
-        _framesReceived,
-        _framesLost,
-        _profiles,
-        result.EventsDelivered,
-        result.RecordsWritten,
-        result.ComponentFailures,
-        _faultMeasures.Measures())
+            result.Outcome,
+            result.FinalTime.SecondsSinceEpoch,
+            _breakthroughS,
+            _depthM,
+            _energyJ,
+            _faults,
+            _framesSent,
+            _framesReceived,
+            _framesLost,
+            _profiles,
+            result.EventsDelivered,
+            result.RecordsWritten,
+            result.ComponentFailures,
+            _faultMeasures.Measures())
         {
             TimeStoppedS = _figures.TimeStoppedS,
             LongestStopS = _figures.LongestStopS,
             TimeFrozenS = _figures.TimeFrozenS,
-            TimeBlindS = _figures.TimeBlindS,
+            TimeBlindS = _blind.TotalS(),
             FramesHeldMax = _figures.FramesHeldMax,
             VehiclesLost = _figures.VehiclesLost,
             RuleFirings = new Dictionary<string, int>(_figures.RuleFirings, StringComparer.Ordinal),

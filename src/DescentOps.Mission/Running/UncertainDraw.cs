@@ -1,5 +1,6 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
+using DescentOps.Records.Kinds;
 using DescentOps.Engine.Randomness;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
@@ -52,7 +53,7 @@ public static class UncertainDraw
 
     /// <summary>The journal record of the draws, at the start of the run.</summary>
     public static JournalRecord Record(IReadOnlyList<DrawnInput> values) =>
-        new(SimTime.Epoch, StreamId, "run.inputs_drawn", Severity.Info, [.. values.Select(v => RecordField.Of(v.Path, v.ValueSi))]);
+        new(SimTime.Epoch, StreamId, RunRecords.InputsDrawn, Severity.Info, [.. values.Select(v => RecordField.Of(v.Path, v.ValueSi))]);
 
     private static double Sample(UncertainInput input, Xoshiro256StarStar random) => input.Distribution switch
     {

@@ -1,4 +1,5 @@
 using System.Globalization;
+using DescentOps.Primitives.Units;
 using DescentOps.Scenarios.Format;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
@@ -102,8 +103,8 @@ public static class CampaignSections
             return false;
         }
 
-        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out si)) return true;
-        error = $"'{measure.Name}' is a count: give a plain number, not '{text}'";
+        if (StrictNumber.TryParse(text, out si, out var why)) return true;
+        error = $"'{measure.Name}' is a count: give a plain number, not '{text}' ({why})";
         return false;
     }
 
@@ -145,8 +146,8 @@ public static class CampaignSections
                 return double.NaN;
             }
 
-            if (double.TryParse(value, NumberStyles.Float, CultureInfo.InvariantCulture, out var number)) return number;
-            errors.Add(new ScenarioError(item.LocationOf(name), $"{at}.{name}", $"'{value}' is not a plain number, as {path} is"));
+            if (StrictNumber.TryParse(value, out var number, out var why)) return number;
+            errors.Add(new ScenarioError(item.LocationOf(name), $"{at}.{name}", $"'{value}' is not a plain number, as {path} is ({why})"));
             return double.NaN;
         }
 

@@ -1,7 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
 using DescentOps.Campaigns;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
@@ -28,7 +28,14 @@ public static class CampaignBenchmark
         output.WriteLine(string.Create(c, $"campaign benchmark: scenario {name}, {runs} runs per measurement, {jobs} worker(s), {Environment.ProcessorCount} core(s)"));
 
         // 1. One `descentops run` process, as a user starts it.
-        var cli = Path.Combine(AppContext.BaseDirectory, "descentops.dll");
+        // The command line is not referenced here (only tests may reference it): its Release build is found in the tree.
+        var cli = args.SkipWhile(a => a != "--cli").Skip(1).FirstOrDefault() ?? BuiltCli();
+        if (!File.Exists(cli))
+        {
+            output.WriteLine($"no built command line at {cli}: run `dotnet build -c Release src/DescentOps.Cli` first, or give --cli PATH");
+            return 2;
+        }
+
         var log = Path.Combine(Path.GetTempPath(), $"descentops-bench-{Environment.ProcessId}.jsonl");
         var process = Process.Start(new ProcessStartInfo("dotnet", $"\"{cli}\" run {name} --log \"{log}\"") { RedirectStandardOutput = true, RedirectStandardError = true })!;
         var wall = Stopwatch.StartNew();
@@ -95,6 +102,17 @@ public static class CampaignBenchmark
         var heap3N = GC.GetTotalMemory(forceFullCollection: true);
         output.WriteLine(string.Create(c, $"  managed heap after {runs} runs {heapN / 1e6:F1} MB, after {3 * runs} runs {heap3N / 1e6:F1} MB"));
         return 0;
+    }
+
+    private static string BuiltCli()
+    {
+        for (var folder = new DirectoryInfo(AppContext.BaseDirectory); folder is not null; folder = folder.Parent)
+        {
+            var candidate = Path.Combine(folder.FullName, "src", "DescentOps.Cli", "bin", "Release", "net10.0", "descentops.dll");
+            if (File.Exists(candidate)) return candidate;
+        }
+
+        return "src/DescentOps.Cli/bin/Release/net10.0/descentops.dll";
     }
 
     private static (double WallS, double CpuS) Timed(Action action)
