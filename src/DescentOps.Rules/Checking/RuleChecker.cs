@@ -1,6 +1,7 @@
 using System.Globalization;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Syntax;
@@ -277,7 +278,7 @@ public sealed class RuleChecker
 
     private double? TryQuantity(QuantitySyntax quantity, QuantityDimension expected, bool isDifference, string what)
     {
-        var dimensionless = expected.Normalized == QuantityDimension.Of(Dimension.Dimensionless);
+        var dimensionless = expected.Normalized == QuantityDimension.Of(PhysicalDimension.Dimensionless);
         if (!quantity.HasUnit)
         {
             if (dimensionless)
@@ -313,7 +314,7 @@ public sealed class RuleChecker
 
     private SimDuration? TryDuration(QuantitySyntax quantity, string what, bool allowZero)
     {
-        if (TryQuantity(quantity, QuantityDimension.Of(Dimension.Duration), isDifference: true, what) is not { } seconds)
+        if (TryQuantity(quantity, QuantityDimension.Of(PhysicalDimension.Duration), isDifference: true, what) is not { } seconds)
         {
             return null;
         }
