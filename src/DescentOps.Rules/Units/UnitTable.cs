@@ -57,6 +57,12 @@ public static class UnitTable
         return true;
     }
 
+    /// <summary>The coherent SI unit of a dimension ("W", "m/s", "K"), or "" for a dimensionless number.</summary>
+    public static string SiSymbol(PhysicalDimension dimension) =>
+        dimension == PhysicalDimension.Dimensionless
+            ? ""
+            : Definitions.FirstOrDefault(d => d.Dimension == dimension && d.ScaleToSi == 1.0 && d.OffsetToSi == 0.0)?.Symbol ?? "";
+
     /// <summary>A unit to suggest in messages for a dimension.</summary>
     public static string Example(QuantityDimension dimension)
     {
