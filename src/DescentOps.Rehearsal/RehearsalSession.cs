@@ -40,7 +40,7 @@ public sealed class RehearsalSession
         _setup = setup;
         Scenario = setup.Scenario;
         _catalogue = MissionCatalogue.For(setup.Scenario);
-        Limits = RuleLimit.Of(MissionRules.Compile(setup.Scenario));
+        Limits = RuleLimit.Of(MissionRules.Compile(setup.Scenario), _catalogue);
         _view = new SessionView(Feed, Limits);
         _prepared = PreparedRun.For(setup.Scenario, setup.Manifest.Seed);
         _summary = _prepared.SummarySink(new Tee(setup.Journal, _view));
