@@ -25,13 +25,13 @@ public sealed class CrossingFinderTests
     [Fact]
     public void AMonotoneCurveCrossesWhereItsInverseSays()
     {
-        // T = 100 K · (1 + t / 1 s)^(1/2) rises past 250 K at t = (2.5² − 1) s = 5.25 s: tick 5 250 000 is on the limit,
-        // so the first tick past it follows.
+        // T = 100 K · (1 + t / 1 s)^(1/2) reaches 250 K at t = (2.5² − 1) s = 5.25 s, where it is exactly on the limit
+        // (sqrt(6.25) = 2.5 in binary floating point): that tick is the first not below it. A limit check made there
+        // sees "on the limit" (not above), and the next crossing, one tick on, is found from there.
         double ValueAt(long tick) => 100.0 * Math.Sqrt(1 + (tick / 1e6));
-        var found = CrossingFinder.FirstTickPast(ValueAt, 0, 20_000_000, 250.0);
-        Assert.InRange(found!.Value, 5_250_000, 5_250_001);
-        Assert.True(ValueAt(found.Value) > 250.0);
-        Assert.False(ValueAt(found.Value - 1) > 250.0);
+        Assert.Equal(5_250_000, CrossingFinder.FirstTickPast(ValueAt, 0, 20_000_000, 250.0));
+        Assert.Equal(5_250_001, CrossingFinder.FirstTickPast(ValueAt, 5_250_000, 20_000_000, 250.0));
+        Assert.Equal(5_250_000, CrossingFinder.FirstTickPast(ValueAt, 0, 20_000_000, 250.0 - 1e-9));
     }
 
     [Fact]
