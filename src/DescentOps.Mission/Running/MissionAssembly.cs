@@ -21,7 +21,7 @@ public static class MissionAssembly
     {
         return
         [
-            new ProbeComponent(scenario),
+            new ProbeComponent(scenario, rules),
             new TetherComponent(scenario),
             new StationComponent(scenario),
             new GroundTeamComponent(scenario, rules),
