@@ -27,6 +27,7 @@ public static class CliApp
         RehearseCommand.Create(),
         SchemaCommand.Create(),
         CampaignCommand.Create(),
+        WorkerCommand.Create(),
         Commands.Physics.PhysicsCommand.Create(),
     };
 

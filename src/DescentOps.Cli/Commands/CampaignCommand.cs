@@ -35,10 +35,12 @@ public static class CampaignCommand
         var precisionOption = new Option<double?>("--precision") { Description = "Stop when every variant's 95 % interval on the success rate is narrower than ± this share (e.g. 0.05)." };
         var resumeOption = new Option<bool>("--resume") { Description = "Continue an interrupted campaign in the folder; finished runs are neither repeated nor counted twice." };
         var keepOption = new Option<string?>("--keep-logs") { Description = "Keep the event logs of 'failed' runs or of 'all' runs in DIR/logs (default: none; any run's log can be regenerated)." };
+        var clusterOptions = new ClusterCampaign.Options();
         var command = new Command("campaign", "Run a scenario many times over its uncertain inputs, with variants on common seeds, and say how often each succeeds.")
         {
             scenarioArgument, runsOption, seedOption, versusOption, jobsOption, outputOption, precisionOption, resumeOption, keepOption,
         };
+        foreach (var option in clusterOptions.All) command.Options.Add(option);
         command.Subcommands.Add(Show());
         command.Subcommands.Add(Log());
         command.SetAction((parse, cancel) => Task.FromResult(Execute(
@@ -50,7 +52,8 @@ public static class CampaignCommand
             parse.GetValue(outputOption),
             parse.GetValue(precisionOption),
             parse.GetValue(resumeOption),
-            parse.GetValue(keepOption))));
+            parse.GetValue(keepOption),
+            clusterOptions.Read(parse))));
         return command;
     }
 
@@ -69,10 +72,11 @@ public static class CampaignCommand
             settings["random"]);
     }
 
-    private static int Execute(string scenarioArgument, int runs, long? seedOption, string[] versus, int? jobs, string? output, double? precision, bool resume, string? keepLogs)
+    private static int Execute(string scenarioArgument, int runs, long? seedOption, string[] versus, int? jobs, string? output, double? precision, bool resume, string? keepLogs, ClusterCampaign.Request? cluster = null)
     {
         if (runs < 1) throw new UsageException("--runs: a campaign needs at least 1 run");
-        if (jobs is < 1) throw new UsageException("--jobs: at least 1 worker");
+        if (jobs is < 1 && !(jobs == 0 && cluster is not null)) throw new UsageException(cluster is null ? "--jobs: at least 1 worker" : "--jobs: 0 (the campaign node only dispatches) or more");
+        if (cluster is not null && keepLogs is not null) throw new UsageException("--keep-logs: not with --cluster (the runs happen on other machines); regenerate any run's log with 'campaign log'");
         if (precision is { } h && !(h > 0 && h <= 0.5)) throw new UsageException("--precision: a half-width between 0 and 0.5 (e.g. 0.05 for ±5 %)");
         if (keepLogs is not (null or "failed" or "all")) throw new UsageException("--keep-logs: 'failed' or 'all'");
 
@@ -127,7 +131,7 @@ public static class CampaignCommand
         var work = Enumerable.Range(0, runs).SelectMany(i => variants.Select(v => (v.Name, Index: i))).Where(k => !done.Contains(k)).ToList();
         var workers = jobs ?? Environment.ProcessorCount;
         Console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"DescentOps {ToolInfo.Version}: campaign of '{scenario.Name}', {runs} runs x {variants.Count} variant(s), seed {seed}, {workers} worker(s){(done.Count > 0 ? $", {done.Count} run(s) already stored" : "")}"));
+            $"DescentOps {ToolInfo.Version}: campaign of '{scenario.Name}', {runs} runs x {variants.Count} variant(s), seed {seed}, {workers} worker(s){(cluster is null ? "" : " here and more as they join the cluster")}{(done.Count > 0 ? $", {done.Count} run(s) already stored" : "")}"));
 
         using var interruption = Interruption.Watch();
         using var cancel = CancellationTokenSource.CreateLinkedTokenSource(interruption.Token);
@@ -153,14 +157,7 @@ public static class CampaignCommand
                     var spec = plan.Spec(variant, index);
                     var record = RunExecutor.Execute(plan, spec, keepLogs == "all" ? LogPath(logsDir, spec) : null);
                     if (keepLogs == "failed" && !record.Success) RunExecutor.Execute(plan, spec, LogPath(logsDir, spec));
-                    store.Add(record);
-                    lock (gate)
-                    {
-                        success[(variant, index)] = record.Success;
-                        if (precision is { } half) CheckPrecision(half);
-                    }
-
-                    progress.RunFinished();
+                    Accept(record);
                 }
 #pragma warning disable CA1031 // The first failure stops the campaign and is rethrown on the calling thread.
                 catch (Exception exception)
@@ -170,6 +167,19 @@ public static class CampaignCommand
                     cancel.Cancel();
                 }
             }
+        }
+
+        bool Accept(RunRecord record)
+        {
+            var stored = store.Add(record);
+            lock (gate)
+            {
+                success[(record.Variant, record.Index)] = record.Success;
+                if (precision is { } half) CheckPrecision(half);
+            }
+
+            progress.RunFinished();
+            return stored;
         }
 
         void CheckPrecision(double half)
@@ -193,9 +203,17 @@ public static class CampaignCommand
             lock (gate) CheckPrecision(h0);
         }
 
-        var threads = Enumerable.Range(0, workers).Select(_ => new Thread(Worker) { IsBackground = true }).ToList();
-        threads.ForEach(t => t.Start());
-        threads.ForEach(t => t.Join());
+        if (cluster is not null)
+        {
+            failure = ClusterCampaign.Run(cluster, plan, settings, work, jobs ?? Environment.ProcessorCount, Accept, () => Volatile.Read(ref stopAt), progress, cancel.Token);
+        }
+        else
+        {
+            var threads = Enumerable.Range(0, workers).Select(_ => new Thread(Worker) { IsBackground = true }).ToList();
+            threads.ForEach(t => t.Start());
+            threads.ForEach(t => t.Join());
+        }
+
         progress.Done();
         if (failure is not null) throw failure;
         if (cancel.IsCancellationRequested)

@@ -19,6 +19,9 @@ public sealed class CampaignProgress(int total, int alreadyDone)
 
     public TimeSpan Elapsed => _wall.Elapsed;
 
+    /// <summary>More to show after the ETA (a clustered campaign's workers and runs in flight).</summary>
+    public Func<string>? Detail { get; set; }
+
     public void RunFinished()
     {
         lock (_gate)
@@ -35,12 +38,12 @@ public sealed class CampaignProgress(int total, int alreadyDone)
             var rate = RunsPerSecond;
             var eta = rate > 0 ? TimeSpan.FromSeconds((total - all) / rate) : TimeSpan.Zero;
             Console.Error.Write(string.Create(CultureInfo.InvariantCulture,
-                $"\r  [{new string('#', filled)}{new string('.', width - filled)}] {all}/{total} runs  {rate:F2} runs/s  ETA {(int)eta.TotalMinutes}m{eta.Seconds:00}s   "));
+                $"\r  [{new string('#', filled)}{new string('.', width - filled)}] {all}/{total} runs  {rate:F2} runs/s  ETA {(int)eta.TotalMinutes}m{eta.Seconds:00}s{(Detail is null ? "" : "  " + Detail())}   "));
         }
     }
 
     public void Done()
     {
-        if (_enabled && _done > 0) Console.Error.Write("\r" + new string(' ', 90) + "\r");
+        if (_enabled && _done > 0) Console.Error.Write("\r" + new string(' ', 120) + "\r");
     }
 }

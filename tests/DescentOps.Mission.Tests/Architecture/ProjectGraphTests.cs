@@ -25,7 +25,8 @@ public sealed class ProjectGraphTests
         ["DescentOps.Rehearsal"] = ["DescentOps.Mission", "DescentOps.Journal"],
         ["DescentOps.Rehearsal.Web"] = ["DescentOps.Rehearsal"],
         ["DescentOps.Campaigns"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports"],
-        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports", "DescentOps.Campaigns", "DescentOps.Rehearsal.Web"],
+        ["DescentOps.Cluster"] = ["DescentOps.Campaigns"],
+        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports", "DescentOps.Campaigns", "DescentOps.Cluster", "DescentOps.Rehearsal.Web"],
     };
 
     /// <summary>Projects whose whole reference closure must be free of the actor framework.</summary>

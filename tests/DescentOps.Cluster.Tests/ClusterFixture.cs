@@ -1,0 +1,164 @@
+using System.Net;
+using System.Net.Sockets;
+using System.Text.Json;
+using DescentOps.Campaigns;
+using DescentOps.Cli;
+using DescentOps.Cli.Commands;
+using DescentOps.Engine.Randomness;
+using DescentOps.Scenarios.Loading;
+using Microsoft.Data.Sqlite;
+
+namespace DescentOps.Cluster.Tests;
+
+/// <summary>The campaign test scenario, the command line in this process, free loopback ports and in-process workers.</summary>
+internal static class ClusterFixture
+{
+    public static string Scenario => Path.Combine(AppContext.BaseDirectory, "short-stall.yaml");
+
+    public static string NoBoost => Path.Combine(AppContext.BaseDirectory, "no-boost.yaml");
+
+    /// <summary>Hang guard for anything that waits on a cluster: generous, never a timing assertion.</summary>
+    public static readonly TimeSpan Guard = TimeSpan.FromSeconds(120);
+
+    public static CampaignPlan Plan(long seed, string toolVersion = "test-build")
+    {
+        var scenario = ScenarioLoader.LoadFile(Scenario);
+        return new CampaignPlan(scenario, [CampaignVariant.Baseline], seed, scenario.Run.UntilS, toolVersion, RandomStream.AlgorithmName);
+    }
+
+    public static string TempDir()
+    {
+        var dir = Path.Combine(Root.Value, Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(dir);
+        return dir;
+    }
+
+    private static readonly Lazy<string> Root = new(() =>
+    {
+        var root = Path.Combine(Path.GetTempPath(), "descentops-cluster-tests");
+        if (Directory.Exists(root)) Directory.Delete(root, recursive: true);
+        return root;
+    });
+
+    /// <summary>A loopback port free a moment ago (the node binds it right after).</summary>
+    public static int FreePort()
+    {
+        using var listener = new TcpListener(IPAddress.Loopback, 0);
+        listener.Start();
+        return ((IPEndPoint)listener.LocalEndpoint).Port;
+    }
+
+    private static readonly SemaphoreSlim Turn = new(1, 1);
+
+    /// <summary>The command line in this process with its output captured; the console is process-wide, so calls take turns.</summary>
+    public static async Task<(int ExitCode, string Stdout, string Stderr)> CliAsync(params string[] args)
+    {
+        await Turn.WaitAsync();
+        var (oldOut, oldError) = (Console.Out, Console.Error);
+        using var stdout = new StringWriter();
+        using var stderr = new StringWriter();
+        try
+        {
+            Console.SetOut(stdout);
+            Console.SetError(stderr);
+            var exit = await CliApp.RunAsync(args);
+            return (exit, stdout.ToString(), stderr.ToString());
+        }
+        finally
+        {
+            Console.SetOut(oldOut);
+            Console.SetError(oldError);
+            Turn.Release();
+        }
+    }
+
+    /// <summary>A worker in this process, as <c>descentops worker --join</c> runs one; stopped by disposing.</summary>
+    public sealed class Worker : IAsyncDisposable
+    {
+        private readonly CancellationTokenSource _stop = new();
+
+        public Worker(int port, int slots = 1, JoinSecret? secret = null, string toolVersion = "")
+        {
+            var setup = new WorkerSetup("in-process", toolVersion.Length == 0 ? ToolInfo.Version : toolVersion, slots, secret, PlanOf, n => { lock (Notices) Notices.Add(n); });
+            Running = Task.Run(() => WorkerNode.RunAsync(setup, new NodeAddress("127.0.0.1", port), new NodeAddress("127.0.0.1", 0), Counters, false, _ => { }, _stop.Token));
+        }
+
+        public WorkerCounters Counters { get; } = new();
+
+        public List<string> Notices { get; } = [];
+
+        public Task Running { get; }
+
+        public async ValueTask DisposeAsync()
+        {
+            await _stop.CancelAsync();
+            try
+            {
+                await Running.WaitAsync(Guard);
+            }
+            catch (WorkerRefusedException)
+            {
+            }
+
+            _stop.Dispose();
+        }
+
+        private static CampaignPlan PlanOf(string json) => CampaignCommand.PlanOf(JsonSerializer.Deserialize<Dictionary<string, string>>(json)!);
+    }
+
+    /// <summary>Waits for a condition (polling), failing the test with the message if the guard runs out.</summary>
+    public static async Task Until(Func<bool> condition, string what)
+    {
+        var started = DateTime.UtcNow;
+        while (!condition())
+        {
+            if (DateTime.UtcNow - started > Guard) throw new TimeoutException($"gave up waiting: {what}");
+            await Task.Delay(50);
+        }
+    }
+
+    /// <summary>Every table's rows, ordered by their key, as text: two equal dumps mean equal tables.</summary>
+    public static string Dump(string dir)
+    {
+        using var connection = new SqliteConnection($"Data Source={Path.Combine(dir, "campaign.sqlite")};Pooling=False;Mode=ReadOnly");
+        connection.Open();
+        var text = new System.Text.StringBuilder();
+        foreach (var (table, order) in new[]
+        {
+            ("runs", "variant, run_index"), ("inputs", "variant, run_index, path"), ("criteria", "variant, run_index, criterion"),
+            ("fault_measures", "variant, run_index, ordinal"), ("rule_firings", "variant, run_index, rule"),
+        })
+        {
+            using var command = connection.CreateCommand();
+            command.CommandText = $"SELECT * FROM {table} ORDER BY {order}";
+            using var reader = command.ExecuteReader();
+            text.Append(table).Append('\n');
+            while (reader.Read())
+            {
+                for (var i = 0; i < reader.FieldCount; i++) text.Append(reader.IsDBNull(i) ? "NULL" : Convert.ToString(reader.GetValue(i), System.Globalization.CultureInfo.InvariantCulture)).Append('|');
+                text.Append('\n');
+            }
+        }
+
+        return text.ToString();
+    }
+
+    /// <summary>Runs stored so far (0 before the database exists); read-only, beside a writer.</summary>
+    public static int StoredRuns(string dir)
+    {
+        var path = Path.Combine(dir, "campaign.sqlite");
+        if (!File.Exists(path)) return 0;
+        try
+        {
+            using var connection = new SqliteConnection($"Data Source={path};Pooling=False;Mode=ReadOnly");
+            connection.Open();
+            using var command = connection.CreateCommand();
+            command.CommandText = "SELECT count(*) FROM runs";
+            return Convert.ToInt32(command.ExecuteScalar(), System.Globalization.CultureInfo.InvariantCulture);
+        }
+        catch (SqliteException)
+        {
+            return 0; // not created yet
+        }
+    }
+}

@@ -1,0 +1,139 @@
+using System.Globalization;
+using Akka.Actor;
+using Akka.Cluster;
+using Akka.Configuration;
+using DescentOps.Campaigns;
+using DescentOps.Cluster.Protocol;
+using Xunit;
+
+namespace DescentOps.Cluster.Tests;
+
+/// <summary>Clusters of several actor systems in this process, on loopback; every wait has a hang guard.</summary>
+public sealed class InProcessClusterTests
+{
+    [Fact]
+    public async Task AClusteredCampaignGivesTheLocalCampaignsSummaryAndTables()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "6", "--seed", "11", "--versus", ClusterFixture.NoBoost };
+        var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+
+        var port = ClusterFixture.FreePort();
+        await using var a = new ClusterFixture.Worker(port);
+        await using var b = new ClusterFixture.Worker(port, slots: 2);
+        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        Assert.True(clusterExit == 0, stdout + clusterErr);
+
+        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
+        Assert.Equal(12, a.Counters.RunsDone + b.Counters.RunsDone); // --jobs 0: the campaign node ran none itself
+        Assert.Contains("joined with 2 slot(s)", stdout, StringComparison.Ordinal);
+        Assert.Contains($"listening on 127.0.0.1:{port}", stdout, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task AWorkerThatJoinsLateGetsWork()
+    {
+        var dir = ClusterFixture.TempDir();
+        var port = ClusterFixture.FreePort();
+        // The command runs synchronously on its caller's thread: give it one of its own.
+        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "30", "--seed", "3", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
+        await using var first = new ClusterFixture.Worker(port);
+        await ClusterFixture.Until(() => first.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
+        Assert.False(campaign.IsCompleted, "the campaign ended before the second worker could join");
+        await using var late = new ClusterFixture.Worker(port);
+        var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
+        Assert.True(exit == 0, stdout + stderr);
+        Assert.True(late.Counters.RunsDone > 0, $"the late worker ran nothing; the first ran {first.Counters.RunsDone}\n{stdout}");
+        Assert.Equal(30, first.Counters.RunsDone + late.Counters.RunsDone);
+        Assert.Equal(30, ClusterFixture.StoredRuns(dir));
+    }
+
+    [Fact]
+    public async Task ADuplicateResultIsDiscardedAndLogged()
+    {
+        var plan = ClusterFixture.Plan(seed: 5);
+        var work = Enumerable.Range(0, 3).Select(i => new RunKey(CampaignVariant.BaselineName, i)).ToList();
+        var accepted = new List<RunRecord>();
+        var notices = new List<string>();
+        var setup = new DispatcherSetup("{}", plan, work, "test-build", null, r => { lock (accepted) accepted.Add(r); return true; }, () => int.MaxValue, n => { lock (notices) notices.Add(n); });
+        await using var node = await CampaignNode.StartAsync(setup, new NodeAddress("127.0.0.1", 0), 0, _ => plan, false, _ => { });
+
+        using var system = ActorSystem.Create(NodeRoles.SystemName, ConfigurationFactory.ParseString(string.Create(CultureInfo.InvariantCulture, $$"""
+            akka.actor.provider = cluster
+            akka.remote.dot-netty.tcp.hostname = 127.0.0.1
+            akka.remote.dot-netty.tcp.port = 0
+            akka.cluster.seed-nodes = ["{{ClusterConfig.SeedAddress(node.Address)}}"]
+            akka.cluster.roles = [worker]
+            akka.loglevel = ERROR
+            akka.stdout-loglevel = OFF
+            """)));
+        system.ActorOf(Props.Create(() => new TwiceSendingWorker(plan)), "twice");
+        await node.Completion.WaitAsync(ClusterFixture.Guard);
+
+        Assert.Equal([0, 1, 2], accepted.Select(r => r.Index).Order());
+        Assert.True(node.Status.Duplicates >= 2, $"{node.Status.Duplicates} duplicate(s) counted");
+        lock (notices) Assert.Contains(notices, n => n.Contains("late duplicate of run 0 of baseline", StringComparison.Ordinal));
+        await system.Terminate().WaitAsync(ClusterFixture.Guard);
+    }
+
+    [Fact]
+    public async Task AWorkerWithoutTheSharedSecretGetsNoWork()
+    {
+        var plan = ClusterFixture.Plan(seed: 9, toolVersion: Cli.ToolInfo.Version);
+        var secret = JoinSecret.FromText("the-campaign-secret-of-this-test");
+        var stored = 0;
+        var setup = new DispatcherSetup(System.Text.Json.JsonSerializer.Serialize(Settings(plan)), plan, [new RunKey(CampaignVariant.BaselineName, 0), new RunKey(CampaignVariant.BaselineName, 1)],
+            Cli.ToolInfo.Version, secret, _ => { Interlocked.Increment(ref stored); return true; }, () => int.MaxValue, _ => { });
+        await using var node = await CampaignNode.StartAsync(setup, new NodeAddress("127.0.0.1", 0), 0, _ => plan, false, _ => { });
+
+        await using var stranger = new ClusterFixture.Worker(node.Address.Port, secret: JoinSecret.FromText("a-guess-at-the-campaign-secret"));
+        var refused = await Assert.ThrowsAsync<WorkerRefusedException>(() => stranger.Running.WaitAsync(ClusterFixture.Guard));
+        Assert.Contains("shared secret", refused.Message, StringComparison.Ordinal);
+        Assert.Equal(0, stranger.Counters.RunsDone);
+
+        await using var member = new ClusterFixture.Worker(node.Address.Port, secret: secret);
+        await node.Completion.WaitAsync(ClusterFixture.Guard);
+        Assert.Equal(2, stored);
+        Assert.Equal(2, member.Counters.RunsDone);
+    }
+
+    private static Dictionary<string, string> Settings(CampaignPlan plan) => new()
+    {
+        ["scenario_name"] = plan.Scenario.Name,
+        ["scenario_text"] = plan.Scenario.SourceText,
+        ["seed"] = plan.Seed.ToString(CultureInfo.InvariantCulture),
+        ["until_s"] = plan.UntilS.ToString("R", CultureInfo.InvariantCulture),
+        ["tool_version"] = plan.ToolVersion,
+        ["random"] = plan.RandomAlgorithm,
+        ["variants"] = "[\"baseline\"]",
+        ["changes"] = "{\"baseline\":null}",
+    };
+
+    /// <summary>A worker that speaks the protocol but sends every result twice, as a worker thought lost might.</summary>
+    private sealed class TwiceSendingWorker : ReceiveActor
+    {
+        public TwiceSendingWorker(CampaignPlan plan)
+        {
+            Receive<ClusterEvent.MemberUp>(up =>
+            {
+                if (up.Member.HasRole(NodeRoles.Campaign)) Context.ActorSelection(new RootActorPath(up.Member.Address) / "user" / NodeRoles.DispatcherName).Tell(new Hello("twice", "test-build", 1));
+            });
+            Receive<ClusterEvent.CurrentClusterState>(_ => { });
+            Receive<Challenge>(_ => Sender.Tell(new Proof("")));
+            Receive<Welcome>(_ => Sender.Tell(new AskWork(1)));
+            Receive<Assign>(assign =>
+            {
+                var json = RunRecordCodec.Encode(RunExecutor.Execute(plan, new RunSpec(assign.Variant, assign.Index, assign.Seed)));
+                Sender.Tell(new RunDone(assign.Variant, assign.Index, json));
+                Sender.Tell(new RunDone(assign.Variant, assign.Index, json));
+                Sender.Tell(new AskWork(1));
+            });
+            Receive<CampaignOver>(_ => { });
+        }
+
+        protected override void PreStart() => Akka.Cluster.Cluster.Get(Context.System).Subscribe(Self, ClusterEvent.InitialStateAsEvents, typeof(ClusterEvent.MemberUp));
+    }
+}

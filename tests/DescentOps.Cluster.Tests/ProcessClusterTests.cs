@@ -1,0 +1,46 @@
+using Xunit;
+
+namespace DescentOps.Cluster.Tests;
+
+/// <summary>
+/// The campaign node and its workers as separate processes on loopback: one worker is killed (SIGKILL, by its process
+/// id) in the middle of the campaign, another is stopped with SIGTERM (Ctrl-C's path), and the campaign still ends with
+/// exactly the local campaign's summary and tables.
+/// </summary>
+public sealed class ProcessClusterTests
+{
+    [Fact]
+    public async Task AKilledWorkersRunsAreRedoneAndTheCampaignEqualsTheLocalOne()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "36", "--seed", "17" };
+        var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+
+        var port = ClusterFixture.FreePort();
+        var join = $"127.0.0.1:{port}";
+        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "1", "--output", clustered]);
+        using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
+        using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
+
+        // Mid-campaign: both workers have joined and some runs are stored.
+        await ClusterFixture.Until(() => node.HasExited || (node.Stdout.Contains("w2 (", StringComparison.Ordinal) && node.Stdout.Contains("w3 (", StringComparison.Ordinal) && ClusterFixture.StoredRuns(clustered) >= 4), "both workers joined and 4 runs stored");
+        Assert.False(node.HasExited, node.Stdout + node.Stderr);
+        doomed.KillHard();
+        await ClusterFixture.Until(() => node.HasExited || ClusterFixture.StoredRuns(clustered) >= 8, "8 runs stored");
+        await stopping.SignalAsync("TERM");
+        await stopping.WaitAsync(ClusterFixture.Guard);
+        await node.WaitAsync(ClusterFixture.Guard);
+
+        Assert.True(node.ExitCode == 0, node.Stdout + node.Stderr);
+        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
+
+        // The node saw the killed worker lost (after the cluster downed it) and the stopped one leave.
+        Assert.Matches(@"worker w[23] lost", node.Stdout);
+        Assert.Matches(@"worker w[23] left", node.Stdout);
+        Assert.True(stopping.ExitCode == 0, stopping.Stdout + stopping.Stderr);
+        Assert.Contains("worker stopped:", stopping.Stdout, StringComparison.Ordinal);
+    }
+}
