@@ -28,7 +28,7 @@ public sealed class CampaignNode : IAsyncDisposable
     public WorkerCounters LocalWorker { get; } = new();
 
     /// <summary>Starts the node; <paramref name="localSlots"/> runs at once on the campaign node itself (0: it only dispatches).</summary>
-    public static async Task<CampaignNode> StartAsync(DispatcherSetup setup, NodeAddress listen, int localSlots, Func<string, Campaigns.CampaignPlan> planOf, bool verbose, Action<IServiceCollection> logging)
+    public static async Task<CampaignNode> StartAsync(DispatcherSetup setup, NodeAddress listen, int localSlots, Func<string, Campaigns.CampaignPlan> planOf, bool verbose, Action<IServiceCollection> logging, string? akkaConfig = null)
     {
         CampaignNode? node = null;
         var host = NodeHost.Build(listen, NodeRoles.Campaign, [], verbose, logging, (system, registry) =>
@@ -40,7 +40,7 @@ public sealed class CampaignNode : IAsyncDisposable
                 var worker = new WorkerSetup($"campaign node, {Environment.MachineName}", setup.ToolVersion, localSlots, setup.Secret, planOf, _ => { });
                 system.ActorOf(Props.Create(() => new RunWorker(worker, node!.LocalWorker, r => node._finished.TrySetException(new InvalidOperationException(r)), dispatcher)), NodeRoles.WorkerName);
             }
-        });
+        }, akkaConfig);
         node = new CampaignNode(host);
         await host.StartAsync().ConfigureAwait(false);
         var cluster = Akka.Cluster.Cluster.Get(host.Services.GetRequiredService<ActorSystem>());

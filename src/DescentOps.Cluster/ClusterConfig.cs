@@ -24,7 +24,8 @@ public static class ClusterConfig
     /// <summary>Largest message: a campaign's settings carry the scenario and change texts (4 MiB, far above any scenario).</summary>
     public const int MaxFrameBytes = 4 * 1024 * 1024;
 
-    public static AkkaConfigurationBuilder Apply(AkkaConfigurationBuilder builder, NodeAddress listen, string role, IReadOnlyList<NodeAddress> seeds, bool verbose)
+    /// <summary>The settings, then <paramref name="akkaConfig"/> (HOCON from <c>--akka-config</c>, e.g. Akka.Remote's TLS settings) over them.</summary>
+    public static AkkaConfigurationBuilder Apply(AkkaConfigurationBuilder builder, NodeAddress listen, string role, IReadOnlyList<NodeAddress> seeds, bool verbose, string? akkaConfig = null)
     {
         var c = System.Globalization.CultureInfo.InvariantCulture;
         builder
@@ -55,7 +56,28 @@ public static class ClusterConfig
                 loggers.ClearLoggers();
                 loggers.AddLoggerFactory();
             });
+        if (akkaConfig is not null) builder.AddHocon(ConfigurationFactory.ParseString(akkaConfig), HoconAddMode.Prepend);
         return builder;
+    }
+
+    /// <summary>An <c>--akka-config</c> file's HOCON text, checked to parse; the error names the file.</summary>
+    public static string ReadUserConfig(string path)
+    {
+        if (!File.Exists(path)) throw new FormatException($"--akka-config: no such file {path}");
+        if (new FileInfo(path).Length > 1_000_000) throw new FormatException($"--akka-config: {path} is over 1 MB; Akka settings are a few lines");
+        var text = File.ReadAllText(path);
+        try
+        {
+            ConfigurationFactory.ParseString(text);
+        }
+#pragma warning disable CA1031 // The HOCON parser throws several exception types; each is a bad file.
+        catch (Exception exception)
+#pragma warning restore CA1031
+        {
+            throw new FormatException($"--akka-config: {path} is not HOCON: {exception.Message}", exception);
+        }
+
+        return text;
     }
 
     /// <summary>The Akka address of a node listening on this host and port.</summary>

@@ -17,7 +17,7 @@ public static class WorkerNode
     private static readonly TimeSpan HandBackTimeout = TimeSpan.FromSeconds(5);
 
     /// <summary>Runs until <paramref name="stop"/> is cancelled (0) or the campaign node refuses this worker (the reason is thrown).</summary>
-    public static async Task RunAsync(WorkerSetup setup, NodeAddress join, NodeAddress listen, WorkerCounters counters, bool verbose, Action<IServiceCollection> logging, CancellationToken stop)
+    public static async Task RunAsync(WorkerSetup setup, NodeAddress join, NodeAddress listen, WorkerCounters counters, bool verbose, Action<IServiceCollection> logging, CancellationToken stop, string? akkaConfig = null)
     {
         while (!stop.IsCancellationRequested)
         {
@@ -38,7 +38,7 @@ public static class WorkerNode
                         return Done.Instance;
                     }
                 });
-            });
+            }, akkaConfig);
             await host.StartAsync(CancellationToken.None).ConfigureAwait(false);
             var system = host.Services.GetRequiredService<ActorSystem>();
             setup.Notice($"waiting to join the campaign node at {join} (this node: {Akka.Cluster.Cluster.Get(system).SelfAddress})");

@@ -43,4 +43,42 @@ public sealed class ProcessClusterTests
         Assert.True(stopping.ExitCode == 0, stopping.Stdout + stopping.Stderr);
         Assert.Contains("worker stopped:", stopping.Stdout, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public async Task ACampaignNodeKilledAndResumedCarriesOnWithTheWorkerThatRejoins()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "24", "--seed", "29" };
+        var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+
+        var port = ClusterFixture.FreePort();
+        var join = $"127.0.0.1:{port}";
+        using var worker = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
+        string firstOutput;
+        using (var first = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "0", "--output", clustered]))
+        {
+            await ClusterFixture.Until(() => first.HasExited || ClusterFixture.StoredRuns(clustered) >= 5, "5 runs stored");
+            Assert.False(first.HasExited, first.Stdout + first.Stderr);
+            first.KillHard();
+            await first.WaitAsync(ClusterFixture.Guard);
+            firstOutput = first.Stdout;
+        }
+
+        var stored = ClusterFixture.StoredRuns(clustered);
+        Assert.InRange(stored, 5, 23);
+        using var resumed = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "0", "--output", clustered, "--resume"]);
+        await resumed.WaitAsync(ClusterFixture.Guard);
+        Assert.True(resumed.ExitCode == 0, firstOutput + resumed.Stdout + resumed.Stderr);
+        Assert.Contains($"{stored} run(s) already stored", resumed.Stdout, StringComparison.Ordinal);
+        Assert.Contains("joined with 1 slot(s)", resumed.Stdout, StringComparison.Ordinal); // the same worker process, rejoined
+        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
+
+        await worker.SignalAsync("INT");
+        await worker.WaitAsync(ClusterFixture.Guard);
+        Assert.True(worker.ExitCode == 0, worker.Stdout + worker.Stderr);
+        Assert.Contains("the campaign node is gone", worker.Stdout, StringComparison.Ordinal);
+    }
 }

@@ -25,7 +25,9 @@ public static class ClusterCampaign
 
         public Option<bool> Verbose { get; } = new("--verbose") { Description = "With --cluster: log the cluster's comings and goings to stderr." };
 
-        public IEnumerable<Option> All => [Cluster, Listen, SecretFile, Verbose];
+        public Option<string?> AkkaConfig { get; } = AkkaConfigOption();
+
+        public IEnumerable<Option> All => [Cluster, Listen, SecretFile, Verbose, AkkaConfig];
 
         /// <summary>The cluster request, or null for a local campaign; refused before anything runs when it is incomplete.</summary>
         public Request? Read(System.CommandLine.ParseResult parse)
@@ -33,9 +35,10 @@ public static class ClusterCampaign
             var listen = parse.GetValue(Listen);
             var secretFile = parse.GetValue(SecretFile);
             var verbose = parse.GetValue(Verbose);
+            var akkaConfig = parse.GetValue(AkkaConfig);
             if (!parse.GetValue(Cluster))
             {
-                if (listen is not null || secretFile is not null || verbose) throw new UsageException("--listen, --secret-file and --verbose go with --cluster");
+                if (listen is not null || secretFile is not null || verbose || akkaConfig is not null) throw new UsageException("--listen, --secret-file, --verbose and --akka-config go with --cluster");
                 return null;
             }
 
@@ -46,11 +49,27 @@ public static class ClusterCampaign
                 throw new UsageException($"--listen {address} is reachable from other machines: give a shared secret (--secret-file FILE or ${JoinSecret.EnvironmentVariable}) so only your workers take part");
             }
 
-            return new Request(address, secret, verbose);
+            return new Request(address, secret, verbose, UserConfig(akkaConfig));
         }
     }
 
-    public sealed record Request(NodeAddress Listen, JoinSecret? Secret, bool Verbose);
+    public sealed record Request(NodeAddress Listen, JoinSecret? Secret, bool Verbose, string? AkkaConfig);
+
+    /// <summary><c>--akka-config FILE</c>, for both node kinds.</summary>
+    public static Option<string?> AkkaConfigOption() => new("--akka-config") { Description = "A HOCON file of Akka settings laid over the node's own (README: transport security with Akka.Remote's TLS settings)." };
+
+    public static string? UserConfig(string? path)
+    {
+        if (path is null) return null;
+        try
+        {
+            return ClusterConfig.ReadUserConfig(path);
+        }
+        catch (FormatException exception)
+        {
+            throw new UsageException(exception.Message);
+        }
+    }
 
     public static NodeAddress Address(string text, string option)
     {
@@ -103,7 +122,7 @@ public static class ClusterCampaign
         CampaignNode node;
         try
         {
-            node = CampaignNode.StartAsync(setup, request.Listen, localSlots, _ => plan, request.Verbose, NodeDiagnostics.Logging(request.Verbose)).GetAwaiter().GetResult();
+            node = CampaignNode.StartAsync(setup, request.Listen, localSlots, _ => plan, request.Verbose, NodeDiagnostics.Logging(request.Verbose), request.AkkaConfig).GetAwaiter().GetResult();
         }
         catch (Exception exception) when (exception is not OperationCanceledException)
         {

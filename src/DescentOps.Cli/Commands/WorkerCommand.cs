@@ -20,9 +20,10 @@ public static class WorkerCommand
         var listenOption = new Option<string?>("--listen") { Description = "This worker's HOST:PORT as the campaign node can reach it (default 127.0.0.1 on a free port; required when --join is not loopback)." };
         var secretOption = new Option<string?>("--secret-file") { Description = $"A file holding the campaign's shared secret (else ${JoinSecret.EnvironmentVariable}); required when --join is not loopback." };
         var verboseOption = new Option<bool>("--verbose") { Description = "Log the cluster's comings and goings to stderr." };
+        var akkaConfigOption = ClusterCampaign.AkkaConfigOption();
         var command = new Command("worker", "Join a clustered campaign and run its runs until stopped (Ctrl-C hands back unfinished runs).")
         {
-            joinOption, jobsOption, listenOption, secretOption, verboseOption,
+            joinOption, jobsOption, listenOption, secretOption, verboseOption, akkaConfigOption,
         };
         command.SetAction(async (parse, _) =>
         {
@@ -39,6 +40,7 @@ public static class WorkerCommand
             }
 
             var verbose = parse.GetValue(verboseOption);
+            var akkaConfig = ClusterCampaign.UserConfig(parse.GetValue(akkaConfigOption));
             var counters = new WorkerCounters();
             var name = string.Create(CultureInfo.InvariantCulture, $"{Environment.MachineName}, pid {Environment.ProcessId}");
             var setup = new WorkerSetup(name, ToolInfo.Version, jobs, secret, PlanOf, NodeDiagnostics.Notice);
@@ -46,7 +48,7 @@ public static class WorkerCommand
             using var interruption = Interruption.Watch();
             try
             {
-                await WorkerNode.RunAsync(setup, join, listen, counters, verbose, NodeDiagnostics.Logging(verbose), interruption.Token).ConfigureAwait(false);
+                await WorkerNode.RunAsync(setup, join, listen, counters, verbose, NodeDiagnostics.Logging(verbose), interruption.Token, akkaConfig).ConfigureAwait(false);
             }
             catch (WorkerRefusedException refused)
             {

@@ -17,6 +17,8 @@ public static class NodeDiagnostics
         var logger = new LoggerConfiguration()
             .MinimumLevel.Is(verbose ? LogEventLevel.Information : LogEventLevel.Warning)
             .MinimumLevel.Override("Microsoft", LogEventLevel.Warning)
+            // A peer that vanished is reported as a notice (worker lost, campaign node gone); Akka's stack trace for it only with --verbose.
+            .Filter.ByExcluding(e => !verbose && e.Exception?.GetType().Name == "EndpointDisassociatedException")
             .WriteTo.Console(
                 outputTemplate: "{Timestamp:HH:mm:ss} {Level:u3} {SourceContext}: {Message:lj}{NewLine}{Exception}",
                 formatProvider: CultureInfo.InvariantCulture,
