@@ -27,6 +27,9 @@ public sealed class CampaignNode : IAsyncDisposable
 
     public WorkerCounters LocalWorker { get; } = new();
 
+    /// <summary>The transport's name in Akka addresses: <c>akka.tcp</c>, or <c>akka.ssl.tcp</c> with TLS on.</summary>
+    public string Protocol { get; private set; } = "akka.tcp";
+
     /// <summary>Starts the node; <paramref name="localSlots"/> runs at once on the campaign node itself (0: it only dispatches).</summary>
     public static async Task<CampaignNode> StartAsync(DispatcherSetup setup, NodeAddress listen, int localSlots, Func<string, Campaigns.CampaignPlan> planOf, bool verbose, Action<IServiceCollection> logging, string? akkaConfig = null)
     {
@@ -46,6 +49,7 @@ public sealed class CampaignNode : IAsyncDisposable
         var cluster = Akka.Cluster.Cluster.Get(host.Services.GetRequiredService<ActorSystem>());
         cluster.Join(cluster.SelfAddress); // the first and only seed: the cluster forms around the campaign node
         node.Address = new NodeAddress(cluster.SelfAddress.Host!, cluster.SelfAddress.Port ?? listen.Port);
+        node.Protocol = cluster.SelfAddress.Protocol;
         return node;
     }
 

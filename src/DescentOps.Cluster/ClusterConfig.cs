@@ -28,12 +28,14 @@ public static class ClusterConfig
     public static AkkaConfigurationBuilder Apply(AkkaConfigurationBuilder builder, NodeAddress listen, string role, IReadOnlyList<NodeAddress> seeds, bool verbose, string? akkaConfig = null)
     {
         var c = System.Globalization.CultureInfo.InvariantCulture;
+        var user = akkaConfig is null ? null : ConfigurationFactory.ParseString(akkaConfig);
+        var tls = user?.GetBoolean("akka.remote.dot-netty.tcp.enable-ssl", false) ?? false;
         builder
             .WithRemoting(new RemoteOptions { HostName = listen.Host, PublicHostName = listen.Host, Port = listen.Port, MaxFrameSize = MaxFrameBytes })
             .WithClustering(new ClusterOptions
             {
                 Roles = [role],
-                SeedNodes = [.. seeds.Select(SeedAddress)],
+                SeedNodes = [.. seeds.Select(s => SeedAddress(s, tls))],
                 SplitBrainResolver = new KeepOldestOption { DownIfAlone = false, Role = NodeRoles.Campaign },
                 LogInfo = verbose,
             })
@@ -56,7 +58,7 @@ public static class ClusterConfig
                 loggers.ClearLoggers();
                 loggers.AddLoggerFactory();
             });
-        if (akkaConfig is not null) builder.AddHocon(ConfigurationFactory.ParseString(akkaConfig), HoconAddMode.Prepend);
+        if (user is not null) builder.AddHocon(user, HoconAddMode.Prepend);
         return builder;
     }
 
@@ -80,6 +82,6 @@ public static class ClusterConfig
         return text;
     }
 
-    /// <summary>The Akka address of a node listening on this host and port.</summary>
-    public static string SeedAddress(NodeAddress node) => $"akka.tcp://{NodeRoles.SystemName}@{node}";
+    /// <summary>The Akka address of a node listening on this host and port (Akka.Remote names a TLS transport <c>akka.ssl.tcp</c>).</summary>
+    public static string SeedAddress(NodeAddress node, bool tls = false) => $"{(tls ? "akka.ssl.tcp" : "akka.tcp")}://{NodeRoles.SystemName}@{node}";
 }

@@ -77,10 +77,10 @@ internal static class ClusterFixture
     {
         private readonly CancellationTokenSource _stop = new();
 
-        public Worker(int port, int slots = 1, JoinSecret? secret = null, string toolVersion = "")
+        public Worker(int port, int slots = 1, JoinSecret? secret = null, string toolVersion = "", string? akkaConfig = null)
         {
             var setup = new WorkerSetup("in-process", toolVersion.Length == 0 ? ToolInfo.Version : toolVersion, slots, secret, PlanOf, n => { lock (Notices) Notices.Add(n); });
-            Running = Task.Run(() => WorkerNode.RunAsync(setup, new NodeAddress("127.0.0.1", port), new NodeAddress("127.0.0.1", 0), Counters, false, _ => { }, _stop.Token));
+            Running = Task.Run(() => WorkerNode.RunAsync(setup, new NodeAddress("127.0.0.1", port), new NodeAddress("127.0.0.1", 0), Counters, false, _ => { }, _stop.Token, akkaConfig));
         }
 
         public WorkerCounters Counters { get; } = new();

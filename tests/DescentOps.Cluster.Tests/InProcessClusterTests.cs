@@ -100,7 +100,7 @@ public sealed class InProcessClusterTests
         Assert.Equal(2, member.Counters.RunsDone);
     }
 
-    private static Dictionary<string, string> Settings(CampaignPlan plan) => new()
+    internal static Dictionary<string, string> Settings(CampaignPlan plan) => new()
     {
         ["scenario_name"] = plan.Scenario.Name,
         ["scenario_text"] = plan.Scenario.SourceText,
