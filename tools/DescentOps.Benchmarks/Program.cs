@@ -1,4 +1,5 @@
 using DescentOps.Benchmarks.Campaign;
+using DescentOps.Benchmarks.Cluster;
 using DescentOps.Benchmarks.Onboard;
 using DescentOps.Benchmarks.Phold;
 using DescentOps.Benchmarks.Physics;
@@ -10,6 +11,7 @@ return args.FirstOrDefault() switch
     "physics" => await PhysicsBenchmark.RunAsync(Console.Out),
     "rules" => await RulesBenchmark.RunAsync(Console.Out, args.Length > 2 && args[1] == "--repeats" ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 3),
     "campaign" => await CampaignBenchmark.RunAsync(args[1..], Console.Out),
+    "cluster" => await ClusterBenchmark.RunAsync(args[1..], Console.Out),
     "onboard" => await OnboardBenchmark.RunAsync(Console.Out, args.Length > 2 && args[1] == "--repeats" ? int.Parse(args[2], System.Globalization.CultureInfo.InvariantCulture) : 3),
     _ => Usage(),
 };
@@ -20,6 +22,7 @@ static int Usage()
     Console.Error.WriteLine("       DescentOps.Benchmarks physics");
     Console.Error.WriteLine("       DescentOps.Benchmarks rules [--repeats 3]");
     Console.Error.WriteLine("       DescentOps.Benchmarks campaign [--runs 8] [--jobs K] [--scenario default.yaml]");
+    Console.Error.WriteLine("       DescentOps.Benchmarks cluster [--runs 40] [--scenario default.yaml] [--cli PATH]");
     Console.Error.WriteLine("       DescentOps.Benchmarks onboard [--repeats 3]");
     return 2;
 }
