@@ -11,7 +11,7 @@ namespace DescentOps.Cluster;
 /// asks for one run per free slot, runs each on a thread of its own (<see cref="RunExecutor.Execute"/>) and sends the
 /// record back. Told to stop (<see cref="StopAndHandBack"/>), it hands back what it has not finished and leaves.
 /// </summary>
-public sealed class RunWorker : ReceiveActor
+public sealed class RunWorker : ReceiveActor, IWithTimers
 {
     private readonly WorkerSetup _setup;
     private readonly WorkerCounters _counters;
@@ -23,12 +23,19 @@ public sealed class RunWorker : ReceiveActor
     private bool _stopping;
     private bool _subscribed;
 
+    public ITimerScheduler Timers { get; set; } = null!;
+
     /// <summary>Asks the worker to hand back its unfinished runs and leave the campaign; answered with <see cref="Done"/>.</summary>
     public sealed record StopAndHandBack;
 
     private sealed record Finished(RunKey Key, RunRecord Record);
 
     private sealed record Failed(RunKey Key, Exception Error);
+
+    private sealed record GreetAgain(Address Node);
+
+    /// <summary>A greeting lost on the way (the node still starting, a dropped connection) is sent again after this long.</summary>
+    private static readonly TimeSpan GreetingRetry = TimeSpan.FromSeconds(3);
 
     /// <summary>A worker; <paramref name="dispatcher"/> is given when it is in this actor system, otherwise found through the cluster.</summary>
     public RunWorker(WorkerSetup setup, WorkerCounters counters, Action<string> refused, IActorRef? dispatcher = null)
@@ -42,6 +49,7 @@ public sealed class RunWorker : ReceiveActor
             foreach (var member in state.Members.Where(m => m.Status == MemberStatus.Up)) Found(member);
         });
         Receive<ClusterEvent.MemberUp>(up => Found(up.Member));
+        Receive<GreetAgain>(again => Greet(again.Node));
         Receive<Challenge>(challenge =>
         {
             if (_dispatcher is null || !Sender.Equals(_dispatcher)) Context.Watch(_dispatcher = Sender);
@@ -110,8 +118,14 @@ public sealed class RunWorker : ReceiveActor
 
     private void Found(Member member)
     {
-        if (_dispatcher is not null || !member.HasRole(NodeRoles.Campaign)) return;
-        Context.ActorSelection(new RootActorPath(member.Address) / "user" / NodeRoles.DispatcherName).Tell(new Hello(_setup.Name, _setup.ToolVersion, _setup.Slots));
+        if (member.HasRole(NodeRoles.Campaign)) Greet(member.Address);
+    }
+
+    private void Greet(Address node)
+    {
+        if (_dispatcher is not null || _stopping) return;
+        Context.ActorSelection(new RootActorPath(node) / "user" / NodeRoles.DispatcherName).Tell(new Hello(_setup.Name, _setup.ToolVersion, _setup.Slots));
+        Timers.StartSingleTimer("greet-" + node, new GreetAgain(node), GreetingRetry);
     }
 
     private void OnWelcome(Welcome welcome)

@@ -34,6 +34,24 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
+    public async Task APrecisionStopEndsAClusteredCampaignWhereItEndsALocalOne()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "60", "--seed", "41", "--precision", "0.3" };
+        var (exit, stdout, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+        Assert.Contains("precision reached after 10 runs", stdout, StringComparison.Ordinal); // 10 of 10 succeed: Wilson half-width about 0.14
+
+        var port = ClusterFixture.FreePort();
+        await using var worker = new ClusterFixture.Worker(port);
+        (exit, stdout, stderr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "1", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        Assert.True(exit == 0, stdout + stderr);
+        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
+    }
+
+    [Fact]
     public async Task AWorkerThatJoinsLateGetsWork()
     {
         var dir = ClusterFixture.TempDir();
