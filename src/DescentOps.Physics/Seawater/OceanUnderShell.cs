@@ -28,13 +28,13 @@ public sealed record OceanUnderShell(SeawaterState Water, double GravityMPerS2)
 
     /// <summary>
     /// Sea pressure at a depth below the shell in a column of the same salinity and Conservative Temperature,
-    /// integrating dp/dz = ρ g with TEOS-10 density (midpoint rule, 1 m or finer steps, at most 200; density changes by
-    /// well under a part in a thousand per step). Refused beyond TEOS-10's 100 MPa.
+    /// integrating dp/dz = ρ g with TEOS-10 density (midpoint rule in 16 steps: density changes by under 1 % over the
+    /// whole column, so the rule's error is far below a part in a million). Refused beyond TEOS-10's 100 MPa.
     /// </summary>
     public double SeaPressureBelowPa(double depthBelowShellM)
     {
         ValidRange.RequireNonNegative(depthBelowShellM, nameof(depthBelowShellM), "m", "the ocean column under the shell");
-        var steps = (int)Math.Clamp(Math.Ceiling(depthBelowShellM), 1, 200);
+        const int steps = 16;
         var h = depthBelowShellM / steps;
         var p = Water.SeaPressurePa;
         for (var i = 0; i < steps; i++)

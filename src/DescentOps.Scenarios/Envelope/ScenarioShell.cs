@@ -17,6 +17,17 @@ public static class ScenarioShell
     public static IceShell Build(Scenario scenario, double conductivityCoefficientWPerM = Physics.Ice.IceConductivity.ReciprocalCoefficientWPerM)
     {
         ArgumentNullException.ThrowIfNull(scenario);
+        // The shell is immutable and costs a hydrostatic integration: the loader's checks, the probe and the tether share
+        // one per scenario object (a scenario is an immutable record, so the same object always means the same shell).
+        return conductivityCoefficientWPerM == Physics.Ice.IceConductivity.ReciprocalCoefficientWPerM
+            ? Cache.GetValue(scenario, s => Create(s, conductivityCoefficientWPerM))
+            : Create(scenario, conductivityCoefficientWPerM);
+    }
+
+    private static readonly System.Runtime.CompilerServices.ConditionalWeakTable<Scenario, IceShell> Cache = [];
+
+    private static IceShell Create(Scenario scenario, double conductivityCoefficientWPerM)
+    {
         return new IceShell(
             scenario.Shell.SurfaceTemperatureK,
             scenario.Shell.ThicknessM,
