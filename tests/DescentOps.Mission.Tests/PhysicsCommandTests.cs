@@ -266,6 +266,18 @@ public sealed class PhysicsCommandTests
         Assert.Contains("TEOS-10", stderr, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public async Task JetsAnswerHoleRadiusSpeedAndFreezeBack()
+    {
+        // Reference note §4.6, PRB-10: 5 kW of jet heat, η 0.8, 1 m/h, 250 K ice (melting at 273.15 K) → R_h = 0.11450 m.
+        var j = await JsonAsync("jets", "--power", "5 kW", "--speed", "1 m/h", "--temperature", "250 K", "--melting-temperature", "273.15 K",
+            "--probe-radius", "10 cm", "--probe-length", "2 m", "--efficiency", "0.8", "--pump-power", "300 W");
+        AssertFields(j, "hole_radius_m", "speed_m_s", "clearance_m", "freeze_back_time_s");
+        Assert.Equal(0.11450, Number(j, "hole_radius_m"), 2e-4);
+        Assert.Equal(Number(j, "hole_radius_m") - 0.1, Number(j, "clearance_m"), 12);
+        Assert.True(Number(j, "freeze_back_time_s") > 0);
+    }
+
     // ---- acoustic ----
 
     [Fact]
