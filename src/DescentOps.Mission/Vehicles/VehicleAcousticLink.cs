@@ -25,8 +25,11 @@ public sealed record VehicleAcousticLink(AcousticLink Link, double PracticalSali
     {
         ArgumentNullException.ThrowIfNull(acoustics);
         ArgumentNullException.ThrowIfNull(ocean);
-        var salinity = ScenarioOcean.PracticalSalinity(scenario);
-        var temperature = ScenarioOcean.AcousticTemperatureK(acoustics, ocean);
+        return Build(acoustics, ScenarioOcean.PracticalSalinity(scenario), ScenarioOcean.AcousticTemperatureK(acoustics, ocean), ocean, earthEquivalentDepthM);
+    }
+
+    private static VehicleAcousticLink Build(AcousticsModel acoustics, double salinity, double temperature, OceanUnderShell ocean, double earthEquivalentDepthM)
+    {
         var absorption = acoustics.Formula == AbsorptionFormula.AinslieMcColm
             ? SeawaterAbsorption.AinslieMcColmDbPerKm(acoustics.FrequencyHz, temperature, salinity, earthEquivalentDepthM, acoustics.PH)
             : SeawaterAbsorption.FrancoisGarrisonDbPerKm(acoustics.FrequencyHz, temperature, salinity, earthEquivalentDepthM, acoustics.PH);
@@ -37,6 +40,20 @@ public sealed record VehicleAcousticLink(AcousticLink Link, double PracticalSali
         var range = SonarEquation.MaximumRange(link, SearchLimitM);
         var soundSpeed = Teos10Seawater.At(ocean.Water.AbsoluteSalinityGPerKg, ocean.Water.SeaPressurePa, temperature).SoundSpeedMPerS;
         return new VehicleAcousticLink(link, salinity, earthEquivalentDepthM, soundSpeed, range.RangeM);
+    }
+
+    /// <summary>
+    /// The link in water of the acoustics section's temperature (required here) at an ocean salinity and the absolute
+    /// pressure under the shell, with no scenario at hand (tests and engineering answers).
+    /// </summary>
+    public static VehicleAcousticLink For(AcousticsModel acoustics, double oceanSalinityKgPerKg, double basePressurePa)
+    {
+        ArgumentNullException.ThrowIfNull(acoustics);
+        var temperature = acoustics.OceanTemperatureK ?? throw new ArgumentException("the acoustics need a water temperature here", nameof(acoustics));
+        var salinity = Physics.Ocean.PracticalSalinity.FromAbsoluteKgPerKg(oceanSalinityKgPerKg);
+        var ocean = OceanUnderShell.At(oceanSalinityKgPerKg * 1000.0, basePressurePa, ScenarioOcean.StandardGravityMPerS2, temperature);
+        var depth = Physics.Ocean.SeawaterPressureDepth.StandardOceanDepthM(ocean.Water.SeaPressurePa, ScenarioOcean.StandardGravityMPerS2);
+        return Build(acoustics, salinity, temperature, ocean, depth);
     }
 
     /// <summary>The sonar equation at a range; closer than 1 m counts as 1 m, where the spreading law starts.</summary>
