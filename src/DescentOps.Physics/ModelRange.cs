@@ -9,18 +9,21 @@ namespace DescentOps.Physics;
 public sealed record ModelRange(string Model, string Quantity, string Unit, double Minimum, double Maximum, bool MinimumExcluded = false)
 {
     /// <summary>A range (0, +inf): any positive finite value.</summary>
-    public static ModelRange Positive(string model, string quantity, string unit) => new(model, quantity, unit, 0.0, double.PositiveInfinity, MinimumExcluded: true);
+    public static ModelRange Positive(string model, string quantity, string unit) => new(model, quantity, unit, 0.0, double.MaxValue, MinimumExcluded: true);
 
-    /// <summary>Whether a value lies inside the range (NaN and infinities never do).</summary>
+    /// <summary>A range [0, +inf): any non-negative finite value.</summary>
+    public static ModelRange NonNegative(string model, string quantity, string unit) => new(model, quantity, unit, 0.0, double.MaxValue);
+
+    /// <summary>Whether a value lies inside the range (NaN never does; an infinity only under an infinite bound).</summary>
     public bool Contains(double value) =>
-        double.IsFinite(value) && (MinimumExcluded ? value > Minimum : value >= Minimum) && value <= Maximum;
+        !double.IsNaN(value) && (MinimumExcluded ? value > Minimum : value >= Minimum) && value <= Maximum;
 
     /// <summary>The value if it lies inside the range; otherwise a <see cref="ModelRangeException"/> carrying this range.</summary>
     public double Require(double value) => Contains(value) ? value : throw new ModelRangeException(this, value);
 
     /// <summary>The bounds as text, e.g. "[0, 100000000] Pa".</summary>
     public string Bounds =>
-        $"{(MinimumExcluded || double.IsInfinity(Minimum) ? '(' : '[')}{Number(Minimum)}, {Number(Maximum)}{(double.IsInfinity(Maximum) ? ')' : ']')}{(Unit.Length == 0 ? "" : " " + Unit)}";
+        $"{(MinimumExcluded || double.IsInfinity(Minimum) ? '(' : '[')}{Number(Minimum)}, {Number(Maximum)}{(Maximum >= double.MaxValue ? ')' : ']')}{(Unit.Length == 0 ? "" : " " + Unit)}";
 
     /// <summary>One sentence naming the value, the quantity, the range and the model.</summary>
     public string Describe(double value) =>
@@ -31,7 +34,7 @@ public sealed record ModelRange(string Model, string Quantity, string Unit, doub
 
     private static string Number(double value) => value switch
     {
-        double.PositiveInfinity => "+inf",
+        double.PositiveInfinity or double.MaxValue => "+inf",
         double.NegativeInfinity => "-inf",
         _ => value.ToString("R", CultureInfo.InvariantCulture),
     };

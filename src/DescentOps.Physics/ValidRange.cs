@@ -17,6 +17,6 @@ internal static class ValidRange
 
     public static double RequireNonNegative(double value, string quantity, string unit, string model)
     {
-        return new ModelRange(model, quantity, unit, 0.0, double.PositiveInfinity).Require(value);
+        return ModelRange.NonNegative(model, quantity, unit).Require(value);
     }
 }
