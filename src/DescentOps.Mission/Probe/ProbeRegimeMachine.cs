@@ -1,9 +1,10 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
 using DescentOps.Physics.Refreezing;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -48,7 +49,7 @@ public static class ProbeRegimeMachine
         var deficit = rate.Regime == DescentRegimeKind.Melting && !rate.WallPowerSufficient;
         if (deficit != state.WallDeficit)
         {
-            context.Record(deficit ? "probe.wall_deficit" : "probe.wall_sufficient", deficit ? Severity.Warning : Severity.Notice,
+            context.Record(deficit ? ProbeRecords.WallDeficit : ProbeRecords.WallSufficient, deficit ? Severity.Warning : Severity.Notice,
                 RecordField.Of("depth_m", state.DepthM),
                 RecordField.Of("wall_power_w", ProbeHeaters.WallPowerW(design, state)),
                 RecordField.Of("lateral_loss_w", rate.LateralLossW),
@@ -76,7 +77,7 @@ public static class ProbeRegimeMachine
             {
                 var exposureS = probe.LengthM / (2 * state.LastMovingVelocityMPerS);
                 var freeze = Refreeze.FreezeInAroundProbe(probe.FreezeGapM, probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
-                context.Record("probe.refreezing", Severity.Alarm,
+                context.Record(ProbeRecords.Refreezing, Severity.Alarm,
                     RecordField.Of("depth_m", state.DepthM),
                     RecordField.Of("gap_m", probe.FreezeGapM),
                     RecordField.Of("freeze_time_s", freeze.FreezeTimeS),
@@ -115,13 +116,13 @@ public static class ProbeRegimeMachine
         var free = Refreeze.MeltFree(probe.FreezeGapM, probe.RadiusM, probe.LengthM, wallW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK);
         if (!double.IsFinite(free.TimeS))
         {
-            context.Record("probe.cannot_melt_free", Severity.Critical,
+            context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),
                 RecordField.Of("wall_power_w", wallW));
             return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = wallW };
         }
 
-        context.Record("probe.melting_free", Severity.Notice,
+        context.Record(ProbeRecords.MeltingFree, Severity.Notice,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("wall_power_w", wallW),
             RecordField.Of("time_s", free.TimeS),
@@ -139,7 +140,7 @@ public static class ProbeRegimeMachine
             ProbeRegime.FrozenIn => Severity.Critical,
             _ => Severity.Notice,
         };
-        context.Record("probe.regime", severity,
+        context.Record(ProbeRecords.Regime, severity,
             RecordField.Of("from", state.Regime.ToString()),
             RecordField.Of("to", regime.ToString()),
             RecordField.Of("depth_m", state.DepthM),
