@@ -7,7 +7,7 @@ using DescentOps.Scenarios.Loading;
 namespace DescentOps.Mission.Tests;
 
 /// <summary>
-/// The built-in thick shell: 25 km of ice over a cold ocean under some 28 MPa, crossed to the end with its vehicles at
+/// The built-in thick shell: 25 km of ice over a cold ocean under some 23 MPa, crossed to the end with its vehicles at
 /// work in water at its own freezing point. Time-compressed (a 14 kW head, 12-hour telemetry) so the run takes a few
 /// thousand events.
 /// </summary>
@@ -49,7 +49,7 @@ public sealed class ThickShellScenarioTests
             .Replace("thickness: 25 km", "thickness: 40 km", StringComparison.Ordinal)
             .Replace("length: 27 km", "length: 42 km", StringComparison.Ordinal)
             .Replace("head_power: 14 kW", "head_power: 30 kW", StringComparison.Ordinal)
-            .Replace("telemetry_interval: 12 h", "telemetry_interval: 2 d", StringComparison.Ordinal)
+            .Replace("telemetry_interval: 12 h", "telemetry_interval: 1 d", StringComparison.Ordinal)
             .Replace("transceiver: gbe-long-reach", "transceiver: gbe-long-reach\n  attenuation: 0.2", StringComparison.Ordinal);
         var (summary, _) = await MissionHarness.RunAsync(ScenarioLoader.LoadText(text, "forty.yaml"));
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
