@@ -53,6 +53,9 @@ public sealed record ProbeState(
     /// <summary>Thickness of the debris deposit collected on the head so far.</summary>
     public double DebrisOnHeadM { get; init; }
 
+    /// <summary>The on-board sampler's pending timer and last samples; null without on-board sampling.</summary>
+    public Onboard.OnboardSamplerState? Onboard { get; init; }
+
     /// <summary>Charging power each docked vehicle asks of the bus, by vehicle name.</summary>
     public ImmutableSortedDictionary<string, double> DockDemandsW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 
