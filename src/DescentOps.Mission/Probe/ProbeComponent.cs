@@ -303,7 +303,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         var scale = HeadScale(state);
         var differenceW = (state.SegmentLossFraction * state.HeadSetpointW * scale / 2) - (state.SteeringW * scale);
         var turn = TiltDynamics.HeadTurnRateRadPerS(differenceW, _scenario.Probe.RadiusM, density, meltEnthalpy);
-        var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, _scenario.Probe.FreezeGapM, _scenario.Probe.LengthM);
+        // The clearance is the water gap the side balance leaves along the body: wall heat widens it (item of the side balance).
+        var clearanceM = rate.ClearanceM > 0 ? rate.ClearanceM : _scenario.Probe.FreezeGapM;
+        var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, clearanceM, _scenario.Probe.LengthM);
         return TiltDynamics.TiltRateRadPerS(state.TiltRad, 0.0, turn, 0.0, _scenario.Probe.LengthM / v, limit);
     }
 
@@ -318,9 +320,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 return state with { VelocityMPerS = 0.0 };
             case ProbeRegime.FrozenIn:
                 return StartMeltingFree(state, context);
-            case ProbeRegime.MeltingFree when WallPowerW(state) <= 0:
+            case ProbeRegime.MeltingFree when HeadPowerW(state) + WallPowerW(state) <= 0:
                 context.Cancel(state.PendingThermal!.Value);
-                return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "wall heaters lost while melting free");
+                return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "heaters lost while melting free");
             case ProbeRegime.MeltingFree:
                 return state with { VelocityMPerS = 0.0 };
         }
@@ -329,6 +331,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         if (rate.Regime == DescentRegimeKind.Stalled)
         {
             return state.Regime == ProbeRegime.Stopped ? state with { VelocityMPerS = 0.0 } : Stop(state, rate, context);
+        }
+
+        if (rate.Regime == DescentRegimeKind.Melting && rate.Held)
+        {
+            return RefreezeStall(state, rate, context);
         }
 
         if (state.PendingThermal is { } freezing)
@@ -360,12 +367,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     /// </summary>
     private ProbeState Stop(ProbeState state, DescentRate rate, ComponentContext context)
     {
-        state = ChangeRegime(state with { VelocityMPerS = 0.0 }, ProbeRegime.Stopped, context, "heater power below what descent needs");
+        state = ChangeRegime(state with { VelocityMPerS = 0.0, StoppedAt = context.Now }, ProbeRegime.Stopped, context, "heater power below what descent needs");
         if (state.Regime == ProbeRegime.Stopped && state.LastMovingVelocityMPerS > 0 && state.DepthM >= _descent.LiquidOnsetDepthM)
         {
             var phi = IceConductivity.KirchhoffPotentialWPerM(rate.IceTemperatureK, rate.MeltingTemperatureK, IceConductivityFit.PetrenkoWhitworth1999);
             var holdOpenW = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(_scenario.Probe.RadiusM, _scenario.Probe.LengthM), phi);
-            if (WallPowerW(state) < holdOpenW)
+            if (HeadPowerW(state) + WallPowerW(state) < holdOpenW)
             {
                 var exposureS = _scenario.Probe.LengthM / (2 * state.LastMovingVelocityMPerS);
                 var freeze = Refreeze.FreezeInAroundProbe(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
@@ -395,30 +402,76 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         _ => throw new InvalidOperationException($"A thermal timer for {due.Completes} fired in regime {state.Regime}; its cancellation was missed."),
     };
 
-    /// <summary>A frozen-in probe with wall power melts its gap open (<see cref="Refreeze.MeltFree"/>), or stays held.</summary>
+    /// <summary>
+    /// A refreeze stall: the side balance of the moving probe (<see cref="SideBalance"/>) closes its water gap within the
+    /// body's length, so the ice holds it where it is. Logged with the balance's numbers.
+    /// </summary>
+    private ProbeState RefreezeStall(ProbeState state, DescentRate rate, ComponentContext context)
+    {
+        if (state.PendingThermal is { } pending) context.Cancel(pending);
+        context.Record("probe.refreeze_stall", Severity.Critical,
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("required_side_heat_w", rate.RequiredSideHeatW),
+            RecordField.Of("side_heat_supplied_w", rate.SideHeatSuppliedW),
+            RecordField.Of("refreeze_closure_m", rate.RefreezeClosureM),
+            RecordField.Of("body_length_m", _scenario.Probe.LengthM),
+            RecordField.Of("ice_temperature_k", rate.IceTemperatureK));
+        var stopped = state with { VelocityMPerS = 0.0, PendingThermal = null, StoppedAt = context.Now, WallDeficit = false };
+        return ChangeRegime(stopped, ProbeRegime.FrozenIn, context, string.Create(System.Globalization.CultureInfo.InvariantCulture, $"refrozen water closed the gap {rate.RefreezeClosureM:F2} m behind the head"));
+    }
+
+    /// <summary>
+    /// A frozen-in probe melts its gap open with its head and wall heat (<see cref="Refreeze.MeltFree"/>, the longer it
+    /// was held the more the ice has cooled), or stays held. Freeing is pointless while the side balance at the present
+    /// power would close the gap again as soon as the probe moved: that, and power too small ever to melt free, are
+    /// logged once per power setting with the numbers.
+    /// </summary>
     private ProbeState StartMeltingFree(ProbeState state, ComponentContext context)
     {
+        var headW = HeadPowerW(state);
         var wallW = WallPowerW(state);
-        if (wallW <= 0 || state.MeltFreeRefusedAtWallW == wallW) return state with { VelocityMPerS = 0.0 };
+        var powerW = headW + wallW;
+        if (powerW <= 0 || state.MeltFreeRefusedAtWallW == powerW) return state with { VelocityMPerS = 0.0 };
+        var moving = _descent.Rate(state.DepthM, headW, wallW);
+        if (moving.Regime == DescentRegimeKind.Melting && moving.Held)
+        {
+            context.Record("probe.cannot_melt_free", Severity.Critical,
+                RecordField.Of("depth_m", state.DepthM),
+                RecordField.Of("head_power_w", headW),
+                RecordField.Of("wall_power_w", wallW),
+                RecordField.Of("cause", "side balance short: the gap would close again"),
+                RecordField.Of("required_side_heat_w", moving.RequiredSideHeatW),
+                RecordField.Of("side_heat_supplied_w", moving.SideHeatSuppliedW),
+                RecordField.Of("refreeze_closure_m", moving.RefreezeClosureM));
+            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
+        }
+
         var iceK = _descent.Shell.TemperatureK(state.DepthM);
         var meltingK = MeltingCurve.TemperatureK(Math.Max(_descent.Shell.PressurePa(state.DepthM), TriplePoint.PressurePa));
         var exposureS = Math.Max(1.0, state.LastMovingVelocityMPerS > 0 ? _scenario.Probe.LengthM / (2 * state.LastMovingVelocityMPerS) : 1.0);
-        var free = Refreeze.MeltFree(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, _scenario.Probe.LengthM, wallW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK);
+        var heldS = state.StoppedAt is { } stoppedAt ? (context.Now - stoppedAt).TotalSeconds : 0.0;
+        var free = Refreeze.MeltFree(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, _scenario.Probe.LengthM, powerW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK, heldS);
         if (!double.IsFinite(free.TimeS))
         {
             context.Record("probe.cannot_melt_free", Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),
-                RecordField.Of("wall_power_w", wallW));
-            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = wallW };
+                RecordField.Of("head_power_w", headW),
+                RecordField.Of("wall_power_w", wallW),
+                RecordField.Of("cause", "heat below the steady loss of the held body"),
+                RecordField.Of("hold_open_power_w", free.HoldOpenPowerW));
+            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
         }
 
         context.Record("probe.melting_free", Severity.Notice,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("wall_power_w", wallW),
+            RecordField.Of("head_power_w", headW),
+            RecordField.Of("held_s", heldS),
+            RecordField.Of("cooling_j", free.CoolingJ),
             RecordField.Of("time_s", free.TimeS),
             RecordField.Of("energy_j", free.EnergyJ));
         var handle = context.ScheduleSelf(SimDuration.FromSeconds(free.TimeS), new ProbeThermalDue(ProbeRegime.Melting), MissionPriority.Physics);
-        return ChangeRegime(state with { VelocityMPerS = 0.0, PendingThermal = handle, MeltFreeRefusedAtWallW = null }, ProbeRegime.MeltingFree, context, "wall heaters powered");
+        return ChangeRegime(state with { VelocityMPerS = 0.0, PendingThermal = handle, MeltFreeRefusedAtWallW = null }, ProbeRegime.MeltingFree, context, "heaters powered");
     }
 
     private static ProbeState ChangeRegime(ProbeState state, ProbeRegime regime, ComponentContext context, string cause)

@@ -53,6 +53,9 @@ public sealed record ProbeState(
     /// <summary>Thickness of the debris deposit collected on the head so far.</summary>
     public double DebrisOnHeadM { get; init; }
 
+    /// <summary>When the probe last stopped (a stall, a pause or a refreeze stall); the hold before melting free counts from here.</summary>
+    public SimTime? StoppedAt { get; init; }
+
     /// <summary>Charging power each docked vehicle asks of the bus, by vehicle name.</summary>
     public ImmutableSortedDictionary<string, double> DockDemandsW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 
