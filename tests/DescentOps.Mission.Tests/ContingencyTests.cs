@@ -18,19 +18,21 @@ public sealed class ContingencyTests
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));
 
     [Fact]
-    public async Task AFrozenInProbeIsFreedByTheWallBoostRuleAndStaysHeldWithoutIt()
+    public async Task AFrozenInProbeIsFreedSoonerByTheWallBoostRule()
     {
         var (withRules, sinkWith) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
         var (withoutRules, sinkWithout) = await RunAsync(MissionHarness.WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
 
         Assert.Equal(RunOutcomeKind.Completed, withRules.Outcome.Kind);
-        Assert.NotNull(withRules.BreakthroughTimeS);
-        Assert.Single(sinkWith.OfKind("probe.melting_free"));
+        var boosted = Assert.Single(sinkWith.OfKind("probe.melting_free"));
 
-        Assert.Equal(RunOutcomeKind.TimeLimit, withoutRules.Outcome.Kind);
-        Assert.Null(withoutRules.BreakthroughTimeS);
-        Assert.Single(sinkWithout.OfKind("probe.cannot_melt_free"));
+        // Melting free uses head and wall heat, so the nominal heat frees the probe too, but later: the boost puts
+        // more heat into the frozen annulus (issue 12 changed the physics; the scenario text says so).
+        Assert.Equal(RunOutcomeKind.Completed, withoutRules.Outcome.Kind);
+        var nominal = Assert.Single(sinkWithout.OfKind("probe.melting_free"));
         Assert.Empty(sinkWithout.OfKind("rule.fired"));
+        Assert.True(CollectingSink.Field(boosted, "time_s") < CollectingSink.Field(nominal, "time_s"));
+        Assert.True(withRules.BreakthroughTimeS < withoutRules.BreakthroughTimeS);
     }
 
     [Fact]

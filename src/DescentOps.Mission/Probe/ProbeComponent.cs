@@ -296,7 +296,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     {
         var v = state.VelocityMPerS;
         if (v <= 0 || !IsMoving(state.Regime)) return 0.0;
-        var rate = _descent.Rate(state.DepthM, HeadPowerW(state), WallPowerW(state));
+        var rate = _descent.Rate(state.DepthM, HeadHeatW(state), WallHeatW(state));
         var area = Math.PI * _scenario.Probe.RadiusM * _scenario.Probe.RadiusM;
         var density = Physics.Ice.IceIh.DensityKgPerM3(rate.IceTemperatureK, Math.Max(rate.PressurePa, 0));
         var meltEnthalpy = (rate.SensibleW + rate.LatentW) / (density * area * v);
@@ -320,14 +320,14 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 return state with { VelocityMPerS = 0.0 };
             case ProbeRegime.FrozenIn:
                 return StartMeltingFree(state, context);
-            case ProbeRegime.MeltingFree when HeadPowerW(state) + WallPowerW(state) <= 0:
+            case ProbeRegime.MeltingFree when HeadHeatW(state) + WallHeatW(state) <= 0:
                 context.Cancel(state.PendingThermal!.Value);
                 return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "heaters lost while melting free");
             case ProbeRegime.MeltingFree:
                 return state with { VelocityMPerS = 0.0 };
         }
 
-        var rate = _descent.Rate(state.DepthM, HeadPowerW(state), WallPowerW(state));
+        var rate = _descent.Rate(state.DepthM, HeadHeatW(state), WallHeatW(state));
         if (rate.Regime == DescentRegimeKind.Stalled)
         {
             return state.Regime == ProbeRegime.Stopped ? state with { VelocityMPerS = 0.0 } : Stop(state, rate, context);
@@ -372,7 +372,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         {
             var phi = IceConductivity.KirchhoffPotentialWPerM(rate.IceTemperatureK, rate.MeltingTemperatureK, IceConductivityFit.PetrenkoWhitworth1999);
             var holdOpenW = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(_scenario.Probe.RadiusM, _scenario.Probe.LengthM), phi);
-            if (HeadPowerW(state) + WallPowerW(state) < holdOpenW)
+            if (HeadHeatW(state) + WallHeatW(state) < holdOpenW)
             {
                 var exposureS = _scenario.Probe.LengthM / (2 * state.LastMovingVelocityMPerS);
                 var freeze = Refreeze.FreezeInAroundProbe(_scenario.Probe.FreezeGapM, _scenario.Probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
@@ -428,8 +428,8 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     /// </summary>
     private ProbeState StartMeltingFree(ProbeState state, ComponentContext context)
     {
-        var headW = HeadPowerW(state);
-        var wallW = WallPowerW(state);
+        var headW = HeadHeatW(state);
+        var wallW = WallHeatW(state);
         var powerW = headW + wallW;
         if (powerW <= 0 || state.MeltFreeRefusedAtWallW == powerW) return state with { VelocityMPerS = 0.0 };
         var moving = _descent.Rate(state.DepthM, headW, wallW);
@@ -692,6 +692,23 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private double WallPowerW(ProbeState state) =>
         state.Bus is null ? WallDemandW(state) * state.PowerFraction : IsRunning(state.Bus, _power!.WallLoad) ? WallDemandW(state) : 0.0;
 
+    /// <summary>
+    /// Heat reaching the head: its heater's electric power and the source's waste heat along the heat path, which flows
+    /// whatever the bus does (<see cref="ProbePowerSystem.WasteHeat"/>). Rounded to 10 W so that the slow decay of the
+    /// source does not defeat the descent model's cache (MODEL: 10 W is well below the model's own uncertainty).
+    /// </summary>
+    private double HeadHeatW(ProbeState state) => HeadPowerW(state) + Waste(state).HeadW;
+
+    /// <summary>Heat reaching the side wall: its heaters' electric power and the waste heat's share.</summary>
+    private double WallHeatW(ProbeState state) => WallPowerW(state) + Waste(state).WallW;
+
+    private WasteHeatSplit Waste(ProbeState state)
+    {
+        if (_power is not { HeatsProbe: true } || state.Regime == ProbeRegime.AtOcean || state.HeldAtSurface) return default;
+        var split = _power.WasteHeat(state.LastUpdate.SecondsSinceEpoch);
+        return new WasteHeatSplit(Math.Round(split.HeadW / 10.0) * 10.0, Math.Round(split.WallW / 10.0) * 10.0, split.RejectedW);
+    }
+
     private double BusPowerW(ProbeState state) =>
         state.Bus is null ? HeadPowerW(state) + WallPowerW(state) + _scenario.Probe.ElectronicsPowerW : state.Bus.Allocation.Loads.SuppliedPowerW;
 
@@ -765,5 +782,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             RecordField.Of("battery_capacity_j", _power.Battery?.EffectiveCapacityJ ?? 0.0),
             RecordField.Of("battery_soc", state.Bus!.StateOfCharge),
             RecordField.Of("loads", string.Join(", ", _power.LoadModels.Select(l => $"{l.Name}:{l.Priority}"))));
+        if (!_power.HeatsProbe) return;
+        var waste = _power.WasteHeat(0.0);
+        context.Record("probe.heat_path", Severity.Info,
+            RecordField.Of("waste_heat_to_head_w", waste.HeadW),
+            RecordField.Of("waste_heat_to_wall_w", waste.WallW),
+            RecordField.Of("waste_heat_rejected_w", waste.RejectedW));
     }
 }
