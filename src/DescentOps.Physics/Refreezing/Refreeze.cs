@@ -41,7 +41,8 @@ public static class Refreeze
     /// c = Ste/(λ√π), λ the front constant of the planar case (b), makes the planar limit exact for any Stefan number
     /// (c → 1 for small Ste, where the note's form holds). Checked against a radial enthalpy solver in the tests.
     /// </summary>
-    public static RefreezeSolution FreezeInAroundProbe(double gapM, double radiusM, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK)
+    /// <param name="stefanCorrected">False gives the reference note's uncorrected form (c = 1), kept for its check values.</param>
+    public static RefreezeSolution FreezeInAroundProbe(double gapM, double radiusM, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK, bool stefanCorrected = true)
     {
         ValidRange.RequirePositive(gapM, nameof(gapM), "m", Model);
         ValidRange.RequirePositive(radiusM, nameof(radiusM), "m", Model);
@@ -53,7 +54,7 @@ public static class Refreeze
         var tauExposure = exposureTimeS / r2OverKappa;
         // The wall-at-T_m heat balance is the small-Stefan limit; the factor Ste/(λ√π) (→ 1 as Ste → 0) makes its planar
         // limit the Neumann case (b), whose frozen layer cools below T_m as it grows (checked against an enthalpy solver).
-        var stefanFactor = ice.StefanNumber / (lambda * Math.Sqrt(Math.PI));
+        var stefanFactor = stefanCorrected ? ice.StefanNumber / (lambda * Math.Sqrt(Math.PI)) : 1.0;
         var target = CylinderConduction.H(tauExposure) + (stefanFactor * LiquidWater.DensityKgPerM3 * ice.LatentJPerKg * gapM / (ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS));
         var tauEnd = SolveTau(target, tauExposure);
         return new RefreezeSolution(ice.StefanNumber, lambda, (tauEnd - tauExposure) * r2OverKappa);
