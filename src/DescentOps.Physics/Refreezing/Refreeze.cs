@@ -40,8 +40,8 @@ public static class Refreeze
     /// (Φ R/κ_eff)[H(κ_eff (t_e + t_f)/R²) − H(κ_eff t_e/R²)] = c ρ_w L w (MODEL, reference note §5.2), where
     /// c = Ste/(λ√π), λ the front constant of the planar case (b), makes the planar limit exact for any Stefan number
     /// (c → 1 for small Ste, where the note's form holds). Checked against a radial enthalpy solver in the tests.
+    /// <c>stefanCorrected: false</c> gives the note's uncorrected form (c = 1), kept for its check values.
     /// </summary>
-    /// <param name="stefanCorrected">False gives the reference note's uncorrected form (c = 1), kept for its check values.</param>
     public static RefreezeSolution FreezeInAroundProbe(double gapM, double radiusM, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK, bool stefanCorrected = true)
     {
         ValidRange.RequirePositive(gapM, nameof(gapM), "m", Model);
