@@ -1,0 +1,79 @@
+using DescentOps.Engine.Components;
+using DescentOps.Engine.Journaling;
+using DescentOps.Engine.Randomness;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Probe;
+
+/// <summary>
+/// The probe's sensors: the true readings in the catalogue's point names and SI units, and what the sensors report
+/// when faults are in force (stuck, biased, noisy, dropped out). Sensor faults change what is reported, not what is.
+/// </summary>
+public static class ProbeSensors
+{
+    /// <summary>What the probe's sensors would read if none were faulty.</summary>
+    public static IReadOnlyList<(string Point, double Value)> TrueReadings(ProbeDesign design, ProbeState state) =>
+    [
+        ("probe.depth", state.DepthM),
+        ("probe.velocity", state.VelocityMPerS),
+        ("probe.ice_temperature", design.Descent.Shell.TemperatureK(state.DepthM)),
+        ("probe.head_power", ProbeHeaters.HeadPowerW(design, state)),
+        ("probe.wall_power", ProbeHeaters.WallPowerW(design, state)),
+        ("probe.energy_used", state.EnergyUsedJ),
+        ("probe.tilt", state.TiltRad),
+        ("probe.battery_soc", state.Bus?.StateOfCharge ?? 0.0),
+        ("probe.bus_power_available", state.Bus?.Allocation.AvailablePowerW ?? ProbeHeaters.BusPowerW(design, state)),
+        ("probe.buffer_fill", state.BufferFill),
+    ];
+
+    /// <summary>
+    /// The readings as reported: the last fault on a point decides. A noisy sensor draws from <paramref name="random"/>
+    /// only while its fault lasts, so runs without it keep their draws.
+    /// </summary>
+    public static List<(string Point, double Value)> Reported(IReadOnlyList<(string Point, double Value)> truth, IReadOnlyList<ActiveSensorFault> faults, RandomStream random)
+    {
+        var reported = new List<(string Point, double Value)>(truth.Count);
+        foreach (var (point, value) in truth)
+        {
+            var fault = faults.LastOrDefault(f => f.Fault.Point == point);
+            switch (fault?.Fault.Kind)
+            {
+                case null:
+                    reported.Add((point, value));
+                    break;
+                case FaultKind.SensorStuck:
+                    reported.Add((point, fault.StuckAtSi!.Value));
+                    break;
+                case FaultKind.SensorBias:
+                    reported.Add((point, value + fault.Fault.ValueSi!.Value));
+                    break;
+                case FaultKind.SensorNoise:
+                    reported.Add((point, value + random.NextNormal(0.0, fault.Fault.ValueSi!.Value)));
+                    break;
+                case FaultKind.SensorDropout:
+                    break;
+            }
+        }
+
+        return reported;
+    }
+
+    /// <summary>A sensor fault begins: a stuck sensor repeats its given value, or the true value at this instant.</summary>
+    public static ProbeState StartFault(ProbeDesign design, ProbeState state, FaultModel fault, ComponentContext context)
+    {
+        var truth = TrueReadings(design, state).First(r => r.Point == fault.Point).Value;
+        var stuckAt = fault.Kind == FaultKind.SensorStuck ? fault.ValueSi ?? truth : (double?)null;
+        context.Record("probe.sensor_fault", Severity.Warning,
+            RecordField.Of("fault", fault.Name),
+            RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("mode", fault.Kind.ToString()),
+            RecordField.Of("true_value", truth));
+        return state with { SensorFaults = state.SensorFaults.Add(new ActiveSensorFault(fault, stuckAt)) };
+    }
+
+    public static ProbeState EndFault(ProbeState state, FaultModel fault, ComponentContext context)
+    {
+        context.Record("probe.sensor_restored", Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("point", fault.Point ?? ""));
+        return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Fault.Name == fault.Name) };
+    }
+}

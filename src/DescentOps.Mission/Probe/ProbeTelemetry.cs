@@ -1,0 +1,67 @@
+using DescentOps.Engine.Components;
+using DescentOps.Engine.Journaling;
+using DescentOps.Mission.Messages;
+using DescentOps.Primitives.Time;
+
+namespace DescentOps.Mission.Probe;
+
+/// <summary>
+/// One telemetry frame: the true values go into the log (<c>probe.telemetry</c>), the reported ones go up the tether
+/// and to the on-board autonomy, and the true ones to the fault injector when a fault watches them.
+/// </summary>
+public static class ProbeTelemetry
+{
+    public static ProbeState SendFrame(ProbeDesign design, ProbeState state, ComponentContext context)
+    {
+        var truth = ProbeSensors.TrueReadings(design, state);
+        var reported = ProbeSensors.Reported(truth, state.SensorFaults, context.Random);
+        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
+        context.Record("probe.telemetry", Severity.Debug, [.. Fields(design, state, frame, truth)]);
+        context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        if (design.WatchedByFaults)
+        {
+            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);
+        }
+
+        return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + design.FrameInterval };
+    }
+
+    /// <summary>The true values of a frame as logged; the bus figures only for a probe with a power system.</summary>
+    private static IEnumerable<RecordField> Fields(ProbeDesign design, ProbeState state, TelemetryFrame frame, IReadOnlyList<(string Point, double Value)> truth)
+    {
+        IEnumerable<RecordField> fields =
+        [
+            RecordField.Of("frame", frame.Sequence),
+            RecordField.Of("regime", frame.Regime),
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("velocity_m_s", state.VelocityMPerS),
+            RecordField.Of("ice_temperature_k", truth.First(r => r.Point == "probe.ice_temperature").Value),
+            RecordField.Of("head_power_w", ProbeHeaters.HeadPowerW(design, state)),
+            RecordField.Of("wall_power_w", ProbeHeaters.WallPowerW(design, state)),
+            RecordField.Of("energy_used_j", state.EnergyUsedJ),
+            RecordField.Of("tilt_rad", state.TiltRad),
+            RecordField.Of("lateral_drift_m", state.LateralDriftM),
+            RecordField.Of("buffer_fill", state.BufferFill),
+        ];
+        if (state.Bus is not { } bus) return fields;
+        var e = bus.Energy;
+        return fields.Concat(
+        [
+            RecordField.Of("battery_soc", bus.StateOfCharge),
+            RecordField.Of("bus_power_available_w", bus.Allocation.AvailablePowerW),
+            RecordField.Of("bus_load_w", bus.Allocation.Loads.SuppliedPowerW),
+            RecordField.Of("source_power_w", bus.Allocation.SourcePowerW),
+            RecordField.Of("harvest_power_w", bus.Allocation.HarvestPowerW),
+            RecordField.Of("source_j", e.SourceJ),
+            RecordField.Of("harvest_j", e.HarvestJ),
+            RecordField.Of("battery_out_j", e.BatteryOutJ),
+            RecordField.Of("battery_in_j", e.BatteryInJ),
+            RecordField.Of("loads_j", e.LoadsJ),
+            RecordField.Of("unserved_j", e.UnservedJ),
+            RecordField.Of("curtailed_j", e.CurtailedJ),
+            RecordField.Of("battery_loss_j", e.BatteryLossJ),
+            RecordField.Of("self_discharge_j", e.SelfDischargeJ),
+        ]);
+    }
+}
