@@ -1,6 +1,6 @@
 using System.Globalization;
 using System.Text.Json;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Journal;
 

@@ -1,6 +1,6 @@
 using System.Security.Cryptography;
 using System.Text;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Journal;
 

@@ -2,7 +2,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Encodings.Web;
 using System.Text.Json;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Reports;
 

@@ -1,6 +1,6 @@
 using System.Globalization;
 using System.Text;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 

@@ -1,5 +1,5 @@
 using System.Text;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 

@@ -20,10 +20,10 @@ public sealed class BranchTests
     public async Task ABranchEqualsItsParentBeforeTheInstantAndPartsWhereTheChangeActs()
     {
         var folder = ToolProcess.NewTempDirectory();
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
         await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), SecondTrip);
 
-        var (exit, stdout, stderr) = await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "branch.jsonl");
+        var (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "branch.jsonl");
         Assert.True(exit == 0, stdout + stderr);
 
         var parent = Path.Combine(folder, "parent.jsonl");
@@ -37,18 +37,18 @@ public sealed class BranchTests
         var info = Assert.IsType<BranchInfo>(BranchInfo.Of(logged.Manifest));
         Assert.Equal(Convert.ToHexStringLower(SHA256.HashData(await File.ReadAllBytesAsync(parent))), info.ParentSha256);
         Assert.Equal(50 * 86400.0, info.AtS);
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "replay", "branch.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "replay", "branch.jsonl")).ExitCode);
     }
 
     [Fact]
     public async Task AChangeThatActsBeforeTheInstantIsRefusedAndLeavesNoLog()
     {
         var folder = ToolProcess.NewTempDirectory();
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
         // The parent's trip is on day 20; removing it changes the run from day 20, before a day-30 instant.
         await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), "remove_faults:\n  - name: bus-trip-day-20\n");
 
-        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "30 d", "--with", "change.yaml", "--log", "branch.jsonl");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "30 d", "--with", "change.yaml", "--log", "branch.jsonl");
         Assert.Equal(3, exit); // ExitCode.InvalidInput
         Assert.Contains("acts before the branch instant", stderr);
         Assert.Empty(Directory.GetFiles(folder, "branch.jsonl*"));
@@ -58,28 +58,28 @@ public sealed class BranchTests
     public async Task ABranchOfABranchCarriesBothChangesAndReplays()
     {
         var folder = ToolProcess.NewTempDirectory();
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
         await File.WriteAllTextAsync(Path.Combine(folder, "first.yaml"), SecondTrip);
         await File.WriteAllTextAsync(Path.Combine(folder, "second.yaml"), SecondTrip.Replace("second-trip-day-50", "third-trip-day-70", StringComparison.Ordinal).Replace("at: 50 d", "at: 70 d", StringComparison.Ordinal));
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "first.yaml", "--log", "b1.jsonl")).ExitCode);
-        var (exit, stdout, stderr) = await ToolProcess.RunAsync(folder, "branch", "b1.jsonl", "--at", "70 d", "--with", "second.yaml", "--log", "b2.jsonl");
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "first.yaml", "--log", "b1.jsonl")).ExitCode);
+        var (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, "branch", "b1.jsonl", "--at", "70 d", "--with", "second.yaml", "--log", "b2.jsonl");
         Assert.True(exit == 0, stdout + stderr);
 
         var generations = BranchInfo.All(LoggedRun.Open(Path.Combine(folder, "b2.jsonl")).Manifest);
         Assert.Equal([50 * 86400.0, 70 * 86400.0], generations.Select(g => g.AtS));
         // Replay re-applies both changes in order; with only the last one it would part on day 50.
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "replay", "b2.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "replay", "b2.jsonl")).ExitCode);
     }
 
     [Fact]
     public async Task ABranchNeverOverwritesAnExistingLogNotEvenItsParent()
     {
         var folder = ToolProcess.NewTempDirectory();
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
         await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), SecondTrip);
         var before = await File.ReadAllBytesAsync(Path.Combine(folder, "parent.jsonl"));
 
-        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "parent.jsonl");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "parent.jsonl");
         Assert.Equal(2, exit); // ExitCode.UsageError
         Assert.Contains("exists", stderr);
         Assert.Equal(before, await File.ReadAllBytesAsync(Path.Combine(folder, "parent.jsonl")));

@@ -32,7 +32,7 @@ public sealed class CatalogueAgreementTests
         var caught = new List<TelemetryFrame>();
         var setup = new Engine.Running.KernelSetup(
             [probe, new FrameCatcher(MissionIds.Tether, caught), new FrameCatcher(MissionIds.Autonomy, caught), new FrameCatcher(MissionIds.FaultInjector, caught)],
-            1, Primitives.Time.SimTime.FromSecondsSinceEpoch(1), Engine.Journaling.NullJournalSink.Instance);
+            1, Primitives.Time.SimTime.FromSecondsSinceEpoch(1), Records.NullJournalSink.Instance);
         Engine.Running.SequentialKernel.Run(setup);
         return caught.First();
     }

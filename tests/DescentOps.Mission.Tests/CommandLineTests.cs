@@ -11,7 +11,7 @@ public sealed class CommandLineTests
         await File.WriteAllTextAsync(scenario, MissionHarness.DefaultText.Replace("  radius: 12 cm", "  radius: 12 kW", StringComparison.Ordinal));
         var log = Path.Combine(folder, "out.jsonl");
 
-        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "run", scenario, "--log", log);
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "run", scenario, "--log", log);
 
         Assert.Equal(3, exit); // ExitCode.InvalidInput
         var line = Array.FindIndex(MissionHarness.DefaultText.Split('\n'), l => l.StartsWith("  radius:", StringComparison.Ordinal)) + 1;
@@ -23,7 +23,7 @@ public sealed class CommandLineTests
     [Fact]
     public async Task AnUnknownOptionIsAUsageError()
     {
-        var (exit, _, stderr) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), "run", "--sed", "3");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "run", "--sed", "3");
         Assert.Equal(2, exit); // ExitCode.UsageError
         Assert.Contains("--sed", stderr);
     }
@@ -32,7 +32,7 @@ public sealed class CommandLineTests
     public async Task ARunStoppedByItsTimeLimitSaysSoInItsExitCodeAndLog()
     {
         var folder = ToolProcess.NewTempDirectory();
-        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "run", "--until", "10 d", "--log", "short.jsonl");
+        var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "run", "--until", "10 d", "--log", "short.jsonl");
         Assert.Equal(4, exit); // ExitCode.MissionNotCompleted
         Assert.Contains("TimeLimit", stdout);
         var last = File.ReadLines(Path.Combine(folder, "short.jsonl")).Last();
@@ -44,14 +44,14 @@ public sealed class CommandLineTests
     public async Task VerifyFindsAnEditedLineAndNamesIt()
     {
         var folder = ToolProcess.NewTempDirectory();
-        await ToolProcess.RunAsync(folder, "run", "--until", "2 d", "--log", "a.jsonl");
+        await InProcessTool.RunAsync(folder, "run", "--until", "2 d", "--log", "a.jsonl");
         var path = Path.Combine(folder, "a.jsonl");
         var lines = await File.ReadAllLinesAsync(path);
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "verify", path)).ExitCode);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "verify", path)).ExitCode);
 
         lines[41] = lines[41].Replace("\"t\":", "\"t\":1", StringComparison.Ordinal);
         await File.WriteAllTextAsync(path, string.Join('\n', lines) + "\n");
-        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "verify", path);
+        var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "verify", path);
         Assert.Equal(6, exit); // ExitCode.VerificationFailed
         Assert.Contains(":42:", stdout);
     }
@@ -59,7 +59,7 @@ public sealed class CommandLineTests
     [Fact]
     public async Task SchemaPrintsTheCommittedSchema()
     {
-        var (exit, stdout, _) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), "schema");
+        var (exit, stdout, _) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "schema");
         Assert.Equal(0, exit);
         Assert.Equal(DescentOps.Scenarios.Format.ScenarioJsonSchema.Generate(), stdout);
     }
@@ -74,8 +74,8 @@ public sealed class CommandLineTests
         await File.WriteAllTextAsync(good, text);
         await File.WriteAllTextAsync(bad, text.Replace("set_power(power = 4.5 kW)", "set_power(power = 4.5 m)", StringComparison.Ordinal));
 
-        Assert.Equal(0, (await ToolProcess.RunAsync(folder, "check", good)).ExitCode);
-        var (exit, stdout, _) = await ToolProcess.RunAsync(folder, "check", bad);
+        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "check", good)).ExitCode);
+        var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "check", bad);
         Assert.Equal(3, exit); // ExitCode.InvalidInput
         var lines = text.Split('\n');
         var line = Array.FindIndex(lines, l => l.Contains("set_power(power = 4.5 kW)", StringComparison.Ordinal)) + 1;

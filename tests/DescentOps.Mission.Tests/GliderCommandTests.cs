@@ -8,7 +8,7 @@ public sealed class GliderCommandTests
     [Fact]
     public async Task GliderSpeedStrokeAndEnduranceFollowTheSteadyGlide()
     {
-        var (exit, stdout, stderr) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(),
+        var (exit, stdout, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(),
             ["physics", "glider", "--net-buoyancy", "0.3 kg", "--glide-angle", "25 deg", "--gravity", "1.21 m/s^2", "--hotel-power", "2 W", "--battery", "0.1 kWh", "--pressure", "33 kPa", "--water-density", "1028 kg/m³", "--json"]);
         Assert.True(exit == 0, stderr);
         using var document = JsonDocument.Parse(stdout);
@@ -38,7 +38,7 @@ public sealed class GliderCommandTests
     [Fact]
     public async Task AGlideShallowerThanTheWingCanFlyIsRefusedNamingTheOption()
     {
-        var (exit, _, stderr) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), ["physics", "glider", "--net-buoyancy", "0.3 kg", "--glide-angle", "3 deg"]);
+        var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), ["physics", "glider", "--net-buoyancy", "0.3 kg", "--glide-angle", "3 deg"]);
         Assert.Equal(3, exit); // ExitCode.InvalidInput
         Assert.Contains("--glide-angle", stderr);
     }

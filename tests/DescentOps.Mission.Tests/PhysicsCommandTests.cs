@@ -420,7 +420,7 @@ public sealed class PhysicsCommandTests
     }
 
     private static async Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(params string[] arguments) =>
-        await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), ["physics", .. arguments]);
+        await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), ["physics", .. arguments]);
 
     /// <summary>Runs a subcommand with --json and returns the single object it printed.</summary>
     private static async Task<JsonElement> JsonAsync(params string[] arguments)

@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;

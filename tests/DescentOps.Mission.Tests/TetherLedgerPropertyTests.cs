@@ -1,5 +1,5 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Tether;

@@ -26,9 +26,29 @@ internal static class ToolProcess
         return (process.ExitCode, await stdout, await stderr);
     }
 
+    /// <summary>This test run's own folder under the temporary directory; deleted when the test process exits.</summary>
+    private static readonly Lazy<string> RunFolder = new(() =>
+    {
+        var path = Path.Combine(Path.GetTempPath(), "descentops-tests", $"run-{Environment.ProcessId}-{Path.GetRandomFileName()}");
+        Directory.CreateDirectory(path);
+        AppDomain.CurrentDomain.ProcessExit += (_, _) =>
+        {
+            try
+            {
+                Directory.Delete(path, recursive: true);
+            }
+            catch (IOException)
+            {
+                // Best effort: a file still open at exit is left for the system's temporary-file cleanup.
+            }
+        };
+        return path;
+    });
+
+    /// <summary>A fresh folder inside this run's folder, which goes when the test process ends.</summary>
     public static string NewTempDirectory()
     {
-        var path = Path.Combine(Path.GetTempPath(), "descentops-tests", Path.GetRandomFileName());
+        var path = Path.Combine(RunFolder.Value, Path.GetRandomFileName());
         Directory.CreateDirectory(path);
         return path;
     }

@@ -1,6 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal.Querying;
 using DescentOps.Scenarios.Format;
 

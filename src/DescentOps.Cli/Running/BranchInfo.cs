@@ -1,5 +1,5 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal;
 
 namespace DescentOps.Cli.Running;

@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
 using DescentOps.Engine.Scheduling;
@@ -32,10 +32,28 @@ public sealed class ComponentContext
     /// <summary>The component's own stream; draws survive a rolled-back handling, which keeps runs repeatable.</summary>
     public RandomStream Random { get; }
 
-    internal IReadOnlyList<SimEvent> Scheduled => _scheduled;
-    internal IReadOnlyList<EventHandle> Cancelled => _cancelled;
-    internal IReadOnlyList<JournalRecord> Records => _records;
-    internal RunOutcome? StopRequest { get; private set; }
+    /// <summary>
+    /// A context outside any kernel, at <paramref name="now"/>: a handler can be called per message and its outputs
+    /// read back (what it scheduled, cancelled, recorded, and whether it asked to stop the run). For tests and tools.
+    /// </summary>
+    public static ComponentContext Detached(ComponentId self, RandomStream random, SimTime now)
+    {
+        var context = new ComponentContext(self, random);
+        context.Begin(now);
+        return context;
+    }
+
+    /// <summary>Events scheduled during the current handling, in the order they were scheduled.</summary>
+    public IReadOnlyList<SimEvent> Scheduled => _scheduled;
+
+    /// <summary>Events cancelled during the current handling.</summary>
+    public IReadOnlyList<EventHandle> Cancelled => _cancelled;
+
+    /// <summary>Records written during the current handling.</summary>
+    public IReadOnlyList<JournalRecord> Records => _records;
+
+    /// <summary>The run's end this handling asked for, if any.</summary>
+    public RunOutcome? StopRequest { get; private set; }
 
     /// <summary>Schedules <paramref name="payload"/> for <paramref name="target"/> after <paramref name="delay"/> (zero allowed).</summary>
     public EventHandle Schedule(ComponentId target, SimDuration delay, object payload, EventPriority? priority = null)

@@ -1,8 +1,9 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Scheduling;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Engine.Running;
 
@@ -160,7 +161,7 @@ internal sealed class KernelCore
         WriteRecord(new JournalRecord(
             Now,
             target,
-            "component.failed",
+            ComponentRecords.Failed,
             Severity.Alarm,
             [
                 RecordField.Of("exception", failure.ExceptionType),

@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Journal.Querying;
 

@@ -15,7 +15,7 @@ public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
     private readonly RuleHost _rules;
 
     public OnboardAutonomyComponent(CompiledRuleSet rules)
-        : base(MissionIds.Autonomy, FailurePolicy.AbortRun)
+        : base(MissionIds.Autonomy, FailurePolicy.RestartFromLastState)
     {
         _rules = new RuleHost(rules, Placement.Board);
     }
@@ -24,6 +24,7 @@ public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
 
     public override AutonomyState Handle(AutonomyState state, object message, ComponentContext context)
     {
+        _rules.RestoreTo(state.RulesVersion);
         var commands = message switch
         {
             RunStarted => [],
@@ -37,6 +38,6 @@ public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
         }
 
         var wake = _rules.Rearm(message is RulesWake ? null : state.PendingWake, context, RulesWake.Instance);
-        return new AutonomyState(wake, state.CommandsIssued + commands.Count);
+        return new AutonomyState(wake, state.CommandsIssued + commands.Count, _rules.Version);
     }
 }

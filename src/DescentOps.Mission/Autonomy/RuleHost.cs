@@ -1,5 +1,5 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Scheduling;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Identity;
@@ -7,26 +7,72 @@ using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Evaluation;
 using DescentOps.Rules.Syntax;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Autonomy;
 
 /// <summary>
 /// The rules of one placement (on board or on the ground) running inside a component: telemetry goes in, firings
-/// come out as journal records and telecommands. The evaluator is stateful and cannot be rolled back, so a
-/// component hosting it must abort the run on failure rather than restart.
+/// come out as journal records and telecommands. The evaluator is stateful; its state is named by
+/// <see cref="Version"/>, the number of inputs it has consumed, which the hosting component keeps in its immutable
+/// state. <see cref="RestoreTo"/> brings the evaluator back to any earlier version by replaying the inputs up to it
+/// into a fresh evaluator, so a component that rolls back a failed handling can restart from its last state.
 /// </summary>
 public sealed class RuleHost
 {
-    private readonly RuleEvaluator _evaluator;
+    private readonly CompiledRuleSet _own;
     private readonly List<RuleOutput> _outputs = [];
+
+    /// <summary>Every input consumed, in order: a frame's samples, or a wake-up at an instant (frame null).</summary>
+    private readonly List<(TelemetryFrame? Frame, SimTime Time)> _inputs = [];
+    private RuleEvaluator _evaluator;
 
     public RuleHost(CompiledRuleSet rules, Placement placement)
     {
         Placement = placement;
-        var own = rules with { Rules = [.. rules.Rules.Where(r => r.Placement == placement)] };
-        RuleCount = own.Rules.Count;
-        _evaluator = new RuleEvaluator(own, new RuleScheduler());
-        _evaluator.Outputs.Subscribe(_outputs.Add);
+        _own = rules with { Rules = [.. rules.Rules.Where(r => r.Placement == placement)] };
+        RuleCount = _own.Rules.Count;
+        _evaluator = NewEvaluator();
+    }
+
+    /// <summary>How many inputs the evaluator has consumed: the rules' part of the hosting component's state.</summary>
+    public int Version => _inputs.Count;
+
+    /// <summary>
+    /// Brings the evaluator back to <paramref name="version"/> (a no-op when it is there already): a fresh evaluator
+    /// consumes the inputs up to it again, and what they produced, already journaled when first consumed, is dropped.
+    /// </summary>
+    public void RestoreTo(int version)
+    {
+        if (version == _inputs.Count) return;
+        if (version > _inputs.Count || version < 0)
+        {
+            throw new ArgumentOutOfRangeException(nameof(version), version, $"the rules have consumed {_inputs.Count} inputs");
+        }
+
+        _inputs.RemoveRange(version, _inputs.Count - version);
+        _evaluator.Dispose();
+        _evaluator = NewEvaluator();
+        foreach (var (frame, time) in _inputs) Consume(frame, time);
+        _outputs.Clear();
+    }
+
+    private RuleEvaluator NewEvaluator()
+    {
+        var evaluator = new RuleEvaluator(_own, new RuleScheduler());
+        evaluator.Outputs.Subscribe(_outputs.Add);
+        return evaluator;
+    }
+
+    private void Consume(TelemetryFrame? frame, SimTime time)
+    {
+        if (frame is null)
+        {
+            _evaluator.AdvanceTo(time);
+            return;
+        }
+
+        foreach (var sample in FrameSamples.Of(frame)) _evaluator.Submit(sample);
     }
 
     public Placement Placement { get; }
@@ -36,14 +82,16 @@ public sealed class RuleHost
     /// <summary>Evaluates a frame, then journals what the rules did and returns the commands they sent, in order.</summary>
     public IReadOnlyList<Telecommand> OnFrame(TelemetryFrame frame, ComponentContext context)
     {
-        foreach (var sample in FrameSamples.Of(frame)) _evaluator.Submit(sample);
+        _inputs.Add((frame, context.Now));
+        Consume(frame, context.Now);
         return Drain(context);
     }
 
     /// <summary>Runs rule steps due by now (persistence ends, waits, escalations).</summary>
     public IReadOnlyList<Telecommand> OnWake(ComponentContext context)
     {
-        _evaluator.AdvanceTo(context.Now);
+        _inputs.Add((null, context.Now));
+        Consume(null, context.Now);
         return Drain(context);
     }
 
@@ -59,7 +107,7 @@ public sealed class RuleHost
             switch (output)
             {
                 case RuleFiring firing:
-                    context.Record("rule.fired", Severity(firing.Severity),
+                    context.Record(RuleRecords.Fired, Severity(firing.Severity),
                         RecordField.Of("rule", firing.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("firing", firing.Firing),
@@ -68,7 +116,7 @@ public sealed class RuleHost
                     commands.AddRange(firing.Commands.Select(c => new Telecommand(c, firing.Rule, where, context.Now)));
                     break;
                 case RuleEscalation escalation:
-                    context.Record("rule.escalated", Engine.Journaling.Severity.Warning,
+                    context.Record(RuleRecords.Escalated, Records.Severity.Warning,
                         RecordField.Of("rule", escalation.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("level", escalation.Level),
@@ -76,14 +124,14 @@ public sealed class RuleHost
                     commands.AddRange(escalation.Commands.Select(c => new Telecommand(c, escalation.Rule, where, context.Now)));
                     break;
                 case RuleContinuation continuation:
-                    context.Record("rule.continued", Engine.Journaling.Severity.Info,
+                    context.Record(RuleRecords.Continued, Records.Severity.Info,
                         RecordField.Of("rule", continuation.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("commands", string.Join("; ", continuation.Commands)));
                     commands.AddRange(continuation.Commands.Select(c => new Telecommand(c, continuation.Rule, where, context.Now)));
                     break;
                 case RuleEvent ruleEvent:
-                    context.Record("rule." + ruleEvent.Kind.ToString().ToLowerInvariant(), Engine.Journaling.Severity.Info,
+                    context.Record(KindOf(ruleEvent.Kind), Records.Severity.Info,
                         RecordField.Of("rule", ruleEvent.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("detail", ruleEvent.Detail));
@@ -103,12 +151,27 @@ public sealed class RuleHost
         return context.ScheduleSelf(due - context.Now, wakeMessage, MissionPriority.Command);
     }
 
+    /// <summary>The record kind of a rule event, in the journal's snake_case style.</summary>
+    public static string KindOf(RuleEventKind kind) => kind switch
+    {
+        RuleEventKind.Cleared => RuleRecords.Cleared,
+        RuleEventKind.HeldByCooldown => RuleRecords.HeldByCooldown,
+        RuleEventKind.Enabled => RuleRecords.Enabled,
+        RuleEventKind.Disabled => RuleRecords.Disabled,
+        RuleEventKind.EscalationWithdrawn => RuleRecords.EscalationWithdrawn,
+        RuleEventKind.ActuatorTaken => RuleRecords.ActuatorTaken,
+        RuleEventKind.ActuatorReleased => RuleRecords.ActuatorReleased,
+        RuleEventKind.CommandBlocked => RuleRecords.CommandBlocked,
+        RuleEventKind.SampleRejected => RuleRecords.SampleRejected,
+        _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "a rule event kind without a record kind"),
+    };
+
     private static Severity Severity(RuleSeverity ruleSeverity) => ruleSeverity switch
     {
-        RuleSeverity.High => Engine.Journaling.Severity.Alarm,
-        RuleSeverity.Medium => Engine.Journaling.Severity.Warning,
-        RuleSeverity.Low => Engine.Journaling.Severity.Notice,
-        RuleSeverity.Info => Engine.Journaling.Severity.Info,
+        RuleSeverity.High => Records.Severity.Alarm,
+        RuleSeverity.Medium => Records.Severity.Warning,
+        RuleSeverity.Low => Records.Severity.Notice,
+        RuleSeverity.Info => Records.Severity.Info,
         _ => throw new ArgumentOutOfRangeException(nameof(ruleSeverity), ruleSeverity, "A rule severity without a journal severity."),
     };
 

@@ -1,9 +1,10 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Faults;
 
@@ -73,7 +74,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
                 return Inject(state, due.Index, context);
             case FaultDue { IsEnd: true } due:
                 var ended = _faults[due.Index];
-                context.Record("fault.cleared", Severity.Notice, RecordField.Of("fault", ended.Name));
+                context.Record(FaultRecords.Cleared, Severity.Notice, RecordField.Of("fault", ended.Name));
                 context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
                 return state with { Cleared = state.Cleared + 1 };
             default:
@@ -101,7 +102,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         }
 
         foreach (var at in starts) context.ScheduleSelf(at, new FaultDue(index, false), MissionPriority.Fault);
-        context.Record("fault.drawn", Severity.Info,
+        context.Record(FaultRecords.Drawn, Severity.Info,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("mean_interval_s", fault.MeanIntervalS.Value),
             RecordField.Of("starts_s", string.Join(" ", starts.Select(t => t.TotalSeconds.ToString("R", System.Globalization.CultureInfo.InvariantCulture)))));
@@ -113,7 +114,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         foreach (var condition in _conditions)
         {
             if (step(condition) is not { } firing) continue;
-            context.Record("fault.triggered", Severity.Warning,
+            context.Record(FaultRecords.Triggered, Severity.Warning,
                 RecordField.Of("fault", _faults[condition.FaultIndex].Name),
                 RecordField.Of("condition", _faults[condition.FaultIndex].When ?? ""),
                 RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))));
@@ -128,7 +129,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     private FaultInjectorState Inject(FaultInjectorState state, int index, ComponentContext context)
     {
         var fault = _faults[index];
-        context.Record("fault.injected", Severity.Alarm,
+        context.Record(FaultRecords.Injected, Severity.Alarm,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("kind", fault.Kind.ToString()),
             RecordField.Of("target", TargetOf(fault).Name),

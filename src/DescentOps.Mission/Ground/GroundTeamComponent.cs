@@ -1,5 +1,5 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Station;
@@ -7,6 +7,7 @@ using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Syntax;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Ground;
 
@@ -21,7 +22,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     private readonly SimDuration _uplink;
 
     public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules)
-        : base(MissionIds.Ground, FailurePolicy.AbortRun)
+        : base(MissionIds.Ground, FailurePolicy.RestartFromLastState)
     {
         _rules = new RuleHost(rules, Placement.Ground);
         _uplink = SimDuration.FromSeconds(scenario.Body.DistanceToGroundM / StationComponent.SpeedOfLightMPerS);
@@ -31,15 +32,16 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 
     public override GroundState Handle(GroundState state, object message, ComponentContext context)
     {
+        _rules.RestoreTo(state.RulesVersion);
         switch (message)
         {
             case RunStarted:
                 return state;
             case TelemetryFrame frame:
                 var next = Receive(state, frame, context);
-                return next with { PendingWake = Uplink(_rules.OnFrame(frame, context), state.PendingWake, context) };
+                return next with { PendingWake = Uplink(_rules.OnFrame(frame, context), state.PendingWake, context), RulesVersion = _rules.Version };
             case RulesWake:
-                return state with { PendingWake = Uplink(_rules.OnWake(context), null, context) };
+                return state with { PendingWake = Uplink(_rules.OnWake(context), null, context), RulesVersion = _rules.Version };
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
@@ -51,12 +53,12 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         var missing = Math.Max(0, frame.Sequence - state.LastFrame - 1);
         if (missing > 0)
         {
-            context.Record("ground.gap", Severity.Warning,
+            context.Record(GroundRecords.Gap, Severity.Warning,
                 RecordField.Of("after_frame", state.LastFrame),
                 RecordField.Of("missing", missing));
         }
 
-        context.Record("ground.telemetry", Severity.Debug,
+        context.Record(GroundRecords.Telemetry, Severity.Debug,
             RecordField.Of("frame", frame.Sequence),
             RecordField.Of("latency_s", latency),
             RecordField.Of("depth_m", frame.Reading("probe.depth") ?? double.NaN),

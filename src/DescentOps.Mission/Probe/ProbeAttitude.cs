@@ -1,7 +1,8 @@
 using System.Globalization;
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -13,7 +14,7 @@ public static class ProbeAttitude
     {
         var limitRad = design.Probe.MaxTiltRad;
         if (Math.Abs(state.TiltRad) <= limitRad || state.Regime == ProbeRegime.AtOcean) return state;
-        context.Record("probe.tilt_limit", Severity.Critical,
+        context.Record(ProbeRecords.TiltLimit, Severity.Critical,
             RecordField.Of("tilt_rad", state.TiltRad),
             RecordField.Of("limit_rad", limitRad),
             RecordField.Of("depth_m", state.DepthM),
@@ -39,7 +40,7 @@ public static class ProbeAttitude
 
         foreach (var band in crossing.BandsLeft)
         {
-            context.Record("probe.debris_band_crossed", Severity.Notice,
+            context.Record(ProbeRecords.DebrisBandCrossed, Severity.Notice,
                 RecordField.Of("top_m", band.TopM),
                 RecordField.Of("bottom_m", band.BottomM),
                 RecordField.Of("debris_on_head_m", state.DebrisOnHeadM),

@@ -1,9 +1,10 @@
 using System.Collections.Immutable;
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Power;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -32,7 +33,7 @@ public static class ProbeBusControl
             var isOff = OffCause(allocation, model.Name);
             if (wasOff == isOff) continue;
             var demandW = power.Loads(head, wall, ImmutableSortedSet<string>.Empty).Single(l => l.Name == model.Name).PowerW;
-            context.Record(isOff is null ? "probe.load_restored" : "probe.load_shed", isOff is null ? Severity.Notice : Severity.Warning,
+            context.Record(isOff is null ? ProbeRecords.LoadRestored : ProbeRecords.LoadShed, isOff is null ? Severity.Notice : Severity.Warning,
                 RecordField.Of("load", model.Name),
                 RecordField.Of("priority", model.Priority),
                 RecordField.Of("demand_w", demandW),
@@ -52,7 +53,7 @@ public static class ProbeBusControl
         {
             var powerW = ProbeHeaters.IsRunning(state.Bus!, ProbePowerSystem.DockLoadName(vehicle)) ? demandW : 0.0;
             if (granted.TryGetValue(vehicle, out var before) && before == powerW) continue;
-            context.Record("probe.dock_power", Severity.Info,
+            context.Record(ProbeRecords.DockPower, Severity.Info,
                 RecordField.Of("vehicle", vehicle),
                 RecordField.Of("request_w", demandW),
                 RecordField.Of("granted_w", powerW),
@@ -78,7 +79,7 @@ public static class ProbeBusControl
     public static void RecordPowerSystem(ProbeDesign design, ProbeState state, ComponentContext context)
     {
         if (design.Power is not { } power) return;
-        context.Record("probe.power", Severity.Info,
+        context.Record(ProbeRecords.Power, Severity.Info,
             RecordField.Of("source", power.SourceKind.ToString()),
             RecordField.Of("source_power_w", power.SourcePowerW(0.0)),
             RecordField.Of("source_thermal_power_w", power.SourceThermalPowerW(0.0)),

@@ -1,8 +1,9 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -31,7 +32,7 @@ public static class ProbeCommands
             ("probe", "drop_relay") => LetRelayGo(state, command, context),
             _ => throw new InvalidOperationException($"The probe has no command {action}."),
         };
-        context.Record("command.executed", Severity.Notice,
+        context.Record(CommandRecords.Executed, Severity.Notice,
             RecordField.Of("command", action.ToString()),
             RecordField.Of("origin", command.Origin),
             RecordField.Of("placement", command.Placement),

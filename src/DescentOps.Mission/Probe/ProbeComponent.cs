@@ -1,11 +1,12 @@
 using System.Collections.Immutable;
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Power;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -47,7 +48,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         switch (message)
         {
             case RunStarted:
-                context.Record("probe.started", Severity.Info,
+                context.Record(ProbeRecords.Started, Severity.Info,
                     RecordField.Of("shell_thickness_m", d.ShellThicknessM),
                     RecordField.Of("base_temperature_k", d.Descent.Shell.BaseTemperatureK),
                     RecordField.Of("base_pressure_pa", d.Descent.Shell.BasePressurePa),
@@ -70,7 +71,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 return Settle(WithDips(Advance(state, context), state.ActiveDips.Remove(cleared.Fault.Name)), context);
 
             case DescentCleared cleared:
-                context.Record("probe.descent_started", Severity.Notice,
+                context.Record(ProbeRecords.DescentStarted, Severity.Notice,
                     RecordField.Of("dwell_s", cleared.DwellS),
                     RecordField.Of("log_reduction", cleared.LogReduction));
                 return Settle(Advance(state, context) with { HeldAtSurface = false }, context);

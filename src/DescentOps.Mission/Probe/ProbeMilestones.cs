@@ -1,8 +1,9 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -12,7 +13,7 @@ public static class ProbeMilestones
     public static ProbeState Breakthrough(ProbeDesign design, ProbeState state, ComponentContext context)
     {
         var vehicles = design.Scenario.Vehicles;
-        context.Record("probe.breakthrough", Severity.Notice,
+        context.Record(ProbeRecords.Breakthrough, Severity.Notice,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("energy_used_j", state.EnergyUsedJ),
             RecordField.Of("vehicles", vehicles.Count));
@@ -51,7 +52,7 @@ public static class ProbeMilestones
         RecordField[] fields = next.VehiclesLost > 0
             ? [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ), RecordField.Of("vehicles_lost", next.VehiclesLost)]
             : [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ)];
-        context.Record("probe.mission_complete", Severity.Notice, fields);
+        context.Record(ProbeRecords.MissionComplete, Severity.Notice, fields);
         if (next.VehiclesFinished == 0)
         {
             context.StopRun(RunOutcomeKind.MissionLost, $"all {next.VehiclesLost} vehicles lost");

@@ -1,9 +1,10 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
 using DescentOps.Physics.Refreezing;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -53,7 +54,7 @@ public static class ProbeRegimeMachine
         var deficit = rate.Regime == DescentRegimeKind.Melting && !rate.WallPowerSufficient;
         if (deficit != state.WallDeficit)
         {
-            context.Record(deficit ? "probe.wall_deficit" : "probe.wall_sufficient", deficit ? Severity.Warning : Severity.Notice,
+            context.Record(deficit ? ProbeRecords.WallDeficit : ProbeRecords.WallSufficient, deficit ? Severity.Warning : Severity.Notice,
                 RecordField.Of("depth_m", state.DepthM),
                 RecordField.Of("wall_power_w", ProbeHeaters.WallPowerW(design, state)),
                 RecordField.Of("lateral_loss_w", rate.LateralLossW),
@@ -81,7 +82,7 @@ public static class ProbeRegimeMachine
             {
                 var exposureS = probe.LengthM / (2 * state.LastMovingVelocityMPerS);
                 var freeze = Refreeze.FreezeInAroundProbe(probe.FreezeGapM, probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
-                context.Record("probe.refreezing", Severity.Alarm,
+                context.Record(ProbeRecords.Refreezing, Severity.Alarm,
                     RecordField.Of("depth_m", state.DepthM),
                     RecordField.Of("gap_m", probe.FreezeGapM),
                     RecordField.Of("freeze_time_s", freeze.FreezeTimeS),
@@ -160,7 +161,7 @@ public static class ProbeRegimeMachine
         var free = Refreeze.MeltFree(probe.FreezeGapM, probe.RadiusM, probe.LengthM, powerW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK, heldS);
         if (!double.IsFinite(free.TimeS))
         {
-            context.Record("probe.cannot_melt_free", Severity.Critical,
+            context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),
                 RecordField.Of("head_power_w", headW),
                 RecordField.Of("wall_power_w", wallW),
@@ -169,7 +170,7 @@ public static class ProbeRegimeMachine
             return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
         }
 
-        context.Record("probe.melting_free", Severity.Notice,
+        context.Record(ProbeRecords.MeltingFree, Severity.Notice,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("wall_power_w", wallW),
             RecordField.Of("head_power_w", headW),
@@ -190,7 +191,7 @@ public static class ProbeRegimeMachine
             ProbeRegime.FrozenIn => Severity.Critical,
             _ => Severity.Notice,
         };
-        context.Record("probe.regime", severity,
+        context.Record(ProbeRecords.Regime, severity,
             RecordField.Of("from", state.Regime.ToString()),
             RecordField.Of("to", regime.ToString()),
             RecordField.Of("depth_m", state.DepthM),

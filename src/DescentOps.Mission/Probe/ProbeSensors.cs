@@ -1,7 +1,8 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -63,7 +64,7 @@ public static class ProbeSensors
     {
         var truth = TrueReadings(design, state).First(r => r.Point == fault.Point).Value;
         var stuckAt = fault.Kind == FaultKind.SensorStuck ? fault.ValueSi ?? truth : (double?)null;
-        context.Record("probe.sensor_fault", Severity.Warning,
+        context.Record(ProbeRecords.SensorFault, Severity.Warning,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("point", fault.Point ?? ""),
             RecordField.Of("mode", fault.Kind.ToString()),
@@ -73,7 +74,7 @@ public static class ProbeSensors
 
     public static ProbeState EndFault(ProbeState state, FaultModel fault, ComponentContext context)
     {
-        context.Record("probe.sensor_restored", Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("point", fault.Point ?? ""));
+        context.Record(ProbeRecords.SensorRestored, Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("point", fault.Point ?? ""));
         return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Fault.Name == fault.Name) };
     }
 }

@@ -1,7 +1,8 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Time;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Probe;
 
@@ -16,7 +17,7 @@ public static class ProbeTelemetry
         var truth = ProbeSensors.TrueReadings(design, state);
         var reported = ProbeSensors.Reported(truth, state.SensorFaults, context.Random);
         var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
-        context.Record("probe.telemetry", Severity.Debug, [.. Fields(design, state, frame, truth)]);
+        context.Record(ProbeRecords.Telemetry, Severity.Debug, [.. Fields(design, state, frame, truth)]);
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         if (design.WatchedByFaults)

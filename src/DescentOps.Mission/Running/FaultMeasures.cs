@@ -1,4 +1,5 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Running;
 
@@ -25,16 +26,16 @@ public sealed class FaultMeasures
         var t = record.Time.SecondsSinceEpoch;
         switch (record.Kind)
         {
-            case "fault.injected":
+            case FaultRecords.Injected:
                 _faults.Add(new Open(Text(record, "fault"), Text(record, "kind"), t, _lastSpeedMPerS) { Target = Text(record, "target") });
                 break;
-            case "rule.fired":
+            case RuleRecords.Fired:
                 foreach (var f in _faults) f.DetectedS ??= t > f.StartS || t == f.StartS ? t : null;
                 break;
-            case "command.executed":
+            case CommandRecords.Executed:
                 foreach (var f in _faults) f.ActionS ??= t >= f.StartS ? t : null;
                 break;
-            case "probe.telemetry":
+            case ProbeRecords.Telemetry:
                 var speed = Number(record, "velocity_m_s");
                 var tilt = Math.Abs(Number(record, "tilt_rad"));
                 foreach (var f in _faults.Where(f => f.Kind is "HeaterSegmentFailure" or "TiltKick" && f.RecoveredS is null && t > f.StartS))
@@ -50,19 +51,19 @@ public sealed class FaultMeasures
 
                 _lastSpeedMPerS = speed;
                 break;
-            case "vehicle.docked":
+            case VehicleRecords.Docked:
                 foreach (var f in _faults.Where(f => f.Kind == "VehicleLoss" && f.RecoveredS is null && f.Target == record.Source.Name && t >= f.StartS)) f.RecoveredS = t;
                 break;
-            case "relay.path_up":
+            case RelayRecords.PathUp:
                 foreach (var f in _faults.Where(f => f.Kind is "TetherBreak" or "SpoolJam" && f.RecoveredS is null && t >= f.StartS)) f.RecoveredS = t;
                 break;
-            case "relay.recovered":
+            case RelayRecords.Recovered:
                 foreach (var f in _faults.Where(f => f.Kind == "RelayFailure" && f.RecoveredS is null && f.Name == Text(record, "fault"))) f.RecoveredS = t;
                 break;
-            case "station.recovered":
+            case StationRecords.Recovered:
                 foreach (var f in _faults.Where(f => f.Kind == "StationFailure" && f.RecoveredS is null)) f.RecoveredS = t;
                 break;
-            case "station.upset_recovered":
+            case StationRecords.UpsetRecovered:
                 foreach (var f in _faults.Where(f => f.Kind == "StationUpset" && f.RecoveredS is null && t > f.StartS)) f.RecoveredS = t;
                 break;
         }

@@ -1,6 +1,6 @@
 using Akka.Actor;
 using Akka.Configuration;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;

@@ -1,5 +1,6 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Running;
 
@@ -28,33 +29,33 @@ public sealed class MissionSummarySink : IJournalSink
         _faultMeasures.Observe(record);
         switch (record.Kind)
         {
-            case "probe.telemetry":
+            case ProbeRecords.Telemetry:
                 _framesSent++;
                 _depthM = Field(record, "depth_m");
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "probe.breakthrough":
+            case ProbeRecords.Breakthrough:
                 _breakthroughS = record.Time.SecondsSinceEpoch;
                 _depthM = Field(record, "depth_m");
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "probe.mission_complete":
+            case ProbeRecords.MissionComplete:
                 _energyJ = Field(record, "energy_used_j");
                 break;
-            case "ground.telemetry":
+            case GroundRecords.Telemetry:
                 _framesReceived++;
                 break;
-            case "data.lost" when Text(record, "kind") == "telemetry":
-            case "station.frame_lost":
+            case DataRecords.Lost when Text(record, "kind") == "telemetry":
+            case StationRecords.FrameLost:
                 _framesLost++;
                 break;
-            case "station.data_lost" when Text(record, "data") == "telemetry":
+            case StationRecords.DataLost when Text(record, "data") == "telemetry":
                 _framesLost += record.Fields.First(f => f.Name == "count").Integer;
                 break;
-            case "fault.injected":
+            case FaultRecords.Injected:
                 _faults++;
                 break;
-            case "vehicle.profile":
+            case VehicleRecords.Profile:
                 _profiles++;
                 break;
         }

@@ -1,10 +1,11 @@
 using System.Collections.Immutable;
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Radiation;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Station;
 
@@ -18,7 +19,7 @@ namespace DescentOps.Mission.Station;
 public sealed class StationComponent : SimComponent<StationState>
 {
     /// <summary>Speed of light in vacuum, m/s (exact by the SI definition of the metre).</summary>
-    public const double SpeedOfLightMPerS = 299_792_458.0;
+    public const double SpeedOfLightMPerS = Physics.PhysicalConstants.SpeedOfLightMPerS;
 
     /// <summary>Events further off than this (about 300 years) never happen within a run and are not scheduled.</summary>
     private const double MaxTimerS = 1e10;
@@ -58,11 +59,11 @@ public sealed class StationComponent : SimComponent<StationState>
         switch (message)
         {
             case RunStarted:
-                context.Record("station.started", Severity.Info, RecordField.Of("one_way_light_time_s", OneWayLightTimeS));
+                context.Record(StationRecords.Started, Severity.Info, RecordField.Of("one_way_light_time_s", OneWayLightTimeS));
                 Start(context);
                 return state;
             case TelemetryFrame frame when state.Failed:
-                context.Record("station.frame_lost", Severity.Warning, RecordField.Of("frame", frame.Sequence));
+                context.Record(StationRecords.FrameLost, Severity.Warning, RecordField.Of("frame", frame.Sequence));
                 return state with { FramesLost = state.FramesLost + 1 };
             case TelemetryFrame frame when _queued:
                 return Pump(Enqueue(state, frame, context), context);
@@ -95,14 +96,14 @@ public sealed class StationComponent : SimComponent<StationState>
             case FaultStarted { Fault.Kind: FaultKind.StationFailure } when state.Failed:
                 return state;
             case FaultStarted { Fault.Kind: FaultKind.StationFailure } fault:
-                context.Record("station.failed", Severity.Critical,
+                context.Record(StationRecords.Failed, Severity.Critical,
                     RecordField.Of("fault", fault.Fault.Name),
                     RecordField.Of("frames_forwarded", state.FramesForwarded));
                 return DropQueues(state, "station failed", context) with { Failed = true, FailureCause = "fault" };
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } when state.FailureCause == "dose":
                 return state;
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } fault:
-                context.Record("station.recovered", Severity.Notice, RecordField.Of("fault", fault.Fault.Name));
+                context.Record(StationRecords.Recovered, Severity.Notice, RecordField.Of("fault", fault.Fault.Name));
                 return state with { Failed = false, FailureCause = null };
             default:
                 throw new InvalidOperationException($"The station cannot handle {message.GetType().Name}.");
@@ -119,7 +120,7 @@ public sealed class StationComponent : SimComponent<StationState>
         {
             var failureDoseGy = _dose.DrawFailureDoseGy(context.Random);
             var lifeS = _dose.TimeToSiliconDoseS(failureDoseGy);
-            context.Record("station.radiation", Severity.Info,
+            context.Record(StationRecords.Radiation, Severity.Info,
                 RecordField.Of("surface_dose_rate_gy_s", _dose.SurfaceDoseRateGyPerS),
                 RecordField.Of("electronics_dose_rate_gy_si_s", _dose.SiliconDoseRateGyPerS),
                 RecordField.Of("median_failure_dose_gy_si", _dose.MedianFailureDoseGy),
@@ -134,7 +135,7 @@ public sealed class StationComponent : SimComponent<StationState>
 
         if (_station.Link is not null)
         {
-            context.Record("station.link", Severity.Info,
+            context.Record(StationRecords.Link, Severity.Info,
                 RecordField.Of("in_view_fraction", _link.InViewFraction),
                 RecordField.Of("occultation_per_turn_s", _link.OccultationPerTurnS),
                 RecordField.Of("open_fraction", _link.Windows!.OpenFraction),
@@ -145,7 +146,7 @@ public sealed class StationComponent : SimComponent<StationState>
 
         if (_station.Dwell is { } dwell)
         {
-            context.Record("station.dwell_started", Severity.Notice, RecordField.Of("dwell_s", dwell.DurationS), RecordField.Of("d_value_gy", dwell.DValueGy));
+            context.Record(StationRecords.DwellStarted, Severity.Notice, RecordField.Of("dwell_s", dwell.DurationS), RecordField.Of("d_value_gy", dwell.DValueGy));
             context.ScheduleSelf(SimDuration.FromSeconds(dwell.DurationS), DwellOver.Instance, MissionPriority.Command);
         }
 
@@ -174,7 +175,7 @@ public sealed class StationComponent : SimComponent<StationState>
             : null;
         if (cause is not null)
         {
-            context.Record("station.data_lost", Severity.Warning,
+            context.Record(StationRecords.DataLost, Severity.Warning,
                 RecordField.Of("data", "telemetry"),
                 RecordField.Of("count", 1L),
                 RecordField.Of("frame", frame.Sequence),
@@ -190,7 +191,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (Recovering(state, context) && !QueueWhileRecovering) return LoseCommand(state, command, "station recovering from an upset", context);
         if (state.CommandsQueued >= _station.CommandQueueCapacity) return LoseCommand(state, command, "station command queue full", context);
         var opens = _link.NextOpeningS(context.Now.SecondsSinceEpoch);
-        context.Record("station.command_queued", Severity.Notice,
+        context.Record(StationRecords.CommandQueued, Severity.Notice,
             RecordField.Of("command", command.Command.ToString()),
             RecordField.Of("origin", command.Origin),
             RecordField.Of("queued", state.CommandsQueued + 1L),
@@ -201,7 +202,7 @@ public sealed class StationComponent : SimComponent<StationState>
 
     private static StationState LoseCommand(StationState state, Telecommand command, string where, ComponentContext context)
     {
-        context.Record("command.lost", Severity.Alarm,
+        context.Record(CommandRecords.Lost, Severity.Alarm,
             RecordField.Of("command", command.Command.ToString()),
             RecordField.Of("origin", command.Origin),
             RecordField.Of("where", where));
@@ -227,7 +228,7 @@ public sealed class StationComponent : SimComponent<StationState>
         var at = SimTime.Max(now, CeilingTick(atS));
         if (state.WaitingSince is null && at > frameOwnReady)
         {
-            context.Record("station.link_waiting", Severity.Notice,
+            context.Record(StationRecords.LinkWaiting, Severity.Notice,
                 RecordField.Of("reason", Recovering(state, context) ? "station recovering from an upset" : "home out of view"),
                 RecordField.Of("resumes_t_s", at.SecondsSinceEpoch),
                 RecordField.Of("frames_queued", (long)state.FramesQueued),
@@ -245,7 +246,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (state.Failed || Recovering(state, context) || !_link.IsOpen(nowS)) return state;
         if (state.WaitingSince is { } since)
         {
-            context.Record("station.link_resumed", Severity.Notice,
+            context.Record(StationRecords.LinkResumed, Severity.Notice,
                 RecordField.Of("waited_s", (context.Now - since).TotalSeconds),
                 RecordField.Of("frames_queued", (long)state.FramesQueued),
                 RecordField.Of("commands_queued", (long)state.CommandsQueued));
@@ -256,7 +257,7 @@ public sealed class StationComponent : SimComponent<StationState>
         while (!commands.IsEmpty)
         {
             commands = commands.Dequeue(out var waiting);
-            context.Record("station.command_released", Severity.Notice,
+            context.Record(StationRecords.CommandReleased, Severity.Notice,
                 RecordField.Of("command", waiting.Command.Command.ToString()),
                 RecordField.Of("origin", waiting.Command.Origin),
                 RecordField.Of("held_s", (context.Now - waiting.ArrivedAt).TotalSeconds));
@@ -282,7 +283,7 @@ public sealed class StationComponent : SimComponent<StationState>
     private StationState DieOfDose(StationState state, StationDoseLimit limit, ComponentContext context)
     {
         var doseGy = _dose!.SiliconDoseAfterGy(context.Now.SecondsSinceEpoch);
-        context.Record("station.failed", Severity.Critical,
+        context.Record(StationRecords.Failed, Severity.Critical,
             RecordField.Of("cause", "dose"),
             RecordField.Of("dose_gy_si", doseGy),
             RecordField.Of("failure_dose_gy_si", limit.FailureDoseGy),
@@ -297,7 +298,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (state.PendingService is { } pending) context.Cancel(pending);
         if (state.FramesQueued > 0)
         {
-            context.Record("station.data_lost", Severity.Warning,
+            context.Record(StationRecords.DataLost, Severity.Warning,
                 RecordField.Of("data", "telemetry"),
                 RecordField.Of("count", (long)state.FramesQueued),
                 RecordField.Of("frame", state.Frames.Peek().Frame.Sequence),
@@ -323,7 +324,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (state.Failed) return state;
         var until = context.Now + SimDuration.FromSeconds(recoveryS);
         if (state.RecoveringUntil is { } earlier && earlier > until) until = earlier;
-        context.Record("station.upset", Severity.Warning,
+        context.Record(StationRecords.Upset, Severity.Warning,
             RecordField.Of("upset", state.Upsets + 1),
             RecordField.Of("cause", cause),
             RecordField.Of("recovery_time_s", recoveryS),
@@ -342,7 +343,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (state.RecoveringUntil != over.Until) return state;
         if (!state.Failed)
         {
-            context.Record("station.upset_recovered", Severity.Notice,
+            context.Record(StationRecords.UpsetRecovered, Severity.Notice,
                 RecordField.Of("frames_queued", (long)state.FramesQueued),
                 RecordField.Of("commands_queued", (long)state.CommandsQueued));
         }
@@ -360,7 +361,7 @@ public sealed class StationComponent : SimComponent<StationState>
         var exposedDoseGy = DoseAccumulation.AccumulatedDoseGy(0.0, _dose!.SurfaceDoseRateGyPerS, dwell.DurationS);
         var logReduction = BioburdenReduction.LogReductionFromDose(exposedDoseGy, dwell.DValueGy);
         var stationDoseGy = _dose.SiliconDoseAfterGy(context.Now.SecondsSinceEpoch);
-        context.Record("station.dwell_ended", Severity.Notice,
+        context.Record(StationRecords.DwellEnded, Severity.Notice,
             RecordField.Of("dwell_s", dwell.DurationS),
             RecordField.Of("exposed_dose_gy", exposedDoseGy),
             RecordField.Of("log_reduction", logReduction),

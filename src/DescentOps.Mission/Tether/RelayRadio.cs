@@ -16,7 +16,7 @@ public sealed class RelayRadio
     /// <summary>Farthest range searched, 100 km: far beyond any shell a probe melts through.</summary>
     public const double RangeSearchLimitM = 1e5;
 
-    private const double SpeedOfLightMPerS = 299_792_458.0;
+    private const double SpeedOfLightMPerS = Physics.PhysicalConstants.SpeedOfLightMPerS;
     private readonly Func<double, double> _temperatureAtDepthK;
 
     public RelayRadio(RelayPlanModel plan, Func<double, double> temperatureAtDepthK)

@@ -1,10 +1,11 @@
 using System.Collections.Immutable;
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Probe;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Tether;
 
@@ -68,7 +69,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     {
         var full = _optics.Budget(_tether.LengthM);
         var empty = _optics.Budget(0.0);
-        context.Record("tether.link_budget", Severity.Info,
+        context.Record(TetherRecords.LinkBudget, Severity.Info,
             RecordField.Of("transceiver", _optics.Transceiver.Name),
             RecordField.Of("wavelength_m", _optics.Transceiver.WavelengthM),
             RecordField.Of("line_rate_bit_s", _optics.Transceiver.LineRateBitPerS),
@@ -99,7 +100,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         var milestone = (int)(depthM / _tether.LengthM * MilestonesPerSpool);
         if (milestone > state.PayoutMilestone)
         {
-            context.Record("tether.payout", Severity.Info,
+            context.Record(TetherRecords.Payout, Severity.Info,
                 RecordField.Of("paid_out_m", depthM),
                 RecordField.Of("spool_left_m", _tether.LengthM - depthM));
         }
@@ -113,7 +114,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         if (state.Broken) return state;
         var budget = _optics.Budget(state.PaidOutM);
         if (budget.LinkUp == state.FibreUp) return state;
-        context.Record(budget.LinkUp ? "tether.link_up" : "tether.link_down", budget.LinkUp ? Severity.Notice : Severity.Alarm,
+        context.Record(budget.LinkUp ? TetherRecords.LinkUp : TetherRecords.LinkDown, budget.LinkUp ? Severity.Notice : Severity.Alarm,
             RecordField.Of("paid_out_m", state.PaidOutM),
             RecordField.Of("margin_db", budget.MarginDb),
             RecordField.Of("received_power_dbm", budget.ReceivedPowerDbm));
@@ -136,7 +137,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     {
         if (_plan is null || _radio is null || state.Relays.Count >= _plan.Carried)
         {
-            context.Record("relay.none_left", Severity.Warning,
+            context.Record(RelayRecords.NoneLeft, Severity.Warning,
                 RecordField.Of("carried", _plan?.Carried ?? 0),
                 RecordField.Of("origin", origin));
             return state;
@@ -144,7 +145,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
 
         var relay = new RelayState(state.Relays.Count + 1, depthM, context.Now, false, FrameHold<TelemetryFrame>.Empty(_plan.BufferFrames));
         var lifeS = _plan.BatteryEnergyJ / _plan.PowerDrawW;
-        context.Record("relay.dropped", Severity.Notice,
+        context.Record(RelayRecords.Dropped, Severity.Notice,
             RecordField.Of("relay", relay.Name),
             RecordField.Of("depth_m", depthM),
             RecordField.Of("ice_temperature_k", _radio.IceTemperatureK(depthM)),
@@ -168,7 +169,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
 
         var dead = relay with { Dead = true, Hold = relay.Hold.Cleared() };
         var next = state with { Relays = state.Relays.Replace(relay, dead), FramesLost = state.FramesLost + relay.Hold.Count };
-        context.Record("relay.battery_flat", Severity.Alarm, WithLedger(next,
+        context.Record(RelayRecords.BatteryFlat, Severity.Alarm, WithLedger(next,
             RecordField.Of("relay", relay.Name),
             RecordField.Of("depth_m", relay.DepthM),
             RecordField.Of("frames_lost_with_it", relay.Hold.Count)));
@@ -178,7 +179,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private static TetherState RelayFault(TetherState state, FaultModel fault, bool starts, ComponentContext context)
     {
         var number = fault.RelayNumber!.Value;
-        context.Record(starts ? "relay.failed" : "relay.recovered", starts ? Severity.Alarm : Severity.Notice, WithLedger(state,
+        context.Record(starts ? RelayRecords.Failed : RelayRecords.Recovered, starts ? Severity.Alarm : Severity.Notice, WithLedger(state,
             RecordField.Of("relay", $"relay-{number}"),
             RecordField.Of("fault", fault.Name),
             RecordField.Of("dropped", state.Relays.Any(r => r.Number == number))));
@@ -257,7 +258,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         if (_radio is not null && pathUp != state.RelayPathUp)
         {
             var open = Array.IndexOf(chain.HopCloses, false);
-            context.Record(pathUp ? "relay.path_up" : "relay.path_down", pathUp ? Severity.Notice : Severity.Alarm, WithLedger(state,
+            context.Record(pathUp ? RelayRecords.PathUp : RelayRecords.PathDown, pathUp ? Severity.Notice : Severity.Alarm, WithLedger(state,
                 RecordField.Of("relays_working", chain.Working.Count),
                 RecordField.Of("open_hop_from", open < 0 ? "" : open == 0 ? "probe" : chain.Working[open - 1].Name),
                 RecordField.Of("open_hop_margin_db", open < 0 ? 0.0 : chain.Margins[open]),
@@ -288,7 +289,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         }
 
         if (state.CommandHold.Offer(command) is { } held) return state with { CommandHold = held };
-        context.Record("data.lost", Severity.Alarm,
+        context.Record(DataRecords.Lost, Severity.Alarm,
             RecordField.Of("kind", "telecommand"),
             RecordField.Of("command", command.Command.ToString()),
             RecordField.Of("origin", command.Origin),
@@ -336,7 +337,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         SimDuration.FromSeconds(_radio!.PropagationS(chain.Depths[from]) + ((chain.Depths.Count - Math.Max(from, 1)) * _plan!.ForwardingDelayS));
 
     private static void LostFrame(TelemetryFrame frame, string where, string cause, ComponentContext context) =>
-        context.Record("data.lost", Severity.Warning,
+        context.Record(DataRecords.Lost, Severity.Warning,
             RecordField.Of("kind", "telemetry"),
             RecordField.Of("frame", frame.Sequence),
             RecordField.Of("where", where),
@@ -345,7 +346,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private static TetherState Break(TetherState state, string cause, ComponentContext context)
     {
         if (state.Broken) return state;
-        context.Record("tether.broken", Severity.Alarm, WithLedger(state,
+        context.Record(TetherRecords.Broken, Severity.Alarm, WithLedger(state,
             RecordField.Of("cause", cause),
             RecordField.Of("paid_out_m", state.PaidOutM),
             RecordField.Of("frames_carried", state.FramesCarried)));

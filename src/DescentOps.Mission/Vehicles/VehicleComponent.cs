@@ -1,10 +1,11 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Ocean;
 using DescentOps.Physics.Vehicles;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Vehicles;
 
@@ -77,7 +78,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     private VehicleState Release(VehicleState state, ReleaseVehicle release, ComponentContext context)
     {
-        context.Record("vehicle.released", Severity.Notice,
+        context.Record(VehicleRecords.Released, Severity.Notice,
             RecordField.Of("interface_depth_m", release.InterfaceDepthM),
             RecordField.Of("battery_j", state.BatteryJ));
         state = state with
@@ -91,7 +92,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         if (_acoustics is not null)
         {
             var link = Link(state)!;
-            context.Record("vehicle.acoustic_link", Severity.Info,
+            context.Record(VehicleRecords.AcousticLink, Severity.Info,
                 RecordField.Of("frequency_hz", _acoustics.FrequencyHz),
                 RecordField.Of("absorption_db_per_km", link.Link.AbsorptionDbPerKm),
                 RecordField.Of("earth_equivalent_depth_m", link.EarthEquivalentDepthM),
@@ -103,7 +104,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         if (_vehicle.UsesExtendedModel)
         {
             var performance = Performance(state);
-            context.Record("vehicle.performance", Severity.Info,
+            context.Record(VehicleRecords.Performance, Severity.Info,
                 RecordField.Of("kind", _vehicle.Kind.ToString()),
                 RecordField.Of("task", _vehicle.Task.ToString()),
                 RecordField.Of("cruise_speed_m_s", performance.CruiseSpeedMPerS),
@@ -164,7 +165,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         var distance = toDock.Length;
         var direction = distance > 0 ? toDock * (1.0 / distance) : OceanVector.Zero;
         var ground = direction * closing;
-        context.Record("vehicle.returning", Severity.Notice,
+        context.Record(VehicleRecords.Returning, Severity.Notice,
             RecordField.Of("reason", reason),
             RecordField.Of("distance_m", distance),
             RecordField.Of("closing_speed_m_s", closing),
@@ -214,14 +215,14 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             state = state with { ProfilesCompleted = state.ProfilesCompleted + 1 };
             if (_vehicle.Task == VehicleTask.WaterColumn)
             {
-                context.Record("vehicle.profile", Severity.Info,
+                context.Record(VehicleRecords.Profile, Severity.Info,
                     RecordField.Of("profile", state.ProfilesCompleted),
                     RecordField.Of("max_depth_below_ice_m", _vehicle.ProfileDepthM),
                     RecordField.Of("battery_j", state.BatteryJ));
             }
             else
             {
-                context.Record("vehicle.cycle", Severity.Info,
+                context.Record(VehicleRecords.Cycle, Severity.Info,
                     RecordField.Of("task", _vehicle.Task.ToString()),
                     RecordField.Of("cycle", state.ProfilesCompleted),
                     RecordField.Of("battery_j", state.BatteryJ));
@@ -274,7 +275,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         // At the dock the data goes over the dock's own connection, whatever the acoustic link is doing.
         var link = state.Link;
         state = state with { Link = link with { Delivered = link.Delivered + link.Held, Held = 0 } };
-        context.Record("vehicle.docked", Severity.Notice,
+        context.Record(VehicleRecords.Docked, Severity.Notice,
             RecordField.Of("sortie", state.Sortie),
             RecordField.Of("battery_j", state.BatteryJ),
             RecordField.Of("data_delivered", link.Held),
@@ -288,7 +289,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         if (_dockOnProbeBus)
         {
             // The charger asks the probe's bus; charging starts when the bus grants it (DockPower).
-            context.Record("vehicle.charging", Severity.Info,
+            context.Record(VehicleRecords.Charging, Severity.Info,
                 RecordField.Of("battery_j", state.BatteryJ),
                 RecordField.Of("charging_power_w", dock.ChargingPowerW),
                 RecordField.Of("fed_by", "probe bus"));
@@ -297,7 +298,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         }
 
         var seconds = Math.Max(0.0, _vehicle.BatteryEnergyJ - state.BatteryJ) / dock.ChargingPowerW;
-        context.Record("vehicle.charging", Severity.Info,
+        context.Record(VehicleRecords.Charging, Severity.Info,
             RecordField.Of("battery_j", state.BatteryJ),
             RecordField.Of("charging_power_w", dock.ChargingPowerW),
             RecordField.Of("time_s", seconds));
@@ -322,7 +323,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             DockChargeSince = context.Now,
             PendingTimer = null,
         };
-        context.Record("vehicle.dock_power", Severity.Info,
+        context.Record(VehicleRecords.DockPower, Severity.Info,
             RecordField.Of("granted_w", power.PowerW),
             RecordField.Of("battery_j", state.BatteryJ));
         if (power.PowerW <= 0) return state;
@@ -354,7 +355,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             Position = OceanVector.Zero,
         };
         if (state.Recalled) return Finish(state, "recalled", context);
-        context.Record("vehicle.sortie", Severity.Notice,
+        context.Record(VehicleRecords.Sortie, Severity.Notice,
             RecordField.Of("sortie", state.Sortie),
             RecordField.Of("battery_j", state.BatteryJ),
             RecordField.Of("energy_charged_j", state.EnergyChargedJ));
@@ -366,7 +367,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     private VehicleState Finish(VehicleState state, string reason, ComponentContext context)
     {
         ReleaseDock(state, context);
-        context.Record("vehicle.task_complete", Severity.Notice,
+        context.Record(VehicleRecords.TaskComplete, Severity.Notice,
             RecordField.Of("reason", reason),
             RecordField.Of("profiles", state.ProfilesCompleted),
             RecordField.Of("battery_j", state.BatteryJ));
@@ -381,7 +382,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         ReleaseDock(state, context);
         state = Interrupt(state, context);
         var held = state.Link.Held;
-        context.Record("vehicle.lost", Severity.Critical,
+        context.Record(VehicleRecords.Lost, Severity.Critical,
             RecordField.Of("reason", reason),
             RecordField.Of("battery_j", Math.Max(0.0, state.BatteryJ)),
             RecordField.Of("range_m", state.Position.Length),
@@ -392,7 +393,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             RecordField.Of("data_lost", held));
         if (held > 0)
         {
-            context.Record("vehicle.data_lost", Severity.Alarm,
+            context.Record(VehicleRecords.DataLost, Severity.Alarm,
                 RecordField.Of("messages", held),
                 RecordField.Of("reason", "held aboard a lost vehicle"));
         }
@@ -407,7 +408,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     private void RecordEnergy(VehicleState state, ComponentContext context)
     {
         if (!_vehicle.UsesExtendedModel && _acoustics is null) return;
-        context.Record("vehicle.energy", Severity.Info,
+        context.Record(VehicleRecords.Energy, Severity.Info,
             RecordField.Of("initial_j", _vehicle.BatteryEnergyJ),
             RecordField.Of("used_j", state.EnergyUsedJ),
             RecordField.Of("charged_j", state.EnergyChargedJ),
@@ -446,7 +447,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         {
             if (!state.Link.Up)
             {
-                context.Record("vehicle.back_in_range", Severity.Notice,
+                context.Record(VehicleRecords.BackInRange, Severity.Notice,
                     RecordField.Of("range_m", range),
                     RecordField.Of("margin_db", budget?.MarginDb ?? double.NaN),
                     RecordField.Of("out_of_range_s", (context.Now - state.Link.DownSince!.Value).TotalSeconds),
@@ -471,7 +472,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         link = link with { Held = link.Held + 1 };
         if (state.Link.Up)
         {
-            context.Record("vehicle.out_of_range", Severity.Warning,
+            context.Record(VehicleRecords.OutOfRange, Severity.Warning,
                 RecordField.Of("range_m", range),
                 RecordField.Of("margin_db", budget?.MarginDb ?? double.NaN),
                 RecordField.Of("max_range_m", Link(state)?.MaximumRangeM ?? double.NaN),
@@ -507,7 +508,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     {
         if (state.Finished || !state.Released)
         {
-            context.Record("vehicle.fault_ignored", Severity.Info, RecordField.Of("fault", fault.Name), RecordField.Of("reason", state.Finished ? "vehicle done" : "not yet released"));
+            context.Record(VehicleRecords.FaultIgnored, Severity.Info, RecordField.Of("fault", fault.Name), RecordField.Of("reason", state.Finished ? "vehicle done" : "not yet released"));
             return state;
         }
 
@@ -517,20 +518,20 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
                 var wasHeld = state.Leg is { Held: true };
                 state = Interrupt(state, context);
                 var left = state.BatteryJ * fault.RemainingFraction;
-                context.Record("vehicle.battery_failed", Severity.Alarm, RecordField.Of("fault", fault.Name), RecordField.Of("battery_before_j", state.BatteryJ), RecordField.Of("battery_j", left));
+                context.Record(VehicleRecords.BatteryFailed, Severity.Alarm, RecordField.Of("fault", fault.Name), RecordField.Of("battery_before_j", state.BatteryJ), RecordField.Of("battery_j", left));
                 state = state with { BatteryJ = left, EnergyUsedJ = state.EnergyUsedJ + (state.BatteryJ - left) };
                 if (left <= 0) return Lost(state, "flat battery", context);
                 if (wasHeld) return Hold(state, context);
                 return state.Phase == VehiclePhase.Charging ? state : Resume(state, context);
             case VehicleLossCause.Entrapment when state.Phase == VehiclePhase.Charging:
-                context.Record("vehicle.fault_ignored", Severity.Info, RecordField.Of("fault", fault.Name), RecordField.Of("reason", "in the dock"));
+                context.Record(VehicleRecords.FaultIgnored, Severity.Info, RecordField.Of("fault", fault.Name), RecordField.Of("reason", "in the dock"));
                 return state;
             case VehicleLossCause.Entrapment:
                 state = Interrupt(state, context);
-                context.Record("vehicle.entrapped", Severity.Alarm, RecordField.Of("fault", fault.Name), RecordField.Of("down_m", state.Position.Down), RecordField.Of("battery_j", state.BatteryJ));
+                context.Record(VehicleRecords.Entrapped, Severity.Alarm, RecordField.Of("fault", fault.Name), RecordField.Of("down_m", state.Position.Down), RecordField.Of("battery_j", state.BatteryJ));
                 return fault.DurationS is null ? Lost(state, "entrapped", context) : Hold(state, context);
             default:
-                context.Record("vehicle.link_fault", Severity.Alarm, RecordField.Of("fault", fault.Name));
+                context.Record(VehicleRecords.LinkFault, Severity.Alarm, RecordField.Of("fault", fault.Name));
                 return ArmTick(state with { Link = state.Link with { Faulted = true } }, context);
         }
     }
@@ -542,10 +543,10 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         {
             case VehicleLossCause.Entrapment when state.Leg is { Held: true }:
                 state = Interrupt(state, context);
-                context.Record("vehicle.freed", Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("battery_j", state.BatteryJ));
+                context.Record(VehicleRecords.Freed, Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("battery_j", state.BatteryJ));
                 return state.Recalled || state.Phase == VehiclePhase.Returning ? StartHome(state with { Suspended = null }, "freed on the way home", context) : Resume(state, context);
             case VehicleLossCause.OutOfRange:
-                context.Record("vehicle.link_restored", Severity.Notice, RecordField.Of("fault", fault.Name));
+                context.Record(VehicleRecords.LinkRestored, Severity.Notice, RecordField.Of("fault", fault.Name));
                 return state with { Link = state.Link with { Faulted = false } };
             default:
                 return state;
@@ -562,7 +563,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     /// <summary>A recall goes out from the probe's modem: heard at once in contact, otherwise when contact returns.</summary>
     private VehicleState Recall(VehicleState state, Telecommand command, ComponentContext context)
     {
-        context.Record("command.executed", Severity.Notice,
+        context.Record(CommandRecords.Executed, Severity.Notice,
             RecordField.Of("command", command.Command.ToString()),
             RecordField.Of("origin", command.Origin),
             RecordField.Of("placement", command.Placement),
@@ -572,7 +573,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         if (state.Finished || !state.Released || state.Recalled) return state;
         if (!state.Link.Up || state.Link.Faulted)
         {
-            context.Record("vehicle.command_held", Severity.Warning, RecordField.Of("command", RecallCommand), RecordField.Of("reason", "out of acoustic contact"));
+            context.Record(VehicleRecords.CommandHeld, Severity.Warning, RecordField.Of("command", RecallCommand), RecordField.Of("reason", "out of acoustic contact"));
             return state with { RecallHeld = true };
         }
 
@@ -581,7 +582,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     private VehicleState DoRecall(VehicleState state, ComponentContext context)
     {
-        context.Record("vehicle.recalled", Severity.Notice, RecordField.Of("phase", state.Phase.ToString()), RecordField.Of("range_m", PositionNow(state, context.Now).Length));
+        context.Record(VehicleRecords.Recalled, Severity.Notice, RecordField.Of("phase", state.Phase.ToString()), RecordField.Of("range_m", PositionNow(state, context.Now).Length));
         state = state with { Recalled = true };
         if (state.Phase != VehiclePhase.Working || state.Leg is { Held: true }) return state;
         return StartHome(Interrupt(state, context) with { Suspended = null }, "recalled", context);

@@ -7,7 +7,7 @@ namespace DescentOps.Physics.Acoustics;
 /// </summary>
 public static class SeawaterAbsorption
 {
-    private const double ZeroCelsiusK = 273.15;
+    private const double ZeroCelsiusK = PhysicalConstants.CelsiusZeroK;
     private const string FrancoisGarrison = "the Francois-Garrison (1982) absorption";
     private const string AinslieMcColm = "the Ainslie-McColm (1998) absorption";
     private const string Thorp = "the Thorp (1967) absorption";

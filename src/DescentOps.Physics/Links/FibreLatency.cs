@@ -9,7 +9,7 @@ public static class FibreLatency
     /// <summary>Group index of G.652 fibre at 1550 nm, about 1.4682 (typical datasheet value, from memory).</summary>
     public const double GroupIndex1550Nm = 1.4682;
 
-    private const double SpeedOfLightMPerS = 299_792_458.0;
+    private const double SpeedOfLightMPerS = PhysicalConstants.SpeedOfLightMPerS;
     private const string Model = "the fibre group delay";
 
     /// <summary>Delay L·n_g/c.</summary>

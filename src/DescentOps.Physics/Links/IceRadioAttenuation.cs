@@ -10,7 +10,7 @@ public static class IceRadioAttenuation
     public const int DefaultLayers = 10_000;
 
     private const double VacuumPermittivityFPerM = 8.8541878128e-12;
-    private const double SpeedOfLightMPerS = 299_792_458.0;
+    private const double SpeedOfLightMPerS = PhysicalConstants.SpeedOfLightMPerS;
     private const string Model = "the ice radio attenuation";
 
     /// <summary>dB/m per S/m of conductivity for a relative permittivity.</summary>

@@ -8,7 +8,7 @@ namespace DescentOps.Physics.Links;
 /// </summary>
 public static class IceRadioLinkBudget
 {
-    private const double SpeedOfLightMPerS = 299_792_458.0;
+    private const double SpeedOfLightMPerS = PhysicalConstants.SpeedOfLightMPerS;
     private const string Model = "the relay radio link budget";
 
     /// <summary>Free-space spreading loss with the wavelength shortened by √ε′ in ice.</summary>

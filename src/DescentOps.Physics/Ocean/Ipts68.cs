@@ -6,7 +6,7 @@ namespace DescentOps.Physics.Ocean;
 /// </summary>
 internal static class Ipts68
 {
-    public const double CelsiusZeroK = 273.15;
+    public const double CelsiusZeroK = PhysicalConstants.CelsiusZeroK;
 
     public static double CelsiusFromIts90K(double temperatureK) => 1.00024 * (temperatureK - CelsiusZeroK);
 }

@@ -7,7 +7,7 @@ public static class LightTime
     public const double AstronomicalUnitM = 149_597_870_700.0;
 
     /// <summary>Speed of light, m/s (exact).</summary>
-    public const double SpeedOfLightMPerS = 299_792_458.0;
+    public const double SpeedOfLightMPerS = PhysicalConstants.SpeedOfLightMPerS;
 
     private const string Model = "the light time";
 

@@ -7,7 +7,7 @@ namespace DescentOps.Physics.Water;
 public static class SeawaterFreezingPoint
 {
     /// <summary>Celsius-to-kelvin offset.</summary>
-    public const double CelsiusZeroK = 273.15;
+    public const double CelsiusZeroK = PhysicalConstants.CelsiusZeroK;
 
     private const string Model = "the UNESCO 1983 seawater freezing point";
     private const double PascalPerDecibar = 1e4;

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text;
 using DescentOps.Journal;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Export;
 
@@ -12,7 +13,7 @@ public static class CsvExport
 {
     public const string EventsFile = "events.csv";
     public const string TelemetryFile = "telemetry.csv";
-    public const string TelemetryKind = "probe.telemetry";
+    public const string TelemetryKind = ProbeRecords.Telemetry;
 
     private static readonly UTF8Encoding Utf8 = new(encoderShouldEmitUTF8Identifier: false);
 

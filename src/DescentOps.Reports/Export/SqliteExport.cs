@@ -1,4 +1,4 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal;
 using Microsoft.Data.Sqlite;
 

@@ -1,5 +1,5 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Reports.Html;
 

@@ -1,7 +1,8 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Journal;
 using DescentOps.Reports.Plotting;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Html;
 
@@ -94,7 +95,7 @@ public sealed class HtmlReportWriter
     {
         yield return new SummaryFigure("events read", N(log.Events.Count));
         if (log.Events.Count > 0) yield return new SummaryFigure("last event at", FigureFormatter.Duration(log.Events[^1].TimeSeconds));
-        var lastTelemetry = log.Events.LastOrDefault(e => e.Kind == "probe.telemetry");
+        var lastTelemetry = log.Events.LastOrDefault(e => e.Kind == ProbeRecords.Telemetry);
         if (lastTelemetry is null) yield break;
         foreach (var name in new[] { "depth_m", "energy_used_j" })
         {
@@ -102,7 +103,7 @@ public sealed class HtmlReportWriter
             if (field.Name is not null) yield return new SummaryFigure($"last reported {FigureFormatter.Label(name)}", FigureFormatter.Value(field));
         }
 
-        var breakthrough = log.Events.FirstOrDefault(e => e.Kind == "probe.breakthrough");
+        var breakthrough = log.Events.FirstOrDefault(e => e.Kind == ProbeRecords.Breakthrough);
         yield return new SummaryFigure("breakthrough", breakthrough is null ? "not in the log" : FigureFormatter.Duration(breakthrough.TimeSeconds));
     }
 

@@ -1,4 +1,5 @@
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
+using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Plotting;
 
@@ -21,7 +22,7 @@ public sealed record FaultTimeline(IReadOnlyList<FaultSpan> Faults, IReadOnlyLis
             var day = e.TimeSeconds / SecondsPerDay;
             switch (e.Kind)
             {
-                case "fault.injected":
+                case FaultRecords.Injected:
                 {
                     var name = Text(e.Data, "fault") ?? "fault";
                     var planned = SeriesExtractor.TryValue(e.Data, "duration_s", out var duration) && double.IsFinite(duration)
@@ -32,14 +33,14 @@ public sealed record FaultTimeline(IReadOnlyList<FaultSpan> Faults, IReadOnlyLis
                     break;
                 }
 
-                case "fault.cleared":
+                case FaultRecords.Cleared:
                 {
                     var name = Text(e.Data, "fault") ?? "fault";
                     if (open.Remove(name, out var at)) faults[at.Index] = faults[at.Index] with { EndDay = day, Cleared = true };
                     break;
                 }
 
-                case "probe.regime":
+                case ProbeRecords.Regime:
                     regimes.Add(new RegimeMark(day, Text(e.Data, "from") ?? "?", Text(e.Data, "to") ?? "?"));
                     break;
             }

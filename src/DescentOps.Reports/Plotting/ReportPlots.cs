@@ -1,3 +1,5 @@
+using DescentOps.Records.Kinds;
+
 namespace DescentOps.Reports.Plotting;
 
 /// <summary>
@@ -12,18 +14,18 @@ public static class ReportPlots
     public static IReadOnlyList<PlotDefinition> Default { get; } =
     [
         new("depth", "Probe depth", "depth below surface (m)",
-            [new("probe.telemetry", "depth_m", "depth")], InvertY: true, MarkTimeline: true),
+            [new(ProbeRecords.Telemetry, "depth_m", "depth")], InvertY: true, MarkTimeline: true),
         new("descent-rate", "Descent rate", "rate (m/d)",
-            [new("probe.telemetry", "velocity_m_s", "descent rate", Scale: SecondsPerDay)]),
+            [new(ProbeRecords.Telemetry, "velocity_m_s", "descent rate", Scale: SecondsPerDay)]),
         new("power", "Heater power", "power (kW)",
-            [new("probe.telemetry", "head_power_w", "head", Scale: 1e-3), new("probe.telemetry", "wall_power_w", "wall", Scale: 1e-3)]),
+            [new(ProbeRecords.Telemetry, "head_power_w", "head", Scale: 1e-3), new(ProbeRecords.Telemetry, "wall_power_w", "wall", Scale: 1e-3)]),
         new("energy", "Energy used", "energy (MWh)",
-            [new("probe.telemetry", "energy_used_j", "energy used", Scale: 1 / JoulesPerMegawattHour)]),
+            [new(ProbeRecords.Telemetry, "energy_used_j", "energy used", Scale: 1 / JoulesPerMegawattHour)]),
         new("ground-latency", "Telemetry latency at ground", "one-way latency (min)",
-            [new("ground.telemetry", "latency_s", "latency", Scale: 1.0 / 60)]),
+            [new(GroundRecords.Telemetry, "latency_s", "latency", Scale: 1.0 / 60)]),
         new("buffer-fill", "Frames held at the probe", "buffer fill (%)",
-            [new("probe.telemetry", "buffer_fill", "probe buffer", Scale: 100)]),
+            [new(ProbeRecords.Telemetry, "buffer_fill", "probe buffer", Scale: 100)]),
         new("vehicle-battery", "Vehicle battery", "battery (MJ)",
-            [new("vehicle.profile", "battery_j", "battery", Scale: 1e-6, PerSource: true)]),
+            [new(VehicleRecords.Profile, "battery_j", "battery", Scale: 1e-6, PerSource: true)]),
     ];
 }

@@ -1,5 +1,5 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 
 namespace DescentOps.Engine.Tests.Models;
 

@@ -1,5 +1,5 @@
 using DescentOps.Engine.Components;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Scheduling;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;

@@ -1,5 +1,5 @@
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
 using DescentOps.Journal;
@@ -33,7 +33,7 @@ public sealed class FileJournal : IDisposable
         using (var writer = JournalWriter.Create(path, manifest))
         {
             result = await run(writer);
-            writer.Complete(RunSummary.FromOutcome(result.Outcome, []));
+            writer.Complete(new RunSummary(result.Outcome.Kind.ToString(), result.Outcome.Reason, result.Outcome.Time.SecondsSinceEpoch, []));
             LastRecords = writer.EventCount;
         }
 

@@ -2,7 +2,7 @@ using System.Diagnostics;
 using System.Globalization;
 using Akka.Actor;
 using Akka.Configuration;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 
 namespace DescentOps.Benchmarks.Phold;

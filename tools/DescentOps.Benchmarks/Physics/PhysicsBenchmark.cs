@@ -1,6 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;
 using DescentOps.Physics.Descent;

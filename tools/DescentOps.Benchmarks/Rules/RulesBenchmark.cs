@@ -1,6 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
-using DescentOps.Engine.Journaling;
+using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Mission.Running;
 using DescentOps.Primitives.Identity;

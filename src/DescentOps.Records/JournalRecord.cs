@@ -1,7 +1,7 @@
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 
-namespace DescentOps.Engine.Journaling;
+namespace DescentOps.Records;
 
 /// <summary>One event of the mission log: what happened, when, where, and the values that say how.</summary>
 public sealed record JournalRecord(

@@ -1,4 +1,4 @@
-namespace DescentOps.Engine.Journaling;
+namespace DescentOps.Records;
 
 /// <summary>
 /// Where the kernel sends the run's events, already in their final deterministic order. The kernel calls it

@@ -1,4 +1,4 @@
-namespace DescentOps.Engine.Journaling;
+namespace DescentOps.Records;
 
 /// <summary>Discards records: for benchmarks that measure the kernel without a log.</summary>
 public sealed class NullJournalSink : IJournalSink

@@ -1,4 +1,4 @@
-namespace DescentOps.Engine.Journaling;
+namespace DescentOps.Records;
 
 /// <summary>How much an event matters to an operator, lowest first.</summary>
 public enum Severity

@@ -1,6 +1,6 @@
 using System.Globalization;
 
-namespace DescentOps.Engine.Journaling;
+namespace DescentOps.Records;
 
 /// <summary>
 /// One named value of a journal record. A tagged value rather than <c>object</c> so that writing a record

@@ -1,0 +1,8 @@
+namespace DescentOps.Records.Kinds;
+
+/// <summary>Record kinds of the journal written by one source. The ground team's view of the telemetry.</summary>
+public static class GroundRecords
+{
+    public const string Gap = "ground.gap";
+    public const string Telemetry = "ground.telemetry";
+}
