@@ -88,7 +88,7 @@ public static class ProbeBusControl
             RecordField.Of("loads", string.Join(", ", power.LoadModels.Select(l => $"{l.Name}:{l.Priority}"))));
         if (!design.Power!.HeatsProbe) return;
         var waste = design.Power.WasteHeat(0.0);
-        context.Record("probe.heat_path", Severity.Info,
+        context.Record(ProbeRecords.HeatPath, Severity.Info,
             RecordField.Of("waste_heat_to_head_w", waste.HeadW),
             RecordField.Of("waste_heat_to_wall_w", waste.WallW),
             RecordField.Of("waste_heat_rejected_w", waste.RejectedW));

@@ -116,7 +116,7 @@ public static class ProbeRegimeMachine
     private static ProbeState RefreezeStall(ProbeDesign design, ProbeState state, DescentRate rate, ComponentContext context)
     {
         if (state.PendingThermal is { } pending) context.Cancel(pending);
-        context.Record("probe.refreeze_stall", Severity.Critical,
+        context.Record(ProbeRecords.RefreezeStall, Severity.Critical,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("required_side_heat_w", rate.RequiredSideHeatW),
             RecordField.Of("side_heat_supplied_w", rate.SideHeatSuppliedW),
@@ -143,7 +143,7 @@ public static class ProbeRegimeMachine
         var moving = design.Descent.Rate(state.DepthM, headW, wallW);
         if (moving.Regime == DescentRegimeKind.Melting && moving.Held)
         {
-            context.Record("probe.cannot_melt_free", Severity.Critical,
+            context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),
                 RecordField.Of("head_power_w", headW),
                 RecordField.Of("wall_power_w", wallW),
