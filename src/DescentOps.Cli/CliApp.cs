@@ -1,43 +1,49 @@
 using System.CommandLine;
 using DescentOps.Cli.Commands;
+using DescentOps.Cli.Files;
+using DescentOps.Cli.Output;
 using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Cli;
 
 /// <summary>
-/// The whole command line as one call: parse, run, map failures to exit codes. <c>Program</c> calls it with the
-/// process's arguments; tests call it in process (through this seam) instead of starting a process per check.
+/// The whole command line: the commands, and the one mapping from failures to messages and exit codes (see
+/// <see cref="ExitCode"/>). <c>Program</c> calls it; tests call it in process.
 /// </summary>
 public static class CliApp
 {
+    public static RootCommand Root() => new("DescentOps: rehearse melt-probe missions against physics, inject faults, and keep a verifiable log of every run.")
+    {
+        RunCommand.Create(),
+        VerifyCommand.Create(),
+        ReplayCommand.Create(),
+        BranchCommand.Create(),
+        DiffCommand.Create(),
+        EventsCommand.Create(),
+        CheckCommand.Create(),
+        ReportCommand.Create(),
+        ExportCommand.Create(),
+        ScenariosCommand.Create(),
+        RehearseCommand.Create(),
+        SchemaCommand.Create(),
+        Commands.Physics.PhysicsCommand.Create(),
+    };
+
     public static async Task<int> RunAsync(string[] args)
     {
-        var root = new RootCommand("DescentOps: rehearse melt-probe missions against physics, inject faults, and keep a verifiable log of every run.")
-        {
-            RunCommand.Create(),
-            VerifyCommand.Create(),
-            ReplayCommand.Create(),
-            BranchCommand.Create(),
-            DiffCommand.Create(),
-            EventsCommand.Create(),
-            CheckCommand.Create(),
-            ReportCommand.Create(),
-            ExportCommand.Create(),
-            SchemaCommand.Create(),
-            DescentOps.Cli.Commands.Physics.PhysicsCommand.Create(),
-        };
-
         try
         {
-            var parse = root.Parse(args);
+            var parse = Root().Parse(args);
             if (parse.Errors.Count > 0)
             {
-                foreach (var error in parse.Errors) Console.Error.WriteLine($"descentops: {error.Message}");
+                foreach (var error in parse.Errors) Console.Error.WriteLine($"descentops: {ParseErrorText.Clean(error.Message)}");
                 Console.Error.WriteLine("Try 'descentops --help'.");
                 return (int)ExitCode.UsageError;
             }
 
-            return await parse.InvokeAsync(new InvocationConfiguration { EnableDefaultExceptionHandler = false });
+            // No termination timeout: commands that can stop cleanly watch Ctrl-C and SIGTERM themselves
+            // (Terminal.Interruption); the others end at the signal, as any tool does.
+            return await parse.InvokeAsync(new InvocationConfiguration { EnableDefaultExceptionHandler = false, ProcessTerminationTimeout = null }).ConfigureAwait(false);
         }
         catch (ScenarioException exception)
         {
@@ -55,6 +61,11 @@ public static class CliApp
             Console.Error.WriteLine($"descentops: not a readable event log: {exception.Message}");
             return (int)ExitCode.InvalidInput;
         }
+        catch (OutputRefusedException exception)
+        {
+            Console.Error.WriteLine($"descentops: {exception.Message}");
+            return (int)ExitCode.OutputRefused;
+        }
         catch (UsageException exception)
         {
             Console.Error.WriteLine($"descentops: {exception.Message}");
@@ -65,9 +76,9 @@ public static class CliApp
             Console.Error.WriteLine($"descentops: {exception.Message}");
             return (int)ExitCode.IoError;
         }
-        #pragma warning disable CA1031 // The last line of defence: no stack trace reaches the user, but the defect is named.
+#pragma warning disable CA1031 // The last line of defence: no stack trace reaches the user, but the defect is named.
         catch (Exception exception)
-        #pragma warning restore CA1031
+#pragma warning restore CA1031
         {
             Console.Error.WriteLine($"descentops: internal error ({exception.GetType().Name}): {exception.Message}");
             Console.Error.WriteLine("This is a defect in DescentOps; please report it with the command line and scenario.");

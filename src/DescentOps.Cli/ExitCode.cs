@@ -23,12 +23,18 @@ public enum ExitCode
     /// <summary>The run was aborted by a failing component or a kernel fault.</summary>
     RunAborted = 5,
 
-    /// <summary><c>verify</c> found a damaged or truncated log.</summary>
+    /// <summary>A log failed its hash-chain check: <c>verify</c> found it damaged or truncated, or another command refused a damaged log.</summary>
     VerificationFailed = 6,
 
-    /// <summary>A file could not be read or written.</summary>
+    /// <summary>A file could not be read or written, or does not exist.</summary>
     IoError = 7,
 
     /// <summary><c>replay</c> (or <c>diff</c>) found the two runs different.</summary>
     RunsDiffer = 8,
+
+    /// <summary>An output was not written: it exists (without <c>--force</c>) or it is an input of the command.</summary>
+    OutputRefused = 9,
+
+    /// <summary>Stopped by Ctrl-C or SIGTERM (128 + SIGINT, as shells report it); a run says where its partial log is.</summary>
+    Interrupted = 130,
 }

@@ -1,1 +1,3 @@
-return await DescentOps.Cli.CliApp.RunAsync(args).ConfigureAwait(false);
+using DescentOps.Cli;
+
+return await CliApp.RunAsync(args);

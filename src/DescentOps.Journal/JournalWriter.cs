@@ -37,12 +37,15 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     private int _buffered;
     private State _state = State.Open;
 
-    private JournalWriter(Stream output, bool ownsOutput, string? finalPath, string? partialPath)
+    private readonly bool _replaceExisting;
+
+    private JournalWriter(Stream output, bool ownsOutput, string? finalPath, string? partialPath, bool replaceExisting = false)
     {
         _output = output;
         _ownsOutput = ownsOutput;
         FinalPath = finalPath;
         PartialPath = partialPath;
+        _replaceExisting = replaceExisting;
     }
 
     private enum State
@@ -66,20 +69,23 @@ public sealed class JournalWriter : IJournalSink, IDisposable
     public long EventCount => _encoder.EventCount;
 
     /// <summary>
-    /// Starts a file journal at <paramref name="finalPath"/> + <see cref="PartialSuffix"/> (replacing a partial
-    /// file left by an earlier crashed run) and writes the manifest through to the file at once, so that even a
+    /// Starts a file journal under a temporary name of its own beside <paramref name="finalPath"/>
+    /// (<c>&lt;final&gt;.&lt;random&gt;.partial</c>) and writes the manifest through to the file at once, so that even a
     /// run killed at its first event leaves a log that says what it was.
     /// </summary>
-    public static JournalWriter Create(string finalPath, RunManifest manifest)
+    /// <remarks>
+    /// The temporary file is created exclusively (it must not exist, and a symbolic link there is not followed), so
+    /// two runs aimed at one path never share a file and an earlier crashed run's partial log is left alone.
+    /// <paramref name="replaceExisting"/> decides what <see cref="Complete"/> does when the final name is taken by the
+    /// time the run ends: replace that file, or refuse and keep the finished journal under its temporary name.
+    /// </remarks>
+    public static JournalWriter Create(string finalPath, RunManifest manifest, bool replaceExisting = true)
     {
         ArgumentException.ThrowIfNullOrEmpty(finalPath);
         ArgumentNullException.ThrowIfNull(manifest);
         var fullFinalPath = Path.GetFullPath(finalPath);
-        var partialPath = fullFinalPath + PartialSuffix;
-
-        // bufferSize 0: this class does its own buffering; a second buffer inside FileStream would only copy twice.
-        var file = new FileStream(partialPath, FileMode.Create, FileAccess.Write, FileShare.Read, bufferSize: 0);
-        var writer = new JournalWriter(file, ownsOutput: true, fullFinalPath, partialPath);
+        var (file, partialPath) = CreateExclusive(fullFinalPath);
+        var writer = new JournalWriter(file, ownsOutput: true, fullFinalPath, partialPath, replaceExisting);
         try
         {
             writer.Start(manifest);
@@ -91,6 +97,26 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         }
 
         return writer;
+    }
+
+    /// <summary>A fresh temporary file beside <paramref name="fullFinalPath"/>, created with O_EXCL semantics.</summary>
+    private static (FileStream File, string Path) CreateExclusive(string fullFinalPath)
+    {
+        for (var attempt = 0; ; attempt++)
+        {
+            var token = Convert.ToHexStringLower(System.Security.Cryptography.RandomNumberGenerator.GetBytes(4));
+            var partialPath = $"{fullFinalPath}.{token}{PartialSuffix}";
+            try
+            {
+                // CreateNew fails on any existing entry, a symbolic link included, so nothing outside is written through it.
+                // bufferSize 0: this class does its own buffering; a second buffer inside FileStream would only copy twice.
+                return (new FileStream(partialPath, FileMode.CreateNew, FileAccess.Write, FileShare.Read, bufferSize: 0), partialPath);
+            }
+            catch (IOException) when (attempt < 8 && File.Exists(partialPath))
+            {
+                // Another writer drew the same token: draw again.
+            }
+        }
     }
 
     /// <summary>
@@ -115,9 +141,11 @@ public sealed class JournalWriter : IJournalSink, IDisposable
 
     /// <summary>
     /// Writes the summary, pushes everything to disk, closes the file and moves it to <see cref="FinalPath"/>,
-    /// replacing an older journal there. The rename comes after the flush to disk so that a power cut can
-    /// leave the old file or the new one under the final name, never a torn one.
+    /// replacing an older journal there only if the writer was created to. The rename comes after the flush to disk
+    /// so that a power cut can leave the old file or the new one under the final name, never a torn one.
     /// </summary>
+    /// <exception cref="IOException">The final name is taken and the writer may not replace it; the finished journal
+    /// stays under <see cref="PartialPath"/>.</exception>
     public void Complete(RunSummary summary)
     {
         ArgumentNullException.ThrowIfNull(summary);
@@ -146,7 +174,8 @@ public sealed class JournalWriter : IJournalSink, IDisposable
         if (_ownsOutput)
         {
             _output.Dispose();
-            File.Move(PartialPath!, FinalPath!, overwrite: true);
+            // Without overwrite the move is a link and an unlink: it fails, atomically, if the name was taken meanwhile.
+            File.Move(PartialPath!, FinalPath!, overwrite: _replaceExisting);
         }
     }
 

@@ -18,11 +18,13 @@ public static class AtomicFile
         var full = Path.GetFullPath(path);
         var directory = Path.GetDirectoryName(full);
         if (!string.IsNullOrEmpty(directory)) Directory.CreateDirectory(directory);
-        var partial = full + PartialSuffix;
-        File.Delete(partial);
+        // A temporary name of its own, drawn at random: not a fixed name where a link could be planted in advance,
+        // and never another writer's temporary file.
+        var partial = $"{full}.{Convert.ToHexStringLower(System.Security.Cryptography.RandomNumberGenerator.GetBytes(8))}{PartialSuffix}";
+
         try
         {
-            if (startFromExisting && File.Exists(full)) File.Copy(full, partial);
+            if (startFromExisting && File.Exists(full)) File.Copy(full, partial, overwrite: true);
             write(partial);
             File.Move(partial, full, overwrite: true);
         }

@@ -11,6 +11,7 @@ public sealed class JournalWriterTests
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
+        string partial;
 
         using (var writer = JournalWriter.Create(finalPath, JournalSamples.Manifest()))
         {
@@ -20,12 +21,13 @@ public sealed class JournalWriterTests
             }
 
             Assert.False(File.Exists(finalPath));
-            Assert.True(File.Exists(finalPath + JournalWriter.PartialSuffix));
+            Assert.True(File.Exists(writer.PartialPath));
+            partial = writer.PartialPath!;
 
             writer.Complete(JournalSamples.Summary());
         }
 
-        Assert.False(File.Exists(finalPath + JournalWriter.PartialSuffix));
+        Assert.False(File.Exists(partial));
         Assert.Equal(JournalSamples.Standard(), File.ReadAllBytes(finalPath));
     }
 
@@ -65,8 +67,10 @@ public sealed class JournalWriterTests
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
 
+        string partial;
         using (var writer = JournalWriter.Create(finalPath, JournalSamples.Manifest()))
         {
+            partial = writer.PartialPath!;
             foreach (var record in JournalSamples.Events(5))
             {
                 writer.Write(record);
@@ -74,7 +78,7 @@ public sealed class JournalWriterTests
         }
 
         Assert.False(File.Exists(finalPath));
-        var report = JournalVerifier.Verify(finalPath + JournalWriter.PartialSuffix);
+        var report = JournalVerifier.Verify(partial);
         Assert.Equal(VerificationFailure.TruncatedTail, report.Failure);
         Assert.Equal(6, report.LinesChecked);
     }
@@ -94,7 +98,7 @@ public sealed class JournalWriterTests
         }
 
         // What a reader sees at this moment is what a kill at this moment would leave behind.
-        using var onDisk = new FileStream(finalPath + JournalWriter.PartialSuffix, FileMode.Open, FileAccess.Read, FileShare.ReadWrite);
+        using var onDisk = new FileStream(writer.PartialPath!, FileMode.Open, FileAccess.Read, FileShare.ReadWrite);
         var report = JournalVerifier.Verify(onDisk);
 
         Assert.Equal(VerificationFailure.TruncatedTail, report.Failure);

@@ -80,8 +80,8 @@ public sealed class BranchTests
         var before = await File.ReadAllBytesAsync(Path.Combine(folder, "parent.jsonl"));
 
         var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "50 d", "--with", "change.yaml", "--log", "parent.jsonl");
-        Assert.Equal(2, exit); // ExitCode.UsageError
-        Assert.Contains("exists", stderr);
+        Assert.Equal(9, exit); // ExitCode.OutputRefused, as for every command's refused output
+        Assert.Contains("input", stderr);
         Assert.Equal(before, await File.ReadAllBytesAsync(Path.Combine(folder, "parent.jsonl")));
     }
 }

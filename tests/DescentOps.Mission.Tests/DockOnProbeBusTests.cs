@@ -28,10 +28,10 @@ public sealed class DockOnProbeBusTests
         BuiltInScenarios.Text("vehicle-flat-battery.yaml").Replace("tether:\n", Power, StringComparison.Ordinal).Replace("\nrun:", faults + "\nrun:", StringComparison.Ordinal);
 
     private static (double TimeS, double BatteryJ) Docked(CollectingSink sink) =>
-        sink.OfKind("vehicle.charging").Where(r => r.Source.Name == "vehicle-minnow-1").Select(r => (r.Time.SecondsSinceEpoch, CollectingSink.Field(r, "battery_j"))).First();
+        sink.OfKind("vehicle.charging").Where(r => r.Source.Name == "vehicle-wisp-1").Select(r => (r.Time.SecondsSinceEpoch, CollectingSink.Field(r, "battery_j"))).First();
 
     private static double SecondSortieS(CollectingSink sink) =>
-        sink.OfKind("vehicle.sortie").First(r => r.Source.Name == "vehicle-minnow-1").Time.SecondsSinceEpoch;
+        sink.OfKind("vehicle.sortie").First(r => r.Source.Name == "vehicle-wisp-1").Time.SecondsSinceEpoch;
 
     [Fact]
     public async Task TheChargerDrawsOnTheProbesBusAndFillsTheBatteryAtItsPower()
@@ -43,7 +43,7 @@ public sealed class DockOnProbeBusTests
         Assert.Equal(100.0, CollectingSink.Field(granted, "granted_w"));
         // Computed: the glider (0.1 kWh = 360 kJ) docks with the logged charge and fills at 100 W.
         var (dockedS, batteryJ) = Docked(sink);
-        Assert.Equal(dockedS + ((360_000 - batteryJ) / 100.0), SecondSortieS(sink), 5);
+        Assert.Equal(dockedS + ((360_000 - batteryJ) / 100.0), SecondSortieS(sink), 2e-6); // to the microsecond tick
         // On the bus (heaters off in the ocean): electronics + the 300 W science load + the 100 W charger while it
         // charges, and the charger's 100 W given back once the battery is full.
         var baseW = scenario.Probe.ElectronicsPowerW + 300;
@@ -63,7 +63,7 @@ public sealed class DockOnProbeBusTests
 
         var (dockedS, batteryJ) = Docked(sink);
         Assert.InRange(dockedS, 2.5 * 86_400, 4 * 86_400);
-        var grants = sink.OfKind("vehicle.dock_power").Where(r => r.Source.Name == "vehicle-minnow-1").ToList();
+        var grants = sink.OfKind("vehicle.dock_power").Where(r => r.Source.Name == "vehicle-wisp-1").ToList();
         Assert.Equal(0.0, CollectingSink.Field(grants[0], "granted_w"));
         Assert.Equal(4 * 86_400, grants[1].Time.SecondsSinceEpoch, 6);
         Assert.Equal(100.0, CollectingSink.Field(grants[1], "granted_w"));

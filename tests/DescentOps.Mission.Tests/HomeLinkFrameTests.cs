@@ -9,11 +9,11 @@ public sealed class HomeLinkFrameTests
 {
     [Theory]
     [InlineData(4096)]          // the scenario's frame: about a second on the air
-    [InlineData(100_000_000)]   // about 7 h on the air at about 4 kbit/s, longer than any window of an 8 h turn (41 % open)
+    [InlineData(100_000_000)]   // about 22 h on the air at about 1.3 kbit/s, longer than any window of an 8 h turn (41 % open)
     public void AFrameStartIsAFixedPoint(long frameBits)
     {
         var text = BuiltInScenarios.Text("station-dies-before-breakthrough.yaml").Replace("frame_bits: 4096", $"frame_bits: {frameBits}", StringComparison.Ordinal)
-            .Replace("rotation_period: 74.4 h", "rotation_period: 8 h", StringComparison.Ordinal);
+            .Replace("rotation_period: 260 h", "rotation_period: 8 h", StringComparison.Ordinal);
         var link = new HomeLink(ScenarioLoader.LoadText(text, "s.yaml"));
 
         // Times spread over three turns of the body; the station asks again when the start comes, and must then send.

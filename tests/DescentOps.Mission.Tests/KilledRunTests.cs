@@ -17,13 +17,14 @@ public sealed class KilledRunTests
         text = text[..text.IndexOf("rules: |", StringComparison.Ordinal)] + "run:\n  seed: 1\n  until: 300 yr\n";
         await File.WriteAllTextAsync(scenario, text);
         var log = Path.Combine(folder, "killed.jsonl");
-        var partial = log + JournalWriter.PartialSuffix;
+        // Each run writes under a temporary name of its own: killed.jsonl.<random>.partial.
+        string? Partial() => Directory.GetFiles(folder, "killed.jsonl.*" + JournalWriter.PartialSuffix).SingleOrDefault();
 
         var start = new ProcessStartInfo("dotnet") { WorkingDirectory = folder, RedirectStandardOutput = true, RedirectStandardError = true };
-        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "--log", log, "--kernel", "sequential" }) start.ArgumentList.Add(a);
+        foreach (var a in new[] { Path.Combine(AppContext.BaseDirectory, "descentops.dll"), "run", scenario, "--log", log, "--kernel", "sequential", "--no-log-limit" }) start.ArgumentList.Add(a);
         using var process = Process.Start(start)!;
         var guard = Stopwatch.StartNew();
-        while ((!File.Exists(partial) || new FileInfo(partial).Length < 2_000_000) && guard.Elapsed < TimeSpan.FromMinutes(2) && !process.HasExited)
+        while ((Partial() is not { } growing || new FileInfo(growing).Length < 2_000_000) && guard.Elapsed < TimeSpan.FromMinutes(2) && !process.HasExited)
         {
             await Task.Delay(50);
         }
@@ -33,7 +34,7 @@ public sealed class KilledRunTests
         await process.WaitForExitAsync();
 
         Assert.False(File.Exists(log), "a killed run must not leave a file under the final name");
-        var report = JournalVerifier.Verify(partial);
+        var report = JournalVerifier.Verify(Partial()!);
         // Either the kill fell between two buffer flushes (the file ends in a whole line but lacks its summary) or
         // in the middle of one (a cut line): both are a truncated tail, and every line before it is intact.
         Assert.Equal(VerificationFailure.TruncatedTail, report.Failure);

@@ -71,8 +71,8 @@ public sealed class StationTests
         Assert.Equal(failureGy, Number(failed, "dose_gy_si"), 9);
 
         // The data rate against the reference's link check: 33.94 dB-Hz at 5.2 AU with these radios (DS-8, CALC,
-        // links-power-ocean note), scaled by the square of the distance to 6.1e8 km; one 4096-bit frame takes 4096 / R.
-        var rateBitPerS = Math.Pow(10.0, 3.394) * Math.Pow(5.2 * 149_597_870_700.0 / 6.1e11, 2);
+        // links-power-ocean note), scaled by the square of the distance to 1.08e9 km; one 4096-bit frame takes 4096 / R.
+        var rateBitPerS = Math.Pow(10.0, 3.394) * Math.Pow(5.2 * 149_597_870_700.0 / 1.08e12, 2);
         var link = sink.OfKind("station.link").Single();
         Assert.Equal(rateBitPerS, Number(link, "data_rate_bit_s"), rateBitPerS * 0.012);
         Assert.Equal(4096 / rateBitPerS, Number(link, "frame_time_s"), 0.012 * 4096 / rateBitPerS);
@@ -88,6 +88,15 @@ public sealed class StationTests
         Assert.True(queuedLost > 0, "home was out of view when the station died, so frames were waiting");
         Assert.True(lostAfter > 0);
         Assert.Equal(summary.FramesSent, summary.FramesReceivedOnGround + queuedLost + lostAfter);
+
+        // The frames lost after the death are one episode: one warning, the rest at info, each frame still recorded
+        // with its running count.
+        var frameLost = sink.OfKind("station.frame_lost").ToList();
+        Assert.Single(frameLost, r => r.Severity == Severity.Warning);
+        Assert.Equal(frameLost.Count, CollectingSink.IntegerField(frameLost[^1], "lost_in_episode"));
+        // The ground is blind from the death to the end (frames taken after its last received frame), at least.
+        Assert.True(summary.TimeBlindS >= summary.FinalTimeS - failed.Time.SecondsSinceEpoch - 3600, $"{summary.TimeBlindS} s blind");
+        Assert.Equal(0, summary.FramesHeldOrInFlight);
         Assert.Equal(queuedLost + lostAfter, summary.FramesLost);
 
         // The ground sees nothing sampled after the death, so its rule stays blind to the day-80 power sag.
@@ -139,7 +148,7 @@ public sealed class StationTests
     /// </summary>
     private static string WindowedDefault(string rules) => Edit(
         MissionHarness.DefaultText,
-        ("distance_to_ground: 6.1e8 km", "distance_to_ground: 3237758546.4 km"),
+        ("distance_to_ground: 1.08e9 km", "distance_to_ground: 3237758546.4 km"),
         ("  forwarding_delay: 2 s\n", "  forwarding_delay: 2 s\n  link:\n    rotation_period: 10 h\n    latitude: 0 deg\n    start_hour_angle: -90 deg\n"),
         ("faults:", rules + "\nfaults:"),
         ("until: 400 d", "until: 2 d"));
@@ -294,7 +303,7 @@ public sealed class StationTests
         const double startS = 2 * Day, recoveryS = 3 * 3600.0;
         var text = Edit(
             MissionHarness.DefaultText,
-            ("  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.4\n",
+            ("  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.7\n",
              "  - name: discharge-day-2\n    kind: station_upset\n    at: 2 d\n    duration: 3 h\n"),
             ("until: 400 d", "until: 3 d"));
         var (summary, sink) = await RunAsync(text);

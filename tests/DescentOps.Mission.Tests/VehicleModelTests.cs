@@ -8,7 +8,7 @@ namespace DescentOps.Mission.Tests;
 /// <summary>The vehicle's pure pieces: homing in a current, the battery rule, task legs, performance and the acoustic link.</summary>
 public sealed class VehicleModelTests
 {
-    private static readonly VehicleModel Profiler = new("minnow-1", 1.5 * 3.6e6, 0.2, 8.0, 30.0, 0.4, 300.0, 0.15);
+    private static readonly VehicleModel Profiler = new("wisp-1", 1.5 * 3.6e6, 0.2, 8.0, 30.0, 0.4, 300.0, 0.15);
 
     [Theory]
     // Computed: with the current along the line, v + c; against it, v − c; square across it, √(v² − c²).
@@ -42,7 +42,7 @@ public sealed class VehicleModelTests
     public void AProfilersLegsAreTheOriginalOnes()
     {
         // The original component budgeted a leg as (hotel + propulsion) · depth / speed = 38 W · 300 m / 0.4 m/s.
-        var performance = VehiclePerformance.For(Profiler, double.NaN, 1.21, 0.0);
+        var performance = VehiclePerformance.For(Profiler, double.NaN, 1.0, 0.0);
         var down = VehicleTaskPlan.Leg(performance, 0, 0, OceanVector.Zero);
         var up = VehicleTaskPlan.Leg(performance, 0, 1, new OceanVector(0, 0, 300.0));
         Assert.Equal(28_500.0, down.NominalEnergyJ, 9);
@@ -58,7 +58,7 @@ public sealed class VehicleModelTests
     [Fact]
     public void EveryTaskReturnsToItsStartingDepthOverACycle()
     {
-        var performance = VehiclePerformance.For(Profiler, double.NaN, 1.21, 0.0);
+        var performance = VehiclePerformance.For(Profiler, double.NaN, 1.0, 0.0);
         foreach (var task in Enum.GetValues<VehicleTask>())
         {
             var p = performance with { Vehicle = Profiler with { Task = task } };
@@ -78,14 +78,14 @@ public sealed class VehicleModelTests
     [Fact]
     public void AGlidersPumpStrokeCostsMoreWithDepthAtTwoM0GOverEta()
     {
-        // ΔV·Δp/η with ΔV = 2·m0/ρ and Δp = ρ·g·Δz: the density cancels, 2 · 0.3 kg · 1.21 m/s² / 0.5 = 1.452 J per m.
+        // ΔV·Δp/η with ΔV = 2·m0/ρ and Δp = ρ·g·Δz: the density cancels, 2 · 0.3 kg · 1.0 m/s² / 0.5 = 1.2 J per m.
         var glider = Profiler with { Kind = VehicleKind.Glider, Glider = new GliderSettings(0.3, 25 * Math.PI / 180, 132.5, 2.15, 25.0, 0.5) };
-        var performance = VehiclePerformance.For(glider, 1027.0, 1.21, 33_000.0);
-        Assert.Equal(1.452, (performance.PumpStrokeJ(1100.0) - performance.PumpStrokeJ(100.0)) / 1000.0, 9);
+        var performance = VehiclePerformance.For(glider, 1027.0, 1.0, 33_000.0);
+        Assert.Equal(1.2, (performance.PumpStrokeJ(1100.0) - performance.PumpStrokeJ(100.0)) / 1000.0, 9);
 
         // Its cruise speed is the steady glide's horizontal speed at the body's gravity (Leonard and Graver 2001 form).
         var coefficients = GliderCoefficients.Graver2005;
-        var glide = SteadyGlide.AtAngleOfAttack(coefficients, SteadyGlide.AngleOfAttackRad(coefficients, 25 * Math.PI / 180), 0.3, 1.21);
+        var glide = SteadyGlide.AtAngleOfAttack(coefficients, SteadyGlide.AngleOfAttackRad(coefficients, 25 * Math.PI / 180), 0.3, 1.0);
         Assert.Equal(glide.HorizontalSpeedMPerS, performance.CruiseSpeedMPerS, 12);
     }
 
@@ -99,7 +99,7 @@ public sealed class VehicleModelTests
         for (var share = 1.0; share <= 4.0; share += 0.25)
         {
             var vehicle = Profiler with { Hull = hull, SpeedMPerS = best * share };
-            var perKm = VehiclePerformance.For(vehicle, 1027.0, 1.21, 0.0).CruiseEnergyJ(1000.0, 0.0);
+            var perKm = VehiclePerformance.For(vehicle, 1027.0, 1.0, 0.0).CruiseEnergyJ(1000.0, 0.0);
             Assert.True(perKm > previous, $"{share}: {perKm} J/km after {previous}");
             previous = perKm;
         }

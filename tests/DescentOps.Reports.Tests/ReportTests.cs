@@ -39,8 +39,8 @@ public sealed class ReportTests(RunLogs logs)
         var depth = ById(Parse(logs.DefaultReport), "plot-depth");
         var texts = depth.Descendants(Svg + "text").Select(t => t.Value.Trim()).ToList();
         Assert.Contains("fault active", texts);
-        Assert.Contains("Melting", texts);
-        Assert.Contains("AtOcean", texts);
+        Assert.Contains("melting", texts);
+        Assert.Contains("at ocean", texts);
     }
 
     [Fact]

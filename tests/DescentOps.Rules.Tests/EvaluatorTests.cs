@@ -108,7 +108,7 @@ public sealed class EvaluatorTests
     [Fact]
     public void Not_does_not_fire_on_silence()
     {
-        var run = new EvaluatorHarness(Rule("quiet", "not probe.mode is descending") + Rule("other", "probe.head_temp above 1 K", "send minnow-1 recall"))
+        var run = new EvaluatorHarness(Rule("quiet", "not probe.mode is descending") + Rule("other", "probe.head_temp above 1 K", "send wisp-1 recall"))
             .Number("probe.head_temp", 0, 2);
         Assert.Equal(["other"], run.Firings.Select(f => f.Rule));
     }
@@ -208,7 +208,7 @@ public sealed class EvaluatorTests
     public void A_rule_can_enable_and_disable_others()
     {
         var text = Rule("arm", "probe.mode is paused", "enable watch-depth disable watch-link", "priority 2")
-            + Rule("watch-depth", "probe.depth above 10 m", "send minnow-1 recall", "starts disabled")
+            + Rule("watch-depth", "probe.depth above 10 m", "send wisp-1 recall", "starts disabled")
             + Rule("watch-link", "station.link is down", "send station drop_relay(relay = 2)", "priority 1");
         var run = new EvaluatorHarness(text).Number("probe.depth", 0, 20);
         Assert.Empty(run.Firings);
@@ -259,7 +259,7 @@ public sealed class EvaluatorTests
     [Fact]
     public void Rules_of_higher_priority_are_evaluated_first_on_a_shared_sample()
     {
-        var text = Rule("low", "probe.head_temp above 420 K", "send minnow-1 recall", "priority 1")
+        var text = Rule("low", "probe.head_temp above 420 K", "send wisp-1 recall", "priority 1")
             + Rule("high", "probe.head_temp above 420 K", "send probe enter_safe_mode", "priority 9");
         var run = new EvaluatorHarness(text).Number("probe.head_temp", 0, 430);
         Assert.Equal(["high", "low"], run.Firings.Select(f => f.Rule));

@@ -40,7 +40,7 @@ public sealed class LanguageDocumentTests
                 new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0.0, 8000.0)]),
                 new CommandSpec(new ComponentId("probe"), "pause_descent", []),
                 new CommandSpec(new ComponentId("probe"), "enter_safe_mode", []),
-                new CommandSpec(new ComponentId("minnow-1"), "recall", []),
+                new CommandSpec(new ComponentId("wisp-1"), "recall", []),
                 new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", Dimension.Dimensionless, 1.0, 4.0)]),
             ]);
 

@@ -30,7 +30,7 @@ internal static class TestCatalogue
             new CommandSpec(new ComponentId("probe"), "enter_safe_mode", []),
             new CommandSpec(new ComponentId("probe"), "steer", [new QuantityArgumentSpec("heading", Dimension.Angle, 0.0, 2.0 * Math.PI)]),
             new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", Dimension.Dimensionless, 1.0, 4.0)]),
-            new CommandSpec(new ComponentId("minnow-1"), "recall", []),
+            new CommandSpec(new ComponentId("wisp-1"), "recall", []),
         ]);
 
     public static RuleCheckResult Check(string text) => RuleChecker.CheckSource(new RuleSource("test.dorules", text), Instance);

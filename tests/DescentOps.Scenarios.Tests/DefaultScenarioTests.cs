@@ -22,7 +22,7 @@ public sealed class DefaultScenarioTests
         Assert.Equal(6000.0, scenario.Probe.HeadPowerW, 9);
         Assert.Equal(0.5e-3, scenario.Probe.FreezeGapM, 12);
         Assert.Equal(2500.0, scenario.Shell.ThicknessM, 9);
-        Assert.Equal(6.1e11, scenario.Body.DistanceToGroundM, 0);
+        Assert.Equal(1.08e12, scenario.Body.DistanceToGroundM, 0);
         Assert.Equal(600.0, scenario.Probe.TelemetryIntervalS, 9);
         Assert.Equal(1.5 * 3.6e6, scenario.Vehicles[0].BatteryEnergyJ, 3);
         Assert.Equal(0.012, scenario.Shell.OceanSalinityKgPerKg, 12);

@@ -43,7 +43,7 @@ public sealed class MalformedScenarioTests
         var text = ScenarioText.DefaultWith("  head_power: 6 kW\n", "");
         var error = SingleError(text);
         Assert.Equal("probe.head_power", error.FieldPath);
-        Assert.Equal(ScenarioText.LineOf(text, "  name: Spindle"), error.Location.Line);
+        Assert.Equal(ScenarioText.LineOf(text, "  name: Wendlow"), error.Location.Line);
         Assert.Contains("missing required field", error.Message);
     }
 

@@ -12,10 +12,10 @@ public sealed class StationSectionTests
     public void TheFixtureReadsEveryStationPartInSi()
     {
         var station = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml").Station;
-        // 0.2 Gy/d = 0.2 / 86 400 Gy/s; 74.4 h = 267 840 s; 2 kGy = 2000 Gy (unit arithmetic).
+        // 0.2 Gy/d = 0.2 / 86 400 Gy/s; 260 h = 936 000 s; 2 kGy = 2000 Gy (unit arithmetic).
         Assert.Equal(0.2 / 86_400, station.Radiation!.SurfaceDoseRateGyPerS, 15);
         Assert.Equal(DoseFailureModel.Lognormal, station.Radiation.FailureModel);
-        Assert.Equal(267_840.0, station.Link!.RotationPeriodS, 6);
+        Assert.Equal(936_000.0, station.Link!.RotationPeriodS, 6);
         Assert.Equal(-30 * Math.PI / 180, station.Link.StartHourAngleRad, 12);
         Assert.Equal(4096, station.Link.Radio!.FrameBits);
         Assert.Equal(2000.0, station.Dwell!.DValueGy, 9);
@@ -43,7 +43,7 @@ public sealed class StationSectionTests
     [Fact]
     public void APlanetWithoutAnOrbitIsRefused()
     {
-        var text = ScenarioText.DefaultWith("    orbit_radius: 580000 km\n", "");
+        var text = ScenarioText.DefaultWith("    orbit_radius: 726000 km\n", "");
         var error = SingleError(text);
         Assert.Equal("station.link.orbit_radius", error.FieldPath);
         // A section is located where its mapping starts: the line of its first field.

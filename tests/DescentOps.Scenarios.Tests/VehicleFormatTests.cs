@@ -37,7 +37,7 @@ public sealed class VehicleFormatTests
         Assert.Equal(12e3, scenario.Acoustics!.FrequencyHz, 9);
         Assert.Equal(AbsorptionFormula.AinslieMcColm, scenario.Acoustics.Formula);
         var fault = scenario.Faults.Single(f => f.Kind == FaultKind.VehicleLoss);
-        Assert.Equal(("minnow-2", VehicleLossCause.Entrapment), (fault.Vehicle, fault.Cause));
+        Assert.Equal(("wisp-2", VehicleLossCause.Entrapment), (fault.Vehicle, fault.Cause));
     }
 
     [Fact]
@@ -46,7 +46,7 @@ public sealed class VehicleFormatTests
         var text = ScenarioText.DefaultWith("    glider:\n      net_buoyancy: 0.3 kg\n      glide_angle: 25 deg\n      lift_slope: 132.5\n      drag_offset: 2.15\n      drag_quadratic: 25\n      pump_efficiency: 0.5\n", "");
         var error = SingleError(text);
         Assert.Equal("vehicles[2].glider", error.FieldPath);
-        Assert.Equal(ScenarioText.LineOf(text, "- name: minnow-3"), error.Location.Line);
+        Assert.Equal(ScenarioText.LineOf(text, "- name: wisp-3"), error.Location.Line);
     }
 
     [Fact]
@@ -69,10 +69,10 @@ public sealed class VehicleFormatTests
     [Fact]
     public void AVehicleLossNamesAVehicleThatExists()
     {
-        var text = ScenarioText.DefaultWith("    vehicle: minnow-2\n", "    vehicle: minnow-9\n");
+        var text = ScenarioText.DefaultWith("    vehicle: wisp-2\n", "    vehicle: wisp-9\n");
         var error = SingleError(text);
         Assert.Equal("faults[1].vehicle", error.FieldPath);
-        Assert.Equal(ScenarioText.LineOf(text, "vehicle: minnow-9"), error.Location.Line);
+        Assert.Equal(ScenarioText.LineOf(text, "vehicle: wisp-9"), error.Location.Line);
     }
 
     [Fact]
@@ -104,12 +104,12 @@ public sealed class VehicleFormatTests
     public void ABranchCannotStrikeAVehicleTheParentDoesNotHave()
     {
         var parent = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
-        const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: minnow-1\n    cause: battery\n";
-        Assert.Contains(parent.Vehicles, v => v.Name == "minnow-1");
-        Assert.Equal("minnow-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Vehicle);
+        const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: wisp-1\n    cause: battery\n";
+        Assert.Contains(parent.Vehicles, v => v.Name == "wisp-1");
+        Assert.Equal("wisp-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Vehicle);
 
-        var unknown = ScenarioLoader.LoadChange(known.Replace("minnow-1", "minnow-7", StringComparison.Ordinal), "change.yaml");
+        var unknown = ScenarioLoader.LoadChange(known.Replace("wisp-1", "wisp-7", StringComparison.Ordinal), "change.yaml");
         var exception = Assert.Throws<ScenarioException>(() => unknown.ApplyTo(parent));
-        Assert.Contains("minnow-7", Assert.Single(exception.Errors).Message);
+        Assert.Contains("wisp-7", Assert.Single(exception.Errors).Message);
     }
 }

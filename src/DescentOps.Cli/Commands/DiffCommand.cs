@@ -1,5 +1,8 @@
 using System.CommandLine;
 using System.Globalization;
+using DescentOps.Cli.Output;
+using DescentOps.Cli.Running;
+using DescentOps.Cli.Terminal;
 using DescentOps.Records;
 using DescentOps.Journal.Comparison;
 
@@ -12,21 +15,90 @@ public static class DiffCommand
     {
         var aArgument = new Argument<string>("LOG-A") { Description = "The first run's log." };
         var bArgument = new Argument<string>("LOG-B") { Description = "The second run's log." };
-        var command = new Command("diff", "Compare two runs: first divergence, outcome and summary figures, and the events one has more of.") { aArgument, bArgument };
+        var jsonOption = CommonOptions.Json();
+        var command = new Command("diff", "Compare two runs: first divergence, outcome and summary figures, and the events one has more of.") { aArgument, bArgument, jsonOption };
         command.SetAction(parse =>
         {
             var a = parse.GetValue(aArgument)!;
             var b = parse.GetValue(bArgument)!;
-            foreach (var path in new[] { a, b })
+            // Both chains are checked first: an edited log must not "diff identical" or lend its numbers to a comparison.
+            LogGate.Open(a);
+            LogGate.Open(b);
+            var progress = new ProgressLine("  diff ");
+            JournalDiff diff;
+            try
             {
-                if (!File.Exists(path)) throw new FileNotFoundException($"no such log: {path}", path);
+                diff = JournalDiff.Compare(a, b, share => progress.Fraction(share, "of both logs read"));
+            }
+            finally
+            {
+                progress.Done();
             }
 
-            var diff = JournalDiff.Compare(a, b);
-            Print(diff, a, b);
+            if (parse.GetValue(jsonOption)) WriteJson(diff, a, b);
+            else Print(diff, a, b);
             return (int)(diff.Identical ? ExitCode.Ok : ExitCode.RunsDiffer);
         });
         return command;
+    }
+
+    private static void WriteJson(JournalDiff diff, string a, string b) => JsonOutput.Write(w =>
+    {
+        w.WriteString("a", a);
+        w.WriteString("b", b);
+        w.WriteBoolean("identical", diff.Identical);
+        if (diff.FirstEventDivergence is { } d)
+        {
+            w.WriteStartObject("first_divergence");
+            w.WriteNumber("line", d.Line);
+            w.Number("time_a_s", d.TimeA);
+            w.Number("time_b_s", d.TimeB);
+            w.Text("event_a", d.LineA);
+            w.Text("event_b", d.LineB);
+            w.WriteEndObject();
+        }
+        else
+        {
+            w.WriteNull("first_divergence");
+        }
+
+        w.Text("outcome_a", diff.SummaryA?.Summary.OutcomeKind);
+        w.Text("outcome_b", diff.SummaryB?.Summary.OutcomeKind);
+        var fieldsA = diff.SummaryA?.Summary.Data ?? [];
+        var fieldsB = diff.SummaryB?.Summary.Data ?? [];
+        w.WriteStartArray("summary");
+        foreach (var name in fieldsA.Select(f => f.Name).Union(fieldsB.Select(f => f.Name)))
+        {
+            w.WriteStartObject();
+            w.WriteString("name", name);
+            w.Field("a", Find(fieldsA, name));
+            w.Field("b", Find(fieldsB, name));
+            w.WriteBoolean("differs", Value(fieldsA, name) != Value(fieldsB, name));
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+        w.WriteStartArray("count_differences");
+        foreach (var (key, countA, countB) in diff.CountDifferences)
+        {
+            w.WriteStartObject();
+            w.WriteString("key", key);
+            w.WriteNumber("a", countA);
+            w.WriteNumber("b", countB);
+            w.WriteEndObject();
+        }
+
+        w.WriteEndArray();
+    });
+
+    private static RecordField? Find(IReadOnlyList<RecordField> fields, string name)
+    {
+        foreach (var field in fields)
+        {
+            if (field.Name == name) return field;
+        }
+
+        return null;
     }
 
     private static void Print(JournalDiff diff, string a, string b)

@@ -1,33 +1,35 @@
 using System.CommandLine;
 using System.Globalization;
+using DescentOps.Cli.Output;
+using DescentOps.Cli.Running;
 using DescentOps.Records;
 using DescentOps.Journal.Querying;
 using DescentOps.Scenarios.Format;
 
 namespace DescentOps.Cli.Commands;
 
-/// <summary><c>descentops events LOG</c>: filters a log's events and prints them as a table or JSON Lines.</summary>
+/// <summary><c>descentops events LOG</c>: filters a log's events and prints them as a table, JSON Lines or CLEF.</summary>
 public static class EventsCommand
 {
     public static Command Create()
     {
-        var logArgument = new Argument<string>("LOG") { Description = "The event log to read." };
-        var kindOption = new Option<string[]>("--kind") { Description = "Event kind, exact or a prefix ending in '.' or '*' (repeatable), e.g. tether. or probe.breakthrough.", AllowMultipleArgumentsPerToken = true };
-        var sourceOption = new Option<string[]>("--source") { Description = "Source component (repeatable), e.g. probe, tether, vehicle-minnow-1.", AllowMultipleArgumentsPerToken = true };
-        var severityOption = new Option<Severity>("--severity") { Description = "Lowest severity shown: debug, info, notice, warning, alarm, critical.", DefaultValueFactory = _ => Severity.Debug };
-        var fromOption = new Option<string?>("--from") { Description = "Start of the time window, simulated time with a unit (e.g. '40 d')." };
-        var toOption = new Option<string?>("--to") { Description = "End of the time window, inclusive (e.g. '41 d')." };
-        var fieldOption = new Option<string?>("--point") { Description = "Only events that carry this data field or telemetry point (e.g. depth_m)." };
-        var formatOption = new Option<string>("--format") { Description = "table (default) or jsonl (the original log lines).", DefaultValueFactory = _ => "table" };
-        formatOption.AcceptOnlyFromAmong("table", "jsonl");
+        var logArgument = CommonOptions.Log("The event log to read.");
+        var kindOption = new Option<string[]>("--kind", "-k") { Description = "Event kind, exact or a prefix ending in '.' or '*' (repeatable), e.g. tether. or probe.breakthrough.", AllowMultipleArgumentsPerToken = true, HelpName = "KIND" };
+        var sourceOption = new Option<string[]>("--source", "-s") { Description = "Source component (repeatable), e.g. probe, tether, vehicle-wisp-1.", AllowMultipleArgumentsPerToken = true, HelpName = "SOURCE" };
+        var severityOption = new Option<Severity>("--severity", "-l") { Description = "Lowest severity shown: debug, info, notice, warning, alarm, critical.", DefaultValueFactory = _ => Severity.Debug, HelpName = "LEVEL" };
+        var fromOption = new Option<string?>("--from") { Description = "Start of the time window, simulated time with a unit (e.g. '40 d').", HelpName = "TIME" };
+        var toOption = new Option<string?>("--to") { Description = "End of the time window, inclusive (e.g. '41 d').", HelpName = "TIME" };
+        var fieldOption = new Option<string?>("--point") { Description = "Only events that carry this data field or telemetry point (e.g. depth_m).", HelpName = "FIELD" };
+        var formatOption = new Option<string>("--format") { Description = "table (default), jsonl (the original log lines) or clef (Compact Log Event Format, for structured-log viewers).", DefaultValueFactory = _ => "table", HelpName = "table|jsonl|clef" };
+        formatOption.AcceptOnlyFromAmong("table", "jsonl", "clef");
+        var epochOption = new Option<string?>("--epoch") { Description = "For clef: the date and time that simulated time zero is shown at (ISO 8601; default 1970-01-01T00:00:00Z).", HelpName = "DATE" };
         var command = new Command("events", "Filter and print the events of a log.")
         {
-            logArgument, kindOption, sourceOption, severityOption, fromOption, toOption, fieldOption, formatOption,
+            logArgument, kindOption, sourceOption, severityOption, fromOption, toOption, fieldOption, formatOption, epochOption,
         };
         command.SetAction(parse =>
         {
             var path = parse.GetValue(logArgument)!;
-            if (!File.Exists(path)) throw new FileNotFoundException($"no such log: {path}", path);
             var filter = new EventFilter(
                 parse.GetValue(kindOption) ?? [],
                 parse.GetValue(sourceOption) ?? [],
@@ -35,29 +37,29 @@ public static class EventsCommand
                 Seconds(parse.GetValue(fromOption), "--from") ?? double.NegativeInfinity,
                 Seconds(parse.GetValue(toOption), "--to") ?? double.PositiveInfinity,
                 parse.GetValue(fieldOption));
-            var table = parse.GetValue(formatOption) == "table";
-            long? truncated = null;
-            var count = 0;
-            if (table) Console.Out.WriteLine($"{"time (d)",12}  {"source",-18} {"kind",-24} {"severity",-8}  data");
-            foreach (var (entry, line) in JournalQuery.Events(path, filter, at => truncated = at))
+            var epoch = Epoch(parse.GetValue(epochOption));
+            var format = parse.GetValue(formatOption) switch
             {
-                count++;
-                Console.Out.WriteLine(table ? Row(entry) : line);
-            }
+                "jsonl" => EventsPrinter.Format.Jsonl,
+                "clef" => EventsPrinter.Format.Clef,
+                _ => EventsPrinter.Format.Table,
+            };
 
-            if (table) Console.Out.WriteLine($"{count} events");
-            if (truncated is { } cut) Console.Error.WriteLine($"note: the log is truncated at line {cut}; events up to its last intact line are shown.");
+            // The chain is checked first, as by every command that reads a log: a forged line is never printed.
+            // The gate also says where a cut log ends.
+            LogGate.Open(path);
+            EventsPrinter.Print(path, filter, format, StandardOutput.Open(), Console.Error, epoch, noteTruncation: false);
             return (int)ExitCode.Ok;
         });
         return command;
     }
 
-    private static string Row(Journal.EventEntry e)
+    private static DateTimeOffset Epoch(string? text)
     {
-        var data = string.Join(" ", e.Data.Select(f => f.Kind == RecordFieldKind.Number
-            ? string.Create(CultureInfo.InvariantCulture, $"{f.Name}={f.Number:G6}")
-            : f.ToString()));
-        return string.Create(CultureInfo.InvariantCulture, $"{e.TimeSeconds / 86400,12:F6}  {e.Source,-18} {e.Kind,-24} {e.Severity.ToString().ToLowerInvariant(),-8}  {data}");
+        if (text is null) return ClefLine.Epoch;
+        return DateTimeOffset.TryParse(text, CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal, out var epoch)
+            ? epoch
+            : throw new UsageException($"--epoch: '{text}' is not a date and time (write it as 2040-03-01T00:00:00Z).");
     }
 
     private static double? Seconds(string? text, string option)

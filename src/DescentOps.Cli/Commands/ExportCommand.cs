@@ -1,4 +1,7 @@
 using System.CommandLine;
+using DescentOps.Cli.Files;
+using DescentOps.Cli.Running;
+using DescentOps.Cli.Terminal;
 using DescentOps.Reports;
 using DescentOps.Reports.Export;
 
@@ -9,30 +12,51 @@ public static class ExportCommand
 {
     public static Command Create()
     {
-        var logArgument = new Argument<string>("LOG") { Description = "The event log to export." };
-        var formatOption = new Option<string>("--format") { Description = "csv (events.csv and telemetry.csv in a folder) or sqlite (one database; many runs may share it).", Required = true };
+        var logArgument = CommonOptions.Log("The event log to export.");
+        var formatOption = new Option<string>("--format") { Description = "csv (events.csv and telemetry.csv in a folder) or sqlite (one database; many runs may share it).", Required = true, HelpName = "csv|sqlite" };
         formatOption.AcceptOnlyFromAmong("csv", "sqlite");
-        var outputOption = new Option<string?>("--output") { Description = "The folder (csv; default LOG without extension plus -csv) or database file (sqlite; default LOG with .sqlite)." };
-        var command = new Command("export", "Export a log's events as CSV or into a SQLite database; the same run exported again replaces its rows.") { logArgument, formatOption, outputOption };
+        var outputOption = CommonOptions.Output("The folder (csv; default LOG without extension plus -csv) or database file (sqlite; default LOG with .sqlite; an existing database receives the run).");
+        var forceOption = CommonOptions.Force();
+        var command = new Command("export", "Export a log's events as CSV or into a SQLite database; the same run exported again replaces its rows.") { logArgument, formatOption, outputOption, forceOption };
         command.SetAction(parse =>
         {
             var path = parse.GetValue(logArgument)!;
-            if (!File.Exists(path)) throw new FileNotFoundException($"no such log: {path}", path);
             // An edited log is refused: once its rows sit in a database beside good runs nobody would tell them apart.
-            var integrity = LogIntegrity.Check(path);
-            if (integrity.State == LogState.Damaged) throw new LogIntegrityException($"{path}:{integrity.Line}: refused: {integrity.Detail}");
-            if (integrity.State == LogState.Truncated) Console.Error.WriteLine($"note: {path}: {integrity.TruncationNote}");
-
+            LogGate.Open(path);
             var output = parse.GetValue(outputOption);
+            var force = parse.GetValue(forceOption);
             if (parse.GetValue(formatOption) == "csv")
             {
-                var csv = CsvExport.Write(path, output ?? CsvExport.DefaultDirectory(path));
+                var folder = output ?? CsvExport.DefaultDirectory(path);
+                foreach (var file in new[] { folder, Path.Combine(folder, "events.csv"), Path.Combine(folder, "telemetry.csv") })
+                {
+                    if (OutputPaths.SameFile(file, path)) throw new OutputRefusedException($"{file} is also an input of this command; refusing to write over it.");
+                }
+
+                if (!force && (File.Exists(Path.Combine(folder, "events.csv")) || File.Exists(Path.Combine(folder, "telemetry.csv"))))
+                {
+                    throw new OutputRefusedException($"{folder} already holds an export; refusing to replace it (add --force to replace it, or name another folder).");
+                }
+
+                var csv = CsvExport.Write(path, folder);
                 Console.Out.WriteLine($"export: {Path.GetFullPath(csv.EventsPath)} ({csv.Events} events), {Path.GetFullPath(csv.TelemetryPath)} ({csv.TelemetryRows} rows)");
             }
             else
             {
+                // A database gathers runs, so an existing one is added to, not replaced; but never the log itself.
                 var database = output ?? SqliteExport.DefaultPath(path);
-                var sqlite = SqliteExport.Write(path, database);
+                if (OutputPaths.SameFile(database, path)) throw new OutputRefusedException($"{database} is also an input of this command; refusing to write over it.");
+                var progress = new ProgressLine("  export ");
+                SqliteExportResult sqlite;
+                try
+                {
+                    sqlite = SqliteExport.Write(path, database, share => progress.Fraction(share, "of the log exported"));
+                }
+                finally
+                {
+                    progress.Done();
+                }
+
                 var how = sqlite.Replaced ? "replaced the same run already there as" : "added as";
                 Console.Out.WriteLine($"export: {Path.GetFullPath(database)}: {how} run {sqlite.RunId} ({sqlite.Events} events, {sqlite.Fields} fields{(sqlite.TruncatedAtLine is { } at ? $", truncated at line {at}" : "")})");
             }

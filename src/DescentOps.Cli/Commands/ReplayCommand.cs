@@ -1,6 +1,9 @@
 using System.CommandLine;
 using System.Globalization;
+using DescentOps.Cli.Output;
 using DescentOps.Cli.Running;
+using DescentOps.Cli.Terminal;
+using DescentOps.Journal.Comparison;
 using DescentOps.Mission.Running;
 
 namespace DescentOps.Cli.Commands;
@@ -12,31 +15,84 @@ public static class ReplayCommand
 
     public static Command Create()
     {
-        var logArgument = new Argument<string>("LOG") { Description = "The event log to re-run and compare." };
-        var kernelOption = new Option<KernelChoice>("--kernel") { Description = "actors (default) or sequential.", DefaultValueFactory = _ => KernelChoice.Actors };
+        var logArgument = CommonOptions.Log("The event log to re-run and compare.");
+        var kernelOption = new Option<KernelChoice>("--kernel", "-k") { Description = "actors (default) or sequential.", DefaultValueFactory = _ => KernelChoice.Actors, HelpName = "actors|sequential" };
+        var jsonOption = CommonOptions.Json();
         var command = new Command("replay", "Re-run a logged run from its manifest (scenario, seed, limit) and compare the new log with it line by line.")
         {
-            logArgument, kernelOption,
+            logArgument, kernelOption, jsonOption,
         };
-        command.SetAction((parse, _) => ExecuteAsync(parse.GetValue(logArgument)!, parse.GetValue(kernelOption)));
+        command.SetAction((parse, _) => ExecuteAsync(parse.GetValue(logArgument)!, parse.GetValue(kernelOption), parse.GetValue(jsonOption)));
         return command;
     }
 
-    private static async Task<int> ExecuteAsync(string path, KernelChoice kernel)
+    private static async Task<int> ExecuteAsync(string path, KernelChoice kernel, bool json)
     {
         var logged = LoggedRun.Open(path);
         var manifest = logged.Manifest;
-        if (manifest.ToolVersion != ToolInfo.Version)
+        var notes = json ? Console.Error : Console.Out;
+        var otherTool = manifest.ToolVersion != ToolInfo.Version;
+        if (otherTool)
         {
-            Console.Out.WriteLine($"note: the log was written by DescentOps {manifest.ToolVersion}; this is {ToolInfo.Version}. Differences may come from the tool, not the run.");
+            notes.WriteLine($"note: the log was written by DescentOps {manifest.ToolVersion}; this is {ToolInfo.Version}. Differences may come from the tool, not the run.");
         }
 
         if (logged.IsTruncated)
         {
-            Console.Out.WriteLine($"note: the log is truncated at line {logged.Integrity.FirstBadLine}; comparing its {logged.IntactLines} intact lines.");
+            notes.WriteLine($"note: the log is truncated at line {logged.Integrity.FirstBadLine}; comparing its {logged.IntactLines} intact lines.");
         }
 
-        var (found, linesMatched) = await LogReplay.CompareAsync(logged, kernel).ConfigureAwait(false);
+        var progress = new ProgressLine("  replay ");
+        using var interruption = Interruption.Watch();
+        JournalDivergence? found;
+        long linesMatched;
+        try
+        {
+            (found, linesMatched) = await LogReplay.CompareAsync(logged, kernel, share =>
+            {
+                interruption.ThrowIfRequested();
+                progress.Fraction(share, "of the log re-run and matched");
+            }).ConfigureAwait(false);
+        }
+        catch (OperationCanceledException) when (interruption.Requested)
+        {
+            progress.Done();
+            Console.Error.WriteLine("descentops: interrupted; the replay stopped before the end of the log (nothing was written).");
+            return (int)ExitCode.Interrupted;
+        }
+        finally
+        {
+            progress.Done();
+        }
+
+        if (json)
+        {
+            JsonOutput.Write(w =>
+            {
+                w.WriteString("log", path);
+                w.WriteBoolean("identical", found is null);
+                w.WriteNumber("lines_matched", linesMatched);
+                w.Number("truncated_at_line", logged.IsTruncated ? logged.Integrity.FirstBadLine : null);
+                w.WriteString("log_tool_version", manifest.ToolVersion);
+                w.WriteString("tool_version", ToolInfo.Version);
+                if (found is { } d)
+                {
+                    w.WriteStartObject("divergence");
+                    w.WriteNumber("line", d.Line);
+                    w.Number("time_in_log_s", d.TimeA);
+                    w.Number("time_in_rerun_s", d.TimeB);
+                    w.Text("log_line", d.LineA);
+                    w.Text("rerun_line", d.LineB);
+                    w.WriteEndObject();
+                }
+                else
+                {
+                    w.WriteNull("divergence");
+                }
+            });
+            return (int)(found is null ? ExitCode.Ok : ExitCode.RunsDiffer);
+        }
+
         if (found is not { } divergence)
         {
             Console.Out.WriteLine($"{path}: identical ({linesMatched} lines re-run and matched)");

@@ -1,4 +1,6 @@
 using System.CommandLine;
+using DescentOps.Cli.Files;
+using DescentOps.Cli.Running;
 using DescentOps.Reports;
 using DescentOps.Reports.Html;
 
@@ -9,19 +11,16 @@ public static class ReportCommand
 {
     public static Command Create()
     {
-        var logArgument = new Argument<string>("LOG") { Description = "The event log to report on." };
-        var outputOption = new Option<string?>("--output") { Description = "The HTML file to write (default: LOG with .html)." };
-        var command = new Command("report", "Write a self-contained HTML post-mortem of a run: outcome, plots, notable events, cautions.") { logArgument, outputOption };
+        var logArgument = CommonOptions.Log("The event log to report on.");
+        var outputOption = CommonOptions.Output("The HTML file to write (default: LOG with .html).");
+        var forceOption = CommonOptions.Force();
+        var command = new Command("report", "Write a self-contained HTML post-mortem of a run: outcome, plots, notable events, cautions.") { logArgument, outputOption, forceOption };
         command.SetAction(parse =>
         {
             var path = parse.GetValue(logArgument)!;
-            if (!File.Exists(path)) throw new FileNotFoundException($"no such log: {path}", path);
             // The chain is checked first: a post-mortem of an edited log would lend its numbers a credibility they lack.
-            var integrity = LogIntegrity.Check(path);
-            if (integrity.State == LogState.Damaged) throw new LogIntegrityException($"{path}:{integrity.Line}: refused: {integrity.Detail}");
-            if (integrity.State == LogState.Truncated) Console.Error.WriteLine($"note: {path}: {integrity.TruncationNote}");
-
-            var output = parse.GetValue(outputOption) ?? PostMortemReport.DefaultPath(path);
+            LogGate.Open(path);
+            var output = OutputPaths.Claim(parse.GetValue(outputOption) ?? PostMortemReport.DefaultPath(path), parse.GetValue(forceOption), path);
             var plots = PostMortemReport.Write(RunLog.Load(path), output, $"DescentOps {ToolInfo.Version}");
             foreach (var skipped in plots.Where(p => p.Skipped)) Console.Error.WriteLine($"note: plot '{skipped.Definition.Id}' skipped: {skipped.Note}");
             Console.Out.WriteLine($"report: {Path.GetFullPath(output)} ({plots.Count(p => !p.Skipped)} plots)");

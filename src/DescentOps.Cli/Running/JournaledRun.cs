@@ -1,3 +1,4 @@
+using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Journal;
 using DescentOps.Mission.Running;
@@ -7,7 +8,8 @@ namespace DescentOps.Cli.Running;
 
 /// <summary>
 /// A mission run written into a journal: the one way runs, replays and tests produce logs, so they cannot
-/// drift apart. A run that throws abandons its journal instead of leaving half a log.
+/// drift apart. A run that throws abandons its journal instead of leaving half a log; a run stopped by the user
+/// (<see cref="OperationCanceledException"/> from a progress point) keeps what it wrote under the temporary name.
 /// </summary>
 public static class JournaledRun
 {
@@ -16,13 +18,28 @@ public static class JournaledRun
         RunManifest manifest,
         JournalWriter writer,
         KernelChoice kernel = KernelChoice.Actors,
-        Action<KernelProgress>? progress = null)
+        Action<KernelProgress>? progress = null,
+        IJournalSink? observer = null,
+        RunAdditions? additions = null)
     {
         try
         {
-            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, writer, kernel, progress).ConfigureAwait(false);
-            writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
+            IJournalSink sink = observer is null ? writer : new TeeSink(writer, observer);
+            var summary = await MissionRunner.RunAsync(scenario, manifest.Seed, manifest.UntilSeconds, sink, kernel, progress, additions).ConfigureAwait(false);
+            try
+            {
+                writer.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
+            }
+            catch (IOException exception) when (writer is { PartialPath: { } partial, FinalPath: { } final } && File.Exists(partial) && File.Exists(final))
+            {
+                throw new FinalNameTakenException(summary, partial, final, exception);
+            }
+
             return summary;
+        }
+        catch (OperationCanceledException)
+        {
+            throw;
         }
         catch
         {

@@ -24,6 +24,7 @@ internal sealed class KernelCore
     private readonly Dictionary<ComponentId, int> _groupIndex = [];
     private long _roundsDone;
     private long _kernelSequence;
+    private long _inputSequence;
     private int _failures;
     private long _recordsWritten;
 
@@ -51,7 +52,33 @@ internal sealed class KernelCore
             var key = new EventKey(SimTime.Epoch, EventPriority.First, KernelId, _kernelSequence++);
             _events.Add(new SimEvent(key, component.Id, RunStarted.Instance));
         }
+
+        if (_known.Contains(ExternalInput.SenderId))
+        {
+            throw new ArgumentException($"'{ExternalInput.SenderId}' is the id of outside inputs; a component cannot use it.", nameof(setup));
+        }
+
+        foreach (var input in setup.Inputs) Inject(input);
     }
+
+    /// <summary>
+    /// Adds an outside input. It must fall after the last round taken, so that it is delivered exactly as it would
+    /// have been had it been known from the start.
+    /// </summary>
+    public void Inject(ExternalInput input)
+    {
+        if (_roundsDone > 0 && input.At <= Now)
+        {
+            throw new ArgumentOutOfRangeException(nameof(input), input.At, $"An input must fall after the last instant handled ({Now}).");
+        }
+
+        if (!_known.Contains(input.Target)) throw new ArgumentException($"No component '{input.Target}' to take the input.", nameof(input));
+        var key = new EventKey(input.At, EventPriority.First, ExternalInput.SenderId, _inputSequence++);
+        _events.Add(new SimEvent(key, input.Target, input.Payload));
+    }
+
+    /// <summary>The instant of the next round, if any event is left.</summary>
+    public bool TryPeekNextTime(out SimTime time) => _events.TryPeekTime(out time);
 
     public SimTime Now { get; private set; }
 

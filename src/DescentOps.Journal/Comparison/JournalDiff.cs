@@ -20,19 +20,40 @@ public sealed record JournalDiff(
     public bool Identical =>
         FirstEventDivergence is null && CountDifferences.Count == 0 && SameSummary(SummaryA, SummaryB);
 
-    public static JournalDiff Compare(string pathA, string pathB)
+    /// <summary>
+    /// Reads both logs once, side by side, in constant memory (the first divergence and the event counts are all it
+    /// keeps), so a year-long log is compared at disk speed without holding either in memory.
+    /// </summary>
+    /// <param name="pathA">The first log.</param>
+    /// <param name="pathB">The second log.</param>
+    /// <param name="progress">Called now and then with the share of both files read so far (0 to 1).</param>
+    public static JournalDiff Compare(string pathA, string pathB, Action<double>? progress = null)
     {
-        var a = Load(pathA);
-        var b = Load(pathB);
+        using var fileA = Utf8LineSource.OpenFile(pathA);
+        using var fileB = Utf8LineSource.OpenFile(pathB);
+        var total = Math.Max(1.0, fileA.Length + fileB.Length);
+        using var readerA = new JournalReader(fileA, leaveOpen: true);
+        using var readerB = new JournalReader(fileB, leaveOpen: true);
+        var a = new Side(readerA);
+        var b = new Side(readerB);
         JournalDivergence? divergence = null;
-        for (var i = 0; i < Math.Max(a.Events.Count, b.Events.Count) && divergence is null; i++)
+        long step = 0;
+        while (true)
         {
-            var lineA = i < a.Events.Count ? a.Events[i] : default;
-            var lineB = i < b.Events.Count ? b.Events[i] : default;
-            if (lineA.Content != lineB.Content)
+            var eventA = a.NextEvent();
+            var eventB = b.NextEvent();
+            if (eventA is null && eventB is null) break;
+            if (divergence is null)
             {
-                divergence = new JournalDivergence(lineA.Entry?.LineNumber ?? lineB.Entry!.LineNumber, lineA.Entry?.TimeSeconds, lineB.Entry?.TimeSeconds, lineA.Content, lineB.Content);
+                var contentA = eventA is null ? null : Content(eventA);
+                var contentB = eventB is null ? null : Content(eventB);
+                if (contentA != contentB)
+                {
+                    divergence = new JournalDivergence(eventA?.LineNumber ?? eventB!.LineNumber, eventA?.TimeSeconds, eventB?.TimeSeconds, contentA, contentB);
+                }
             }
+
+            if (progress is not null && ++step % 65536 == 0) progress((fileA.Position + fileB.Position) / total);
         }
 
         var keys = a.Counts.Keys.Union(b.Counts.Keys).Order(StringComparer.Ordinal);
@@ -52,34 +73,6 @@ public sealed record JournalDiff(
               && a.Summary.FinalTimeS.Equals(b.Summary.FinalTimeS)
               && a.Summary.Data.Select(f => f.ToString()).SequenceEqual(b.Summary.Data.Select(f => f.ToString()));
 
-    private static Loaded Load(string path)
-    {
-        var events = new List<(EventEntry? Entry, string? Content)>();
-        var counts = new Dictionary<string, long>(StringComparer.Ordinal);
-        SummaryEntry? summary = null;
-        using var reader = JournalReader.Open(path);
-        foreach (var entry in reader.ReadAll())
-        {
-            switch (entry)
-            {
-                case EventEntry e:
-                    events.Add((e, Content(e)));
-                    Count(counts, e.Kind);
-                    foreach (var field in e.Data)
-                    {
-                        if (field.Kind == RecordFieldKind.Text && NameFields.Contains(field.Name)) Count(counts, $"{e.Kind} {field.Name}={field.Text}");
-                    }
-
-                    break;
-                case SummaryEntry s:
-                    summary = s;
-                    break;
-            }
-        }
-
-        return new Loaded(events, counts, summary);
-    }
-
     private static void Count(Dictionary<string, long> counts, string key) => counts[key] = counts.GetValueOrDefault(key) + 1;
 
     /// <summary>An event as text without its line-bound parts (chain), so equal events compare equal.</summary>
@@ -92,5 +85,35 @@ public sealed record JournalDiff(
         return text.ToString();
     }
 
-    private sealed record Loaded(List<(EventEntry? Entry, string? Content)> Events, Dictionary<string, long> Counts, SummaryEntry? Summary);
+    /// <summary>One log being read: its events one at a time, counted by kind and name as they pass.</summary>
+    private sealed class Side(JournalReader reader)
+    {
+        public Dictionary<string, long> Counts { get; } = new(StringComparer.Ordinal);
+
+        public SummaryEntry? Summary { get; private set; }
+
+        /// <summary>The next event, or null at the end (a summary is kept on the way).</summary>
+        public EventEntry? NextEvent()
+        {
+            while (reader.TryRead(out var entry))
+            {
+                switch (entry)
+                {
+                    case EventEntry e:
+                        JournalDiff.Count(Counts, e.Kind);
+                        foreach (var field in e.Data)
+                        {
+                            if (field.Kind == RecordFieldKind.Text && NameFields.Contains(field.Name)) JournalDiff.Count(Counts, $"{e.Kind} {field.Name}={field.Text}");
+                        }
+
+                        return e;
+                    case SummaryEntry s:
+                        Summary = s;
+                        break;
+                }
+            }
+
+            return null;
+        }
+    }
 }

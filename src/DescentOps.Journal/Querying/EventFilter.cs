@@ -25,6 +25,12 @@ public sealed record EventFilter(
         && MatchesAny(Sources, entry.Source)
         && (Field is null || entry.Data.Any(f => f.Name == Field));
 
+    /// <summary>Whether a kind passes the kind patterns (all kinds do when there are none).</summary>
+    public bool MatchesKind(string kind) => MatchesAny(Kinds, kind);
+
+    /// <summary>Whether a source passes the source patterns (all sources do when there are none).</summary>
+    public bool MatchesSource(string source) => MatchesAny(Sources, source);
+
     private static bool MatchesAny(IReadOnlyList<string> patterns, string value)
     {
         if (patterns.Count == 0) return true;

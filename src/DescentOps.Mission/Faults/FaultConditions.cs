@@ -39,8 +39,16 @@ public static class FaultConditions
         {
             var fault = scenario.Faults[i];
             if (fault.When is not { } condition) continue;
+            // Braces would close the wrapper's condition and open rule text of the author's own (a second rule, actions).
+            var brace = condition.IndexOfAny(['{', '}']);
+            if (brace >= 0)
+            {
+                errors.Add(new ScenarioError(Locate(scenario, fault, ConditionLine, ConditionPrefix.Length + brace + 1), $"faults[{i}].when", $"a condition holds no '{condition[brace]}': a trigger is one condition, not rule text"));
+                continue;
+            }
+
             var result = RuleChecker.CheckSource(new RuleSource(scenario.SourceName, Wrap(condition)), catalogue);
-            if (result.RuleSet is { } rules)
+            if (result.RuleSet is { Rules.Count: 1, Exclusions.Count: 0 } rules)
             {
                 sets[i] = rules;
                 continue;

@@ -72,11 +72,14 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
                 return Inject(state, reached.FaultIndex, context);
             case FaultDue { IsEnd: false } due:
                 return Inject(state, due.Index, context);
+            case FaultDue { IsEnd: true } due when state.ClearedByHand.Contains(due.Index):
+                return state with { ClearedByHand = state.ClearedByHand.Remove(due.Index) };
             case FaultDue { IsEnd: true } due:
-                var ended = _faults[due.Index];
-                context.Record(FaultRecords.Cleared, Severity.Notice, RecordField.Of("fault", ended.Name));
-                context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
-                return state with { Cleared = state.Cleared + 1 };
+                return End(state, due.Index, context);
+            case AddFault added:
+                return Add(state, added.Fault, context);
+            case ClearFault clear:
+                return ClearByHand(state, clear.Name, context);
             default:
                 throw new InvalidOperationException($"The fault injector cannot handle {message.GetType().Name}.");
         }
@@ -126,10 +129,58 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         return state with { PendingWake = due is { } at ? context.ScheduleSelf(at - context.Now, TriggerWake.Instance, MissionPriority.Fault) : null };
     }
 
+    private FaultModel FaultAt(FaultInjectorState state, int index) => index < _faults.Count ? _faults[index] : state.Added[index - _faults.Count];
+
+    private FaultInjectorState End(FaultInjectorState state, int index, ComponentContext context)
+    {
+        var ended = FaultAt(state, index);
+        context.Record(FaultRecords.Cleared, Severity.Notice, RecordField.Of("fault", ended.Name));
+        context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
+        return state with { Cleared = state.Cleared + 1, Active = state.Active.Remove(index) };
+    }
+
+    /// <summary>A fault from the console: at its time (in the future), at its depth, or now.</summary>
+    private FaultInjectorState Add(FaultInjectorState state, FaultModel fault, ComponentContext context)
+    {
+        var index = _faults.Count + state.Added.Count;
+        state = state with { Added = state.Added.Add(fault) };
+        if (fault.AtS is { } at && at > context.Now.SecondsSinceEpoch)
+        {
+            context.ScheduleSelf(SimTime.FromSecondsSinceEpoch(at) - context.Now, new FaultDue(index, false), MissionPriority.Fault);
+            return state;
+        }
+
+        if (fault.AtDepthM is { } depth)
+        {
+            context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(index, depth), MissionPriority.Fault);
+            return state;
+        }
+
+        return Inject(state, index, context);
+    }
+
+    private FaultInjectorState ClearByHand(FaultInjectorState state, string name, ComponentContext context)
+    {
+        var active = state.Active.Where(i => FaultAt(state, i).Name == name).Order().ToList();
+        if (active.Count == 0)
+        {
+            context.Record("fault.clear_ignored", Severity.Info, RecordField.Of("fault", name), RecordField.Of("reason", "not active"));
+            return state;
+        }
+
+        foreach (var index in active)
+        {
+            state = End(state, index, context);
+            if (FaultAt(state, index).DurationS is not null) state = state with { ClearedByHand = state.ClearedByHand.Add(index) };
+        }
+
+        return state;
+    }
+
     private FaultInjectorState Inject(FaultInjectorState state, int index, ComponentContext context)
     {
-        var fault = _faults[index];
-        context.Record(FaultRecords.Injected, Severity.Alarm,
+        var fault = FaultAt(state, index);
+        context.Record("fault.injected", Severity.Alarm,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("kind", fault.Kind.ToString()),
             RecordField.Of("target", TargetOf(fault).Name),
@@ -142,6 +193,6 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             context.ScheduleSelf(SimDuration.FromSeconds(duration), new FaultDue(index, true), MissionPriority.Fault);
         }
 
-        return state with { Started = state.Started + 1 };
+        return state with { Started = state.Started + 1, Active = state.Active.Add(index) };
     }
 }

@@ -53,16 +53,7 @@ public static class ProbeMilestones
             ? [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ), RecordField.Of("vehicles_lost", next.VehiclesLost)]
             : [RecordField.Of("vehicles_finished", next.VehiclesFinished), RecordField.Of("energy_used_j", next.EnergyUsedJ)];
         context.Record(ProbeRecords.MissionComplete, Severity.Notice, fields);
-        if (next.VehiclesFinished == 0)
-        {
-            context.StopRun(RunOutcomeKind.MissionLost, $"all {next.VehiclesLost} vehicles lost");
-        }
-        else
-        {
-            context.StopRun(RunOutcomeKind.Completed, next.VehiclesLost > 0
-                ? $"{next.VehiclesFinished} vehicles finished their tasks, {next.VehiclesLost} lost"
-                : $"all {next.VehiclesFinished} vehicles finished their tasks");
-        }
+        context.StopRun(next.VehiclesFinished == 0 ? RunOutcomeKind.MissionLost : RunOutcomeKind.Completed, VehicleTally.Reason(next.VehiclesFinished, next.VehiclesLost));
 
         return next;
     }

@@ -24,10 +24,14 @@ public static class MissionRunner
         double untilS,
         IJournalSink journal,
         KernelChoice kernel = KernelChoice.Actors,
-        Action<KernelProgress>? progress = null)
+        Action<KernelProgress>? progress = null,
+        RunAdditions? additions = null)
     {
         var summary = new MissionSummarySink(journal);
-        var setup = new KernelSetup(MissionAssembly.Components(scenario), seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress);
+        var setup = new KernelSetup([.. MissionAssembly.Components(scenario), .. additions?.Components ?? []], seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress)
+        {
+            Inputs = additions?.Inputs ?? [],
+        };
         RunResult result;
         if (kernel == KernelChoice.Sequential)
         {

@@ -20,6 +20,15 @@ public sealed record MissionSummary(
     int ComponentFailures,
     IReadOnlyList<FaultMeasure> Faults)
 {
+    /// <summary>Frames sent that the ground has neither received nor lost when the run ends: held in a buffer or queue, or on their way.</summary>
+    public long FramesHeldOrInFlight => FramesSent - FramesReceivedOnGround - FramesLost;
+
+    /// <summary>Time the probe spent stopped or frozen in, not descending.</summary>
+    public double TimeStoppedS { get; init; }
+
+    /// <summary>Time the ground saw nothing of the probe: see <see cref="GroundBlindness"/>.</summary>
+    public double TimeBlindS { get; init; }
+
     /// <summary>The summary's figures as journal fields, in a fixed order.</summary>
     public IReadOnlyList<RecordField> ToFields() =>
     [
@@ -30,6 +39,9 @@ public sealed record MissionSummary(
         RecordField.Of("frames_sent", FramesSent),
         RecordField.Of("frames_received_on_ground", FramesReceivedOnGround),
         RecordField.Of("frames_lost", FramesLost),
+        RecordField.Of("frames_held_or_in_flight", FramesHeldOrInFlight),
+        RecordField.Of("time_stopped_s", TimeStoppedS),
+        RecordField.Of("time_blind_s", TimeBlindS),
         RecordField.Of("vehicle_profiles", VehicleProfiles),
         RecordField.Of("events_delivered", EventsDelivered),
         RecordField.Of("records_written", RecordsWritten),

@@ -20,6 +20,9 @@ public sealed class MissionSummarySink : IJournalSink
     private long _framesLost;
     private int _profiles;
     private readonly FaultMeasures _faultMeasures = new();
+    private readonly GroundBlindness _blind = new();
+    private double _timeStoppedS;
+    private double? _stoppedSinceS;
 
     public MissionSummarySink(IJournalSink next) => _next = next;
 
@@ -31,6 +34,7 @@ public sealed class MissionSummarySink : IJournalSink
         {
             case ProbeRecords.Telemetry:
                 _framesSent++;
+                _blind.FrameSent(record.Time.SecondsSinceEpoch);
                 _depthM = Field(record, "depth_m");
                 _energyJ = Field(record, "energy_used_j");
                 break;
@@ -44,6 +48,17 @@ public sealed class MissionSummarySink : IJournalSink
                 break;
             case GroundRecords.Telemetry:
                 _framesReceived++;
+                _blind.FrameReceived(record.Time.SecondsSinceEpoch, Field(record, "latency_s"));
+                break;
+            case "probe.regime":
+                var stoppedNow = IsStopped(Text(record, "to"));
+                if (stoppedNow && _stoppedSinceS is null) _stoppedSinceS = record.Time.SecondsSinceEpoch;
+                if (!stoppedNow && _stoppedSinceS is { } since)
+                {
+                    _timeStoppedS += record.Time.SecondsSinceEpoch - since;
+                    _stoppedSinceS = null;
+                }
+
                 break;
             case DataRecords.Lost when Text(record, "kind") == "telemetry":
             case StationRecords.FrameLost:
@@ -61,6 +76,9 @@ public sealed class MissionSummarySink : IJournalSink
         }
     }
 
+    /// <summary>The probe is not descending: stopped by a command or a shed head, or frozen in.</summary>
+    private static bool IsStopped(string? regime) => regime is "Stopped" or "FrozenIn";
+
     public MissionSummary Summarize(RunResult result) => new(
         result.Outcome,
         result.FinalTime.SecondsSinceEpoch,
@@ -75,7 +93,11 @@ public sealed class MissionSummarySink : IJournalSink
         result.EventsDelivered,
         result.RecordsWritten,
         result.ComponentFailures,
-        _faultMeasures.Measures());
+        _faultMeasures.Measures())
+    {
+        TimeStoppedS = _timeStoppedS + (_stoppedSinceS is { } since ? result.FinalTime.SecondsSinceEpoch - since : 0),
+        TimeBlindS = _blind.TotalS(),
+    };
 
     private static string? Text(JournalRecord record, string name) => record.Fields.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault();
 

@@ -2,6 +2,7 @@ using System.Collections.Immutable;
 using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Mission.Messages;
+using DescentOps.Mission.Running;
 using DescentOps.Physics.Radiation;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
@@ -63,8 +64,11 @@ public sealed class StationComponent : SimComponent<StationState>
                 Start(context);
                 return state;
             case TelemetryFrame frame when state.Failed:
-                context.Record(StationRecords.FrameLost, Severity.Warning, RecordField.Of("frame", frame.Sequence));
-                return state with { FramesLost = state.FramesLost + 1 };
+            {
+                var episode = state.LossEpisode.After(frame.Sequence);
+                context.Record(StationRecords.FrameLost, episode.Severity, [RecordField.Of("frame", frame.Sequence), .. episode.Fields()]);
+                return state with { FramesLost = state.FramesLost + 1, LossEpisode = episode };
+            }
             case TelemetryFrame frame when _queued:
                 return Pump(Enqueue(state, frame, context), context);
             case TelemetryFrame frame:

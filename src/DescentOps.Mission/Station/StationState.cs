@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using DescentOps.Engine.Scheduling;
+using DescentOps.Mission.Running;
 using DescentOps.Primitives.Time;
 
 namespace DescentOps.Mission.Station;
@@ -24,4 +25,8 @@ public sealed record StationState(
     SimTime TransmitterFreeAt,
     SimTime? WaitingSince,
     long Upsets,
-    long CommandsLost);
+    long CommandsLost)
+{
+    /// <summary>The run of consecutive frames lost after the station failed, for one warning per episode.</summary>
+    public LossEpisode LossEpisode { get; init; } = LossEpisode.None;
+}

@@ -3,6 +3,7 @@ using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Probe;
+using DescentOps.Mission.Running;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
 using DescentOps.Records.Kinds;
@@ -164,7 +165,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         var relay = state.Relays.Single(r => r.Number == number);
         foreach (var frame in relay.Hold.Items)
         {
-            LostFrame(frame, relay.Name, "the relay's battery went flat", context);
+            state = LostFrame(state, frame, relay.Name, "the relay's battery went flat", context);
         }
 
         var dead = relay with { Dead = true, Hold = relay.Hold.Cleared() };
@@ -214,7 +215,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
             return state with { ProbeHold = state.ProbeHold with { Capacity = hold.Capacity - 1 } };
         }
 
-        LostFrame(incoming, "probe", state.ProbeHold.Capacity == 0 ? "no path home and no buffer" : "the probe's buffer is full", context);
+        state = LostFrame(state, incoming, "probe", state.ProbeHold.Capacity == 0 ? "no path home and no buffer" : "the probe's buffer is full", context);
         return state with { FramesLost = state.FramesLost + 1 };
     }
 
@@ -336,12 +337,19 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private SimDuration RelayDelay(ChainNow chain, int from) =>
         SimDuration.FromSeconds(_radio!.PropagationS(chain.Depths[from]) + ((chain.Depths.Count - Math.Max(from, 1)) * _plan!.ForwardingDelayS));
 
-    private static void LostFrame(TelemetryFrame frame, string where, string cause, ComponentContext context) =>
-        context.Record(DataRecords.Lost, Severity.Warning,
+    private static TetherState LostFrame(TetherState state, TelemetryFrame frame, string where, string cause, ComponentContext context)
+    {
+        var episode = state.LossEpisode.After(frame.Sequence);
+        context.Record(DataRecords.Lost, episode.Severity,
+        [
             RecordField.Of("kind", "telemetry"),
             RecordField.Of("frame", frame.Sequence),
             RecordField.Of("where", where),
-            RecordField.Of("cause", cause));
+            RecordField.Of("cause", cause),
+            .. episode.Fields(),
+        ]);
+        return state with { LossEpisode = episode };
+    }
 
     private static TetherState Break(TetherState state, string cause, ComponentContext context)
     {

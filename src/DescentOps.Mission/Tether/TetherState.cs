@@ -1,5 +1,6 @@
 using System.Collections.Immutable;
 using DescentOps.Mission.Messages;
+using DescentOps.Mission.Running;
 
 namespace DescentOps.Mission.Tether;
 
@@ -30,5 +31,8 @@ public sealed record TetherState(
     double ReportedFill,
     double ProbeDepthM)
 {
+    /// <summary>The run of consecutive frames lost, for one warning per episode.</summary>
+    public LossEpisode LossEpisode { get; init; } = LossEpisode.None;
+
     public long FramesHeld => ProbeHold.Count + Relays.Sum(r => (long)r.Hold.Count);
 }

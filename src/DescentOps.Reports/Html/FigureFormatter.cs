@@ -26,10 +26,25 @@ public static class FigureFormatter
 
     public static SummaryFigure Format(RecordField field) => new(Label(field.Name), Value(field));
 
+    /// <summary>Summary fields that are a pass/fail criterion's verdict or measure (<c>criterion.NAME...</c>).</summary>
+    public static bool IsCriterion(string name) =>
+        name.StartsWith("criterion.", StringComparison.Ordinal) || name.StartsWith("criteria.", StringComparison.Ordinal);
+
     public static string Label(string name)
     {
         ArgumentNullException.ThrowIfNull(name);
         if (Labels.TryGetValue(name, out var label)) return label;
+        // fault.NAME.detected_after_s → "fault NAME: detected after"; criterion.NAME.x → "NAME: x".
+        foreach (var prefix in new[] { "fault.", "criterion.", "criteria." })
+        {
+            if (!name.StartsWith(prefix, StringComparison.Ordinal)) continue;
+            var last = name.LastIndexOf('.');
+            if (last <= prefix.Length) break;
+            var owner = name[prefix.Length..last];
+            var lead = prefix == "fault." ? "fault " + owner : owner;
+            return $"{lead}: {Label(name[(last + 1)..])}";
+        }
+
         foreach (var suffix in new[] { "_t_s", "_s", "_j", "_m", "_w", "_k", "_pa", "_m_s" })
         {
             if (name.EndsWith(suffix, StringComparison.Ordinal) && name.Length > suffix.Length)
@@ -54,15 +69,39 @@ public static class FigureFormatter
     public static string Duration(double seconds) =>
         string.Create(CultureInfo.InvariantCulture, $"{seconds / 86_400:F3} d ({seconds:F0} s)");
 
-    private static string Number(string name, double value)
+    /// <summary>A number to six significant digits in plain notation (no exponent), trailing zeros dropped.</summary>
+    public static string Plain(double value)
     {
         if (!double.IsFinite(value)) return DataJson.Number(value);
-        if (name.EndsWith("_m_s", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:G6} m/s");
+        if (value == 0) return "0";
+        var decimals = Math.Clamp(5 - (int)Math.Floor(Math.Log10(Math.Abs(value))), 0, 15);
+        var text = Math.Round(value, decimals).ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
+        return text.Contains('.', StringComparison.Ordinal) ? text.TrimEnd('0').TrimEnd('.') : text;
+    }
+
+    /// <summary>
+    /// What a missing value means, said in words: an instant or a delay that never came ("never"), a time at which
+    /// something would have been reached ("not reached"); an infinity keeps its sign in words.
+    /// </summary>
+    public static string Missing(string name, double value)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        if (double.IsPositiveInfinity(value)) return "unbounded";
+        if (double.IsNegativeInfinity(value)) return "unbounded (negative)";
+        if (name.EndsWith("_t_s", StringComparison.Ordinal) || name.Contains("breakthrough", StringComparison.Ordinal)) return "not reached";
+        if (name.EndsWith("_after_s", StringComparison.Ordinal) || name.EndsWith("_s", StringComparison.Ordinal)) return "never";
+        return "none";
+    }
+
+    private static string Number(string name, double value)
+    {
+        if (!double.IsFinite(value)) return Missing(name, value);
+        if (name.EndsWith("_m_s", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{Plain(value)} m/s");
         if (name.EndsWith("_s", StringComparison.Ordinal)) return Duration(value);
-        if (name.EndsWith("_j", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value / 3.6e9:F2} MWh ({value:E3} J)");
+        if (name.EndsWith("_j", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value / 3.6e9:F2} MWh ({value:F0} J)");
         if (name.EndsWith("_m", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:F1} m");
-        if (name.EndsWith("_w", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:G6} W");
+        if (name.EndsWith("_w", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{Plain(value)} W");
         if (name.EndsWith("_k", StringComparison.Ordinal)) return string.Create(CultureInfo.InvariantCulture, $"{value:F1} K");
-        return value.ToString("G6", CultureInfo.InvariantCulture);
+        return Plain(value);
     }
 }

@@ -15,7 +15,7 @@ namespace DescentOps.Reports.Html;
 public sealed class HtmlReportWriter
 {
     /// <summary>More rows than this is a log to filter with <c>descentops events</c>, not to read in a page.</summary>
-    public const int MaxEventRows = 500;
+    public const int MaxEventRows = RunLog.MaxNotableEvents;
 
     private readonly TextWriter _out;
 
@@ -34,10 +34,11 @@ public sealed class HtmlReportWriter
         Line("<html xmlns=\"http://www.w3.org/1999/xhtml\" lang=\"en\">");
         Line("<head>");
         Line("<meta charset=\"utf-8\" />");
-        Line("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'\" />");
+        Line("<meta http-equiv=\"Content-Security-Policy\" content=\"default-src 'none'; style-src 'unsafe-inline'; font-src data:\" />");
         Line("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\" />");
         Line($"<title>Post-mortem: {E(manifest.ScenarioName)}, seed {manifest.Seed.ToString(CultureInfo.InvariantCulture)}</title>");
-        Line($"<style>{ReportStyle.Css}</style>");
+        // The plots' text is set in the fonts the plots were laid out with, carried in the page itself.
+        Line($"<style>{EmbeddedFontFaces.Css}{ReportStyle.Css}</style>");
         Line("</head>");
         Line("<body>");
         Line("<header>");
@@ -45,10 +46,11 @@ public sealed class HtmlReportWriter
         Line($"<p class=\"run\">seed {manifest.Seed.ToString(CultureInfo.InvariantCulture)} · log {E(Path.GetFileName(log.Path))} · written by {E(manifest.ToolVersion)}</p>");
         Line("</header>");
 
+        var unit = TimeUnit.For(log.LengthS);
         if (log.IsTruncated) Truncation(log);
-        Outcome(log);
-        Plots(plots);
-        NotableEvents(log);
+        Outcome(log, unit);
+        Plots(plots, unit);
+        NotableEvents(log, unit);
         Inputs(log);
         CautionsSection();
 
@@ -61,11 +63,11 @@ public sealed class HtmlReportWriter
     {
         Line("<section class=\"truncated\" id=\"truncation\">");
         Line("<h2>Truncated log</h2>");
-        Line($"<p><strong>This log is truncated at line {N(log.TruncatedAtLine ?? 0)}.</strong> The run's summary line is missing, so its outcome is unknown. Everything below comes from the {N(log.Events.Count)} events before that line, which are intact (the hash chain holds up to there).</p>");
+        Line($"<p><strong>This log is truncated at line {N(log.TruncatedAtLine ?? 0)}.</strong> The run's summary line is missing, so its outcome is unknown. Everything below comes from the {N(log.EventCount)} events before that line, which are intact (the hash chain holds up to there).</p>");
         Line("</section>");
     }
 
-    private void Outcome(RunLog log)
+    private void Outcome(RunLog log, TimeUnit unit)
     {
         Line("<section id=\"outcome\">");
         Line("<h2>Outcome</h2>");
@@ -73,9 +75,9 @@ public sealed class HtmlReportWriter
         if (log.Summary is { } s)
         {
             var css = s.Summary.OutcomeKind == "Completed" ? "completed" : "not-completed";
-            Line($"<p class=\"verdict {css}\" id=\"verdict\">{E(s.Summary.OutcomeKind)}: {E(s.Summary.Reason)}</p>");
+            Line($"<p class=\"verdict {css}\" id=\"verdict\">{E(HumanText.Sentence(s.Summary.OutcomeKind))}: {E(s.Summary.Reason)}</p>");
             figures.Add(new SummaryFigure("simulated time", FigureFormatter.Duration(s.Summary.FinalTimeS)));
-            figures.AddRange(s.Summary.Data.Select(FigureFormatter.Format));
+            figures.AddRange(s.Summary.Data.Where(f => !FigureFormatter.IsCriterion(f.Name)).Select(FigureFormatter.Format));
         }
         else
         {
@@ -84,34 +86,46 @@ public sealed class HtmlReportWriter
             figures.AddRange(AsFarAsItGoes(log));
         }
 
+        figures.Add(new SummaryFigure("vehicles lost", log.VehiclesLost.Count == 0
+            ? "none"
+            : string.Join("; ", log.VehiclesLost.Select(v => $"{HumanText.Source(v.Source)} at {unit.Format(v.TimeS)} {unit.Symbol}: {v.Reason}"))));
         Line("<table class=\"figures\">");
         foreach (var f in figures) Line($"<tr><th scope=\"row\">{E(f.Label)}</th><td>{E(f.Value)}</td></tr>");
         Line("</table>");
+
+        // Pass/fail criteria, when the run was judged against some: each with its verdict as the summary gives it.
+        var criteria = log.Summary?.Summary.Data.Where(f => FigureFormatter.IsCriterion(f.Name)).ToList() ?? [];
+        if (criteria.Count > 0)
+        {
+            Line("<h3>Criteria</h3>");
+            Line("<table class=\"figures\" id=\"criteria\">");
+            foreach (var f in criteria) Line($"<tr><th scope=\"row\">{E(FigureFormatter.Label(f.Name))}</th><td>{E(FigureFormatter.Value(f))}</td></tr>");
+            Line("</table>");
+        }
+
         Line("</section>");
     }
 
     /// <summary>For a log without its summary: the last values the log holds, each labelled as such.</summary>
     private static IEnumerable<SummaryFigure> AsFarAsItGoes(RunLog log)
     {
-        yield return new SummaryFigure("events read", N(log.Events.Count));
-        if (log.Events.Count > 0) yield return new SummaryFigure("last event at", FigureFormatter.Duration(log.Events[^1].TimeSeconds));
-        var lastTelemetry = log.Events.LastOrDefault(e => e.Kind == ProbeRecords.Telemetry);
-        if (lastTelemetry is null) yield break;
+        yield return new SummaryFigure("events read", N(log.EventCount));
+        if (log.EventCount > 0) yield return new SummaryFigure("last event at", FigureFormatter.Duration(log.LastEventTimeS));
+        if (log.LastTelemetry is not { } lastTelemetry) yield break;
         foreach (var name in new[] { "depth_m", "energy_used_j" })
         {
-            var field = lastTelemetry.Data.FirstOrDefault(f => f.Name == name);
+            var field = lastTelemetry.FirstOrDefault(f => f.Name == name);
             if (field.Name is not null) yield return new SummaryFigure($"last reported {FigureFormatter.Label(name)}", FigureFormatter.Value(field));
         }
 
-        var breakthrough = log.Events.FirstOrDefault(e => e.Kind == ProbeRecords.Breakthrough);
-        yield return new SummaryFigure("breakthrough", breakthrough is null ? "not in the log" : FigureFormatter.Duration(breakthrough.TimeSeconds));
+        yield return new SummaryFigure("breakthrough", log.BreakthroughTimeS is { } breakthrough ? FigureFormatter.Duration(breakthrough) : "not in the log");
     }
 
-    private void Plots(IReadOnlyList<RenderedPlot> plots)
+    private void Plots(IReadOnlyList<RenderedPlot> plots, TimeUnit unit)
     {
         Line("<section id=\"plots\">");
         Line("<h2>Plots</h2>");
-        Line("<p class=\"note\">Time runs in days of simulated mission time. Shaded bands on the depth plot are active faults; dashed lines are changes of the probe's regime, labelled with the new regime.</p>");
+        Line($"<p class=\"note\">Time runs in {E(UnitName(unit))} of simulated mission time. Shaded bands are active faults, labelled with their names along the top (a short fault is drawn a few pixels wide); dashed lines are changes of the probe's regime, labelled with the new regime along the bottom; a line breaks where its data stop for a while.</p>");
         foreach (var plot in plots)
         {
             var id = E("plot-" + plot.Definition.Id);
@@ -130,28 +144,28 @@ public sealed class HtmlReportWriter
         Line("</section>");
     }
 
-    private void NotableEvents(RunLog log)
+    private void NotableEvents(RunLog log, TimeUnit unit)
     {
-        var notable = log.Events.Where(e => e.Severity >= Severity.Notice).ToList();
+        var notable = log.NotableEvents;
         Line("<section id=\"events\">");
         Line("<h2>Notable events</h2>");
-        Line($"<p class=\"note\">{N(notable.Count)} events of severity notice or above.</p>");
+        Line($"<p class=\"note\">{N(log.NotableCount)} events of severity notice or above.</p>");
         if (notable.Count > 0)
         {
             Line("<table id=\"notable\">");
-            Line("<thead><tr><th>time (d)</th><th>t (s)</th><th>source</th><th>kind</th><th>severity</th><th>data</th></tr></thead>");
+            Line($"<thead><tr><th>time ({E(unit.Symbol)})</th><th>t (s)</th><th>source</th><th>kind</th><th>severity</th><th>data</th></tr></thead>");
             Line("<tbody>");
-            foreach (var e in notable.Take(MaxEventRows))
+            foreach (var e in notable)
             {
                 var severity = e.Severity.ToString().ToLowerInvariant();
-                Line($"<tr class=\"sev-{severity}\"><td class=\"num\">{F(e.TimeSeconds / 86_400, "F3")}</td><td class=\"num\">{F(e.TimeSeconds, "F0")}</td><td>{E(e.Source)}</td><td>{E(e.Kind)}</td><td class=\"sev\">{severity}</td><td class=\"data\">{E(Data(e.Data))}</td></tr>");
+                Line($"<tr class=\"sev-{severity}\"><td class=\"num\">{unit.Format(e.TimeSeconds)}</td><td class=\"num\">{F(e.TimeSeconds, "F0")}</td><td>{E(e.Source)}</td><td>{E(e.Kind)}</td><td class=\"sev\">{severity}</td><td class=\"data\">{E(Data(e.Data))}</td></tr>");
             }
 
             Line("</tbody>");
             Line("</table>");
-            if (notable.Count > MaxEventRows)
+            if (log.NotableCount > notable.Count)
             {
-                Line($"<p class=\"note\">{N(notable.Count - MaxEventRows)} more not shown; list them with <code>descentops events LOG --severity notice</code>.</p>");
+                Line($"<p class=\"note\">{N(log.NotableCount - notable.Count)} more not shown; list them with <code>descentops events LOG --severity notice</code>.</p>");
             }
         }
 
@@ -186,13 +200,15 @@ public sealed class HtmlReportWriter
         Line("</section>");
     }
 
+    private static string UnitName(TimeUnit unit) => unit.Symbol switch { "min" => "minutes", "h" => "hours", _ => "days" };
+
     private void Pair(string term, string value) => Line($"<dt>{E(term)}</dt><dd>{E(value)}</dd>");
 
     private void Line(string text) => _out.Write(text + "\n");
 
     private static string Data(IReadOnlyList<RecordField> data) =>
         string.Join(", ", data.Select(f => f.Kind == RecordFieldKind.Number
-            ? $"{f.Name}={f.Number.ToString("G6", CultureInfo.InvariantCulture)}"
+            ? $"{f.Name}={FigureFormatter.Plain(f.Number)}"
             : f.Kind == RecordFieldKind.Boolean ? $"{f.Name}={(f.Integer != 0 ? "true" : "false")}"
             : f.Kind == RecordFieldKind.Integer ? $"{f.Name}={f.Integer.ToString(CultureInfo.InvariantCulture)}"
             : $"{f.Name}={f.Text}"));

@@ -1,4 +1,5 @@
 using DescentOps.Records;
+using DescentOps.Journal;
 using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Plotting;
@@ -13,12 +14,19 @@ public sealed record FaultTimeline(IReadOnlyList<FaultSpan> Faults, IReadOnlyLis
     public static FaultTimeline Of(RunLog log)
     {
         ArgumentNullException.ThrowIfNull(log);
-        var faults = new List<FaultSpan>();
-        var open = new Dictionary<string, (int Index, double PlannedEndDay)>(StringComparer.Ordinal);
-        var regimes = new List<RegimeMark>();
-        var lastDay = log.Events.Count > 0 ? log.Events[^1].TimeSeconds / SecondsPerDay : 0;
-        foreach (var e in log.Events)
+        return log.Timeline;
+    }
+
+    /// <summary>Builds the timeline from events as they stream past.</summary>
+    public sealed class Builder
+    {
+        private readonly List<FaultSpan> _faults = [];
+        private readonly Dictionary<string, (int Index, double PlannedEndDay)> _open = new(StringComparer.Ordinal);
+        private readonly List<RegimeMark> _regimes = [];
+
+        public void Add(EventEntry e)
         {
+            ArgumentNullException.ThrowIfNull(e);
             var day = e.TimeSeconds / SecondsPerDay;
             switch (e.Kind)
             {
@@ -28,33 +36,39 @@ public sealed record FaultTimeline(IReadOnlyList<FaultSpan> Faults, IReadOnlyLis
                     var planned = SeriesExtractor.TryValue(e.Data, "duration_s", out var duration) && double.IsFinite(duration)
                         ? day + duration / SecondsPerDay
                         : double.NaN;
-                    open[name] = (faults.Count, planned);
-                    faults.Add(new FaultSpan(name, day, double.NaN, Cleared: false));
+                    _open[name] = (_faults.Count, planned);
+                    _faults.Add(new FaultSpan(name, day, double.NaN, Cleared: false));
                     break;
                 }
 
                 case FaultRecords.Cleared:
                 {
                     var name = Text(e.Data, "fault") ?? "fault";
-                    if (open.Remove(name, out var at)) faults[at.Index] = faults[at.Index] with { EndDay = day, Cleared = true };
+                    if (_open.Remove(name, out var at)) _faults[at.Index] = _faults[at.Index] with { EndDay = day, Cleared = true };
                     break;
                 }
 
                 case ProbeRecords.Regime:
-                    regimes.Add(new RegimeMark(day, Text(e.Data, "from") ?? "?", Text(e.Data, "to") ?? "?"));
+                    _regimes.Add(new RegimeMark(day, Text(e.Data, "from") ?? "?", Text(e.Data, "to") ?? "?"));
                     break;
             }
         }
 
-        // A fault still open at the end of the log (a truncated run, or one that outlived it) is drawn to its
-        // planned end when that is inside the log, else to the last event: it was active that long at least.
-        foreach (var (index, planned) in open.Values)
+        /// <summary>
+        /// A fault still open at the end of the log (a truncated run, or one that outlived it) is drawn to its
+        /// planned end when that is inside the log, else to the last event: it was active that long at least.
+        /// </summary>
+        public FaultTimeline Build(double lastDay)
         {
-            var end = double.IsNaN(planned) ? lastDay : Math.Min(planned, Math.Max(lastDay, faults[index].StartDay));
-            faults[index] = faults[index] with { EndDay = end };
-        }
+            var faults = _faults.ToList();
+            foreach (var (index, planned) in _open.Values)
+            {
+                var end = double.IsNaN(planned) ? lastDay : Math.Min(planned, Math.Max(lastDay, faults[index].StartDay));
+                faults[index] = faults[index] with { EndDay = end };
+            }
 
-        return new FaultTimeline(faults, regimes);
+            return new FaultTimeline(faults, _regimes.ToList());
+        }
     }
 
     private static string? Text(IReadOnlyList<RecordField> data, string name)

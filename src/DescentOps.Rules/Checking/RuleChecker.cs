@@ -497,6 +497,11 @@ public sealed class RuleChecker
         return failed ? null : new CompiledExclusion(new ComponentId(exclusion.Target.Text), exclusion.Rules.Select(r => r.Text).Distinct(StringComparer.Ordinal).ToArray());
     }
 
+    /// <summary>
+    /// Rules that command one target at one priority conflict unless an 'exclusive' block on that target holds both.
+    /// Each such group is reported once, naming its rules, in time near-linear in the rules and block members (a
+    /// thousand rules on one actuator are one error, not half a million).
+    /// </summary>
     private void CheckActuatorConflicts(RuleSetSyntax tree)
     {
         var commanders = new List<(RuleSyntax Rule, string Target, SourceLocation At)>();
@@ -508,37 +513,83 @@ public sealed class RuleChecker
             }
         }
 
-        foreach (var byTarget in commanders.GroupBy(c => c.Target, StringComparer.Ordinal))
+        var blocksByTarget = tree.Exclusions
+            .GroupBy(e => e.Target.Text, StringComparer.Ordinal)
+            .ToDictionary(g => g.Key, g => g.Select(e => e.Rules.Select(r => r.Text).ToHashSet(StringComparer.Ordinal)).ToArray(), StringComparer.Ordinal);
+        foreach (var group in commanders.GroupBy(c => (c.Target, c.Rule.Priority)))
         {
-            var list = byTarget.ToArray();
-            for (var j = 1; j < list.Length; j++)
-            {
-                for (var i = 0; i < j; i++)
-                {
-                    var (first, second) = (list[i].Rule, list[j].Rule);
-                    if (first.Priority != second.Priority || first.Name.Text == second.Name.Text || IsExcluded(tree, byTarget.Key, first.Name.Text, second.Name.Text))
-                    {
-                        continue;
-                    }
-
-                    Error(DiagnosticCode.ActuatorConflict, list[j].At,
-                        $"rules '{first.Name.Text}' (line {list[i].At.Line}) and '{second.Name.Text}' both command '{byTarget.Key}' at priority {second.Priority}: give them different priorities or declare 'exclusive {byTarget.Key} ({first.Name.Text}, {second.Name.Text})'");
-                }
-            }
+            // One entry per rule name: a rule that commands the target twice does not conflict with itself.
+            var members = group.GroupBy(c => c.Rule.Name.Text, StringComparer.Ordinal).Select(g => g.First()).ToArray();
+            if (members.Length < 2) continue;
+            var blocks = blocksByTarget.GetValueOrDefault(group.Key.Target) ?? [];
+            var conflicting = ConflictingMembers(members.Select(m => m.Rule.Name.Text).ToArray(), blocks);
+            if (conflicting.Count == 0) continue;
+            var listed = members.Where(m => conflicting.Contains(m.Rule.Name.Text)).ToArray();
+            var names = string.Join(", ", listed.Take(8).Select(m => $"'{m.Rule.Name.Text}' (line {m.At.Line})"));
+            var more = listed.Length > 8 ? $" and {listed.Length - 8} more" : "";
+            var example = $"exclusive {group.Key.Target} ({string.Join(", ", listed.Take(3).Select(m => m.Rule.Name.Text))}{(listed.Length > 3 ? ", ..." : "")})";
+            Error(DiagnosticCode.ActuatorConflict, listed[1].At,
+                $"{listed.Length} rules command '{group.Key.Target}' at priority {group.Key.Priority} and may act at once: {names}{more}; give them different priorities or declare '{example}'");
         }
     }
 
-    private static bool IsExcluded(RuleSetSyntax tree, string target, string a, string b) =>
-        tree.Exclusions.Any(e => e.Target.Text == target && e.Rules.Any(r => r.Text == a) && e.Rules.Any(r => r.Text == b));
+    /// <summary>The members not excluded from every other member by some block that holds both.</summary>
+    private static HashSet<string> ConflictingMembers(string[] members, HashSet<string>[] blocks)
+    {
+        var conflicting = new HashSet<string>(StringComparer.Ordinal);
+        var memberSet = members.ToHashSet(StringComparer.Ordinal);
+        // The usual cases in linear time: no block at all, or one block that holds the whole group.
+        if (blocks.Any(b => memberSet.IsSubsetOf(b))) return conflicting;
+        var blocksOf = new Dictionary<string, List<HashSet<string>>>(StringComparer.Ordinal);
+        foreach (var block in blocks)
+        {
+            foreach (var name in block.Where(memberSet.Contains))
+            {
+                if (!blocksOf.TryGetValue(name, out var list)) blocksOf[name] = list = [];
+                list.Add(block);
+            }
+        }
+
+        foreach (var name in members)
+        {
+            if (!blocksOf.TryGetValue(name, out var own))
+            {
+                conflicting.Add(name);
+                continue;
+            }
+
+            // Partners this rule is excluded from; stop as soon as they cover the group.
+            var partners = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var block in own)
+            {
+                foreach (var other in block)
+                {
+                    if (memberSet.Contains(other)) partners.Add(other);
+                }
+
+                if (partners.Count == members.Length) break;
+            }
+
+            if (partners.Count < members.Length) conflicting.Add(name);
+        }
+
+        return conflicting;
+    }
 
     private void WarnAboutUnusedExclusions(RuleSetSyntax tree)
     {
+        var byName = new Dictionary<string, HashSet<string>>(StringComparer.Ordinal);
+        foreach (var rule in tree.Rules)
+        {
+            if (byName.ContainsKey(rule.Name.Text)) continue;
+            byName[rule.Name.Text] = AllSends(rule).Select(s => s.Target.Text).ToHashSet(StringComparer.Ordinal);
+        }
+
         foreach (var exclusion in tree.Exclusions)
         {
             foreach (var name in exclusion.Rules)
             {
-                var rule = tree.Rules.FirstOrDefault(r => r.Name.Text == name.Text);
-                if (rule is not null && !AllSends(rule).Any(s => s.Target.Text == exclusion.Target.Text))
+                if (byName.TryGetValue(name.Text, out var targets) && !targets.Contains(exclusion.Target.Text))
                 {
                     Warning(DiagnosticCode.UnusedExclusion, name.Location, $"rule '{name.Text}' never commands '{exclusion.Target.Text}'");
                 }
@@ -549,24 +600,32 @@ public sealed class RuleChecker
     private void WarnAboutRulesThatCannotAct(RuleSetSyntax tree, IReadOnlyList<CompiledRule> compiled)
     {
         var neverFires = new HashSet<string>(StringComparer.Ordinal);
+        var conditionAt = new Dictionary<string, SourceLocation>(StringComparer.Ordinal);
+        foreach (var syntax in tree.Rules)
+        {
+            if (syntax.Condition is { } condition) conditionAt.TryAdd(syntax.Name.Text, condition.Location);
+        }
+
         foreach (var rule in compiled)
         {
             if (BoundsAnalysis.CanNeverHold(rule.Condition, _catalogue))
             {
                 neverFires.Add(rule.Name);
-                var at = tree.Rules.First(r => r.Name.Text == rule.Name).Condition!.Location;
+                var at = conditionAt.GetValueOrDefault(rule.Name, rule.Location);
                 Warning(DiagnosticCode.ContradictoryBounds, at, $"rule '{rule.Name}' can never fire: no telemetry satisfies its condition (bounds contradict each other or the physical range)");
             }
         }
 
         // A rule can become enabled only through a rule that can itself be enabled and can fire.
+        var byName = new Dictionary<string, CompiledRule>(StringComparer.Ordinal);
+        foreach (var rule in compiled) byName.TryAdd(rule.Name, rule);
         var enabled = compiled.Where(r => r.StartsEnabled).Select(r => r.Name).ToHashSet(StringComparer.Ordinal);
         var frontier = new Queue<string>(compiled.Where(r => r.StartsEnabled).Select(r => r.Name));
         while (frontier.Count > 0)
         {
             var name = frontier.Dequeue();
-            var rule = compiled.First(r => r.Name == name);
-            if (neverFires.Contains(rule.Name))
+            // A rule with errors is not compiled: it cannot enable anything (and is reported already).
+            if (!byName.TryGetValue(name, out var rule) || neverFires.Contains(rule.Name))
             {
                 continue;
             }

@@ -1,4 +1,4 @@
-using System.Globalization;
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Text;
 
 namespace DescentOps.Rules.Syntax;
@@ -69,8 +69,15 @@ internal static class RuleLexer
             var numberLength = NumberLength(text, i);
             if (numberLength > 0)
             {
+                // "1,5 kW" or "1_500 m": a decimal comma or digit grouping is one bad number, not a number and a comma.
+                while (i + numberLength + 1 < text.Length && text[i + numberLength] is ',' or '_' or '\'' && char.IsAsciiDigit(text[i + numberLength + 1]))
+                {
+                    numberLength += 2;
+                    while (i + numberLength < text.Length && char.IsAsciiDigit(text[i + numberLength])) numberLength++;
+                }
+
                 var lexeme = text.Substring(i, numberLength);
-                var parsed = double.TryParse(lexeme, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) && double.IsFinite(value)
+                var parsed = StrictNumber.Length(lexeme) == lexeme.Length && StrictNumber.TryConvert(lexeme, out var value, out _)
                     ? value
                     : double.NaN;
                 tokens.Add(new Token(TokenKind.Number, lexeme, parsed, location, firstOnLine));

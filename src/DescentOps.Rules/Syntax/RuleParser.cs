@@ -1,3 +1,4 @@
+using DescentOps.Primitives.Units;
 using System.Globalization;
 using DescentOps.Rules.Text;
 
@@ -475,7 +476,7 @@ public sealed class RuleParser
 
         if (double.IsNaN(number.NumberValue))
         {
-            throw Fail(DiagnosticCode.InvalidNumber, number.Location, $"'{number.Text}' is too large to be a number");
+            throw Fail(DiagnosticCode.InvalidNumber, number.Location, StrictNumber.WhyNot(number.Text, StrictNumber.Length(number.Text)) ?? $"'{number.Text}' is too large to be a number");
         }
 
         Next();

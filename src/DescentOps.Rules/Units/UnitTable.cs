@@ -1,54 +1,42 @@
+using DescentOps.Primitives.Units;
+
 namespace DescentOps.Rules.Units;
 
 /// <summary>
-/// The unit symbols rule text may use. The table is our own rather than a general unit library's because rule
-/// text must resolve a unit without knowing what it is for ("m" must be a metre, never a minute), must build
-/// rates from any unit over any time unit ("kW/min", "K/h"), and must treat a temperature rate as a difference.
-/// Symbols are case-sensitive ("mW" is a milliwatt, "MW" a megawatt).
+/// The unit symbols rule text may use: those of the shared <see cref="UnitCatalog"/> (the table scenario files and the
+/// command line read) whose dimension a telemetry point or command argument can have. Rule text must resolve a unit
+/// without knowing what it is for, and the catalogue gives every symbol one meaning per dimension ("m" is a metre,
+/// never a minute; "rad" is an angle here, as rules have no doses). Rates are built from any unit over any time unit
+/// ("kW/min", "K/h"), and a temperature rate is a difference. Symbols are case-sensitive ("mW" is a milliwatt, "MW"
+/// a megawatt).
 /// </summary>
 public static class UnitTable
 {
     private static readonly UnitDefinition[] Definitions =
     [
-        new("m", Dimension.Length, 1.0),
-        new("km", Dimension.Length, 1000.0),
-        new("cm", Dimension.Length, 0.01),
-        new("mm", Dimension.Length, 0.001),
-        new("s", Dimension.Duration, 1.0),
-        new("ms", Dimension.Duration, 0.001),
-        new("min", Dimension.Duration, 60.0),
-        new("h", Dimension.Duration, 3600.0),
-        new("d", Dimension.Duration, 86400.0),
-        new("K", Dimension.Temperature, 1.0),
-        new("°C", Dimension.Temperature, 1.0, 273.15),
-        new("degC", Dimension.Temperature, 1.0, 273.15),
-        new("W", Dimension.Power, 1.0),
-        new("mW", Dimension.Power, 0.001),
-        new("kW", Dimension.Power, 1000.0),
-        new("MW", Dimension.Power, 1.0e6),
-        new("J", Dimension.Energy, 1.0),
-        new("kJ", Dimension.Energy, 1000.0),
-        new("MJ", Dimension.Energy, 1.0e6),
-        new("Wh", Dimension.Energy, 3600.0),
-        new("kWh", Dimension.Energy, 3.6e6),
-        new("rad", Dimension.Angle, 1.0),
-        new("deg", Dimension.Angle, Math.PI / 180.0),
-        new("°", Dimension.Angle, Math.PI / 180.0),
-        new("V", Dimension.Voltage, 1.0),
-        new("mV", Dimension.Voltage, 0.001),
-        new("kV", Dimension.Voltage, 1000.0),
-        new("A", Dimension.Current, 1.0),
-        new("mA", Dimension.Current, 0.001),
-        new("Pa", Dimension.Pressure, 1.0),
-        new("kPa", Dimension.Pressure, 1000.0),
-        new("MPa", Dimension.Pressure, 1.0e6),
-        new("bar", Dimension.Pressure, 1.0e5),
-        new("kg", Dimension.Mass, 1.0),
-        new("g", Dimension.Mass, 0.001),
-        new("Hz", Dimension.Frequency, 1.0),
-        new("kHz", Dimension.Frequency, 1000.0),
-        new("%", Dimension.Dimensionless, 0.01),
+        .. UnitCatalog.All
+            .Where(u => RuleDimension(u.Dimension) is not null)
+            .Select(u => new UnitDefinition(u.Symbol, RuleDimension(u.Dimension)!.Value, u.ScaleToSi, u.OffsetToSi)),
     ];
+
+    /// <summary>The rule language's dimension for a catalogue dimension, or null for those no point or argument has.</summary>
+    private static Dimension? RuleDimension(PhysicalDimension dimension) => dimension switch
+    {
+        PhysicalDimension.Dimensionless => Dimension.Dimensionless,
+        PhysicalDimension.Length => Dimension.Length,
+        PhysicalDimension.Duration => Dimension.Duration,
+        PhysicalDimension.Speed => Dimension.Speed,
+        PhysicalDimension.Temperature => Dimension.Temperature,
+        PhysicalDimension.Power => Dimension.Power,
+        PhysicalDimension.Energy => Dimension.Energy,
+        PhysicalDimension.Angle => Dimension.Angle,
+        PhysicalDimension.Voltage => Dimension.Voltage,
+        PhysicalDimension.Current => Dimension.Current,
+        PhysicalDimension.Pressure => Dimension.Pressure,
+        PhysicalDimension.Mass => Dimension.Mass,
+        PhysicalDimension.Frequency => Dimension.Frequency,
+        _ => null,
+    };
 
     private static readonly Dictionary<string, UnitDefinition> BySymbol = Definitions.ToDictionary(d => d.Symbol, StringComparer.Ordinal);
 

@@ -1,8 +1,8 @@
-using UnitsNet;
+using DescentOps.Primitives.Units;
 
 namespace DescentOps.Scenarios.Format;
 
-/// <summary>The physical dimensions a scenario value can carry, each with the UnitsNet type that parses it.</summary>
+/// <summary>The physical dimensions a scenario value can carry.</summary>
 public enum QuantityKind
 {
     Length,
@@ -22,31 +22,41 @@ public enum QuantityKind
 
     /// <summary>A dimensionless share (a state of charge, a buffer's fill): a percentage or a bare number.</summary>
     Ratio,
-    /// <summary>Absorbed dose per time, written as a dose over one unit of duration ("5 Gy/d"); UnitsNet has no such quantity.</summary>
+    /// <summary>Absorbed dose per time, written as a dose over one unit of duration ("5 Gy/d").</summary>
     AbsorbedDoseRate,
 }
 
 public static class QuantityKindInfo
 {
-    public static Type UnitsNetType(this QuantityKind kind) => kind switch
+    /// <summary>What the kind's units measure in the shared unit table.</summary>
+    public static PhysicalDimension Dimension(this QuantityKind kind) => kind switch
     {
-        QuantityKind.Length => typeof(Length),
-        QuantityKind.Power => typeof(Power),
-        QuantityKind.Temperature => typeof(Temperature),
-        QuantityKind.Duration => typeof(Duration),
-        QuantityKind.Mass => typeof(Mass),
-        QuantityKind.Speed => typeof(Speed),
-        QuantityKind.Acceleration => typeof(Acceleration),
-        QuantityKind.Energy => typeof(Energy),
-        QuantityKind.MassFraction => typeof(MassFraction),
-        QuantityKind.Pressure => typeof(Pressure),
-        QuantityKind.Angle => typeof(Angle),
-        QuantityKind.Frequency => typeof(Frequency),
-        QuantityKind.AbsorbedDose => typeof(AbsorbedDoseOfIonizingRadiation),
-        QuantityKind.Density => typeof(Density),
-        QuantityKind.Ratio => typeof(Ratio),
-        QuantityKind.AbsorbedDoseRate => throw new ArgumentException("A dose rate is parsed as a dose over a duration, not by UnitsNet.", nameof(kind)),
+        QuantityKind.Length => PhysicalDimension.Length,
+        QuantityKind.Power => PhysicalDimension.Power,
+        QuantityKind.Temperature => PhysicalDimension.Temperature,
+        QuantityKind.Duration => PhysicalDimension.Duration,
+        QuantityKind.Mass => PhysicalDimension.Mass,
+        QuantityKind.Speed => PhysicalDimension.Speed,
+        QuantityKind.Acceleration => PhysicalDimension.Acceleration,
+        QuantityKind.Energy => PhysicalDimension.Energy,
+        QuantityKind.MassFraction => PhysicalDimension.MassFraction,
+        QuantityKind.Pressure => PhysicalDimension.Pressure,
+        QuantityKind.Angle => PhysicalDimension.Angle,
+        QuantityKind.Frequency => PhysicalDimension.Frequency,
+        QuantityKind.AbsorbedDose => PhysicalDimension.AbsorbedDose,
+        QuantityKind.Density => PhysicalDimension.Density,
+        QuantityKind.Ratio => PhysicalDimension.Dimensionless,
+        QuantityKind.AbsorbedDoseRate => throw new ArgumentException("A dose rate is read as a dose over a duration.", nameof(kind)),
         _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, null),
+    };
+
+    /// <summary>The kind as a word in messages ("a mass fraction").</summary>
+    public static string Word(this QuantityKind kind) => kind switch
+    {
+        QuantityKind.MassFraction => "mass fraction",
+        QuantityKind.AbsorbedDose => "absorbed dose",
+        QuantityKind.AbsorbedDoseRate => "dose rate",
+        _ => kind.ToString().ToLowerInvariant(),
     };
 
     /// <summary>The SI unit the loader converts to, as written in messages and the schema.</summary>

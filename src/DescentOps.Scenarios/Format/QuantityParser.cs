@@ -1,44 +1,20 @@
-using System.Globalization;
-using System.Text.RegularExpressions;
-using UnitsNet;
+using DescentOps.Primitives.Units;
 
 namespace DescentOps.Scenarios.Format;
 
 /// <summary>
-/// Reads "12 cm", "5kW", "250K", "400 d" into SI numbers with UnitsNet, culture-invariant. Shared by the
-/// scenario loader and the command line so both accept exactly the same spellings.
+/// Reads "12 cm", "5kW", "250K", "400 d" into SI numbers against the one unit table (<see cref="UnitCatalog"/>),
+/// strictly: no decimal commas or digit grouping, no case folding of units, nothing that is not finite. Shared by
+/// the scenario loader and the command line so both accept exactly the same spellings.
 /// </summary>
-public static partial class QuantityParser
+public static class QuantityParser
 {
     public static bool TryParseSi(QuantityKind kind, string text, out double valueSi, out string error)
     {
-        var trimmed = text.Trim();
-        if (kind == QuantityKind.AbsorbedDoseRate) return TryParseDoseRate(trimmed, out valueSi, out error);
-        if (kind == QuantityKind.Ratio && NumberOnly().IsMatch(trimmed))
-        {
-            // A share needs no unit: "0.5" is a half, as "50 %" is.
-            valueSi = double.Parse(trimmed, CultureInfo.InvariantCulture);
-            error = "";
-            return true;
-        }
-
-        if (Quantity.TryParse(CultureInfo.InvariantCulture, kind.UnitsNetType(), trimmed, out IQuantity? quantity))
-        {
-            // UnitsNet's base unit is SI for every kind used here except angles (degrees there, radians here).
-            Enum target = kind == QuantityKind.Angle ? UnitsNet.Units.AngleUnit.Radian : quantity.QuantityInfo.BaseUnitInfo.Value;
-            valueSi = (double)UnitConverter.Convert(quantity.Value, quantity.Unit, target);
-            if (double.IsFinite(valueSi))
-            {
-                error = "";
-                return true;
-            }
-        }
-
-        valueSi = double.NaN;
-        error = NumberOnly().IsMatch(trimmed)
-            ? $"a unit is required, e.g. '{trimmed} {kind.ExampleUnits().Split(',')[0]}'"
-            : $"'{text}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()})";
-        return false;
+        if (kind == QuantityKind.AbsorbedDoseRate) return TryParseDoseRate(text.Trim(), out valueSi, out error);
+        // A share needs no unit: "0.5" is a half, as "50 %" is.
+        double? bare = kind == QuantityKind.Ratio ? 1.0 : null;
+        return QuantityText.TryParseSi(text, kind.Dimension(), kind.Word(), out valueSi, out error, bare);
     }
 
     /// <summary>A dose over one unit of a duration, split at the last '/': "0.5 Gy/d" is 0.5 Gy per day.</summary>
@@ -46,20 +22,18 @@ public static partial class QuantityParser
     {
         var slash = text.LastIndexOf('/');
         if (slash > 0
-            && TryParseSi(QuantityKind.AbsorbedDose, text[..slash], out var doseGy, out _)
-            && TryParseSi(QuantityKind.Duration, "1 " + text[(slash + 1)..].Trim(), out var perS, out _)
-            && perS > 0)
+            && QuantityText.TryParseSi(text[..slash], PhysicalDimension.AbsorbedDose, "dose", out var doseGy, out var doseError)
+            && UnitCatalog.TryFind(text[(slash + 1)..].Trim(), PhysicalDimension.Duration, out var per))
         {
-            valueSi = doseGy / perS;
+            valueSi = doseGy / per.ToSi(1.0);
             error = "";
             return true;
         }
 
         valueSi = double.NaN;
-        error = $"'{text}' is not a dose rate (a dose over a duration: {QuantityKind.AbsorbedDoseRate.ExampleUnits()})";
+        error = slash > 0 && StrictNumber.WhyNot(text, StrictNumber.Length(text)) is { } why
+            ? why
+            : $"'{text}' is not a dose rate (a dose over a duration: {QuantityKind.AbsorbedDoseRate.ExampleUnits()})";
         return false;
     }
-
-    [GeneratedRegex(@"^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$")]
-    private static partial Regex NumberOnly();
 }

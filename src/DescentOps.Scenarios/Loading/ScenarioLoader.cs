@@ -56,6 +56,11 @@ public static class ScenarioLoader
         string text;
         try
         {
+            if (new FileInfo(path).Length > YamlBounds.MaxBytes)
+            {
+                throw new ScenarioException([new ScenarioError(new SourceLocation(path, 1, 1), "", $"the file is {new FileInfo(path).Length:N0} bytes; a scenario may hold at most {YamlBounds.MaxBytes:N0}")]);
+            }
+
             text = File.ReadAllText(path, Encoding.UTF8);
         }
         catch (Exception exception) when (exception is IOException or UnauthorizedAccessException)
@@ -70,8 +75,8 @@ public static class ScenarioLoader
     public static Scenario LoadText(string text, string sourceName, ISet<string>? readPaths = null)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths);
-        var scenario = Build(root, sourceName, text);
+        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
+        var scenario = Build(root, sourceName, text) with { FieldLocations = locations };
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -343,7 +348,7 @@ public static class ScenarioLoader
     public static ScenarioChange LoadChange(string text, string sourceName)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null);
+        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out _);
         var added = root.List("add_faults");
         var faults = added.Select(BuildFault).ToList();
         for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
@@ -353,12 +358,13 @@ public static class ScenarioLoader
     }
 
     /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
-    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths)
+    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths, out IReadOnlyDictionary<string, SourceLocation> locations)
     {
         var stream = new YamlStream();
         var parser = new Parser(new StringReader(text));
         try
         {
+            YamlBounds.Check(text, sourceName);
             stream.Load(parser);
         }
         catch (YamlException exception)
@@ -381,6 +387,7 @@ public static class ScenarioLoader
 
         var binder = new YamlBinder(sourceName, errors, readPaths);
         var root = binder.BindSection(stream.Documents[0].RootNode, spec, "");
+        locations = binder.Locations;
         if (errors.Count > 0 || root is null)
         {
             throw new ScenarioException([.. errors.OrderBy(e => e.Location.Line).ThenBy(e => e.Location.Column)]);
@@ -439,10 +446,11 @@ public static class ScenarioLoader
         var lines = text.Split('\n');
         var valueLine = at.Line - 1 < lines.Length ? lines[at.Line - 1] : "";
         var startsBlock = at.Column - 1 < valueLine.Length && valueLine[at.Column - 1] is '|' or '>';
-        if (!startsBlock) return new RulesSource(rules, at, at.Column - 1);
+        var positions = ScalarPositionMap.Build(text, at, rules);
+        if (!startsBlock) return new RulesSource(rules, at, at.Column - 1) { Positions = positions };
         var first = Array.FindIndex(lines, at.Line, l => l.Trim().Length > 0);
         var indent = first < 0 ? 0 : lines[first].Length - lines[first].TrimStart(' ').Length;
-        return new RulesSource(rules, new SourceLocation(at.File, at.Line + 1, 1), indent);
+        return new RulesSource(rules, new SourceLocation(at.File, at.Line + 1, 1), indent) { Positions = positions };
     }
 
     /// <summary>Rules that tie fields together, which the per-field bounds cannot express.</summary>

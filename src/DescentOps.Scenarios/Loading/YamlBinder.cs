@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text.RegularExpressions;
+using DescentOps.Primitives.Units;
 using DescentOps.Scenarios.Format;
 using YamlDotNet.RepresentationModel;
 
@@ -14,6 +15,9 @@ internal sealed partial class YamlBinder
     private readonly string _file;
     private readonly List<ScenarioError> _errors;
     private readonly ISet<string>? _readPaths;
+
+    /// <summary>Where every bound field's value stands, by field path.</summary>
+    public Dictionary<string, SourceLocation> Locations { get; } = new(StringComparer.Ordinal);
 
     public YamlBinder(string file, List<ScenarioError> errors, ISet<string>? readPaths)
     {
@@ -50,6 +54,7 @@ internal sealed partial class YamlBinder
             }
 
             locations[key] = Locate(valueNode);
+            Locations[fieldPath] = locations[key];
             if (BindValue(valueNode, field, fieldPath) is { } value) values[key] = value;
         }
 
@@ -94,7 +99,8 @@ internal sealed partial class YamlBinder
 
         // Named entries (vehicles, faults) must be told apart; unnamed ones (depth intervals) need not be.
         if (!spec.Item.Fields.Any(f => f.Name == "name")) return items;
-        var duplicate = items.GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
+        // An entry whose name was refused has none here; it is reported already.
+        var duplicate = items.Where(i => i.OptionalText("name") is not null).GroupBy(i => i.Text("name")).FirstOrDefault(g => g.Count() > 1);
         if (duplicate is not null)
         {
             var second = duplicate.Skip(1).First();
@@ -119,9 +125,9 @@ internal sealed partial class YamlBinder
     private object? BindNumber(YamlNode node, NumberField spec, string path)
     {
         if (Scalar(node, path, "a number") is not { } text) return null;
-        if (!double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+        if (!StrictNumber.TryParse(text, out var value, out var error))
         {
-            Error(node, path, $"'{text}' is not a number");
+            Error(node, path, error);
             return null;
         }
 
@@ -133,7 +139,7 @@ internal sealed partial class YamlBinder
         if (Scalar(node, path, "a whole number") is not { } text) return null;
         if (!long.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value))
         {
-            Error(node, path, $"'{text}' is not a whole number");
+            Error(node, path, StrictNumber.WhyNot(text.Trim(), StrictNumber.Length(text.Trim())) ?? $"'{text}' is not a whole number");
             return null;
         }
 
@@ -157,6 +163,13 @@ internal sealed partial class YamlBinder
     private string? BindText(YamlNode node, TextField spec, string path)
     {
         if (Scalar(node, path, "text") is not { } text) return null;
+        // A name, identifier or word is one line: "Wendlow\n" from a block scalar would name a different probe in every log.
+        if (spec.Name is not ("description" or "rules" or "when") && text.AsSpan().IndexOfAny('\n', '\r') >= 0)
+        {
+            Error(node, path, $"'{text.ReplaceLineEndings("\\n")}' holds a line break; this field is one line of text");
+            return null;
+        }
+
         if (spec.IsIdentifier && !Identifier().IsMatch(text))
         {
             Error(node, path, $"'{text}' is not an identifier (lowercase letters, digits and '-', starting with a letter)");

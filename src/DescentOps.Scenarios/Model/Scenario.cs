@@ -20,4 +20,19 @@ public sealed record Scenario(
     string SourceText,
     PowerModel? Power = null,
     AcousticsModel? Acoustics = null,
-    RelayPlanModel? Relays = null);
+    RelayPlanModel? Relays = null)
+{
+    /// <summary>Where each field's value stands in the file, by field path ("probe.radius", "faults[0].at"): checks made after loading are located with it.</summary>
+    public IReadOnlyDictionary<string, Loading.SourceLocation> FieldLocations { get; init; } = new Dictionary<string, Loading.SourceLocation>();
+
+    /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
+    public Loading.SourceLocation LocationOf(string fieldPath)
+    {
+        for (var path = fieldPath; path.Length > 0; path = path.Contains('.', StringComparison.Ordinal) ? path[..path.LastIndexOf('.')] : "")
+        {
+            if (FieldLocations.TryGetValue(path, out var at)) return at;
+        }
+
+        return new Loading.SourceLocation(SourceName, 1, 1);
+    }
+}

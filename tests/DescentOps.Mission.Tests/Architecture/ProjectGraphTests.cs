@@ -22,7 +22,9 @@ public sealed class ProjectGraphTests
         ["DescentOps.Journal"] = ["DescentOps.Records"],
         ["DescentOps.Reports"] = ["DescentOps.Journal"],
         ["DescentOps.Mission"] = ["DescentOps.Physics", "DescentOps.Engine", "DescentOps.Scenarios", "DescentOps.Rules"],
-        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports"],
+        ["DescentOps.Rehearsal"] = ["DescentOps.Mission", "DescentOps.Journal"],
+        ["DescentOps.Rehearsal.Web"] = ["DescentOps.Rehearsal"],
+        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports", "DescentOps.Rehearsal.Web"],
     };
 
     /// <summary>Projects whose whole reference closure must be free of the actor framework.</summary>

@@ -21,8 +21,8 @@ public class SaltAndFractureTests
         var saltyK = SalineIce.MeltingTemperatureK(10.0, NormalPressurePa);
         Assert.InRange(pureK - saltyK, 0.50, 0.60);
 
-        var pure = SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.21);
-        var salty = SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.21, saltyK);
+        var pure = SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.0);
+        var salty = SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.0, saltyK);
 
         Assert.True(salty.VelocityMPerS > pure.VelocityMPerS);
         // Computed: the sensible heat per kilogram of melted ice falls by the heat to warm it from T_m,salty to T_m,pure;
@@ -41,9 +41,9 @@ public class SaltAndFractureTests
     public void AMeltingPointAbovePureIceOrFarBelowItIsRefusedByName()
     {
         var pureK = MeltingCurve.TemperatureK(NormalPressurePa);
-        var above = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.21, pureK + 0.1));
+        var above = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.0, pureK + 0.1));
         Assert.Contains("meltingTemperatureK", above.Message, StringComparison.Ordinal);
-        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.21, pureK - 5));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.0, pureK - 5));
     }
 
     [Fact]

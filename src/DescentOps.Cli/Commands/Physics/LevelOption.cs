@@ -1,11 +1,12 @@
 using System.CommandLine;
 using System.Globalization;
+using DescentOps.Primitives.Units;
 
 namespace DescentOps.Cli.Commands.Physics;
 
 /// <summary>
-/// An option carrying a logarithmic level or ratio ("-11", "-11 dBm", "3 dB"). UnitsNet has no such kinds for
-/// every reference we need (dB re 1 µPa, dBi), so the number is read invariantly and the unit, if written, must be
+/// An option carrying a logarithmic level or ratio ("-11", "-11 dBm", "3 dB"). The unit table has no levels
+/// (dB re 1 µPa, dBi are references, not units), so the number is read strictly and the unit, if written, must be
 /// the one the option expects: "3 dB" for a power in dBm would be a slip, and is refused.
 /// </summary>
 internal sealed class LevelOption
@@ -40,10 +41,10 @@ internal sealed class LevelOption
         var text = parse.GetValue(Option);
         if (text is null) return _default;
         var number = text.Trim();
-        if (number.EndsWith(Unit, StringComparison.OrdinalIgnoreCase)) number = number[..^Unit.Length].TrimEnd();
-        if (!double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out var value) || !double.IsFinite(value))
+        if (number.EndsWith(Unit, StringComparison.Ordinal)) number = number[..^Unit.Length].TrimEnd();
+        if (!StrictNumber.TryParse(number, out var value, out var error))
         {
-            throw new UsageException($"{Name}: '{text}' is not a level in {Unit} (write e.g. '-11 {Unit}' or '-11')");
+            throw new UsageException($"{Name}: '{text}' is not a level in {Unit} (write e.g. '-11 {Unit}' or '-11'): {error}");
         }
 
         return value;

@@ -60,7 +60,7 @@ internal sealed class QuantityOption
             throw new UsageException($"{Name}: {error}");
         }
 
-        // UnitsNet reads "-5 K" happily; no temperature model can, so say so here, naming the option.
+        // The parser reads "-5 K" as a number like any other; no temperature model can take it, so say so here, naming the option.
         if (Kind == QuantityKind.Temperature && value <= 0)
         {
             throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"{Name}: {value:R} K is at or below absolute zero; a thermodynamic temperature must be positive."));

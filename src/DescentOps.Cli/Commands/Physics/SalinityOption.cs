@@ -1,5 +1,5 @@
 using System.CommandLine;
-using System.Globalization;
+using DescentOps.Primitives.Units;
 using DescentOps.Scenarios.Format;
 
 namespace DescentOps.Cli.Commands.Physics;
@@ -35,17 +35,17 @@ internal sealed class SalinityOption
     {
         ArgumentNullException.ThrowIfNull(parse);
         var text = (parse.GetValue(Option) ?? throw new UsageException($"{Name} is required.")).Trim();
-        var number = text.EndsWith("psu", StringComparison.OrdinalIgnoreCase) ? text[..^3].TrimEnd() : text;
-        if (double.TryParse(number, NumberStyles.Float, CultureInfo.InvariantCulture, out var practical) && double.IsFinite(practical))
+        var number = text.EndsWith("psu", StringComparison.Ordinal) ? text[..^3].TrimEnd() : text;
+        if (StrictNumber.TryParse(number, out var practical, out _))
         {
             return practical;
         }
 
-        if (QuantityParser.TryParseSi(QuantityKind.MassFraction, text, out var kgPerKg, out _))
+        if (QuantityParser.TryParseSi(QuantityKind.MassFraction, text, out var kgPerKg, out var error))
         {
             return kgPerKg * 1000.0 / ReferenceSalinityRatioGPerKg;
         }
 
-        throw new UsageException($"{Name}: '{text}' is not a salinity (write e.g. '35', '35 psu' or '35.2 g/kg')");
+        throw new UsageException($"{Name}: '{text}' is not a salinity (write e.g. '35', '35 psu' or '35.2 g/kg'): {error}");
     }
 }

@@ -1,0 +1,59 @@
+using System.Globalization;
+using DescentOps.Rules.Compiled;
+using DescentOps.Rules.Syntax;
+
+namespace DescentOps.Rehearsal;
+
+/// <summary>
+/// One limit check of the team's rules (a point against a threshold, inside any rule's condition), which the team's
+/// view marks as within or beyond on every frame that reaches the ground.
+/// </summary>
+public sealed record RuleLimit(string Rule, string Placement, string Point, Threshold Threshold)
+{
+    /// <summary>True when the check's comparison holds (the rule's limit is crossed); null when the frame lacks the point.</summary>
+    public bool? Crossed(IReadOnlyDictionary<string, double> readings) =>
+        readings.TryGetValue(Point, out var value) ? Threshold.Holds(value) : null;
+
+    public string Describe() => Threshold.Kind switch
+    {
+        Comparison.Above => $"{Point} above {Number(Threshold.LowerSi)}",
+        Comparison.Below => $"{Point} below {Number(Threshold.UpperSi)}",
+        Comparison.Inside => $"{Point} inside {Number(Threshold.LowerSi)} to {Number(Threshold.UpperSi)}",
+        _ => $"{Point} outside {Number(Threshold.LowerSi)} to {Number(Threshold.UpperSi)}",
+    };
+
+    /// <summary>Every limit check in a rule set, rule by rule, in the order written.</summary>
+    public static IReadOnlyList<RuleLimit> Of(CompiledRuleSet rules)
+    {
+        var limits = new List<RuleLimit>();
+        foreach (var rule in rules.Rules) Collect(rule.Name, rule.Placement.ToString().ToLowerInvariant(), rule.Condition, limits);
+        return limits;
+    }
+
+    private static void Collect(string rule, string placement, CompiledCondition condition, List<RuleLimit> into)
+    {
+        switch (condition)
+        {
+            case LimitCondition limit:
+                into.Add(new RuleLimit(rule, placement, limit.Point, limit.Threshold));
+                break;
+            case AllOfCondition all:
+                foreach (var operand in all.Operands) Collect(rule, placement, operand, into);
+                break;
+            case AnyOfCondition any:
+                foreach (var operand in any.Operands) Collect(rule, placement, operand, into);
+                break;
+            case NotCondition not:
+                Collect(rule, placement, not.Operand, into);
+                break;
+            case HoldsForDurationCondition held:
+                Collect(rule, placement, held.Operand, into);
+                break;
+            case HoldsForSamplesCondition samples:
+                Collect(rule, placement, samples.Operand, into);
+                break;
+        }
+    }
+
+    private static string Number(double si) => si.ToString("G4", CultureInfo.InvariantCulture) + " (SI)";
+}
