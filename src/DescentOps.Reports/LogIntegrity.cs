@@ -12,9 +12,21 @@ namespace DescentOps.Reports;
 /// <param name="Detail">One sentence for an operator, from the verifier.</param>
 public sealed record LogIntegrity(LogState State, long? Line, string Detail)
 {
-    public static LogIntegrity Check(string path)
+    /// <param name="path">The log.</param>
+    /// <param name="progress">Called now and then with the share of the log verified (0 to 1).</param>
+    public static LogIntegrity Check(string path, Action<double>? progress = null)
     {
-        var report = JournalVerifier.Verify(path);
+        VerificationReport report;
+        if (progress is null)
+        {
+            report = JournalVerifier.Verify(path);
+        }
+        else
+        {
+            using var stream = ReadProgressStream.OpenFile(path, progress);
+            report = JournalVerifier.Verify(stream);
+        }
+
         return report.Failure switch
         {
             VerificationFailure.None => new LogIntegrity(LogState.Intact, null, report.Detail),

@@ -99,12 +99,16 @@ public sealed class RunLog
     /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
     public static RunLog Load(string path) => Load(path, ReportPlots.Default.SelectMany(p => p.Series));
 
+    /// <summary>Reads the log once, gathering the series of the default plots and reporting the share read.</summary>
+    /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
+    public static RunLog Load(string path, Action<double>? progress) => Load(path, ReportPlots.Default.SelectMany(p => p.Series), progress);
+
     /// <summary>Reads the log once, gathering the given series.</summary>
     /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
-    public static RunLog Load(string path, IEnumerable<SeriesDefinition> series)
+    public static RunLog Load(string path, IEnumerable<SeriesDefinition> series, Action<double>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(series);
-        using var reader = JournalReader.Open(path);
+        using var reader = progress is null ? JournalReader.Open(path) : new JournalReader(ReadProgressStream.OpenFile(path, progress));
         ManifestEntry? manifest = null;
         var digest = new Digest(series.Distinct());
         foreach (var entry in reader.ReadAll())

@@ -149,6 +149,14 @@ public sealed class CheckerTests
     }
 
     [Fact]
+    public void A_range_in_a_message_carries_its_SI_unit()
+    {
+        // The test catalogue's head takes 0 to 8000 W and its temperature point reads 0 to 1000 K.
+        Assert.Contains("(0 W to 8000 W)", SingleError(Rule("probe.mode is safe", "send probe.head set_power(power = 9 kW)")).Message, StringComparison.Ordinal);
+        Assert.Contains("(0 K to 1000 K)", SingleError(Rule("probe.head_temp above 1200 K")).Message, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Enabling_an_unknown_rule_is_an_error()
     {
         // "then { enable " is 14 characters.

@@ -1,4 +1,5 @@
 using DescentOps.Primitives.Identity;
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Text;
@@ -31,17 +32,17 @@ public sealed class LanguageDocumentTests
         // The example's catalogue: ranges are round numbers for the invented probe, not a design.
         var catalogue = new TelemetryCatalogue(
             [
-                new NumericPointSpec("probe.head_temp", Dimension.Temperature, 0.0, 1000.0),
-                new NumericPointSpec("probe.depth", Dimension.Length, 0.0, 5000.0),
+                new NumericPointSpec("probe.head_temp", PhysicalDimension.Temperature, 0.0, 1000.0),
+                new NumericPointSpec("probe.depth", PhysicalDimension.Length, 0.0, 5000.0),
                 new DiscretePointSpec("probe.mode", ["descending", "paused", "safe"]),
                 new DiscretePointSpec("station.link", ["up", "down"]),
             ],
             [
-                new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0.0, 8000.0)]),
+                new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0.0, 8000.0)]),
                 new CommandSpec(new ComponentId("probe"), "pause_descent", []),
                 new CommandSpec(new ComponentId("probe"), "enter_safe_mode", []),
                 new CommandSpec(new ComponentId("wisp-1"), "recall", []),
-                new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", Dimension.Dimensionless, 1.0, 4.0)]),
+                new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", PhysicalDimension.Dimensionless, 1.0, 4.0)]),
             ]);
 
         var result = RuleChecker.CheckSource(new RuleSource("LANGUAGE.md", example), catalogue);

@@ -1,4 +1,5 @@
 using DescentOps.Primitives.Identity;
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Compiled;
@@ -15,21 +16,21 @@ internal static class TestCatalogue
 {
     public static TelemetryCatalogue Instance { get; } = new(
         [
-            new NumericPointSpec("probe.head_temp", Dimension.Temperature, 0.0, 1000.0),
-            new NumericPointSpec("probe.depth", Dimension.Length, 0.0, 5000.0),
-            new NumericPointSpec("probe.head_power", Dimension.Power, 0.0, 10_000.0),
-            new NumericPointSpec("probe.descent_speed", Dimension.Speed, 0.0, 10.0 / 3600.0),
+            new NumericPointSpec("probe.head_temp", PhysicalDimension.Temperature, 0.0, 1000.0),
+            new NumericPointSpec("probe.depth", PhysicalDimension.Length, 0.0, 5000.0),
+            new NumericPointSpec("probe.head_power", PhysicalDimension.Power, 0.0, 10_000.0),
+            new NumericPointSpec("probe.descent_speed", PhysicalDimension.Speed, 0.0, 10.0 / 3600.0),
             new DiscretePointSpec("probe.mode", ["descending", "paused", "safe"]),
             new DiscretePointSpec("station.link", ["up", "down"]),
         ],
         [
-            new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0.0, 8000.0)]),
-            new CommandSpec(new ComponentId("probe.wall"), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0.0, 3000.0)]),
+            new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0.0, 8000.0)]),
+            new CommandSpec(new ComponentId("probe.wall"), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0.0, 3000.0)]),
             new CommandSpec(new ComponentId("probe.heater-3"), "switch", [new WordArgumentSpec("state", ["on", "off"])]),
             new CommandSpec(new ComponentId("probe"), "pause_descent", []),
             new CommandSpec(new ComponentId("probe"), "enter_safe_mode", []),
-            new CommandSpec(new ComponentId("probe"), "steer", [new QuantityArgumentSpec("heading", Dimension.Angle, 0.0, 2.0 * Math.PI)]),
-            new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", Dimension.Dimensionless, 1.0, 4.0)]),
+            new CommandSpec(new ComponentId("probe"), "steer", [new QuantityArgumentSpec("heading", PhysicalDimension.Angle, 0.0, 2.0 * Math.PI)]),
+            new CommandSpec(new ComponentId("station"), "drop_relay", [new QuantityArgumentSpec("relay", PhysicalDimension.Dimensionless, 1.0, 4.0)]),
             new CommandSpec(new ComponentId("wisp-1"), "recall", []),
         ]);
 

@@ -22,7 +22,18 @@ public static class ExportCommand
         {
             var path = parse.GetValue(logArgument)!;
             // An edited log is refused: once its rows sit in a database beside good runs nobody would tell them apart.
-            LogGate.Open(path);
+            // One progress line for the whole command: the verification reads the log once, the export once (sqlite) or
+            // twice (csv), so the verification is given about a third of the bar.
+            var progress = new ProgressLine("  export ");
+            try
+            {
+                LogGate.Open(path, share => progress.Fraction(0.3 * share, "verifying the log"));
+            }
+            finally
+            {
+                progress.Done();
+            }
+
             var output = parse.GetValue(outputOption);
             var force = parse.GetValue(forceOption);
             if (parse.GetValue(formatOption) == "csv")
@@ -38,7 +49,16 @@ public static class ExportCommand
                     throw new OutputRefusedException($"{folder} already holds an export; refusing to replace it (add --force to replace it, or name another folder).");
                 }
 
-                var csv = CsvExport.Write(path, folder);
+                CsvExportResult csv;
+                try
+                {
+                    csv = CsvExport.Write(path, folder, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported"));
+                }
+                finally
+                {
+                    progress.Done();
+                }
+
                 Console.Out.WriteLine($"export: {Path.GetFullPath(csv.EventsPath)} ({csv.Events} events), {Path.GetFullPath(csv.TelemetryPath)} ({csv.TelemetryRows} rows)");
             }
             else
@@ -46,11 +66,10 @@ public static class ExportCommand
                 // A database gathers runs, so an existing one is added to, not replaced; but never the log itself.
                 var database = output ?? SqliteExport.DefaultPath(path);
                 if (OutputPaths.SameFile(database, path)) throw new OutputRefusedException($"{database} is also an input of this command; refusing to write over it.");
-                var progress = new ProgressLine("  export ");
                 SqliteExportResult sqlite;
                 try
                 {
-                    sqlite = SqliteExport.Write(path, database, share => progress.Fraction(share, "of the log exported"));
+                    sqlite = SqliteExport.Write(path, database, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported"));
                 }
                 finally
                 {

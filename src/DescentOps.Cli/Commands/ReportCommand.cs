@@ -1,8 +1,10 @@
 using System.CommandLine;
 using DescentOps.Cli.Files;
 using DescentOps.Cli.Running;
+using DescentOps.Cli.Terminal;
 using DescentOps.Reports;
 using DescentOps.Reports.Html;
+using DescentOps.Reports.Plotting;
 
 namespace DescentOps.Cli.Commands;
 
@@ -18,12 +20,27 @@ public static class ReportCommand
         command.SetAction(parse =>
         {
             var path = parse.GetValue(logArgument)!;
+            string reportPath;
             // The chain is checked first: a post-mortem of an edited log would lend its numbers a credibility they lack.
-            LogGate.Open(path);
-            var output = OutputPaths.Claim(parse.GetValue(outputOption) ?? PostMortemReport.DefaultPath(path), parse.GetValue(forceOption), path);
-            var plots = PostMortemReport.Write(RunLog.Load(path), output, $"DescentOps {ToolInfo.Version}");
+            // The log is read twice (verify, then gather), about equally fast; drawing the page is quick beside them.
+            var progress = new ProgressLine("  report ");
+            IReadOnlyList<RenderedPlot> plots;
+            try
+            {
+                LogGate.Open(path, share => progress.Fraction(0.45 * share, "verifying the log"));
+                var output = OutputPaths.Claim(parse.GetValue(outputOption) ?? PostMortemReport.DefaultPath(path), parse.GetValue(forceOption), path);
+                var log = RunLog.Load(path, share => progress.Fraction(0.45 + 0.5 * share, "reading the log"));
+                progress.Fraction(0.95, "drawing the plots");
+                plots = PostMortemReport.Write(log, output, $"DescentOps {ToolInfo.Version}");
+                reportPath = output;
+            }
+            finally
+            {
+                progress.Done();
+            }
+
             foreach (var skipped in plots.Where(p => p.Skipped)) Console.Error.WriteLine($"note: plot '{skipped.Definition.Id}' skipped: {skipped.Note}");
-            Console.Out.WriteLine($"report: {Path.GetFullPath(output)} ({plots.Count(p => !p.Skipped)} plots)");
+            Console.Out.WriteLine($"report: {Path.GetFullPath(reportPath)} ({plots.Count(p => !p.Skipped)} plots)");
             return (int)ExitCode.Ok;
         });
         return command;

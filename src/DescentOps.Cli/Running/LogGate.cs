@@ -9,10 +9,12 @@ namespace DescentOps.Cli.Running;
 /// </summary>
 public static class LogGate
 {
-    public static LogIntegrity Open(string path)
+    /// <param name="path">The log.</param>
+    /// <param name="progress">Called now and then with the share of the log verified (0 to 1).</param>
+    public static LogIntegrity Open(string path, Action<double>? progress = null)
     {
         if (!File.Exists(path)) throw new FileNotFoundException($"no such log: {path}", path);
-        var integrity = LogIntegrity.Check(path);
+        var integrity = LogIntegrity.Check(path, progress);
         if (integrity.State == LogState.Damaged) throw new LogIntegrityException($"{path}:{integrity.Line}: refused: the log fails verification: {integrity.Detail}");
         if (integrity.State == LogState.Truncated) Console.Error.WriteLine($"note: {path}: {integrity.TruncationNote}");
         return integrity;

@@ -1,3 +1,4 @@
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Units;
 using DescentOps.Scenarios.Model;
@@ -27,24 +28,24 @@ public static class MissionCatalogue
         var maxBusW = power?.MaxAvailablePowerW() ?? scenario.Probe.MaxHeadPowerW + scenario.Probe.MaxWallPowerW + scenario.Probe.ElectronicsPowerW;
         TelemetryPointSpec[] points =
         [
-            new NumericPointSpec("probe.depth", Dimension.Length, 0, scenario.Shell.ThicknessM),
+            new NumericPointSpec("probe.depth", PhysicalDimension.Length, 0, scenario.Shell.ThicknessM),
             // Speed bound: a melt probe never exceeds a few metres per hour; 1 m/s is a generous physical ceiling.
-            new NumericPointSpec("probe.velocity", Dimension.Speed, 0, 1.0),
-            new NumericPointSpec("probe.ice_temperature", Dimension.Temperature, 0, 273.16),
-            new NumericPointSpec("probe.head_power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW),
-            new NumericPointSpec("probe.wall_power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW),
-            new NumericPointSpec("probe.energy_used", Dimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
-            new NumericPointSpec("probe.tilt", Dimension.Angle, -Math.PI / 2, Math.PI / 2),
-            new NumericPointSpec("probe.battery_soc", Dimension.Dimensionless, 0, 1),
-            new NumericPointSpec("probe.bus_power_available", Dimension.Power, 0, maxBusW),
-            new NumericPointSpec("probe.buffer_fill", Dimension.Dimensionless, 0, 1),
+            new NumericPointSpec("probe.velocity", PhysicalDimension.Speed, 0, 1.0),
+            new NumericPointSpec("probe.ice_temperature", PhysicalDimension.Temperature, 0, 273.16),
+            new NumericPointSpec("probe.head_power", PhysicalDimension.Power, 0, scenario.Probe.MaxHeadPowerW),
+            new NumericPointSpec("probe.wall_power", PhysicalDimension.Power, 0, scenario.Probe.MaxWallPowerW),
+            new NumericPointSpec("probe.energy_used", PhysicalDimension.Energy, 0, maxPowerW * 3 * 1000 * 365.25 * 86400),
+            new NumericPointSpec("probe.tilt", PhysicalDimension.Angle, -Math.PI / 2, Math.PI / 2),
+            new NumericPointSpec("probe.battery_soc", PhysicalDimension.Dimensionless, 0, 1),
+            new NumericPointSpec("probe.bus_power_available", PhysicalDimension.Power, 0, maxBusW),
+            new NumericPointSpec("probe.buffer_fill", PhysicalDimension.Dimensionless, 0, 1),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
         [
-            new(new(Head), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxHeadPowerW)]),
-            new(new(Wall), "set_power", [new QuantityArgumentSpec("power", Dimension.Power, 0, scenario.Probe.MaxWallPowerW)]),
-            new(MissionIds.Probe, "steer", [new QuantityArgumentSpec("power_difference", Dimension.Power, -scenario.Probe.MaxHeadPowerW / 2, scenario.Probe.MaxHeadPowerW / 2)]),
+            new(new(Head), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0, scenario.Probe.MaxHeadPowerW)]),
+            new(new(Wall), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0, scenario.Probe.MaxWallPowerW)]),
+            new(MissionIds.Probe, "steer", [new QuantityArgumentSpec("power_difference", PhysicalDimension.Power, -scenario.Probe.MaxHeadPowerW / 2, scenario.Probe.MaxHeadPowerW / 2)]),
             new(MissionIds.Probe, "pause_descent", []),
             new(MissionIds.Probe, "resume_descent", []),
             new(MissionIds.Probe, "enter_safe_mode", []),

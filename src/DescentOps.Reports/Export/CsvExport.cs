@@ -17,7 +17,10 @@ public static class CsvExport
 
     private static readonly UTF8Encoding Utf8 = new(encoderShouldEmitUTF8Identifier: false);
 
-    public static CsvExportResult Write(string logPath, string directory)
+    /// <param name="logPath">The log.</param>
+    /// <param name="directory">The folder to write into (created if missing).</param>
+    /// <param name="progress">Called now and then with the share of the work done (0 to 1): the log is read twice.</param>
+    public static CsvExportResult Write(string logPath, string directory, Action<double>? progress = null)
     {
         Directory.CreateDirectory(directory);
         var eventsPath = Path.Combine(directory, EventsFile);
@@ -33,7 +36,7 @@ public static class CsvExport
         {
             using var output = new StreamWriter(partial, append: false, Utf8, 1 << 16);
             output.Write(CsvText.Row(["seq", "t_s", "source", "kind", "severity", "data"]));
-            using var reader = JournalReader.Open(logPath);
+            using var reader = Open(logPath, progress, from: 0);
             foreach (var e in reader.ReadAll().OfType<EventEntry>())
             {
                 events++;
@@ -54,7 +57,7 @@ public static class CsvExport
         {
             using var output = new StreamWriter(partial, append: false, Utf8, 1 << 16);
             output.Write(CsvText.Row(["seq", "t_s", "source", .. columns.Select(CsvText.Cell)]));
-            using var reader = JournalReader.Open(logPath);
+            using var reader = Open(logPath, progress, from: 0.5);
             var cells = new string[columns.Count];
             foreach (var e in reader.ReadAll().OfType<EventEntry>().Where(e => e.Kind == TelemetryKind))
             {
@@ -67,6 +70,9 @@ public static class CsvExport
 
         return new CsvExportResult(eventsPath, telemetryPath, events, rows, truncated);
     }
+
+    private static JournalReader Open(string logPath, Action<double>? progress, double from) =>
+        progress is null ? JournalReader.Open(logPath) : new JournalReader(ReadProgressStream.OpenFile(logPath, share => progress(from + share / 2)));
 
     /// <summary>The default folder: the log's path without its extension, plus <c>-csv</c>.</summary>
     public static string DefaultDirectory(string logPath) => Path.ChangeExtension(logPath, null) + "-csv";

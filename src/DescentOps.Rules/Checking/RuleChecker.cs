@@ -1,6 +1,7 @@
 using System.Globalization;
 using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
+using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Syntax;
@@ -271,13 +272,13 @@ public sealed class RuleChecker
         if (valueSi < spec.MinimumSi || valueSi > spec.MaximumSi)
         {
             Error(DiagnosticCode.ThresholdOutsideRange, written.Location,
-                $"{written} is outside the physical range of point '{spec.Name}' ({Si(spec.MinimumSi)} to {Si(spec.MaximumSi)} in SI)");
+                $"{written} is outside the physical range of point '{spec.Name}' ({Si(spec.MinimumSi, spec.Dimension)} to {Si(spec.MaximumSi, spec.Dimension)})");
         }
     }
 
     private double? TryQuantity(QuantitySyntax quantity, QuantityDimension expected, bool isDifference, string what)
     {
-        var dimensionless = expected.Normalized == QuantityDimension.Of(Dimension.Dimensionless);
+        var dimensionless = expected.Normalized == QuantityDimension.Of(PhysicalDimension.Dimensionless);
         if (!quantity.HasUnit)
         {
             if (dimensionless)
@@ -313,7 +314,7 @@ public sealed class RuleChecker
 
     private SimDuration? TryDuration(QuantitySyntax quantity, string what, bool allowZero)
     {
-        if (TryQuantity(quantity, QuantityDimension.Of(Dimension.Duration), isDifference: true, what) is not { } seconds)
+        if (TryQuantity(quantity, QuantityDimension.Of(PhysicalDimension.Duration), isDifference: true, what) is not { } seconds)
         {
             return null;
         }
@@ -451,7 +452,7 @@ public sealed class RuleChecker
                 if (si < quantitySpec.MinimumSi || si > quantitySpec.MaximumSi)
                 {
                     Error(DiagnosticCode.ArgumentOutOfRange, quantity.Location,
-                        $"argument '{spec.Name}' = {quantity} is outside its range ({Si(quantitySpec.MinimumSi)} to {Si(quantitySpec.MaximumSi)} in SI)");
+                        $"argument '{spec.Name}' = {quantity} is outside its range ({Si(quantitySpec.MinimumSi, quantitySpec.Dimension)} to {Si(quantitySpec.MaximumSi, quantitySpec.Dimension)})");
                     return null;
                 }
 
@@ -649,6 +650,10 @@ public sealed class RuleChecker
         rule.Actions.Concat(rule.Escalations.SelectMany(e => e.Actions)).OfType<SendSyntax>();
 
     private static string Si(double value) => value.ToString("G6", CultureInfo.InvariantCulture);
+
+    /// <summary>A value in SI with its SI unit, as a person reads it in a message: "3000 W", "0.000833 m/s".</summary>
+    private static string Si(double value, PhysicalDimension dimension) =>
+        UnitTable.SiSymbol(dimension) is { Length: > 0 } symbol ? Si(value) + " " + symbol : Si(value);
 
     private void Error(DiagnosticCode code, SourceLocation location, string message) =>
         _diagnostics.Add(new RuleDiagnostic(location, DiagnosticSeverity.Error, code, message));

@@ -12,35 +12,20 @@ namespace DescentOps.Rules.Units;
 /// </summary>
 public static class UnitTable
 {
-    private static readonly UnitDefinition[] Definitions =
+    /// <summary>The dimensions a telemetry point or command argument can have; the catalogue's others (doses, densities, ...) are not rule units.</summary>
+    private static readonly HashSet<PhysicalDimension> RuleDimensions =
     [
-        .. UnitCatalog.All
-            .Where(u => RuleDimension(u.Dimension) is not null)
-            .Select(u => new UnitDefinition(u.Symbol, RuleDimension(u.Dimension)!.Value, u.ScaleToSi, u.OffsetToSi)),
+        PhysicalDimension.Dimensionless, PhysicalDimension.Length, PhysicalDimension.Duration, PhysicalDimension.Speed,
+        PhysicalDimension.Temperature, PhysicalDimension.Power, PhysicalDimension.Energy, PhysicalDimension.Angle,
+        PhysicalDimension.Voltage, PhysicalDimension.Current, PhysicalDimension.Pressure, PhysicalDimension.Mass,
+        PhysicalDimension.Frequency,
     ];
 
-    /// <summary>The rule language's dimension for a catalogue dimension, or null for those no point or argument has.</summary>
-    private static Dimension? RuleDimension(PhysicalDimension dimension) => dimension switch
-    {
-        PhysicalDimension.Dimensionless => Dimension.Dimensionless,
-        PhysicalDimension.Length => Dimension.Length,
-        PhysicalDimension.Duration => Dimension.Duration,
-        PhysicalDimension.Speed => Dimension.Speed,
-        PhysicalDimension.Temperature => Dimension.Temperature,
-        PhysicalDimension.Power => Dimension.Power,
-        PhysicalDimension.Energy => Dimension.Energy,
-        PhysicalDimension.Angle => Dimension.Angle,
-        PhysicalDimension.Voltage => Dimension.Voltage,
-        PhysicalDimension.Current => Dimension.Current,
-        PhysicalDimension.Pressure => Dimension.Pressure,
-        PhysicalDimension.Mass => Dimension.Mass,
-        PhysicalDimension.Frequency => Dimension.Frequency,
-        _ => null,
-    };
+    private static readonly UnitSymbol[] Definitions = [.. UnitCatalog.All.Where(u => RuleDimensions.Contains(u.Dimension))];
 
-    private static readonly Dictionary<string, UnitDefinition> BySymbol = Definitions.ToDictionary(d => d.Symbol, StringComparer.Ordinal);
+    private static readonly Dictionary<string, UnitSymbol> BySymbol = Definitions.ToDictionary(d => d.Symbol, StringComparer.Ordinal);
 
-    public static IReadOnlyList<UnitDefinition> All => Definitions;
+    public static IReadOnlyList<UnitSymbol> All => Definitions;
 
     /// <summary>Resolves "kW", "°C", "m/h", "K/min"; a rate is any non-rate unit over a time unit.</summary>
     public static bool TryResolve(string unit, out ResolvedUnit resolved)
@@ -58,7 +43,7 @@ public static class UnitTable
             return false;
         }
 
-        if (!BySymbol.TryGetValue(unit[(slash + 1)..], out var time) || time.Dimension != Dimension.Duration)
+        if (!BySymbol.TryGetValue(unit[(slash + 1)..], out var time) || time.Dimension != PhysicalDimension.Duration)
         {
             return false;
         }
@@ -72,11 +57,17 @@ public static class UnitTable
         return true;
     }
 
+    /// <summary>The coherent SI unit of a dimension ("W", "m/s", "K"), or "" for a dimensionless number.</summary>
+    public static string SiSymbol(PhysicalDimension dimension) =>
+        dimension == PhysicalDimension.Dimensionless
+            ? ""
+            : Definitions.FirstOrDefault(d => d.Dimension == dimension && d.ScaleToSi == 1.0 && d.OffsetToSi == 0.0)?.Symbol ?? "";
+
     /// <summary>A unit to suggest in messages for a dimension.</summary>
     public static string Example(QuantityDimension dimension)
     {
         var normalized = dimension.Normalized;
-        if (normalized.Base == Dimension.Speed && !normalized.PerSecond)
+        if (normalized.Base == PhysicalDimension.Speed && !normalized.PerSecond)
         {
             return "m/h";
         }

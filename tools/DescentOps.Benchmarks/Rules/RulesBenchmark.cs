@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using DescentOps.Primitives.Units;
 using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Mission.Running;
@@ -38,7 +39,7 @@ public static class RulesBenchmark
     private static void EvaluatorAlone(TextWriter output, CultureInfo c)
     {
         var catalogue = new TelemetryCatalogue(
-            Enumerable.Range(0, Points).Select(i => (TelemetryPointSpec)new NumericPointSpec(PointName(i), Dimension.Power, 0, 10_000)),
+            Enumerable.Range(0, Points).Select(i => (TelemetryPointSpec)new NumericPointSpec(PointName(i), PhysicalDimension.Power, 0, 10_000)),
             [new CommandSpec(new ComponentId("bench"), "note", [])]);
         var text = string.Join("\n", Enumerable.Range(0, RuleCount).Select(SyntheticRule));
         var check = RuleChecker.CheckSource(new RuleSource("bench.dorules", text), catalogue);
