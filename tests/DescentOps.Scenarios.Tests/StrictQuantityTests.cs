@@ -21,8 +21,8 @@ public sealed partial class StrictQuantityTests
     [InlineData("  radius: 12 cm", "  radius: 1e309 cm", "probe.radius", "too large")]
     [InlineData("  until: 400 d", "  until: 1e308 d", "run.until", "too large")]
     [InlineData("  distance_to_ground: 1.08e9 km", "  distance_to_ground: 1e308 km", "body.distance_to_ground", "too large")]
-    [InlineData("    remaining_fraction: 0.7", "    remaining_fraction: .nan", "faults[0].remaining_fraction", "not a finite number")]
-    [InlineData("    remaining_fraction: 0.7", "    remaining_fraction: 0,7", "faults[0].remaining_fraction", "comma")]
+    [InlineData("    remaining_fraction: 0.4", "    remaining_fraction: .nan", "faults[0].remaining_fraction", "not a finite number")]
+    [InlineData("    remaining_fraction: 0.4", "    remaining_fraction: 0,4", "faults[0].remaining_fraction", "comma")]
     [InlineData("  seed: 20261202", "  seed: 20,261,202", "run.seed", "comma")]
     public void A_value_that_could_be_misread_is_refused_with_the_reason(string line, string replacement, string field, string reason)
     {
