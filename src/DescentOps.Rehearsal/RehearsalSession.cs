@@ -39,7 +39,7 @@ public sealed class RehearsalSession
         _setup = setup;
         Scenario = setup.Scenario;
         _catalogue = MissionCatalogue.For(setup.Scenario);
-        Limits = RuleLimit.Of(MissionRules.Compile(setup.Scenario));
+        Limits = RuleLimit.Of(MissionRules.Compile(setup.Scenario), _catalogue);
         _view = new SessionView(Feed, Limits);
         _summary = new MissionSummarySink(new Tee(setup.Journal, _view));
         _until = SimTime.FromSecondsSinceEpoch(setup.Manifest.UntilSeconds);

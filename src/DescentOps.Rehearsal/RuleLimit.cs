@@ -1,6 +1,8 @@
 using System.Globalization;
+using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Syntax;
+using DescentOps.Rules.Units;
 
 namespace DescentOps.Rehearsal;
 
@@ -8,7 +10,7 @@ namespace DescentOps.Rehearsal;
 /// One limit check of the team's rules (a point against a threshold, inside any rule's condition), which the team's
 /// view marks as within or beyond on every frame that reaches the ground.
 /// </summary>
-public sealed record RuleLimit(string Rule, string Placement, string Point, Threshold Threshold)
+public sealed record RuleLimit(string Rule, string Placement, string Point, Threshold Threshold, string SiUnit = "")
 {
     /// <summary>True when the check's comparison holds (the rule's limit is crossed); null when the frame lacks the point.</summary>
     public bool? Crossed(IReadOnlyDictionary<string, double> readings) =>
@@ -22,12 +24,12 @@ public sealed record RuleLimit(string Rule, string Placement, string Point, Thre
         _ => $"{Point} outside {Number(Threshold.LowerSi)} to {Number(Threshold.UpperSi)}",
     };
 
-    /// <summary>Every limit check in a rule set, rule by rule, in the order written.</summary>
-    public static IReadOnlyList<RuleLimit> Of(CompiledRuleSet rules)
+    /// <summary>Every limit check in a rule set, rule by rule, in the order written, each with its point's SI unit from the catalogue.</summary>
+    public static IReadOnlyList<RuleLimit> Of(CompiledRuleSet rules, TelemetryCatalogue catalogue)
     {
         var limits = new List<RuleLimit>();
         foreach (var rule in rules.Rules) Collect(rule.Name, rule.Placement.ToString().ToLowerInvariant(), rule.Condition, limits);
-        return limits;
+        return [.. limits.Select(l => catalogue.FindPoint(l.Point) is NumericPointSpec spec ? l with { SiUnit = UnitTable.SiSymbol(spec.Dimension) } : l)];
     }
 
     private static void Collect(string rule, string placement, CompiledCondition condition, List<RuleLimit> into)
@@ -55,5 +57,5 @@ public sealed record RuleLimit(string Rule, string Placement, string Point, Thre
         }
     }
 
-    private static string Number(double si) => si.ToString("G4", CultureInfo.InvariantCulture) + " (SI)";
+    private string Number(double si) => si.ToString("G6", CultureInfo.InvariantCulture) + (SiUnit.Length > 0 ? " " + SiUnit : "");
 }
