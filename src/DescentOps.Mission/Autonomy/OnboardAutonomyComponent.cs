@@ -29,6 +29,7 @@ public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
         {
             RunStarted => [],
             TelemetryFrame frame => _rules.OnFrame(frame, context),
+            OnboardSamples samples => _rules.OnSamples(OnboardSampleInputs.Of(samples), context),
             RulesWake => _rules.OnWake(context),
             _ => throw new InvalidOperationException($"The on-board autonomy cannot handle {message.GetType().Name}."),
         };

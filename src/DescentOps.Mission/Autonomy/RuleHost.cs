@@ -23,8 +23,8 @@ public sealed class RuleHost
     private readonly CompiledRuleSet _own;
     private readonly List<RuleOutput> _outputs = [];
 
-    /// <summary>Every input consumed, in order: a frame's samples, or a wake-up at an instant (frame null).</summary>
-    private readonly List<(TelemetryFrame? Frame, SimTime Time)> _inputs = [];
+    /// <summary>Every input consumed, in order: a frame's or the on-board sampler's samples, or a wake-up at an instant (samples null).</summary>
+    private readonly List<(IReadOnlyList<TelemetrySample>? Samples, SimTime Time)> _inputs = [];
     private RuleEvaluator _evaluator;
 
     public RuleHost(CompiledRuleSet rules, Placement placement)
@@ -53,7 +53,7 @@ public sealed class RuleHost
         _inputs.RemoveRange(version, _inputs.Count - version);
         _evaluator.Dispose();
         _evaluator = NewEvaluator();
-        foreach (var (frame, time) in _inputs) Consume(frame, time);
+        foreach (var (samples, time) in _inputs) Consume(samples, time);
         _outputs.Clear();
     }
 
@@ -64,15 +64,15 @@ public sealed class RuleHost
         return evaluator;
     }
 
-    private void Consume(TelemetryFrame? frame, SimTime time)
+    private void Consume(IReadOnlyList<TelemetrySample>? samples, SimTime time)
     {
-        if (frame is null)
+        if (samples is null)
         {
             _evaluator.AdvanceTo(time);
             return;
         }
 
-        foreach (var sample in FrameSamples.Of(frame)) _evaluator.Submit(sample);
+        foreach (var sample in samples) _evaluator.Submit(sample);
     }
 
     public Placement Placement { get; }
@@ -80,10 +80,14 @@ public sealed class RuleHost
     public int RuleCount { get; }
 
     /// <summary>Evaluates a frame, then journals what the rules did and returns the commands they sent, in order.</summary>
-    public IReadOnlyList<Telecommand> OnFrame(TelemetryFrame frame, ComponentContext context)
+    public IReadOnlyList<Telecommand> OnFrame(TelemetryFrame frame, ComponentContext context) =>
+        OnSamples([.. FrameSamples.Of(frame)], context);
+
+    /// <summary>Evaluates samples taken at one instant (a frame's, or the on-board sampler's), then journals as <see cref="OnFrame"/>.</summary>
+    public IReadOnlyList<Telecommand> OnSamples(IReadOnlyList<TelemetrySample> samples, ComponentContext context)
     {
-        _inputs.Add((frame, context.Now));
-        Consume(frame, context.Now);
+        _inputs.Add((samples, context.Now));
+        Consume(samples, context.Now);
         return Drain(context);
     }
 
@@ -111,7 +115,7 @@ public sealed class RuleHost
                         RecordField.Of("rule", firing.Rule),
                         RecordField.Of("placement", where),
                         RecordField.Of("firing", firing.Firing),
-                        RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))),
+                        RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s{(e.Origin is null ? "" : $" ({e.Origin})")}")))),
                         RecordField.Of("commands", string.Join("; ", firing.Commands)));
                     commands.AddRange(firing.Commands.Select(c => new Telecommand(c, firing.Rule, where, context.Now)));
                     break;

@@ -22,10 +22,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 {
     private readonly ProbeDesign _design;
 
-    public ProbeComponent(Scenario scenario)
+    /// <summary>A probe; given the mission's rules it samples for the on-board ones (<see cref="Onboard.OnboardSamplingPlan"/>), otherwise they see the frames.</summary>
+    public ProbeComponent(Scenario scenario, Rules.Compiled.CompiledRuleSet? rules = null)
         : base(MissionIds.Probe, FailurePolicy.AbortRun)
     {
-        _design = new ProbeDesign(scenario);
+        _design = new ProbeDesign(scenario) { Onboard = Onboard.OnboardSamplingPlan.For(scenario, rules) };
     }
 
     /// <summary>The descent model this probe runs on (exposed for the physics benchmark and tests).</summary>
@@ -43,6 +44,14 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
         HeldAtSurface: _design.Scenario.Station.Dwell is not null);
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
+    {
+        if (_design.Onboard is not { } plan) return HandleMessage(state, message, context);
+        return message is ProbeSampleDue
+            ? Onboard.OnboardSampler.Take(_design, plan, state, context)
+            : Onboard.OnboardSampler.Rearm(_design, plan, HandleMessage(state, message, context), context);
+    }
+
+    private ProbeState HandleMessage(ProbeState state, object message, ComponentContext context)
     {
         var d = _design;
         switch (message)

@@ -33,4 +33,7 @@ public sealed class ProbeDesign
     public bool WatchedByFaults { get; }
 
     public ProbePowerSystem? Power { get; }
+
+    /// <summary>How the probe samples for its on-board rules apart from its frames; null: they see the frames.</summary>
+    public Onboard.OnboardSamplingPlan? Onboard { get; init; }
 }

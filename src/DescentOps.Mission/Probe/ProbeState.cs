@@ -56,6 +56,9 @@ public sealed record ProbeState(
     /// <summary>When the probe last stopped (a stall, a pause or a refreeze stall); the hold before melting free counts from here.</summary>
     public SimTime? StoppedAt { get; init; }
 
+    /// <summary>The on-board sampler's pending timer and last samples; null without on-board sampling.</summary>
+    public Onboard.OnboardSamplerState? Onboard { get; init; }
+
     /// <summary>Charging power each docked vehicle asks of the bus, by vehicle name.</summary>
     public ImmutableSortedDictionary<string, double> DockDemandsW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 

@@ -19,7 +19,8 @@ public static class ProbeTelemetry
         var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
         context.Record(ProbeRecords.Telemetry, Severity.Debug, [.. Fields(design, state, frame, truth)]);
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
-        context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        // With on-board sampling the rules read the sensors themselves (Onboard.OnboardSampler), not the frames.
+        if (design.Onboard is null) context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         if (design.WatchedByFaults)
         {
             context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);

@@ -19,7 +19,7 @@ public static class MissionAssembly
         var rules = MissionRules.Compile(scenario);
         return
         [
-            new ProbeComponent(scenario),
+            new ProbeComponent(scenario, rules),
             new TetherComponent(scenario),
             new StationComponent(scenario),
             new GroundTeamComponent(scenario, rules),

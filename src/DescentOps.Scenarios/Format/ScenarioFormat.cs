@@ -276,6 +276,7 @@ public static class ScenarioFormat
                 new QuantityField("message_interval", "Time between a vehicle's data messages (default 10 min).", Duration, 1, Day, Required: false),
             ], Required: false),
             Relays,
+            OnboardSamplingFormat.Section,
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [
                 new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),

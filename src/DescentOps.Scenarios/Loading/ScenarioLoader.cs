@@ -76,7 +76,7 @@ public static class ScenarioLoader
     {
         var errors = new List<ScenarioError>();
         var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
-        var scenario = Build(root, sourceName, text) with { FieldLocations = locations };
+        var scenario = Build(root, sourceName, text) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }

@@ -25,6 +25,9 @@ public sealed record Scenario(
     /// <summary>Where each field's value stands in the file, by field path ("probe.radius", "faults[0].at"): checks made after loading are located with it.</summary>
     public IReadOnlyDictionary<string, Loading.SourceLocation> FieldLocations { get; init; } = new Dictionary<string, Loading.SourceLocation>();
 
+    /// <summary>The probe's on-board sensor rates; null: every point is sampled with the frames, as before.</summary>
+    public OnboardSamplingModel? OnboardSampling { get; init; }
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {

@@ -1,0 +1,36 @@
+using DescentOps.Scenarios.Loading;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Tests.Onboard;
+
+/// <summary>The default scenario cut to 60 days with one depth rule, on board or on the ground, and optional extra faults.</summary>
+internal static class OnboardScenarios
+{
+    public const string Fault = """
+          - name: bus-sag-day-30
+            kind: power_dip
+            at: 30 d
+            duration: 12 h
+            remaining_fraction: 0.4
+        """;
+
+    public static Scenario DepthRule(string placement, string? sampling, string extraFaults = "")
+    {
+        var rules = $$"""
+            rules: |
+              {{(placement == "board" ? "autonomy E3" : "# no autonomy level needed on the ground")}}
+              rule deep {
+                runs on {{placement}}
+                severity low
+                when probe.depth above 1000 m
+                then { send probe.wall set_power(power = 2 kW) }
+              }
+
+            """;
+        var text = MissionHarness.DefaultText
+            .Replace("until: 400 d", "until: 60 d", StringComparison.Ordinal)
+            .Replace("faults:\n", (sampling ?? "") + rules + "faults:\n", StringComparison.Ordinal)
+            .Replace(Fault, extraFaults.Length == 0 ? Fault : Fault + "\n" + extraFaults.TrimEnd(), StringComparison.Ordinal);
+        return ScenarioLoader.LoadText(text, "onboard.yaml");
+    }
+}
