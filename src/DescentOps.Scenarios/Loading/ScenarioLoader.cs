@@ -96,6 +96,7 @@ public static class ScenarioLoader
             new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity"))
             {
                 FracturedToM = shell.OptionalQuantity("fractured_to") ?? 0.0,
+                OceanTemperatureK = shell.OptionalQuantity("ocean_temperature"),
                 Convection = shell.OptionalSection("convection") is { } c
                     ? new ConvectionModel(c.Quantity("top"), c.Quantity("temperature"), c.OptionalQuantity("basal_boundary") ?? ((shell.Quantity("thickness") - c.Quantity("top")) / 10))
                     : null,
@@ -339,7 +340,7 @@ public static class ScenarioLoader
         a.Quantity("bandwidth"),
         a.Number("detection_threshold"),
         a.OptionalNumber("spreading") ?? DefaultSpreadingExponent,
-        a.Quantity("ocean_temperature"),
+        a.OptionalQuantity("ocean_temperature"),
         a.OptionalNumber("ph") ?? DefaultPH,
         a.OptionalText("absorption") == "ainslie_mccolm" ? AbsorptionFormula.AinslieMcColm : AbsorptionFormula.FrancoisGarrison,
         a.OptionalQuantity("message_interval") ?? DefaultMessageIntervalS);
@@ -508,19 +509,6 @@ public static class ScenarioLoader
         for (var i = 0; i < scenario.Vehicles.Count; i++)
         {
             CheckVehicle(scenario.Vehicles[i], vehicles[i], $"vehicles[{i}]", errors);
-        }
-
-        if (scenario.Acoustics is { } acoustics && root.OptionalSection("acoustics") is { } section)
-        {
-            // The absorption and sound-speed fits have validity ranges of their own; the ocean must lie inside them.
-            Refused(section.Location, "acoustics", errors, () =>
-            {
-                var s = Physics.Ocean.PracticalSalinity.FromAbsoluteKgPerKg(scenario.Shell.OceanSalinityKgPerKg);
-                _ = acoustics.Formula == AbsorptionFormula.AinslieMcColm
-                    ? Physics.Acoustics.SeawaterAbsorption.AinslieMcColmDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH)
-                    : Physics.Acoustics.SeawaterAbsorption.FrancoisGarrisonDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH);
-                _ = Physics.Ocean.SoundSpeed.UnescoMPerS(s, acoustics.OceanTemperatureK, 0.0);
-            });
         }
 
         if (scenario.Power is { } power) CheckPower(power, root.Section("power"), errors);
