@@ -79,4 +79,34 @@ public sealed class SupervisionTests(ActorSystemFixture actors) : IClassFixture<
         Assert.Contains("injected fault at value 2", result.Outcome.Reason, StringComparison.Ordinal);
         Assert.Equal(new SimTime(2_000_000), result.FinalTime);
     }
+
+    [Theory]
+    [InlineData(KernelKind.Sequential)]
+    [InlineData(KernelKind.Actor)]
+    public async Task A_failure_that_no_restart_can_cure_ends_the_run_at_once_even_under_the_restart_policy(KernelKind kind)
+    {
+        // A model asked outside its validity range would fail the same way after a restart: the run is aborted at the
+        // first such failure instead of being restarted and left to idle to its time limit.
+        ISimComponent[] model =
+        [
+            new OutOfRange(Counter),
+            new Script(new ComponentId("script"), [(SimDuration.FromSeconds(1), Counter, (object)"go"), (SimDuration.FromSeconds(2), Counter, "go")]),
+        ];
+        var (result, journal) = await KernelRunner.RunAsync(kind, actors, model, SimTime.MaxValue);
+
+        Assert.Equal(RunOutcomeKind.ComponentFailed, result.Outcome.Kind);
+        Assert.Equal(new SimTime(1_000_000), result.Outcome.Time);
+        Assert.Equal(1, result.ComponentFailures);
+        Assert.Contains("decision=abort-run", Assert.Single(journal), StringComparison.Ordinal);
+    }
+
+    private sealed class RangeLeft() : Exception("a model was asked outside its range"), Primitives.Failures.IAbortsRun;
+
+    private sealed class OutOfRange(ComponentId id) : SimComponent<int>(id, FailurePolicy.RestartFromLastState, maxRestarts: 3)
+    {
+        public override int InitialState => 0;
+
+        public override int Handle(int state, object message, ComponentContext context) =>
+            message is RunStarted ? state : throw new RangeLeft();
+    }
 }

@@ -87,16 +87,20 @@ public sealed class PhysicsCommandTests
     [Fact]
     public async Task DescentLatentPowerIsTheMeltRateTimesThePublishedLatentHeat()
     {
-        // At the triple-point pressure the head melts ice at 273.16 K. Independent pieces: the ice density at the
-        // far-field state from the ice subcommand (R10-06), and the latent heat of fusion at the triple point,
-        // 333 426.5 J/kg (Feistel and Wagner 2006, from R10-06 with IAPWS-95), i.e. latent_w = ρ·πR²·v·L.
-        string[] state = ["--temperature", "250 K", "--pressure", "611.657 Pa"];
+        // Just above the triple-point pressure (at p_t itself water boils at its melting point, so the boiling-bounded
+        // film cannot melt at all: issue 12), at 1 kPa. Independent pieces: the ice density at the far-field state from
+        // the ice subcommand (R10-06), and the latent heat of fusion at the triple point, 333 426.5 J/kg (Feistel and
+        // Wagner 2006, from R10-06 with IAPWS-95), i.e. latent_w = ρ·πR²·v·L. Between p_t and 1 kPa the melting point
+        // moves by 3e-5 K (Clapeyron slope -7.4e-8 K/Pa) and L by far less than 1 J/kg, well inside the 5e-4 tolerance.
+        string[] state = ["--temperature", "250 K", "--pressure", "1 kPa"];
         var d = await JsonAsync(["descent", "--radius", "10 cm", "--length", "2 m", "--head-power", "4 kW", "--wall-power", "2 kW", .. state]);
         var rho = Number(await JsonAsync(["ice", .. state]), "density_kg_m3");
         var meltRateKgPerS = rho * Math.PI * 0.1 * 0.1 * Number(d, "velocity_m_s");
+        Assert.True(meltRateKgPerS > 0);
         AssertRelative(333_426.5, Number(d, "latent_w") / meltRateKgPerS, 5e-4);
         // Sensible over latent is the Stefan number, which the refreeze subcommand reports for the same ice.
-        var refreeze = await JsonAsync("refreeze", "--gap", "1 mm", "--temperature", "250 K", "--melting-temperature", "273.16 K");
+        var meltingK = Number(d, "melting_temperature_k").ToString("R", CultureInfo.InvariantCulture) + " K";
+        var refreeze = await JsonAsync("refreeze", "--gap", "1 mm", "--temperature", "250 K", "--melting-temperature", meltingK);
         AssertRelative(Number(refreeze, "stefan_number"), Number(d, "sensible_w") / Number(d, "latent_w"), 1e-6);
     }
 
@@ -206,7 +210,7 @@ public sealed class PhysicsCommandTests
     public async Task AProbeThatCannotMeltHasNoCrossingTime()
     {
         var text = MissionHarness.DefaultText.Replace("  head_power: 6 kW", "  head_power: 20 W", StringComparison.Ordinal)
-            .Replace("  wall_power: 3 kW", "  wall_power: 0 W", StringComparison.Ordinal);
+            .Replace("  wall_power: 10 kW", "  wall_power: 0 W", StringComparison.Ordinal);
         var path = Path.Combine(ToolProcess.NewTempDirectory(), "weak.yaml");
         await File.WriteAllTextAsync(path, text);
         var c = await JsonAsync("crossing", path);
@@ -220,7 +224,7 @@ public sealed class PhysicsCommandTests
     public async Task SeawaterFreezingPointMatchesTheUnesco1983CheckValue()
     {
         // UNESCO (1983) Tech. Pap. Mar. Sci. 44, freezing point check value: S = 40, p = 500 dbar → −2.588567 °C.
-        var w = await JsonAsync("seawater", "--salinity", "40", "--pressure", "500 dbar", "--temperature", "0 °C");
+        var w = await JsonAsync("seawater", "--salinity", "40", "--pressure", "500 dbar", "--temperature", "0 °C", "--standard", "eos-80");
         AssertFields(w, "freezing_temperature_k", "sound_speed_m_s", "density_kg_m3");
         Assert.Equal(273.15 - 2.588567, Number(w, "freezing_temperature_k"), 1e-6);
     }
@@ -231,10 +235,10 @@ public sealed class PhysicsCommandTests
         // EOS-80 check values (Millero and Poisson 1981, UNESCO 1983): ρ(S = 35, t68 = 5 °C, p = 0) = 1027.67547 kg/m³.
         // The formula is on IPTS-68: 5 °C there is 5/1.00024 °C on ITS-90 (Saunders 1990).
         var t90 = (273.15 + (5.0 / 1.00024)).ToString("R", CultureInfo.InvariantCulture) + " K";
-        var psu = await JsonAsync("seawater", "--salinity", "35 psu", "--pressure", "0 Pa", "--temperature", t90);
+        var psu = await JsonAsync("seawater", "--salinity", "35 psu", "--pressure", "0 Pa", "--temperature", t90, "--standard", "eos-80");
         Assert.Equal(1027.67547, Number(psu, "density_kg_m3"), 1e-5);
         // 35.16504 g/kg of reference-composition seawater is practical salinity 35 (TEOS-10 reference ratio).
-        var gPerKg = await JsonAsync("seawater", "--salinity", "35.16504 g/kg", "--pressure", "0 Pa", "--temperature", t90);
+        var gPerKg = await JsonAsync("seawater", "--salinity", "35.16504 g/kg", "--pressure", "0 Pa", "--temperature", t90, "--standard", "eos-80");
         AssertRelative(35.0, Number(gPerKg, "practical_salinity"), 1e-12);
         AssertRelative(Number(psu, "density_kg_m3"), Number(gPerKg, "density_kg_m3"), 1e-12);
     }
@@ -243,10 +247,39 @@ public sealed class PhysicsCommandTests
     public async Task SeawaterSoundSpeedMatchesTheMackenzie1981CheckValue()
     {
         // Mackenzie (1981), J. Acoust. Soc. Am. 70(3), check value: T = 25 °C, S = 35, D = 1000 m → 1550.744 m/s.
-        var w = await JsonAsync("seawater", "--salinity", "35", "--pressure", "0 Pa", "--temperature", "25 °C", "--terrestrial-depth", "1000 m");
+        var w = await JsonAsync("seawater", "--salinity", "35", "--pressure", "0 Pa", "--temperature", "25 °C", "--terrestrial-depth", "1000 m", "--standard", "eos-80");
         Assert.Equal(1550.744, Number(w, "sound_speed_mackenzie_m_s"), 1e-3);
         // Chen-Millero at the surface, same water: the two formulas agree within Mackenzie's own depth term, 16.3 m/s per km.
         Assert.Equal(1550.744 - 16.3, Number(w, "sound_speed_m_s"), 1.0);
+    }
+
+    [Fact]
+    public async Task SeawaterByTeos10AnswersAtTheFreezingPointUnderOneHundredMegapascals()
+    {
+        // GSW 3.6.16 (Debian python3-gsw), gsw.t_freezing(35.16504, 2420, 0) = −3.8226 °C (project note links-power-ocean SW-7)
+        // and gsw.t_freezing(0, 10000, 0) = −8.951978831 °C; gsw.rho_t_exact and gsw.sound_speed_t_exact at that point.
+        var w = await JsonAsync("seawater", "--salinity", "35.16504 g/kg", "--pressure", "2420 dbar");
+        AssertFields(w, "freezing_temperature_k", "sound_speed_m_s", "density_kg_m3", "conservative_temperature_k");
+        Assert.Equal(273.15 - 3.8226, Number(w, "freezing_temperature_k"), 1e-4);
+        Assert.Equal(Number(w, "freezing_temperature_k"), Number(w, "temperature_k"), 12);
+        var fresh = await JsonAsync("seawater", "--salinity", "0", "--pressure", "100 MPa");
+        Assert.Equal(273.15 - 8.951978831383515, Number(fresh, "freezing_temperature_k"), 1e-8);
+        var (exit, _, stderr) = await RunAsync("seawater", "--salinity", "35", "--pressure", "100 MPa", "--temperature", "-11 °C", "--json");
+        Assert.Equal(3, exit); // ExitCode.InvalidInput: colder than its freezing point
+        Assert.Contains("--temperature: temperature = 262.15 K is outside the valid range [", stderr, StringComparison.Ordinal);
+        Assert.Contains("TEOS-10", stderr, StringComparison.Ordinal);
+    }
+
+    [Fact]
+    public async Task JetsAnswerHoleRadiusSpeedAndFreezeBack()
+    {
+        // Reference note §4.6, PRB-10: 5 kW of jet heat, η 0.8, 1 m/h, 250 K ice (melting at 273.15 K) → R_h = 0.11450 m.
+        var j = await JsonAsync("jets", "--power", "5 kW", "--speed", "1 m/h", "--temperature", "250 K", "--melting-temperature", "273.15 K",
+            "--probe-radius", "10 cm", "--probe-length", "2 m", "--efficiency", "0.8", "--pump-power", "300 W");
+        AssertFields(j, "hole_radius_m", "speed_m_s", "clearance_m", "freeze_back_time_s");
+        Assert.Equal(0.11450, Number(j, "hole_radius_m"), 2e-4);
+        Assert.Equal(Number(j, "hole_radius_m") - 0.1, Number(j, "clearance_m"), 12);
+        Assert.True(Number(j, "freeze_back_time_s") > 0);
     }
 
     // ---- acoustic ----

@@ -70,9 +70,13 @@ public sealed class VehicleScenarioTests
         var link = sink.OfKind("vehicle.acoustic_link").Single();
 
         // Computed here from the scenario's values: 34 g/kg read as reference salinity (S_P = 34·35/35.16504),
-        // −1.8 °C, 12 kHz, pH 8, at the Earth depth whose pressure equals the logged ice overburden.
+        // −1.8 °C, 12 kHz, pH 8, at the Earth depth whose absolute pressure equals the logged one under the shell. An
+        // Earth depth is measured from a surface under one standard atmosphere, so the depth is that of the sea pressure
+        // (absolute less 101325 Pa, as the TEOS-10 manual, IOC, SCOR and IAPSO 2010, defines sea pressure), never below
+        // the surface. Under this 30 m lid on an airless body that is 0 m; the formula's pressure terms then stay at 1.
         var basePressurePa = CollectingSink.Field(sink.OfKind("probe.started").Single(), "base_pressure_pa");
-        var depthM = SeawaterPressureDepth.StandardOceanDepthM(basePressurePa, 9.80665);
+        var depthM = SeawaterPressureDepth.StandardOceanDepthM(Math.Max(0.0, basePressurePa - 101_325.0), 9.80665);
+        Assert.Equal(depthM, CollectingSink.Field(link, "earth_equivalent_depth_m"), 9);
         var expected = SeawaterAbsorption.FrancoisGarrisonDbPerKm(12e3, 273.15 - 1.8, 34.0 * 35.0 / 35.16504, depthM, 8.0);
         Assert.Equal(expected, CollectingSink.Field(link, "absorption_db_per_km"), 12);
 

@@ -42,7 +42,22 @@ public class PhysicsProperties
         var slow = SteadyDescent.Solve(x.Probe, x.HeadW, x.WallW, x.FarFieldK, x.PressurePa, x.G);
         var fast = SteadyDescent.Solve(x.Probe, x.HeadW * 1.2, x.WallW, x.FarFieldK, x.PressurePa, x.G);
         Assert.True(fast.VelocityMPerS >= slow.VelocityMPerS);
-        if (!slow.Stalled) Assert.True(fast.VelocityMPerS > slow.VelocityMPerS);
+        // A film already at the boiling point melts no faster with more power: the extra power boils water.
+        if (!slow.Stalled && slow.BoilOffW == 0) Assert.True(fast.VelocityMPerS > slow.VelocityMPerS);
+    }
+
+    [Property(MaxTest = 300)]
+    public void TheFilmIsNeverHotterThanBoilingWaterAtThePressure(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    {
+        // Issue 12: the film may not be superheated above the boiling point at the local pressure (IAPWS-IF97); what
+        // the bound keeps from melting boils water and is still accounted for in the power balance.
+        var x = Case(a, b, c, d, e, f);
+        var s = SteadyDescent.Solve(x.Probe, x.HeadW * 3, x.WallW, x.FarFieldK, x.PressurePa, x.G);
+        if (s.Stalled) return;
+        var boilingK = DescentOps.Physics.Water.BoilingCurve.TemperatureK(x.PressurePa);
+        Assert.True(MeltingCurve.TemperatureK(x.PressurePa) + s.HeadSuperheatK <= boilingK + 1e-9, $"{s.HeadSuperheatK} K over T_m at {x.PressurePa} Pa");
+        Assert.True(s.BoilOffW >= 0 && s.BoilOffW <= s.HeadPowerW);
+        Approx.Rel(s.HeadPowerW + s.WallPowerW, s.SensibleW + s.LatentW + s.LateralLossW + s.WallSurplusW, 1e-9, "balance");
     }
 
     [Property(MaxTest = 200)]
@@ -76,10 +91,10 @@ public class PhysicsProperties
         var probe = new ProbeGeometry(0.1, 2.5, 200.0);
         var tooWarm = MeltingCurve.TemperatureK(101325.0) + Map(a, 0.01, 100.0);
         var tooCold = Map(b, -100.0, 49.9);
-        Assert.Contains("valid range", Assert.Throws<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(probe, 5000, 0, tooWarm, 101325.0, 9.8)).Message);
-        Assert.Contains("valid range", Assert.Throws<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(probe, 5000, 0, tooCold, 101325.0, 9.8)).Message);
-        Assert.Throws<ArgumentOutOfRangeException>(() => IceIh.DensityKgPerM3(Map(a, -500.0, -1e-9), 1e5));
-        Assert.Throws<ArgumentOutOfRangeException>(() => IceIh.DensityKgPerM3(200.0, Map(b, 210.001e6, 1e9)));
-        Assert.Throws<ArgumentOutOfRangeException>(() => Refreeze.FreezeIn(-Map(a, 1e-9, 1.0), 250.0, 273.15));
+        Assert.Contains("valid range", Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(probe, 5000, 0, tooWarm, 101325.0, 9.8)).Message);
+        Assert.Contains("valid range", Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(probe, 5000, 0, tooCold, 101325.0, 9.8)).Message);
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => IceIh.DensityKgPerM3(Map(a, -500.0, -1e-9), 1e5));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => IceIh.DensityKgPerM3(200.0, Map(b, 210.001e6, 1e9)));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => Refreeze.FreezeIn(-Map(a, 1e-9, 1.0), 250.0, 273.15));
     }
 }

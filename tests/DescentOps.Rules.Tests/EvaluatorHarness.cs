@@ -37,6 +37,13 @@ internal sealed class EvaluatorHarness
         return this;
     }
 
+    /// <summary>A frame: numeric readings of several points at one instant, taken whole.</summary>
+    public EvaluatorHarness Frame(double seconds, params (string Point, double ValueSi)[] readings)
+    {
+        Evaluator.Submit([.. readings.Select(r => new TelemetrySample(r.Point, At(seconds), new NumericValue(r.ValueSi)))]);
+        return this;
+    }
+
     public EvaluatorHarness Until(double seconds)
     {
         Assert.True(Evaluator.AdvanceTo(At(seconds)));

@@ -142,7 +142,7 @@ public sealed class EvaluatorTests
     public void Persistence_by_count_needs_consecutive_samples_of_its_own_point()
     {
         // Three consecutive samples above 420 K; a sample of another point in between does not count or break.
-        var run = new EvaluatorHarness(Rule("hot", "probe.head_temp above 420 K for 3 samples and station.link is up"))
+        var run = new EvaluatorHarness(Rule("hot", "(probe.head_temp above 420 K for 3 samples) and station.link is up"))
             .State("station.link", 0, "up")
             .Number("probe.head_temp", 1, 430).Number("probe.head_temp", 2, 430)
             .State("station.link", 3, "up");
@@ -154,6 +154,42 @@ public sealed class EvaluatorTests
         Assert.Equal(7.0, firing.Time.SecondsSinceEpoch);
         // Evidence: the link as last seen (t = 3 s) and the three counted temperatures.
         Assert.Equal([3.0, 5.0, 6.0, 7.0], firing.Evidence.Select(e => e.Time.SecondsSinceEpoch));
+    }
+
+    [Fact]
+    public void For_applies_to_the_whole_combination_and_counts_each_frame_once()
+    {
+        // The trap of issue 15: with 'for' bound to the last comparison, this fired on the first sample of the
+        // temperature; counting each point's sample, a two-point combination 'for 12 samples' fired after 6 frames.
+        // Frames every 10 s carry both points at one instant; the power holds throughout, the temperature from frame 1.
+        var run = new EvaluatorHarness(Rule("hot", "probe.head_temp above 420 K and probe.head_power above 1 kW for 12 samples"));
+        for (var frame = 0; frame < 12; frame++)
+        {
+            run.Frame(10 * frame, ("probe.head_temp", frame == 0 ? 410 : 430), ("probe.head_power", 2000));
+        }
+
+        Assert.Empty(run.Firings);
+        run.Frame(120, ("probe.head_temp", 430), ("probe.head_power", 2000));
+        // Frames 1 to 12 are the twelve on which both held: 12 frames, not 6, and not frame 1's single temperature.
+        var firing = Assert.Single(run.Firings);
+        Assert.Equal(120.0, firing.Time.SecondsSinceEpoch);
+    }
+
+    [Fact]
+    public void A_frame_is_taken_whole_before_any_rule_decides()
+    {
+        // At t = 20 s the frame's temperature comes first (with the last frame's power the combination would hold),
+        // then its power breaks it: the frame is taken whole, so nothing fires on the stale power, the instant does
+        // not count, and the run of three starts again at 30 s and completes at 50 s.
+        var run = new EvaluatorHarness(Rule("hot", "probe.head_temp above 420 K and probe.head_power above 1 kW for 3 samples"));
+        foreach (var (t, power) in new[] { (0, 2000.0), (10, 2000.0), (20, 500.0), (30, 2000.0), (40, 2000.0) })
+        {
+            run.Frame(t, ("probe.head_temp", 430), ("probe.head_power", power));
+        }
+
+        Assert.Empty(run.Firings);
+        run.Frame(50, ("probe.head_temp", 430), ("probe.head_power", 2000));
+        Assert.Equal(50.0, Assert.Single(run.Firings).Time.SecondsSinceEpoch);
     }
 
     [Fact]

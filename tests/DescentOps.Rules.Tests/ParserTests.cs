@@ -24,7 +24,7 @@ public sealed class ParserTests
               severity high
               priority 7
               cooldown 30 min
-              when probe.head_temp above 420 K for 3 samples and not probe.mode is safe
+              when (probe.head_temp above 420 K for 3 samples) and not probe.mode is safe
               then {
                 send probe.head set_power(power = 2kW)
                 wait 10 min
@@ -50,6 +50,42 @@ public sealed class ParserTests
         Assert.Equal(2, Assert.Single(rule.Escalations).After.Number);
         Assert.Equal(["hot-head", "other"], Assert.Single(result.RuleSet.Exclusions).Rules.Select(r => r.Text));
     }
+
+    [Theory]
+    // 'for' applies to the whole condition before it, back to 'when' or the opening bracket (LANGUAGE.md).
+    [InlineData("a above 1 K and b above 2 K for 3 samples", "Samples(All(a,b))")]
+    [InlineData("a above 1 K or b above 2 K and c above 3 K for 10 min", "Duration(Any(a,All(b,c)))")]
+    [InlineData("not a above 1 K for 3 samples", "Samples(Not(a))")]
+    [InlineData("(a above 1 K for 3 samples) and b above 2 K", "All(Samples(a),b)")]
+    [InlineData("((a above 1 K or b above 2 K) for 2 samples) or c above 3 K", "Any(Samples(Any(a,b)),c)")]
+    public void For_binds_loosest(string condition, string expected)
+    {
+        var result = Parse($"rule r {{ runs on ground severity low when {condition} then {{ }} }}");
+        Assert.Empty(result.Errors);
+        Assert.Equal(expected, Shape(Assert.Single(result.RuleSet.Rules).Condition!));
+    }
+
+    [Theory]
+    [InlineData("a above 1 K for 3 samples and b above 2 K", "and")]
+    [InlineData("a above 1 K for 10 min or b above 2 K", "or")]
+    [InlineData("a above 1 K for 10 min for 3 samples", "for")]
+    public void Anything_after_a_for_clause_must_be_bracketed(string condition, string word)
+    {
+        var error = Single($"rule r {{ runs on ground severity low when {condition} then {{ }} }}");
+        Assert.Equal(DiagnosticCode.UnexpectedToken, error.Code);
+        Assert.StartsWith($"'{word}' after a 'for' clause", error.Message);
+    }
+
+    private static string Shape(ConditionSyntax condition) => condition switch
+    {
+        LimitCheckSyntax limit => limit.Point.Text,
+        AllOfSyntax all => $"All({string.Join(",", all.Operands.Select(Shape))})",
+        AnyOfSyntax any => $"Any({string.Join(",", any.Operands.Select(Shape))})",
+        NotSyntax not => $"Not({Shape(not.Operand)})",
+        HoldsForSamplesSyntax samples => $"Samples({Shape(samples.Operand)})",
+        HoldsForDurationSyntax duration => $"Duration({Shape(duration.Operand)})",
+        _ => condition.GetType().Name,
+    };
 
     [Fact]
     public void And_binds_tighter_than_or()

@@ -78,11 +78,11 @@ public sealed class PropertyTests
 
     private const string Rules = """
         rule hot { runs on board severity high priority 3 cooldown 5 min
-          when probe.head_temp above 420 K for 2 samples or step of probe.head_temp above 50 K
+          when (probe.head_temp above 420 K for 2 samples) or step of probe.head_temp above 50 K
           then { send probe.head set_power(power = 1 kW) wait 2 min send probe pause_descent }
           escalate after 10 min { send probe enter_safe_mode disable hot } }
         rule stall { runs on ground severity medium priority 3
-          when rate of probe.depth over 20 min below 0.5 m/h for 15 min and not probe.mode is paused
+          when (rate of probe.depth over 20 min below 0.5 m/h for 15 min) and not probe.mode is paused
           then { send probe.head set_power(power = 7 kW) enable hot } }
         rule link { runs on ground severity low
           when station.link is down for 3 samples

@@ -83,14 +83,16 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void AnOceanOutsideTheAbsorptionFitIsRefusedAtTheAcousticsSection()
+    public void AnOceanOutsideTheAbsorptionFitIsRefusedAtTheOceanSalinity()
     {
         // The fixture's ocean holds 12 g/kg (practical salinity about 11.9); Francois-Garrison was fitted for 30 to 35.
         var text = ScenarioText.DefaultWith("  absorption: ainslie_mccolm", "  absorption: francois_garrison");
-        var error = SingleError(text);
-        Assert.Equal("acoustics", error.FieldPath);
+        var error = Assert.Single(RunEnvelope.Errors(ScenarioLoader.LoadText(text, File)));
+        Assert.Equal("shell.ocean_salinity", error.FieldPath);
         Assert.Contains("Francois-Garrison", error.Message);
-        Assert.Equal(ScenarioText.LineOf(text, "  frequency: 12 kHz"), error.Location.Line);
+        Assert.Contains("practicalSalinity = 11.9", error.Message);
+        Assert.Contains("[30, 35]", error.Message);
+        Assert.Equal(ScenarioText.LineOf(text, "ocean_salinity: 12 g/kg"), error.Location.Line);
     }
 
     [Fact]

@@ -62,6 +62,8 @@ public static class RehearseCommand
             throw new UsageException($"SCENARIO: '{scenarioName}' is not the scenario of {fromPath} ('{from.Scenario.Name}').");
         }
 
+        // A rehearsal refuses what run and check refuse (a logged run's scenario already passed).
+        if (from is null && Mission.Running.MissionPreflight.Errors(scenario) is { Count: > 0 } refusals) throw new Scenarios.Loading.ScenarioException(refusals);
         var seed = from?.Manifest.Seed ?? scenario.Run.Seed;
         var path = output is null ? RehearsalLaunch.DefaultLogPath(scenario, seed) : Path.GetFullPath(output);
         if (File.Exists(path)) throw new UsageException($"--output: {path} exists; a rehearsal never replaces a log.");

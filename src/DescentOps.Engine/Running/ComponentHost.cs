@@ -1,3 +1,4 @@
+using DescentOps.Primitives.Failures;
 using DescentOps.Engine.Components;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Scheduling;
@@ -55,7 +56,8 @@ internal sealed class ComponentHost
         {
             _context.RollBackSequence(mark);
             _failures++;
-            var restart = _component.FailurePolicy == FailurePolicy.RestartFromLastState && _failures <= _component.MaxRestarts;
+            // A failure that a restart cannot cure (a model asked outside its range) ends the run at once.
+            var restart = _component.FailurePolicy == FailurePolicy.RestartFromLastState && _failures <= _component.MaxRestarts && exception is not IAbortsRun;
             var failure = new ComponentFailure(exception.GetType().Name, exception.Message, restart, _failures);
             return new EventResult(simEvent.Key, [], [], [], null, failure);
         }

@@ -72,7 +72,7 @@ public sealed class RuleHost
             return;
         }
 
-        foreach (var sample in samples) _evaluator.Submit(sample);
+        _evaluator.Submit(samples);
     }
 
     public Placement Placement { get; }

@@ -34,7 +34,7 @@ public sealed class ConditionTrigger
     public RuleFiring? OnFrame(TelemetryFrame truth)
     {
         if (HasFired) return null;
-        foreach (var sample in FrameSamples.Of(truth)) _evaluator.Submit(sample);
+        _evaluator.Submit([.. FrameSamples.Of(truth)]);
         return Take();
     }
 

@@ -12,7 +12,8 @@ namespace DescentOps.Mission.Running;
 /// What a run would refuse once under way, found before it starts, and what is legal but almost certainly a mistake.
 /// The run refuses a scenario when a model it builds throws: the descent model over the whole shell (the probe
 /// evaluates it at every depth node it reaches), the components, and their start. So the preflight does exactly
-/// that: it integrates the descent at full power from the surface to the ocean with the run's own model, builds
+/// that: first the run envelope (every model at the extreme states the scenario takes it to, refused with field, value,
+/// model and range), then it integrates the descent at full power from the surface to the ocean with the run's own model, builds
 /// the components and runs the first telemetry interval with a journal that keeps nothing. <c>check</c> and
 /// <c>run</c> both call it, so <c>check</c> accepts nothing <c>run</c> then rejects.
 /// </summary>
@@ -22,7 +23,8 @@ public static class MissionPreflight
     public static IReadOnlyList<ScenarioError> Errors(Scenario scenario)
     {
         ArgumentNullException.ThrowIfNull(scenario);
-        var errors = new List<ScenarioError>();
+        var errors = new List<ScenarioError>(RunEnvelope.Errors(scenario));
+        if (errors.Count > 0) return errors;
         try
         {
             var model = ProbeDescentFactory.Model(scenario);
@@ -47,8 +49,8 @@ public static class MissionPreflight
             {
                 var reason = summary.Outcome.Reason;
                 var parameter = System.Text.RegularExpressions.Regex.Match(reason, @"\(Parameter '([^']+)'\)");
-                var path = FieldOf(parameter.Success ? parameter.Groups[1].Value : null);
-                errors.Add(new ScenarioError(scenario.LocationOf(path), path, $"a run would stop at its start: {reason.Split(" (Parameter", StringSplitOptions.None)[0].Split('\n')[0]}"));
+                var path = RangeRefusal.FieldOf(parameter.Success ? parameter.Groups[1].Value : null);
+                errors.Add(RangeRefusal.Error(scenario, path, $"it would stop at its start: {reason.Split(" (Parameter", StringSplitOptions.None)[0].Split('\n')[0]}"));
             }
         }
         catch (ArgumentException exception)
@@ -105,21 +107,7 @@ public static class MissionPreflight
         return warnings;
     }
 
-    /// <summary>A model's range refusal, at the field that most likely set the value it refused.</summary>
-    private static ScenarioError Located(Scenario scenario, ArgumentException exception)
-    {
-        var path = FieldOf(exception.ParamName);
-        var message = exception.Message.Split(" (Parameter", StringSplitOptions.None)[0].Split('\n')[0];
-        return new ScenarioError(scenario.LocationOf(path), path, $"a run would refuse this scenario: {message}");
-    }
-
-    private static string FieldOf(string? parameter) =>
-        parameter switch
-        {
-            "farFieldTemperatureK" or "baseTemperatureK" or "surfaceTemperatureK" or "temperatureK" => "shell.surface_temperature",
-            "geometry" => "probe.mass",
-            "headFluxWPerM2" => "probe.radius",
-            "pressurePa" or "thicknessM" => "shell.thickness",
-            _ => "probe",
-        };
+    /// <summary>A model's refusal, at the field that most likely set the value it refused.</summary>
+    private static ScenarioError Located(Scenario scenario, ArgumentException exception) =>
+        RangeRefusal.Error(scenario, RangeRefusal.FieldOf(exception.ParamName), exception);
 }

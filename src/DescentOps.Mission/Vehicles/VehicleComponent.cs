@@ -2,6 +2,8 @@ using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Mission.Messages;
 using DescentOps.Physics.Ocean;
+using DescentOps.Physics.Seawater;
+using DescentOps.Scenarios.Envelope;
 using DescentOps.Physics.Vehicles;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
@@ -26,7 +28,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     private readonly VehicleModel _vehicle;
     private readonly AcousticsModel? _acoustics;
-    private readonly double _salinityKgPerKg;
+    private readonly Scenario _scenario;
     private readonly double _gravityMPerS2;
 
     /// <summary>With a power system on the probe the dock's charger draws on the probe's bus, which may shed it.</summary>
@@ -38,7 +40,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         ArgumentNullException.ThrowIfNull(scenario);
         _vehicle = vehicle;
         _acoustics = scenario.Acoustics;
-        _salinityKgPerKg = scenario.Shell.OceanSalinityKgPerKg;
+        _scenario = scenario;
         _gravityMPerS2 = scenario.Body.GravityMPerS2;
         _dockOnProbeBus = scenario.Power is not null;
     }
@@ -490,7 +492,11 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     }
 
     private VehicleAcousticLink? Link(VehicleState state) =>
-        _acoustics is null ? null : VehicleAcousticLink.For(_acoustics, _salinityKgPerKg, state.BasePressurePa);
+        _acoustics is null ? null : VehicleAcousticLink.For(_acoustics, _scenario, Ocean(state),
+            SeawaterPressureDepth.StandardOceanDepthM(OceanUnderShell.SeaPressurePa(state.BasePressurePa), ScenarioOcean.StandardGravityMPerS2));
+
+    /// <summary>The water under the shell by TEOS-10, at the pressure the probe reported at release.</summary>
+    private OceanUnderShell Ocean(VehicleState state) => ScenarioOcean.At(_scenario, state.BasePressurePa);
 
     /// <summary>One-sigma dead-reckoning error since the last fix, plus the drift of the current the vehicle does not know.</summary>
     private double NavigationErrorM(VehicleState state, SimTime now)
@@ -601,9 +607,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     private VehiclePerformance Performance(VehicleState state)
     {
         var needsWater = _vehicle.Kind == VehicleKind.Glider || _vehicle.Hull is not null;
-        var density = needsWater
-            ? SeawaterDensity.Eos80KgPerM3(PracticalSalinity.FromAbsoluteKgPerKg(_salinityKgPerKg), _acoustics?.OceanTemperatureK ?? state.BaseTemperatureK, state.BasePressurePa)
-            : double.NaN;
+        var density = needsWater ? Ocean(state).DensityKgPerM3 : double.NaN;
         return VehiclePerformance.For(_vehicle, density, _gravityMPerS2, state.BasePressurePa);
     }
 }

@@ -62,7 +62,7 @@ public static class IceGibbsFunction
         return EvaluateUnchecked(temperatureK, pressurePa);
     }
 
-    private static IceGibbsDerivatives EvaluateUnchecked(double temperatureK, double pressurePa)
+    internal static IceGibbsDerivatives EvaluateUnchecked(double temperatureK, double pressurePa)
     {
         var tau = temperatureK / Tt;
         var dPi = (pressurePa / Pt) - Pi0;

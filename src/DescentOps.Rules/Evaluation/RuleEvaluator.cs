@@ -8,7 +8,7 @@ namespace DescentOps.Rules.Evaluation;
 
 /// <summary>
 /// Runs a checked rule set over telemetry on a <see cref="RuleScheduler"/>. Feed samples in time order with
-/// <see cref="Submit"/> (or attach an observable); advance the scheduler as simulated time passes so that
+/// <see cref="Submit(IReadOnlyList{TelemetrySample})"/> (or attach an observable); advance the scheduler as simulated time passes so that
 /// persistence periods, cooldowns, waits and escalations come due. Everything it decides appears on
 /// <see cref="Outputs"/> in one deterministic order: the same inputs give the same outputs.
 /// Do not submit samples from inside an output callback: the evaluator is in the middle of a step.
@@ -90,29 +90,57 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
     /// highest priority first. Samples of points no rule reads are ignored; late, non-finite or wrongly typed
     /// samples are refused with a <see cref="RuleEventKind.SampleRejected"/> event.
     /// </summary>
-    public void Submit(TelemetrySample sample)
+    public void Submit(TelemetrySample sample) => Submit([sample]);
+
+    /// <summary>
+    /// Takes samples in time order, one instant at a time: every sample of an instant (a frame's readings) is
+    /// taken before any rule is evaluated, and then each rule that reads any of them is evaluated once, highest
+    /// priority first, so no rule decides on a mix of this instant's readings and the last one's.
+    /// </summary>
+    public void Submit(IReadOnlyList<TelemetrySample> samples)
+    {
+        var triggered = new List<string>();
+        for (var i = 0; i < samples.Count; i++)
+        {
+            var sample = samples[i];
+            if (Take(sample) is { } point && !triggered.Contains(point, StringComparer.Ordinal))
+            {
+                triggered.Add(point);
+            }
+
+            var instantEnds = i == samples.Count - 1 || samples[i + 1] is not { } next || sample is null || next.Time != sample.Time;
+            if (instantEnds && triggered.Count > 0)
+            {
+                EvaluateInstant(triggered);
+                triggered = [];
+            }
+        }
+    }
+
+    /// <summary>Adds a sample to the history; the point it read when a rule reads it and it was valid, else null.</summary>
+    private string? Take(TelemetrySample sample)
     {
         if (sample is null || sample.Point is null || sample.Value is null)
         {
             Emit(new RuleEvent(_scheduler.Clock, "", RuleEventKind.SampleRejected, "a sample with no point or no value"));
-            return;
+            return null;
         }
 
         if (sample.Time < _scheduler.Clock)
         {
             Emit(new RuleEvent(_scheduler.Clock, "", RuleEventKind.SampleRejected, $"{sample} is earlier than the evaluator's clock {_scheduler.Clock}"));
-            return;
+            return null;
         }
 
         if (sample.Time > _scheduler.Clock && !AdvanceTo(sample.Time))
         {
             Emit(new RuleEvent(_scheduler.Clock, "", RuleEventKind.SampleRejected, $"{sample} was submitted from inside a scheduled step"));
-            return;
+            return null;
         }
 
         if (!_pointIsNumeric.TryGetValue(sample.Point, out var numeric))
         {
-            return;
+            return null;
         }
 
         var problem = (numeric, sample.Value) switch
@@ -126,12 +154,27 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
         if (problem is not null)
         {
             Emit(new RuleEvent(sample.Time, "", RuleEventKind.SampleRejected, $"{sample} {problem}"));
-            return;
+            return null;
         }
 
         _history.Add(sample);
-        var context = new EvaluationContext(sample.Time, sample.Point, _history);
-        foreach (var runtime in _rulesByPoint[sample.Point])
+        return sample.Point;
+    }
+
+    private void EvaluateInstant(List<string> points)
+    {
+        var context = new EvaluationContext(_scheduler.Clock, points, _history);
+        if (points.Count == 1)
+        {
+            foreach (var runtime in _rulesByPoint[points[0]])
+            {
+                Evaluate(runtime, context);
+            }
+
+            return;
+        }
+
+        foreach (var runtime in EvaluationOrder(points.SelectMany(p => _rulesByPoint[p]).Distinct()))
         {
             Evaluate(runtime, context);
         }
@@ -270,7 +313,7 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
             {
                 rule.WakeUp = null;
                 rule.WakeUpTime = null;
-                Evaluate(rule, new EvaluationContext(_scheduler.Clock, null, _history));
+                Evaluate(rule, new EvaluationContext(_scheduler.Clock, [], _history));
                 return Disposable.Empty;
             });
         }

@@ -194,7 +194,7 @@ public sealed class RuleParser
                     break;
                 case "when":
                     RejectDuplicate(condition is not null, item);
-                    condition = ParseAnyOf(0);
+                    condition = ParseCondition(0);
                     break;
                 case "then":
                     RejectDuplicate(actions is not null, item);
@@ -324,6 +324,44 @@ public sealed class RuleParser
         throw Fail(DiagnosticCode.UnexpectedToken, value.Location, $"expected a value for argument '{name.Text}', found {value.Describe()}");
     }
 
+    /// <summary>
+    /// A whole condition: an 'or' chain, then optionally 'for' with a duration or a count of samples. 'for' binds
+    /// loosest, so it applies to everything written before it back to 'when' or to the opening bracket; a
+    /// persistence that should cover only a part is bracketed, and nothing may follow a 'for' clause but the end
+    /// of the condition or its closing bracket, so 'A for 3 samples and B' is refused rather than read one way
+    /// or the other.
+    /// </summary>
+    private ConditionSyntax ParseCondition(int depth)
+    {
+        var condition = ParseAnyOf(depth);
+        if (!Current.IsWord("for"))
+        {
+            return condition;
+        }
+
+        Next();
+        var amount = Current;
+        if (amount.Kind == TokenKind.Number && _tokens[Math.Min(_position + 1, _tokens.Count - 1)].IsWord("samples"))
+        {
+            var count = ExpectWholeNumber("sample count", 1);
+            Next();
+            condition = new HoldsForSamplesSyntax(condition, count, amount.Location, condition.Location);
+        }
+        else
+        {
+            condition = new HoldsForDurationSyntax(condition, ExpectQuantity("a duration or 'N samples'"), condition.Location);
+        }
+
+        var after = Current;
+        if (after.IsWord("and") || after.IsWord("or") || after.IsWord("for"))
+        {
+            throw Fail(DiagnosticCode.UnexpectedToken, after.Location,
+                $"'{after.Text}' after a 'for' clause: 'for' applies to the whole condition before it, so bracket the part that must persist, as in '(A for 3 samples) {(after.Text == "for" ? "and" : after.Text)} B'");
+        }
+
+        return condition;
+    }
+
     private ConditionSyntax ParseAnyOf(int depth)
     {
         var first = ParseAllOf(depth);
@@ -373,22 +411,7 @@ public sealed class RuleParser
             return new NotSyntax(ParseUnary(depth + 1), not.Location);
         }
 
-        var atom = ParseAtom(depth);
-        if (!Current.IsWord("for"))
-        {
-            return atom;
-        }
-
-        Next();
-        var amount = Current;
-        if (amount.Kind == TokenKind.Number && _tokens[Math.Min(_position + 1, _tokens.Count - 1)].IsWord("samples"))
-        {
-            var count = ExpectWholeNumber("sample count", 1);
-            Next();
-            return new HoldsForSamplesSyntax(atom, count, amount.Location, atom.Location);
-        }
-
-        return new HoldsForDurationSyntax(atom, ExpectQuantity("a duration or 'N samples'"), atom.Location);
+        return ParseAtom(depth);
     }
 
     private ConditionSyntax ParseAtom(int depth)
@@ -397,7 +420,7 @@ public sealed class RuleParser
         if (start.Kind == TokenKind.LeftParen)
         {
             Next();
-            var inner = ParseAnyOf(depth + 1);
+            var inner = ParseCondition(depth + 1);
             Expect(TokenKind.RightParen, "')' to close the group");
             return inner;
         }

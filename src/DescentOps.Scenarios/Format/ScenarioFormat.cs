@@ -77,6 +77,7 @@ public static class ScenarioFormat
                 new QuantityField("thickness", "Ice thickness from the surface to the ocean.", Length, 0, 200_000, MinExclusive: true),
                 new QuantityField("surface_temperature", "Ice temperature at the surface.", Temperature, 20, 273.15),
                 new QuantityField("ocean_salinity", "Salinity of the ocean under the ice (mass of salt per mass of seawater); it sets the freezing point at the base.", MassFraction, 0, 0.04),
+                new QuantityField("ocean_temperature", "In-situ temperature of the ocean under the shell (default: its freezing point at the ocean's salinity and the pressure under the shell, by TEOS-10); colder than that point is refused.", Temperature, 200, 313.15, Required: false),
                 new QuantityField("fractured_to", "Bottom of an open-fractured zone below the surface of an airless body: vapour and melt escape through it, so melting (rather than sublimating) cannot start above it (default: no such zone).", Length, 0, 200_000, Required: false),
                 new SectionField("convection", "A warm convecting layer under the conductive lid (default: none, the whole shell conducts).",
                 [
@@ -138,6 +139,11 @@ public static class ScenarioFormat
                     new IntegerField("priority", "Shedding priority: lower numbers are kept longer.", 0, 1000),
                     new QuantityField("power", "For a fixed load: the power it draws.", Power, 0, 1e6, Required: false),
                 ]), MinItems: 3, MaxItems: 64, Required: false),
+                new SectionField("heat_path", "Where the source's waste heat (thermal less electric output) goes: shares reaching the head and the side wall, the rest rejected. It flows whatever the bus does; omit for none.",
+                [
+                    new NumberField("head", "Share of the waste heat that reaches the melting head.", 0, 1),
+                    new NumberField("wall", "Share of the waste heat that reaches the side wall.", 0, 1),
+                ], Required: false),
                 new SectionField("turbine", "A current turbine that recharges the battery once the probe hangs in the ocean; omit for none.",
                 [
                     new QuantityField("rotor_diameter", "Diameter of the rotor.", Length, 0, 10, MinExclusive: true),
@@ -265,7 +271,7 @@ public static class ScenarioFormat
                 new QuantityField("bandwidth", "Receiver bandwidth.", Frequency, 0, 1e6, MinExclusive: true),
                 new NumberField("detection_threshold", "Signal-to-noise ratio in the band the modem needs, dB.", -30, 60),
                 new NumberField("spreading", "Spreading exponent k of k·10·log10(r): 2 spherical, 1 cylindrical (default 1.5).", 1, 2, Required: false),
-                new QuantityField("ocean_temperature", "Temperature of the water under the ice.", Temperature, 260, 310),
+                new QuantityField("ocean_temperature", "Temperature of the water under the ice for absorption (default: the ocean's, shell.ocean_temperature).", Temperature, 260, 310, Required: false),
                 new NumberField("ph", "pH of the water (default 8).", 7.7, 8.3, Required: false),
                 new ChoiceField("absorption", "francois_garrison (default) or ainslie_mccolm.", ["francois_garrison", "ainslie_mccolm"], Required: false),
                 new QuantityField("message_interval", "Time between a vehicle's data messages (default 10 min).", Duration, 1, Day, Required: false),

@@ -96,6 +96,7 @@ public static class ScenarioLoader
             new ShellModel(shell.Quantity("thickness"), shell.Quantity("surface_temperature"), shell.Quantity("ocean_salinity"))
             {
                 FracturedToM = shell.OptionalQuantity("fractured_to") ?? 0.0,
+                OceanTemperatureK = shell.OptionalQuantity("ocean_temperature"),
                 Convection = shell.OptionalSection("convection") is { } c
                     ? new ConvectionModel(c.Quantity("top"), c.Quantity("temperature"), c.OptionalQuantity("basal_boundary") ?? ((shell.Quantity("thickness") - c.Quantity("top")) / 10))
                     : null,
@@ -209,7 +210,11 @@ public static class ScenarioLoader
             power.OptionalQuantity("electric_power") ?? 0.0,
             battery,
             loads.Count == 0 ? DefaultLoads : [.. loads.Select(BuildLoad)],
-            turbine);
+            turbine)
+        {
+            WasteHeatToHead = power.OptionalSection("heat_path")?.Number("head") ?? 0.0,
+            WasteHeatToWall = power.OptionalSection("heat_path")?.Number("wall") ?? 0.0,
+        };
     }
 
     /// <summary>The bus a power section without loads gets: heat and electronics first, the wall heater shed first.</summary>
@@ -335,7 +340,7 @@ public static class ScenarioLoader
         a.Quantity("bandwidth"),
         a.Number("detection_threshold"),
         a.OptionalNumber("spreading") ?? DefaultSpreadingExponent,
-        a.Quantity("ocean_temperature"),
+        a.OptionalQuantity("ocean_temperature"),
         a.OptionalNumber("ph") ?? DefaultPH,
         a.OptionalText("absorption") == "ainslie_mccolm" ? AbsorptionFormula.AinslieMcColm : AbsorptionFormula.FrancoisGarrison,
         a.OptionalQuantity("message_interval") ?? DefaultMessageIntervalS);
@@ -509,19 +514,6 @@ public static class ScenarioLoader
             CheckVehicle(scenario.Vehicles[i], vehicles[i], $"vehicles[{i}]", errors);
         }
 
-        if (scenario.Acoustics is { } acoustics && root.OptionalSection("acoustics") is { } section)
-        {
-            // The absorption and sound-speed fits have validity ranges of their own; the ocean must lie inside them.
-            Refused(section.Location, "acoustics", errors, () =>
-            {
-                var s = Physics.Ocean.PracticalSalinity.FromAbsoluteKgPerKg(scenario.Shell.OceanSalinityKgPerKg);
-                _ = acoustics.Formula == AbsorptionFormula.AinslieMcColm
-                    ? Physics.Acoustics.SeawaterAbsorption.AinslieMcColmDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH)
-                    : Physics.Acoustics.SeawaterAbsorption.FrancoisGarrisonDbPerKm(acoustics.FrequencyHz, acoustics.OceanTemperatureK, s, 0.0, acoustics.PH);
-                _ = Physics.Ocean.SoundSpeed.UnescoMPerS(s, acoustics.OceanTemperatureK, 0.0);
-            });
-        }
-
         if (scenario.Power is { } power) CheckPower(power, root.Section("power"), errors);
         CheckStation(scenario.Station, root.Section("station"), errors);
     }
@@ -624,6 +616,11 @@ public static class ScenarioLoader
                 var word = role switch { BusLoadRole.HeadHeater => "head_heater", BusLoadRole.WallHeater => "wall_heater", _ => "electronics" };
                 errors.Add(new ScenarioError(section.LocationOf("loads"), "power.loads", $"the bus needs exactly one {word} load, found {count}"));
             }
+        }
+
+        if (power.WasteHeatToHead + power.WasteHeatToWall > 1.0)
+        {
+            errors.Add(new ScenarioError(section.Section("heat_path").Location, "power.heat_path", "the head and wall shares of the waste heat add up to more than 1"));
         }
 
         if (power.Turbine is { } turbine && turbine.CutInSpeedMPerS > turbine.RatedSpeedMPerS)

@@ -9,6 +9,9 @@ public sealed record ShellModel(double ThicknessM, double SurfaceTemperatureK, d
 {
     public double FracturedToM { get; init; }
 
+    /// <summary>In-situ temperature of the ocean under the shell; null: the local freezing point (TEOS-10).</summary>
+    public double? OceanTemperatureK { get; init; }
+
     public ConvectionModel? Convection { get; init; }
 
     public IReadOnlyList<ShellLayerModel> Layers { get; init; } = [];

@@ -117,11 +117,11 @@ public class AcousticsTests
     [Fact]
     public void OutsideTheFitsTheModelsRefuse()
     {
-        var e = Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterAbsorption.FrancoisGarrisonDbPerKm(10e3, ZeroCelsiusK + 25.0, 35.0, 0.0, 8.0));
+        var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterAbsorption.FrancoisGarrisonDbPerKm(10e3, ZeroCelsiusK + 25.0, 35.0, 0.0, 8.0));
         Assert.Equal("temperatureK", e.ParamName);
-        Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterAbsorption.AinslieMcColmDbPerKm(10e3, ZeroCelsiusK, 2.0, 0.0, 8.0));
-        Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterAbsorption.ThorpDbPerKm(100e3));
-        Assert.Throws<ArgumentOutOfRangeException>(() => TransmissionLoss.PowerLawDb(0.5, 2.0, 1.0));
-        Assert.Throws<ArgumentOutOfRangeException>(() => TransmissionLoss.PowerLawDb(10.0, 2.5, 1.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterAbsorption.AinslieMcColmDbPerKm(10e3, ZeroCelsiusK, 2.0, 0.0, 8.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterAbsorption.ThorpDbPerKm(100e3));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => TransmissionLoss.PowerLawDb(0.5, 2.0, 1.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => TransmissionLoss.PowerLawDb(10.0, 2.5, 1.0));
     }
 }

@@ -120,14 +120,14 @@ public class SeawaterTests
     [Fact]
     public void OutsideTheFitsTheModelsRefuse()
     {
-        var e = Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterDensity.Eos80(43.0, 275.0, 0.0));
+        var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterDensity.Eos80(43.0, 275.0, 0.0));
         Assert.Equal("practicalSalinity", e.ParamName);
         Assert.Contains("[0, 42]", e.Message, StringComparison.Ordinal);
-        Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterDensity.Eos80(35.0, 270.0, 0.0));
-        Assert.Throws<ArgumentOutOfRangeException>(() => SoundSpeed.UnescoMPerS(35.0, 275.0, 101e6));
-        var m = Assert.Throws<ArgumentOutOfRangeException>(() => SoundSpeed.MackenzieMPerS(20.0, 275.0, 10.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterDensity.Eos80(35.0, 270.0, 0.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SoundSpeed.UnescoMPerS(35.0, 275.0, 101e6));
+        var m = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SoundSpeed.MackenzieMPerS(20.0, 275.0, 10.0));
         Assert.Equal("practicalSalinity", m.ParamName);
-        Assert.Throws<ArgumentOutOfRangeException>(() => SoundSpeed.MackenzieMPerS(35.0, 275.0, 9000.0));
-        Assert.Throws<ArgumentOutOfRangeException>(() => SeawaterPressureDepth.StandardOceanDepthM(1e6, 0.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SoundSpeed.MackenzieMPerS(35.0, 275.0, 9000.0));
+        Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterPressureDepth.StandardOceanDepthM(1e6, 0.0));
     }
 }

@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DescentOps.Physics;
 
 namespace DescentOps.Cli.Commands.Physics;
 
@@ -38,6 +39,14 @@ internal static class PhysicsAction
     /// <summary>The model's own sentence, without the runtime's "(Parameter 'x')" and "Actual value was" additions.</summary>
     internal static string Describe(ArgumentOutOfRangeException exception, IReadOnlyDictionary<string, string>? optionsByParameter)
     {
+        if (exception is ModelRangeException refusal)
+        {
+            // The range is data: the sentence is formatted from it, and the option is found by the quantity's name.
+            return optionsByParameter is not null && optionsByParameter.TryGetValue(refusal.Range.Quantity, out var named)
+                ? $"{named}: {refusal.Sentence}"
+                : refusal.Sentence;
+        }
+
         var message = exception.Message.Split('\n')[0].TrimEnd('\r');
         var marker = message.LastIndexOf(" (Parameter '", StringComparison.Ordinal);
         if (marker >= 0) message = message[..marker];

@@ -9,11 +9,12 @@ namespace DescentOps.Cli.Commands.Physics;
 public static class PhysicsCommand
 {
     public static Command Create() =>
-        new("physics", "Engineering answers from the simulator's own physics models: ice, descent, refreezing, shell crossing, seawater, acoustics, fibre, radio in ice, station, light time, vehicles.")
+        new("physics", "Engineering answers from the simulator's own physics models: ice, descent, refreezing, hot-water jets, shell crossing, seawater, acoustics, fibre, radio in ice, station, light time, vehicles.")
         {
             IceSubcommand.Create(),
             DescentSubcommand.Create(),
             RefreezeSubcommand.Create(),
+            JetsSubcommand.Create(),
             CrossingSubcommand.Create(),
             SeawaterSubcommand.Create(),
             AcousticSubcommand.Create(),

@@ -1,0 +1,96 @@
+using System.Text.RegularExpressions;
+
+namespace DescentOps.Mission.Tests.Cli;
+
+/// <summary>
+/// Every rule example in the rule language's document and in the README goes through <c>descentops check</c> against
+/// the built-in default scenario's catalogue, the one a user gets without <c>--scenario</c>: an example that names a
+/// point or a command the tool does not have fails here, not in a reader's hands.
+/// </summary>
+[Collection(InProcessCliCollection.Name)]
+public sealed partial class DocumentedExamplesTests
+{
+    [GeneratedRegex(@"^```(?<lang>\w*)\n(?<body>.*?)^```", RegexOptions.Multiline | RegexOptions.Singleline)]
+    private static partial Regex FencedBlock();
+
+    private static string RepositoryRoot()
+    {
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
+        {
+            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return dir.FullName;
+        }
+
+        throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
+    }
+
+    private static IEnumerable<(string Lang, string Body)> Blocks(string document) =>
+        FencedBlock().Matches(File.ReadAllText(Path.Combine(RepositoryRoot(), document)).Replace("\r\n", "\n", StringComparison.Ordinal))
+            .Select(m => (m.Groups["lang"].Value, m.Groups["body"].Value));
+
+    /// <summary>Rule sets: the `dorules` blocks, and the literal `rules: |` blocks inside YAML examples.</summary>
+    private static List<string> RuleSets(string document)
+    {
+        var sets = new List<string>();
+        foreach (var (lang, body) in Blocks(document))
+        {
+            if (lang == "dorules")
+            {
+                sets.Add(body);
+                continue;
+            }
+
+            if (lang != "yaml") continue;
+            var lines = body.Split('\n');
+            for (var i = 0; i < lines.Length; i++)
+            {
+                var trimmed = lines[i].TrimStart();
+                if (trimmed != "rules: |") continue;
+                var indent = lines[i].Length - trimmed.Length;
+                var block = lines.Skip(i + 1).TakeWhile(l => l.Length == 0 || l.Length - l.TrimStart().Length > indent).ToArray();
+                sets.Add(string.Join('\n', block));
+            }
+        }
+
+        return sets;
+    }
+
+    private static async Task AssertChecksClean(string folder, params string[] arguments)
+    {
+        var (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, ["check", .. arguments]);
+        Assert.True(exit == 0, $"check {string.Join(' ', arguments)} exited {exit}:\n{stdout}{stderr}");
+        Assert.Contains(": 0 errors, 0 warnings", stdout);
+    }
+
+    [Theory]
+    [InlineData("src/DescentOps.Rules/LANGUAGE.md", 1)]
+    [InlineData("README.md", 1)]
+    public async Task Every_rule_set_in_a_document_passes_check(string document, int atLeast)
+    {
+        var sets = RuleSets(document);
+        Assert.True(sets.Count >= atLeast, $"{document}: expected at least {atLeast} rule examples, found {sets.Count}");
+        var folder = ToolProcess.NewTempDirectory();
+        for (var i = 0; i < sets.Count; i++)
+        {
+            var file = Path.Combine(folder, $"example-{i + 1}.dorules");
+            await File.WriteAllTextAsync(file, sets[i]);
+            await AssertChecksClean(folder, file);
+        }
+    }
+
+    [Fact]
+    public async Task The_readme_fault_conditions_pass_check_in_the_default_scenario()
+    {
+        // The README's fault list with 'when:' conditions is added to the default scenario's own faults.
+        var faults = Blocks("README.md").Where(b => b.Lang == "yaml" && b.Body.StartsWith("  - name:", StringComparison.Ordinal) && b.Body.Contains("when:", StringComparison.Ordinal)).ToArray();
+        Assert.NotEmpty(faults);
+        var folder = ToolProcess.NewTempDirectory();
+        var scenario = DescentOps.Scenarios.BuiltInScenarios.Text("default.yaml").Replace("\r\n", "\n", StringComparison.Ordinal);
+        Assert.Contains("\nfaults:\n", scenario);
+        for (var i = 0; i < faults.Length; i++)
+        {
+            var file = Path.Combine(folder, $"faults-{i + 1}.yaml");
+            await File.WriteAllTextAsync(file, scenario.Replace("\nfaults:\n", "\nfaults:\n" + faults[i].Body, StringComparison.Ordinal));
+            await AssertChecksClean(folder, file);
+        }
+    }
+}

@@ -1,0 +1,58 @@
+using DescentOps.Engine.Running;
+using DescentOps.Physics.Seawater;
+using DescentOps.Scenarios;
+using DescentOps.Scenarios.Envelope;
+using DescentOps.Scenarios.Loading;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>
+/// The built-in thick shell: 25 km of ice over a cold ocean under some 23 MPa, crossed to the end with its vehicles at
+/// work in water at its own freezing point. Time-compressed (a 14 kW head, 12-hour telemetry) so the run takes a few
+/// thousand events.
+/// </summary>
+public sealed class ThickShellScenarioTests
+{
+    [Fact]
+    public async Task TheThickShellRunsToCompletionWithItsVehiclesInTheColdHighPressureOcean()
+    {
+        var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text("thick-shell-deep-ocean.yaml"), "thick-shell-deep-ocean.yaml");
+        Assert.True(scenario.Shell.ThicknessM >= 20_000);
+
+        var (summary, sink) = await MissionHarness.RunAsync(scenario);
+
+        Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
+        Assert.Equal(0, summary.ComponentFailures);
+        Assert.Equal(2, sink.OfKind("vehicle.task_complete").Count());
+
+        // The ocean the vehicles met: TEOS-10 water at its freezing point under the shell's pressure, colder than −2 °C and
+        // under more than 20 MPa; the acoustic link's sound speed is that water's (GSW sound_speed_t_exact is what the
+        // Seawater tests hold the Gibbs function to).
+        var shell = ScenarioShell.Build(scenario);
+        var ocean = ScenarioOcean.Build(scenario, shell);
+        Assert.True(ocean.Water.SeaPressurePa > 20e6);
+        Assert.Equal(ocean.Water.FreezingTemperatureK, ocean.TemperatureK);
+        Assert.True(ocean.TemperatureK < 271.15);
+        Assert.Equal(Teos10Seawater.AtFreezing(30.0, ocean.Water.SeaPressurePa).SoundSpeedMPerS, ocean.SoundSpeedMPerS);
+        foreach (var link in sink.OfKind("vehicle.acoustic_link"))
+        {
+            Assert.Equal(ocean.SoundSpeedMPerS, CollectingSink.Field(link, "sound_speed_m_s"), 9);
+        }
+    }
+
+    [Fact]
+    public async Task AFortyKilometreShellUnderAFitThatCoversItAlsoCompletes()
+    {
+        // The case: a 40 km shell either runs to completion or is refused at load. Here the Ainslie-McColm fit
+        // covers the water, so it must complete (the Francois-Garrison variant is refused: RunEnvelopeTests).
+        var text = BuiltInScenarios.Text("thick-shell-deep-ocean.yaml")
+            .Replace("thickness: 25 km", "thickness: 40 km", StringComparison.Ordinal)
+            .Replace("length: 27 km", "length: 42 km", StringComparison.Ordinal)
+            .Replace("head_power: 14 kW", "head_power: 30 kW", StringComparison.Ordinal)
+            .Replace("telemetry_interval: 12 h", "telemetry_interval: 1 d", StringComparison.Ordinal)
+            .Replace("transceiver: gbe-long-reach", "transceiver: gbe-long-reach\n  attenuation: 0.2", StringComparison.Ordinal);
+        var (summary, _) = await MissionHarness.RunAsync(ScenarioLoader.LoadText(text, "forty.yaml"));
+        Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
+        Assert.Equal(0, summary.ComponentFailures);
+    }
+}
