@@ -46,7 +46,12 @@ public sealed class CampaignNode : IAsyncDisposable
         }, akkaConfig);
         node = new CampaignNode(host);
         await host.StartAsync().ConfigureAwait(false);
-        var cluster = Akka.Cluster.Cluster.Get(host.Services.GetRequiredService<ActorSystem>());
+        var system = host.Services.GetRequiredService<ActorSystem>();
+        // If the node's actor system ends before the campaign does, the campaign cannot finish here: say so rather than wait.
+        _ = system.WhenTerminated.ContinueWith(
+            _ => node._finished.TrySetException(new InvalidOperationException("the campaign node's cluster stopped before the campaign ended; run the same command with --resume")),
+            TaskScheduler.Default);
+        var cluster = Akka.Cluster.Cluster.Get(system);
         cluster.Join(cluster.SelfAddress); // the first and only seed: the cluster forms around the campaign node
         node.Address = new NodeAddress(cluster.SelfAddress.Host!, cluster.SelfAddress.Port ?? listen.Port);
         node.Protocol = cluster.SelfAddress.Protocol;

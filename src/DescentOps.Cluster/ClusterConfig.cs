@@ -41,6 +41,8 @@ public static class ClusterConfig
             })
             .AddHocon(ConfigurationFactory.ParseString(string.Create(c, $$"""
                 akka.cluster.split-brain-resolver.stable-after = {{StableAfter.TotalSeconds}}s
+                # Flapping reachability (a loaded machine) must not down everyone: that would stop the node holding the store.
+                akka.cluster.split-brain-resolver.down-all-when-unstable = off
                 akka.cluster.failure-detector.acceptable-heartbeat-pause = {{HeartbeatPause.TotalSeconds}}s
                 akka.cluster.retry-unsuccessful-join-after = 2s
                 akka.cluster.seed-node-timeout = 2s

@@ -70,6 +70,28 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
+    public async Task AStoppedWorkerHandsBackItsRunAndAnotherFinishesIt()
+    {
+        var dir = ClusterFixture.TempDir();
+        var port = ClusterFixture.FreePort();
+        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "20", "--seed", "43", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
+        var stopping = new ClusterFixture.Worker(port);
+        // A worker with one slot asks again the moment a run ends, so while runs remain it always holds one.
+        await ClusterFixture.Until(() => stopping.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
+        Assert.False(campaign.IsCompleted, "the campaign ended before the worker could be stopped");
+        await stopping.DisposeAsync(); // as Ctrl-C: coordinated shutdown, whose first task hands back
+        Assert.Equal(1, stopping.Counters.HandedBack);
+
+        await using var other = new ClusterFixture.Worker(port);
+        var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
+        Assert.True(exit == 0, stdout + stderr);
+        Assert.Matches(@"worker w1 handed back run \d+ of baseline", stdout);
+        Assert.Contains("worker w1 left", stdout, StringComparison.Ordinal);
+        Assert.Equal(20, ClusterFixture.StoredRuns(dir));
+        Assert.Equal(20, stopping.Counters.RunsDone + other.Counters.RunsDone); // the handed-back run was done once, by the other
+    }
+
+    [Fact]
     public async Task ADuplicateResultIsDiscardedAndLogged()
     {
         var plan = ClusterFixture.Plan(seed: 5);

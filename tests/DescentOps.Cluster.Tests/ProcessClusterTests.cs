@@ -20,7 +20,7 @@ public sealed class ProcessClusterTests
 
         var port = ClusterFixture.FreePort();
         var join = $"127.0.0.1:{port}";
-        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "1", "--output", clustered]);
+        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "1", "--output", clustered, "--verbose"]); // its log is shown only if the test fails
         using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
         using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
 

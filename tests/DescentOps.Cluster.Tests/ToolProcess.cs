@@ -46,7 +46,15 @@ internal sealed class ToolProcess : IDisposable
 
     public async Task WaitAsync(TimeSpan guard)
     {
-        await _process.WaitForExitAsync().WaitAsync(guard);
+        try
+        {
+            await _process.WaitForExitAsync().WaitAsync(guard);
+        }
+        catch (TimeoutException)
+        {
+            throw new TimeoutException($"descentops {string.Join(' ', _process.StartInfo.ArgumentList.Skip(1))} still running after {guard.TotalSeconds} s\n--- stdout\n{Stdout}\n--- stderr\n{Stderr}");
+        }
+
         _process.WaitForExit(); // drains the asynchronous output readers
     }
 
