@@ -57,7 +57,7 @@ public sealed class InProcessClusterTests
         var dir = ClusterFixture.TempDir();
         var port = ClusterFixture.FreePort();
         // The command runs synchronously on its caller's thread: give it one of its own.
-        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "30", "--seed", "3", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
+        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "60", "--seed", "3", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
         await using var first = new ClusterFixture.Worker(port);
         await ClusterFixture.Until(() => first.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
         Assert.False(campaign.IsCompleted, "the campaign ended before the second worker could join");
@@ -65,8 +65,8 @@ public sealed class InProcessClusterTests
         var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
         Assert.True(exit == 0, stdout + stderr);
         Assert.True(late.Counters.RunsDone > 0, $"the late worker ran nothing; the first ran {first.Counters.RunsDone}\n{stdout}");
-        Assert.Equal(30, first.Counters.RunsDone + late.Counters.RunsDone);
-        Assert.Equal(30, ClusterFixture.StoredRuns(dir));
+        Assert.Equal(60, first.Counters.RunsDone + late.Counters.RunsDone);
+        Assert.Equal(60, ClusterFixture.StoredRuns(dir));
     }
 
     [Fact]

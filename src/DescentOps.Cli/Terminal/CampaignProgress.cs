@@ -10,7 +10,7 @@ public sealed class CampaignProgress(int total, int alreadyDone)
     private readonly Stopwatch _wall = Stopwatch.StartNew();
     private readonly bool _enabled = !Console.IsErrorRedirected;
     private readonly Lock _gate = new();
-    private TimeSpan _lastShown = TimeSpan.MinValue;
+    private TimeSpan _lastShown = -Refresh; // not MinValue: elapsed - MinValue overflows
     private int _done;
 
     public int DoneThisSession => _done;

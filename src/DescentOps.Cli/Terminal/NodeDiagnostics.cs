@@ -28,6 +28,9 @@ public static class NodeDiagnostics
     };
 
     /// <summary>A notice line on stdout, with the time of day (UTC) it happened.</summary>
-    public static void Notice(string text) =>
+    public static void Notice(string text)
+    {
+        if (!Console.IsErrorRedirected && !Console.IsOutputRedirected) Console.Error.Write("\r" + new string(' ', 120) + "\r"); // off the progress line
         Console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture, $"  {DateTime.UtcNow:HH:mm:ss} {text}"));
+    }
 }
