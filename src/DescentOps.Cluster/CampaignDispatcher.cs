@@ -116,10 +116,7 @@ public sealed class CampaignDispatcher : ReceiveActor
         Campaigns.RunRecord record;
         try
         {
-            record = RunRecordCodec.Decode(done.RecordJson);
-            if (record.Variant != key.Variant || record.Index != key.Index) throw new InvalidDataException($"the record is of run {record.Index} of {record.Variant}");
-            if (_setup.Plan.Variants.All(v => v.Name != key.Variant) || key.Index < 0) throw new InvalidDataException("no such run in this campaign");
-            if (record.Seed != _setup.Plan.Spec(key.Variant, key.Index).Seed) throw new InvalidDataException($"seed {record.Seed} is not the run's seed");
+            record = ResultCheck.Validate(_setup.Plan, key, done.RecordJson);
         }
         catch (InvalidDataException exception)
         {

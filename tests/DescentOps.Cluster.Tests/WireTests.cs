@@ -93,4 +93,19 @@ public sealed class WireTests
         Assert.Contains("at least 16", Assert.Throws<FormatException>(() => JoinSecret.Load(file, _ => null)).Message, StringComparison.Ordinal);
         Assert.Contains("no such file", Assert.Throws<FormatException>(() => JoinSecret.Load(Path.Combine(dir, "absent"), _ => null)).Message, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public void AResultIsStoredOnlyIfItIsTheRunItClaimsWithThePlansSeed()
+    {
+        var plan = ClusterFixture.Plan(seed: 3);
+        var record = RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, 2));
+        var json = RunRecordCodec.Encode(record);
+        Assert.Equal(json, RunRecordCodec.Encode(ResultCheck.Validate(plan, new RunKey(CampaignVariant.BaselineName, 2), json)));
+
+        Assert.Contains("not of baseline#1", Assert.Throws<InvalidDataException>(() => ResultCheck.Validate(plan, new RunKey(CampaignVariant.BaselineName, 1), json)).Message, StringComparison.Ordinal);
+        Assert.Contains("not in this campaign", Assert.Throws<InvalidDataException>(() => ResultCheck.Validate(plan, new RunKey("no-such-variant", 2), json)).Message, StringComparison.Ordinal);
+        Assert.Contains("not in this campaign", Assert.Throws<InvalidDataException>(() => ResultCheck.Validate(plan, new RunKey(CampaignVariant.BaselineName, -1), json)).Message, StringComparison.Ordinal);
+        var forged = RunRecordCodec.Encode(record with { Seed = record.Seed + 1 });
+        Assert.Contains("not the run's seed", Assert.Throws<InvalidDataException>(() => ResultCheck.Validate(plan, new RunKey(CampaignVariant.BaselineName, 2), forged)).Message, StringComparison.Ordinal);
+    }
 }
