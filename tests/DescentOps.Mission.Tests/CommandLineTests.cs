@@ -72,13 +72,13 @@ public sealed class CommandLineTests
         var bad = Path.Combine(folder, "bad.yaml");
         var text = DescentOps.Scenarios.BuiltInScenarios.Text("stall-wall-boost.yaml");
         await File.WriteAllTextAsync(good, text);
-        await File.WriteAllTextAsync(bad, text.Replace("set_power(power = 4.5 kW)", "set_power(power = 4.5 m)", StringComparison.Ordinal));
+        await File.WriteAllTextAsync(bad, text.Replace("set_power(power = 14 kW)", "set_power(power = 4.5 m)", StringComparison.Ordinal));
 
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "check", good)).ExitCode);
         var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "check", bad);
         Assert.Equal(3, exit); // ExitCode.InvalidInput
         var lines = text.Split('\n');
-        var line = Array.FindIndex(lines, l => l.Contains("set_power(power = 4.5 kW)", StringComparison.Ordinal)) + 1;
+        var line = Array.FindIndex(lines, l => l.Contains("set_power(power = 14 kW)", StringComparison.Ordinal)) + 1;
         Assert.Contains($"{bad}:{line}:", stdout);
         Assert.Contains("UnitMismatch", stdout);
     }

@@ -14,7 +14,7 @@ public sealed class FaultTriggerTests
             kind: power_dip
             at: 30 d
             duration: 12 h
-            remaining_fraction: 0.4
+            remaining_fraction: 0.7
         """;
 
     private static Scenario WithFaults(string faults, string until = "400 d") =>

@@ -39,22 +39,21 @@ public sealed class PowerTests
         var (shed, shedSink) = await RunAsync(Text, "with.yaml");
         var (unshed, unshedSink) = await RunAsync(MissionHarness.WithoutRules(Text), "without.yaml");
 
-        // With the rule: it fires on the first frame of the dip, the pump goes off by command, and the probe never
-        // stops; the head keeps melting on the source alone.
+        // With the rule: it fires on the first frame of the dip and the pump goes off by command. The bus shed the
+        // wall heaters at the dip's first instant, before the rule could act, so the side ran short and the probe was
+        // held (a refreeze stall); with the head at 2 kW and the waste heat still flowing it melts free and goes on.
         Assert.Equal(RunOutcomeKind.Completed, shed.Outcome.Kind);
         var fired = shedSink.OfKind("rule.fired").First();
         Assert.InRange(fired.Time.SecondsSinceEpoch, 20 * Day, (20 * Day) + 600);
         Assert.Contains(shedSink.OfKind("probe.load_shed"), r => TextField(r, "load") == "sampling-pump" && TextField(r, "cause") == "command");
-        Assert.Empty(RegimeChanges(shedSink, "Stopped"));
-        Assert.Empty(RegimeChanges(shedSink, "FrozenIn"));
         Assert.DoesNotContain(shedSink.OfKind("probe.load_shed"), r => TextField(r, "load") == "head");
+        Assert.NotEmpty(shedSink.OfKind("probe.melting_free"));
 
-        // Without it: the battery carries the head until it is empty, then the bus sheds the head and the probe
-        // stops and freezes in within the dip. Computed: the wall is shed at the dip's start, leaving electronics
-        // 60 W + head 6000 W + pump 400 W = 6460 W against the dipped source (available − the 4 kW battery limit);
-        // the pack holds 8 kWh · 0.96 (placeholder cold curve at 15 °C: 0.90 + 0.10 · 15/25) of which 0.95 reaches
-        // the bus, so it is empty after 0.96 · 8 kWh · 0.95 / (6460 W − source), give or take one tick and the
-        // self-discharge over two hours (two per cent a month: well under a second here).
+        // Without it: the battery carries the head until it is empty, then the bus sheds the head. Computed: the wall
+        // is shed at the dip's start, leaving electronics 60 W + head 6000 W + pump 400 W = 6460 W against the dipped
+        // source (available − the 4 kW battery limit); the pack holds 8 kWh · 0.96 (placeholder cold curve at 15 °C:
+        // 0.90 + 0.10 · 15/25) of which 0.95 reaches the bus, so it is empty after 0.96 · 8 kWh · 0.95 / (6460 W −
+        // source), give or take one tick and the self-discharge over two hours (well under a second here).
         Assert.Empty(unshedSink.OfKind("rule.fired"));
         var wallShed = unshedSink.OfKind("probe.load_shed").First();
         Assert.Equal("wall", TextField(wallShed, "load"));
@@ -64,13 +63,13 @@ public sealed class PowerTests
         var headShed = unshedSink.OfKind("probe.load_shed").First(r => TextField(r, "load") == "head");
         Assert.Equal(20 * Day + emptyAfterS, headShed.Time.SecondsSinceEpoch, 0);
         Assert.Equal(0, CollectingSink.Field(headShed, "battery_soc"));
-        var frozen = Assert.Single(RegimeChanges(unshedSink, "FrozenIn"));
-        Assert.InRange(frozen.Time.SecondsSinceEpoch, headShed.Time.SecondsSinceEpoch, 22 * Day);
 
-        // Frozen in for the rest of the dip, the probe arrives later. Threshold two days, a margin of our own
-        // (common practice, no source), below the measured loss of about 3.9 days (116.3 against 112.5 days).
+        // On waste heat alone the side keeps running short: the probe is frozen in again and again during the dip,
+        // far more often than with the rule, and arrives later. Threshold half a day, a margin of our own (common
+        // practice, no source), below the measured loss of about 0.9 days (95.03 against 94.11 days).
+        Assert.True(RegimeChanges(unshedSink, "FrozenIn").Count() > 10 * Math.Max(1, RegimeChanges(shedSink, "FrozenIn").Count()));
         var delay = unshed.BreakthroughTimeS!.Value - shed.BreakthroughTimeS!.Value;
-        Assert.True(delay > 2 * Day, $"with {shed.BreakthroughTimeS} s, without {unshed.BreakthroughTimeS} s");
+        Assert.True(delay > 0.5 * Day, $"with {shed.BreakthroughTimeS} s, without {unshed.BreakthroughTimeS} s");
     }
 
     [Fact]

@@ -12,7 +12,7 @@ public sealed class SensorNoiseTests
                 kind: power_dip
                 at: 30 d
                 duration: 12 h
-                remaining_fraction: 0.4
+                remaining_fraction: 0.7
             """, """
               - name: jittery-depth
                 kind: sensor_noise

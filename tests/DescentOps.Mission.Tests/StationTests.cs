@@ -303,7 +303,7 @@ public sealed class StationTests
         const double startS = 2 * Day, recoveryS = 3 * 3600.0;
         var text = Edit(
             MissionHarness.DefaultText,
-            ("  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.4\n",
+            ("  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.7\n",
              "  - name: discharge-day-2\n    kind: station_upset\n    at: 2 d\n    duration: 3 h\n"),
             ("until: 400 d", "until: 3 d"));
         var (summary, sink) = await RunAsync(text);

@@ -42,7 +42,22 @@ public class PhysicsProperties
         var slow = SteadyDescent.Solve(x.Probe, x.HeadW, x.WallW, x.FarFieldK, x.PressurePa, x.G);
         var fast = SteadyDescent.Solve(x.Probe, x.HeadW * 1.2, x.WallW, x.FarFieldK, x.PressurePa, x.G);
         Assert.True(fast.VelocityMPerS >= slow.VelocityMPerS);
-        if (!slow.Stalled) Assert.True(fast.VelocityMPerS > slow.VelocityMPerS);
+        // A film already at the boiling point melts no faster with more power: the extra power boils water.
+        if (!slow.Stalled && slow.BoilOffW == 0) Assert.True(fast.VelocityMPerS > slow.VelocityMPerS);
+    }
+
+    [Property(MaxTest = 300)]
+    public void TheFilmIsNeverHotterThanBoilingWaterAtThePressure(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    {
+        // Issue 12: the film may not be superheated above the boiling point at the local pressure (IAPWS-IF97); what
+        // the bound keeps from melting boils water and is still accounted for in the power balance.
+        var x = Case(a, b, c, d, e, f);
+        var s = SteadyDescent.Solve(x.Probe, x.HeadW * 3, x.WallW, x.FarFieldK, x.PressurePa, x.G);
+        if (s.Stalled) return;
+        var boilingK = DescentOps.Physics.Water.BoilingCurve.TemperatureK(x.PressurePa);
+        Assert.True(MeltingCurve.TemperatureK(x.PressurePa) + s.HeadSuperheatK <= boilingK + 1e-9, $"{s.HeadSuperheatK} K over T_m at {x.PressurePa} Pa");
+        Assert.True(s.BoilOffW >= 0 && s.BoilOffW <= s.HeadPowerW);
+        Approx.Rel(s.HeadPowerW + s.WallPowerW, s.SensibleW + s.LatentW + s.LateralLossW + s.WallSurplusW, 1e-9, "balance");
     }
 
     [Property(MaxTest = 200)]

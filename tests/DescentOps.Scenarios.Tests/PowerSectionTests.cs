@@ -36,6 +36,17 @@ public sealed class PowerSectionTests
         Assert.Equal(new BusLoadModel("sampling-pump", BusLoadRole.Fixed, 3, 400), power.Loads[3]);
         Assert.Equal(0.15, power.Turbine!.CurrentSpeedMPerS, 12);
         Assert.Equal(1030, power.Turbine.WaterDensityKgPerM3, 9);
+        Assert.Equal(0.05, power.WasteHeatToHead, 12);
+        Assert.Equal(0.2, power.WasteHeatToWall, 12);
+    }
+
+    [Fact]
+    public void HeatPathSharesAboveOneAreRefusedAtTheirPlace()
+    {
+        var text = ScenarioText.DefaultWith("    wall: 0.2\n", "    wall: 0.97\n");
+        var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "heat.yaml")).Errors);
+        Assert.Equal("power.heat_path", error.FieldPath);
+        Assert.InRange(error.Location.Line, ScenarioText.LineOf(text, "  heat_path:"), ScenarioText.LineOf(text, "    wall: 0.97"));
     }
 
     [Fact]

@@ -86,5 +86,11 @@ public static class ProbeBusControl
             RecordField.Of("battery_capacity_j", power.Battery?.EffectiveCapacityJ ?? 0.0),
             RecordField.Of("battery_soc", state.Bus!.StateOfCharge),
             RecordField.Of("loads", string.Join(", ", power.LoadModels.Select(l => $"{l.Name}:{l.Priority}"))));
+        if (!design.Power!.HeatsProbe) return;
+        var waste = design.Power.WasteHeat(0.0);
+        context.Record(ProbeRecords.HeatPath, Severity.Info,
+            RecordField.Of("waste_heat_to_head_w", waste.HeadW),
+            RecordField.Of("waste_heat_to_wall_w", waste.WallW),
+            RecordField.Of("waste_heat_rejected_w", waste.RejectedW));
     }
 }

@@ -30,6 +30,6 @@ public static class ProbeDescentFactory
         double conductivityCoefficientWPerM = Physics.Ice.IceConductivity.ReciprocalCoefficientWPerM)
     {
         ArgumentNullException.ThrowIfNull(scenario);
-        return new ProbeDescentModel(Shell(scenario, conductivityCoefficientWPerM), new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg), nodeSpacingM, sealDiameters);
+        return new ProbeDescentModel(Shell(scenario, conductivityCoefficientWPerM), new ProbeGeometry(scenario.Probe.RadiusM, scenario.Probe.LengthM, scenario.Probe.MassKg), nodeSpacingM, sealDiameters, scenario.Probe.FreezeGapM);
     }
 }

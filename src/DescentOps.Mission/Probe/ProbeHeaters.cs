@@ -28,5 +28,22 @@ public static class ProbeHeaters
     public static double BusPowerW(ProbeDesign design, ProbeState state) =>
         state.Bus is null ? HeadPowerW(design, state) + WallPowerW(design, state) + design.Probe.ElectronicsPowerW : state.Bus.Allocation.Loads.SuppliedPowerW;
 
+    /// <summary>
+    /// Heat reaching the head: its heater's electric power and the source's waste heat along the heat path, which flows
+    /// whatever the bus does (<see cref="ProbePowerSystem.WasteHeat"/>). Rounded to 10 W so that the slow decay of the
+    /// source does not defeat the descent model's cache (MODEL: 10 W is well below the model's own uncertainty).
+    /// </summary>
+    public static double HeadHeatW(ProbeDesign design, ProbeState state) => HeadPowerW(design, state) + Waste(design, state).HeadW;
+
+    /// <summary>Heat reaching the side wall: its heaters' electric power and the waste heat's share.</summary>
+    public static double WallHeatW(ProbeDesign design, ProbeState state) => WallPowerW(design, state) + Waste(design, state).WallW;
+
+    private static DescentOps.Physics.Power.WasteHeatSplit Waste(ProbeDesign design, ProbeState state)
+    {
+        if (design.Power is not { HeatsProbe: true } power || state.Regime == ProbeRegime.AtOcean || state.HeldAtSurface) return default;
+        var split = power.WasteHeat(state.LastUpdate.SecondsSinceEpoch);
+        return new DescentOps.Physics.Power.WasteHeatSplit(Math.Round(split.HeadW / 10.0) * 10.0, Math.Round(split.WallW / 10.0) * 10.0, split.RejectedW);
+    }
+
     public static bool IsRunning(ProbeBusState bus, string load) => bus.Allocation.Loads.Running.Any(l => l.Name == load);
 }

@@ -51,14 +51,16 @@ public static class ProbeMotion
         var v = state.VelocityMPerS;
         if (v <= 0 || !ProbeHeaters.IsMoving(state.Regime)) return 0.0;
         var probe = design.Probe;
-        var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadPowerW(design, state), ProbeHeaters.WallPowerW(design, state));
+        var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadHeatW(design, state), ProbeHeaters.WallHeatW(design, state));
         var area = Math.PI * probe.RadiusM * probe.RadiusM;
         var density = Physics.Ice.IceIh.DensityKgPerM3(rate.IceTemperatureK, Math.Max(rate.PressurePa, 0));
         var meltEnthalpy = (rate.SensibleW + rate.LatentW) / (density * area * v);
         var scale = ProbeHeaters.HeadScale(design, state);
         var differenceW = (state.SegmentLossFraction * state.HeadSetpointW * scale / 2) - (state.SteeringW * scale);
         var turn = TiltDynamics.HeadTurnRateRadPerS(differenceW, probe.RadiusM, density, meltEnthalpy);
-        var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, probe.FreezeGapM, probe.LengthM);
+        // The clearance is the water gap the side balance leaves along the body: wall heat widens it.
+        var clearanceM = rate.ClearanceM > 0 ? rate.ClearanceM : probe.FreezeGapM;
+        var limit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, clearanceM, probe.LengthM);
         return TiltDynamics.TiltRateRadPerS(state.TiltRad, 0.0, turn, 0.0, probe.LengthM / v, limit);
     }
 }

@@ -70,6 +70,16 @@ public sealed class ProbePowerSystem
         _ => FissionSource.AtElectricOutput(_power.ElectricPowerW, _power.ConversionEfficiency).ThermalPowerW,
     };
 
+    /// <summary>
+    /// The source's waste heat by destination <paramref name="elapsedS"/> into the run (<see cref="WasteHeatPath"/>): it
+    /// flows whatever the bus does, so a dip in electric power leaves it flowing.
+    /// </summary>
+    public WasteHeatSplit WasteHeat(double elapsedS) =>
+        WasteHeatPath.Split(SourceThermalPowerW(elapsedS), SourcePowerW(elapsedS), _power.WasteHeatToHead, _power.WasteHeatToWall);
+
+    /// <summary>True when some waste heat reaches the head or the wall.</summary>
+    public bool HeatsProbe => _power.WasteHeatToHead + _power.WasteHeatToWall > 0;
+
     /// <summary>The turbine's output: only in the ocean, where the current passes the rotor.</summary>
     public double HarvestPowerW(bool inOcean) =>
         inOcean && _power.Turbine is { } t ? TurbinePowerW(t, t.CurrentSpeedMPerS) : 0.0;

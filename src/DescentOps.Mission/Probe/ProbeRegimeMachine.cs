@@ -25,17 +25,22 @@ public static class ProbeRegimeMachine
                 return state with { VelocityMPerS = 0.0 };
             case ProbeRegime.FrozenIn:
                 return StartMeltingFree(design, state, context);
-            case ProbeRegime.MeltingFree when ProbeHeaters.WallPowerW(design, state) <= 0:
+            case ProbeRegime.MeltingFree when ProbeHeaters.HeadHeatW(design, state) + ProbeHeaters.WallHeatW(design, state) <= 0:
                 context.Cancel(state.PendingThermal!.Value);
-                return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "wall heaters lost while melting free");
+                return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "heaters lost while melting free");
             case ProbeRegime.MeltingFree:
                 return state with { VelocityMPerS = 0.0 };
         }
 
-        var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadPowerW(design, state), ProbeHeaters.WallPowerW(design, state));
+        var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadHeatW(design, state), ProbeHeaters.WallHeatW(design, state));
         if (rate.Regime == DescentRegimeKind.Stalled)
         {
             return state.Regime == ProbeRegime.Stopped ? state with { VelocityMPerS = 0.0 } : Stop(design, state, rate, context);
+        }
+
+        if (rate.Regime == DescentRegimeKind.Melting && rate.Held)
+        {
+            return RefreezeStall(design, state, rate, context);
         }
 
         if (state.PendingThermal is { } freezing)
@@ -68,12 +73,12 @@ public static class ProbeRegimeMachine
     private static ProbeState Stop(ProbeDesign design, ProbeState state, DescentRate rate, ComponentContext context)
     {
         var probe = design.Probe;
-        state = ChangeRegime(state with { VelocityMPerS = 0.0 }, ProbeRegime.Stopped, context, "heater power below what descent needs");
+        state = ChangeRegime(state with { VelocityMPerS = 0.0, StoppedAt = context.Now }, ProbeRegime.Stopped, context, "heater power below what descent needs");
         if (state.Regime == ProbeRegime.Stopped && state.LastMovingVelocityMPerS > 0 && state.DepthM >= design.Descent.LiquidOnsetDepthM)
         {
             var phi = IceConductivity.KirchhoffPotentialWPerM(rate.IceTemperatureK, rate.MeltingTemperatureK, IceConductivityFit.PetrenkoWhitworth1999);
             var holdOpenW = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(probe.RadiusM, probe.LengthM), phi);
-            if (ProbeHeaters.WallPowerW(design, state) < holdOpenW)
+            if (ProbeHeaters.HeadHeatW(design, state) + ProbeHeaters.WallHeatW(design, state) < holdOpenW)
             {
                 var exposureS = probe.LengthM / (2 * state.LastMovingVelocityMPerS);
                 var freeze = Refreeze.FreezeInAroundProbe(probe.FreezeGapM, probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
@@ -104,31 +109,77 @@ public static class ProbeRegimeMachine
         _ => throw new InvalidOperationException($"A thermal timer for {due.Completes} fired in regime {state.Regime}; its cancellation was missed."),
     };
 
-    /// <summary>A frozen-in probe with wall power melts its gap open (<see cref="Refreeze.MeltFree"/>), or stays held.</summary>
+    /// <summary>
+    /// A refreeze stall: the side balance of the moving probe (<see cref="SideBalance"/>) closes its water gap within the
+    /// body's length, so the ice holds it where it is. Logged with the balance's numbers.
+    /// </summary>
+    private static ProbeState RefreezeStall(ProbeDesign design, ProbeState state, DescentRate rate, ComponentContext context)
+    {
+        if (state.PendingThermal is { } pending) context.Cancel(pending);
+        context.Record(ProbeRecords.RefreezeStall, Severity.Critical,
+            RecordField.Of("depth_m", state.DepthM),
+            RecordField.Of("required_side_heat_w", rate.RequiredSideHeatW),
+            RecordField.Of("side_heat_supplied_w", rate.SideHeatSuppliedW),
+            RecordField.Of("refreeze_closure_m", rate.RefreezeClosureM),
+            RecordField.Of("body_length_m", design.Probe.LengthM),
+            RecordField.Of("ice_temperature_k", rate.IceTemperatureK));
+        var stopped = state with { VelocityMPerS = 0.0, PendingThermal = null, StoppedAt = context.Now, WallDeficit = false };
+        return ChangeRegime(stopped, ProbeRegime.FrozenIn, context, string.Create(System.Globalization.CultureInfo.InvariantCulture, $"refrozen water closed the gap {rate.RefreezeClosureM:F2} m behind the head"));
+    }
+
+    /// <summary>
+    /// A frozen-in probe melts its gap open with its head and wall heat (<see cref="Refreeze.MeltFree"/>, the longer it
+    /// was held the more the ice has cooled), or stays held. Freeing is pointless while the side balance at the present
+    /// power would close the gap again as soon as the probe moved: that, and power too small ever to melt free, are
+    /// logged once per power setting with the numbers.
+    /// </summary>
     private static ProbeState StartMeltingFree(ProbeDesign design, ProbeState state, ComponentContext context)
     {
         var probe = design.Probe;
-        var wallW = ProbeHeaters.WallPowerW(design, state);
-        if (wallW <= 0 || state.MeltFreeRefusedAtWallW == wallW) return state with { VelocityMPerS = 0.0 };
+        var headW = ProbeHeaters.HeadHeatW(design, state);
+        var wallW = ProbeHeaters.WallHeatW(design, state);
+        var powerW = headW + wallW;
+        if (powerW <= 0 || state.MeltFreeRefusedAtWallW == powerW) return state with { VelocityMPerS = 0.0 };
+        var moving = design.Descent.Rate(state.DepthM, headW, wallW);
+        if (moving.Regime == DescentRegimeKind.Melting && moving.Held)
+        {
+            context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
+                RecordField.Of("depth_m", state.DepthM),
+                RecordField.Of("head_power_w", headW),
+                RecordField.Of("wall_power_w", wallW),
+                RecordField.Of("cause", "side balance short: the gap would close again"),
+                RecordField.Of("required_side_heat_w", moving.RequiredSideHeatW),
+                RecordField.Of("side_heat_supplied_w", moving.SideHeatSuppliedW),
+                RecordField.Of("refreeze_closure_m", moving.RefreezeClosureM));
+            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
+        }
+
         var iceK = design.Descent.Shell.TemperatureK(state.DepthM);
         var meltingK = MeltingCurve.TemperatureK(Math.Max(design.Descent.Shell.PressurePa(state.DepthM), TriplePoint.PressurePa));
         var exposureS = Math.Max(1.0, state.LastMovingVelocityMPerS > 0 ? probe.LengthM / (2 * state.LastMovingVelocityMPerS) : 1.0);
-        var free = Refreeze.MeltFree(probe.FreezeGapM, probe.RadiusM, probe.LengthM, wallW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK);
+        var heldS = state.StoppedAt is { } stoppedAt ? (context.Now - stoppedAt).TotalSeconds : 0.0;
+        var free = Refreeze.MeltFree(probe.FreezeGapM, probe.RadiusM, probe.LengthM, powerW, exposureS, Math.Min(iceK, meltingK - 1e-3), meltingK, heldS);
         if (!double.IsFinite(free.TimeS))
         {
             context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),
-                RecordField.Of("wall_power_w", wallW));
-            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = wallW };
+                RecordField.Of("head_power_w", headW),
+                RecordField.Of("wall_power_w", wallW),
+                RecordField.Of("cause", "heat below the steady loss of the held body"),
+                RecordField.Of("hold_open_power_w", free.HoldOpenPowerW));
+            return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
         }
 
         context.Record(ProbeRecords.MeltingFree, Severity.Notice,
             RecordField.Of("depth_m", state.DepthM),
             RecordField.Of("wall_power_w", wallW),
+            RecordField.Of("head_power_w", headW),
+            RecordField.Of("held_s", heldS),
+            RecordField.Of("cooling_j", free.CoolingJ),
             RecordField.Of("time_s", free.TimeS),
             RecordField.Of("energy_j", free.EnergyJ));
         var handle = context.ScheduleSelf(SimDuration.FromSeconds(free.TimeS), new ProbeThermalDue(ProbeRegime.Melting), MissionPriority.Physics);
-        return ChangeRegime(state with { VelocityMPerS = 0.0, PendingThermal = handle, MeltFreeRefusedAtWallW = null }, ProbeRegime.MeltingFree, context, "wall heaters powered");
+        return ChangeRegime(state with { VelocityMPerS = 0.0, PendingThermal = handle, MeltFreeRefusedAtWallW = null }, ProbeRegime.MeltingFree, context, "heaters powered");
     }
 
     public static ProbeState ChangeRegime(ProbeState state, ProbeRegime regime, ComponentContext context, string cause)

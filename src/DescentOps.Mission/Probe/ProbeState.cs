@@ -53,6 +53,9 @@ public sealed record ProbeState(
     /// <summary>Thickness of the debris deposit collected on the head so far.</summary>
     public double DebrisOnHeadM { get; init; }
 
+    /// <summary>When the probe last stopped (a stall, a pause or a refreeze stall); the hold before melting free counts from here.</summary>
+    public SimTime? StoppedAt { get; init; }
+
     /// <summary>The on-board sampler's pending timer and last samples; null without on-board sampling.</summary>
     public Onboard.OnboardSamplerState? Onboard { get; init; }
 

@@ -14,4 +14,20 @@ public sealed record DescentRate(
     double LatentW,
     double LateralLossW,
     double WallSurplusW,
-    bool WallPowerSufficient);
+    bool WallPowerSufficient)
+{
+    /// <summary>Film heat plus the least wall heat that keeps the gap open along the body (<see cref="SideBalance"/>).</summary>
+    public double RequiredSideHeatW { get; init; }
+
+    /// <summary>Film heat plus the wall heat supplied.</summary>
+    public double SideHeatSuppliedW { get; init; }
+
+    /// <summary>Distance behind the head where refrozen water closes the gap (+∞ when it never does).</summary>
+    public double RefreezeClosureM { get; init; } = double.PositiveInfinity;
+
+    /// <summary>True when the gap closes within the body: a refreeze stall.</summary>
+    public bool Held { get; init; }
+
+    /// <summary>Mean water gap along the body, the clearance the probe steers with.</summary>
+    public double ClearanceM { get; init; }
+}

@@ -3,8 +3,8 @@ namespace DescentOps.Physics.Descent;
 /// <summary>
 /// Steady descent of a melt probe and where its power goes. The sinks add up to the power in:
 /// <c>SensibleW + LatentW + LateralLossW + WallSurplusW = HeadPowerW + WallPowerW</c> (to 1e-9 relative, the
-/// convergence of the head's fixed point). The film superheat <see cref="FilmSuperheatW"/> is not a separate sink:
-/// the meltwater carries it from the head to the wall, where it pays part of the lateral loss.
+/// convergence of the head's fixed point). The film heat <see cref="FilmSuperheatW"/> (superheat and boiled-off vapour)
+/// is not a separate sink: the meltwater carries it from the head to the wall, where it pays part of the lateral loss.
 /// </summary>
 /// <param name="VelocityMPerS">Descent speed (0 when stalled).</param>
 /// <param name="SensibleW">Power warming the ice melted at the head from T∞ to T_m.</param>
@@ -44,6 +44,18 @@ public sealed record DescentSolution(
 
     /// <summary>True when the total power cannot hold the probe's surface at T_m (Lorenz-type stall).</summary>
     public bool Stalled { get; init; }
+
+    /// <summary>Boiling point of water at the pressure; the film is never hotter (IAPWS-IF97).</summary>
+    public double BoilingTemperatureK { get; init; }
+
+    /// <summary>Head power boiling film water because the film is at the boiling point; it reaches the side as vapour.</summary>
+    public double BoilOffW { get; init; }
+
+    /// <summary>Head power the body carries to its wall instead of melting ahead (only for bodies heated by the head).</summary>
+    public double BodyShareW { get; init; }
+
+    /// <summary>The side balance: required and supplied side heat, refreeze closure, held, clearance (null when stalled).</summary>
+    public SideBalanceSolution? Side { get; init; }
 
     /// <summary>Useful power ṁ (L + Δh_s) over head power (Baader et al. 2023 head efficiency).</summary>
     public double HeadEfficiency => HeadPowerW > 0 ? (SensibleW + LatentW) / HeadPowerW : 0.0;

@@ -22,8 +22,9 @@ public sealed class ProbeDescentModel
 
     private readonly Dictionary<(int Node, double HeadW, double WallW), DescentRate> _nodes = [];
 
-    public ProbeDescentModel(IceShell shell, ProbeGeometry geometry, double nodeSpacingM = DefaultNodeSpacingM, double sealDiameters = LiquidOnset.DefaultSealDiameters)
+    public ProbeDescentModel(IceShell shell, ProbeGeometry geometry, double nodeSpacingM = DefaultNodeSpacingM, double sealDiameters = LiquidOnset.DefaultSealDiameters, double designGapM = SteadyDescent.DefaultDesignGapM)
     {
+        DesignGapM = ValidRange.RequireNonNegative(designGapM, nameof(designGapM), "m", "the probe descent model");
         SealDiameters = ValidRange.RequirePositive(sealDiameters, nameof(sealDiameters), "hole diameters", "the probe descent model");
         Shell = shell;
         Geometry = geometry;
@@ -35,6 +36,9 @@ public sealed class ProbeDescentModel
     public IceShell Shell { get; }
 
     public ProbeGeometry Geometry { get; }
+
+    /// <summary>Water gap around the body where nothing froze or melted (the side balance's w0).</summary>
+    public double DesignGapM { get; }
 
     public double NodeSpacingM { get; }
 
@@ -69,7 +73,15 @@ public sealed class ProbeDescentModel
             Lerp(a.LatentW, b.LatentW, fraction),
             Lerp(a.LateralLossW, b.LateralLossW, fraction),
             Lerp(a.WallSurplusW, b.WallSurplusW, fraction),
-            a.WallPowerSufficient && b.WallPowerSufficient);
+            a.WallPowerSufficient && b.WallPowerSufficient)
+        {
+            RequiredSideHeatW = Lerp(a.RequiredSideHeatW, b.RequiredSideHeatW, fraction),
+            SideHeatSuppliedW = Lerp(a.SideHeatSuppliedW, b.SideHeatSuppliedW, fraction),
+            // The closure and the verdict are not interpolated: the nearer node's hold.
+            RefreezeClosureM = fraction < 0.5 ? a.RefreezeClosureM : b.RefreezeClosureM,
+            Held = fraction < 0.5 ? a.Held : b.Held,
+            ClearanceM = Lerp(a.ClearanceM, b.ClearanceM, fraction),
+        };
     }
 
     private DescentRate Node(int node, double headPowerW, double wallPowerW)
@@ -94,7 +106,7 @@ public sealed class ProbeDescentModel
             return new DescentRate(DescentRegimeKind.Stalled, 0.0, farFieldK, meltingK, pressure, 0, 0, wallPowerW, 0, false);
         }
 
-        var solution = SteadyDescent.Solve(Geometry, headPowerW, wallPowerW, farFieldK, pressure, Shell.GravityMPerS2, meltingK);
+        var solution = SteadyDescent.Solve(Geometry, headPowerW, wallPowerW, farFieldK, pressure, Shell.GravityMPerS2, meltingK, DesignGapM);
         return new DescentRate(
             solution.Stalled ? DescentRegimeKind.Stalled : DescentRegimeKind.Melting,
             solution.VelocityMPerS,
@@ -105,7 +117,14 @@ public sealed class ProbeDescentModel
             solution.LatentW,
             solution.LateralLossW,
             solution.WallSurplusW,
-            solution.WallPowerSufficient);
+            solution.WallPowerSufficient)
+        {
+            RequiredSideHeatW = solution.Side?.RequiredSideHeatW ?? 0.0,
+            SideHeatSuppliedW = solution.Side?.SideHeatSuppliedW ?? 0.0,
+            RefreezeClosureM = solution.Side?.RefreezeClosureM ?? double.PositiveInfinity,
+            Held = solution.Side?.Held ?? false,
+            ClearanceM = solution.Side?.ClearanceM ?? 0.0,
+        };
     }
 
     private DescentRate Sublimation(double depthM, double headPowerW)

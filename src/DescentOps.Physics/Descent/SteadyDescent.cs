@@ -31,6 +31,9 @@ public static class SteadyDescent
 {
     private const string Model = "the steady descent model";
 
+    /// <summary>Default water gap around the body, 0.5 mm (about the melt film; the reference note's clearance without side heaters).</summary>
+    public const double DefaultDesignGapM = 0.5e-3;
+
     /// <summary>Largest salt depression of the melting point accepted: 3 K, about seawater's freezing point at 40 g/kg (UNESCO 1983).</summary>
     private const double MaximumSaltDepressionK = 3.0;
 
@@ -44,7 +47,13 @@ public static class SteadyDescent
     /// Melting point of the ice being cut; default the pure-ice curve at <paramref name="pressurePa"/>. Salt lowers it
     /// (see <see cref="Shell.SalineIce"/>): less sensible heat per kilogram, and the latent heat of the ice matrix unchanged (MODEL).
     /// </param>
-    public static DescentSolution Solve(ProbeGeometry geometry, double headPowerW, double wallPowerW, double farFieldTemperatureK, double pressurePa, double gravityMPerS2, double? meltingTemperatureK = null)
+    /// <param name="designGapM">Water gap around the body where nothing froze or melted (see <see cref="SideBalance"/>).</param>
+    /// <param name="headHeatsBody">
+    /// True for a body that carries the head's heat to its whole wall (fluid-filled or heat-pipe bodies, as in Aamot's
+    /// analysis of the Philberth probe): the side's shortfall is paid from the head before it melts ahead, and the wall
+    /// stays at T_m. False (the simulator's probes) when only the film and the wall heaters reach the side.
+    /// </param>
+    public static DescentSolution Solve(ProbeGeometry geometry, double headPowerW, double wallPowerW, double farFieldTemperatureK, double pressurePa, double gravityMPerS2, double? meltingTemperatureK = null, double designGapM = DefaultDesignGapM, bool headHeatsBody = false)
     {
         ArgumentNullException.ThrowIfNull(geometry);
         var radiusM = ValidRange.RequirePositive(geometry.RadiusM, nameof(geometry.RadiusM), "m", Model);
@@ -90,28 +99,73 @@ public static class SteadyDescent
             };
         }
 
-        var head = CloseContactMelting.AtConstantPower(headPowerW / area, radiusM, loadN, iceDensity, latentPerKg + sensiblePerKg);
-        var massRate = iceDensity * area * head.VelocityMPerS;
+        var boilingK = BoilingCurve.TemperatureK(Math.Max(pressurePa, BoilingCurve.MinimumPressurePa));
+        var maximumSuperheatK = Math.Max(0.0, boilingK - meltingK);
+        var kappa = LateralConduction.EffectiveDiffusivityM2PerS(phi, iceDensity, sensiblePerKg);
+        var meltEnthalpy = latentPerKg + sensiblePerKg;
+        ValidRange.RequireNonNegative(designGapM, nameof(designGapM), "m", Model);
+
+        // The head melts with what is left after the body's share (only when the body carries head heat to its wall).
+        BoundedHeadSolution Head(double meltingPowerW) => BoilingBoundedHead.Solve(meltingPowerW, radiusM, loadN, iceDensity, meltEnthalpy, maximumSuperheatK);
+        double FilmHeatW(BoundedHeadSolution h) =>
+            (iceDensity * area * h.Film.VelocityMPerS * CloseContactMelting.DefaultSuperheatFraction * LiquidWater.SpecificHeatJPerKgK * h.Film.FilmSuperheatK) + h.BoilOffW;
+        double BodyShareW(BoundedHeadSolution h) => h.Film.VelocityMPerS <= 0 ? double.PositiveInfinity
+            : Math.Max(0.0, SideBalance.Solve(lengthM, radiusM, h.Film.VelocityMPerS, phi, kappa, iceDensity, latentPerKg, FilmHeatW(h), 0.0, designGapM).RequiredSideHeatW - FilmHeatW(h) - wallPowerW);
+
+        var meltingPowerW = headPowerW;
+        if (headHeatsBody)
+        {
+            var share = BodyShareW(Head(headPowerW));
+            if (share >= headPowerW) return StalledSolution(headPowerW, wallPowerW, stallPower, idealVelocity);
+            if (share > 0)
+            {
+                // x + share(x) = P_h; share grows with x (a faster probe loses more), so the root is unique.
+                double Residual(double x) => x + Math.Min(BodyShareW(Head(x)), 10 * headPowerW) - headPowerW;
+                var lower = 1e-6 * headPowerW;
+                if (Residual(lower) >= 0) return StalledSolution(headPowerW, wallPowerW, stallPower, idealVelocity);
+                meltingPowerW = MathNet.Numerics.RootFinding.Brent.FindRoot(Residual, lower, headPowerW, 1e-9 * headPowerW, 200);
+            }
+        }
+
+        var head = Head(meltingPowerW);
+        if (head.Film.VelocityMPerS <= 0) return StalledSolution(headPowerW, wallPowerW, stallPower, idealVelocity);
+        var massRate = iceDensity * area * head.Film.VelocityMPerS;
         var sensibleW = massRate * sensiblePerKg;
         var latentW = massRate * latentPerKg;
-        var filmW = massRate * CloseContactMelting.DefaultSuperheatFraction * LiquidWater.SpecificHeatJPerKgK * head.FilmSuperheatK;
+        var filmW = FilmHeatW(head);
+        // With a body heated by the head, its share reaches the wall as wall heat.
+        var bodyShareW = headPowerW - meltingPowerW;
+        var sideWallW = wallPowerW + bodyShareW;
 
-        var kappa = LateralConduction.EffectiveDiffusivityM2PerS(phi, iceDensity, sensiblePerKg);
-        var demand = LateralConduction.LossW(lengthM, head.VelocityMPerS, radiusM, phi, kappa);
+        var demand = LateralConduction.LossW(lengthM, head.Film.VelocityMPerS, radiusM, phi, kappa);
+        var side = SideBalance.Solve(lengthM, radiusM, head.Film.VelocityMPerS, phi, kappa, iceDensity, latentPerKg, filmW, sideWallW, designGapM);
         var required = Math.Max(0.0, demand - filmW);
-        var sufficient = wallPowerW >= required;
-        var lateral = sufficient ? demand : filmW + wallPowerW;
-        var surplus = filmW + wallPowerW - lateral;
+        var sufficient = sideWallW >= required;
+        var lateral = sufficient ? demand : filmW + sideWallW;
+        var surplus = filmW + sideWallW - lateral;
 
-        return new DescentSolution(head.VelocityMPerS, sensibleW, latentW, lateral, headPowerW, wallPowerW, head.FilmThicknessM, sufficient)
+        return new DescentSolution(head.Film.VelocityMPerS, sensibleW, latentW, lateral, headPowerW, wallPowerW, head.Film.FilmThicknessM, sufficient)
         {
             FilmSuperheatW = filmW,
             WallSurplusW = surplus,
             LateralDemandW = demand,
             RequiredWallPowerW = required,
-            HeadSuperheatK = head.FilmSuperheatK,
+            HeadSuperheatK = head.Film.FilmSuperheatK,
             IdealVelocityMPerS = idealVelocity,
+            BoilingTemperatureK = boilingK,
+            BoilOffW = head.BoilOffW,
+            BodyShareW = bodyShareW,
+            Side = side,
             Stalled = false,
         };
     }
+
+    private static DescentSolution StalledSolution(double headPowerW, double wallPowerW, double stallPower, double idealVelocity) =>
+        new(0.0, 0.0, 0.0, headPowerW + wallPowerW, headPowerW, wallPowerW, 0.0, false)
+        {
+            LateralDemandW = stallPower,
+            RequiredWallPowerW = Math.Max(0, stallPower - headPowerW),
+            IdealVelocityMPerS = idealVelocity,
+            Stalled = true,
+        };
 }

@@ -37,10 +37,12 @@ public static class Refreeze
     /// Freeze-in of a gap around a stopped probe whose wall had been at T_m for an exposure time t_e (z/v for a moving
     /// probe), so the ice behind the wall is already warmed. The wall keeps drawing the cylinder flux of
     /// <see cref="CylinderConduction"/> while the gap water freezes at T_m: the gap is closed after t_f with
-    /// (Φ R/κ_eff)[H(κ_eff (t_e + t_f)/R²) − H(κ_eff t_e/R²)] = ρ_w L w (MODEL, reference note §5.2). The front constant
-    /// reported is that of the planar case (b) for the same Stefan number.
+    /// (Φ R/κ_eff)[H(κ_eff (t_e + t_f)/R²) − H(κ_eff t_e/R²)] = c ρ_w L w (MODEL, reference note §5.2), where
+    /// c = Ste/(λ√π), λ the front constant of the planar case (b), makes the planar limit exact for any Stefan number
+    /// (c → 1 for small Ste, where the note's form holds). Checked against a radial enthalpy solver in the tests.
+    /// <c>stefanCorrected: false</c> gives the note's uncorrected form (c = 1), kept for its check values.
     /// </summary>
-    public static RefreezeSolution FreezeInAroundProbe(double gapM, double radiusM, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK)
+    public static RefreezeSolution FreezeInAroundProbe(double gapM, double radiusM, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK, bool stefanCorrected = true)
     {
         ValidRange.RequirePositive(gapM, nameof(gapM), "m", Model);
         ValidRange.RequirePositive(radiusM, nameof(radiusM), "m", Model);
@@ -50,32 +52,46 @@ public static class Refreeze
         var lambda = StefanProblem.ColdWallFrontConstant(ice.StefanNumber);
         var r2OverKappa = radiusM * radiusM / ice.DiffusivityM2PerS;
         var tauExposure = exposureTimeS / r2OverKappa;
-        var target = CylinderConduction.H(tauExposure) + (LiquidWater.DensityKgPerM3 * ice.LatentJPerKg * gapM / (ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS));
+        // The wall-at-T_m heat balance is the small-Stefan limit; the factor Ste/(λ√π) (→ 1 as Ste → 0) makes its planar
+        // limit the Neumann case (b), whose frozen layer cools below T_m as it grows (checked against an enthalpy solver).
+        var stefanFactor = stefanCorrected ? ice.StefanNumber / (lambda * Math.Sqrt(Math.PI)) : 1.0;
+        var target = CylinderConduction.H(tauExposure) + (stefanFactor * LiquidWater.DensityKgPerM3 * ice.LatentJPerKg * gapM / (ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS));
         var tauEnd = SolveTau(target, tauExposure);
         return new RefreezeSolution(ice.StefanNumber, lambda, (tauEnd - tauExposure) * r2OverKappa);
     }
 
     /// <summary>
-    /// Energy and time for wall heaters of power P_s to re-melt a gap of width w that froze around a stopped probe of
-    /// length ℓ (MODEL): from the moment the gap closed, the heaters melt the annulus 2πRℓwρ_w L and pay the wall's
-    /// continuing conduction loss. That loss is the transient cylinder loss 2πℓΦ G(τ) while it exceeds the steady loss
-    /// C·Φ of the probe as a finite body (<see cref="StallLimit.ProbeCapacitanceM"/>), and C·Φ after (the infinite
-    /// cylinder would let the loss decay to zero). Heaters not above C·Φ never melt free: +∞ is returned.
-    /// The freeze happened right after the probe stopped; waiting longer would cool the annulus (not modelled).
+    /// Energy and time for the probe's heaters (head and wall: both reach the frozen annulus through the body, MODEL) of
+    /// power P to re-melt a gap of width w that froze around a stopped probe of length ℓ, after it has been held for
+    /// <paramref name="heldForS"/> since it stopped (MODEL). The heaters must (1) melt the annulus 2πRℓwρ_w L, (2) put back
+    /// the heat the ice near the wall lost while the probe was held: a wall held at T_m would have drawn
+    /// A(ΦR/κ)[H(τ_e + τ_hold) − H(τ_e)] over the hold (A = 2πRℓ), of which the freezing gap water paid its latent heat;
+    /// the rest is the cooling, at most the heat stored before the hold, A(ΦR/κ)H(τ_e) + the gap's latent heat; and (3) pay
+    /// the wall's continuing loss, the transient cylinder loss 2πℓΦ G(τ) while it exceeds the steady loss C·Φ of the probe
+    /// as a finite body (<see cref="StallLimit.ProbeCapacitanceM"/>), and C·Φ after. A longer hold costs more: the ice has
+    /// cooled further. Power not above C·Φ never melts free: +∞ is returned with C·Φ as the power needed.
     /// </summary>
-    public static MeltFreeSolution MeltFree(double gapM, double radiusM, double lengthM, double wallPowerW, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK)
+    public static MeltFreeSolution MeltFree(double gapM, double radiusM, double lengthM, double powerW, double exposureTimeS, double iceTemperatureK, double meltingTemperatureK, double heldForS = 0.0)
     {
         ValidRange.RequirePositive(lengthM, nameof(lengthM), "m", Model);
-        ValidRange.RequirePositive(wallPowerW, nameof(wallPowerW), "W", Model);
+        ValidRange.RequirePositive(powerW, nameof(powerW), "W", Model);
+        ValidRange.RequireNonNegative(heldForS, nameof(heldForS), "s", Model);
         var frozen = FreezeInAroundProbe(gapM, radiusM, exposureTimeS, iceTemperatureK, meltingTemperatureK);
         var ice = IceState.Of(iceTemperatureK, meltingTemperatureK);
         var annulusJ = 2.0 * Math.PI * radiusM * lengthM * gapM * LiquidWater.DensityKgPerM3 * ice.LatentJPerKg;
-        if (double.IsPositiveInfinity(frozen.FreezeTimeS)) return new MeltFreeSolution(annulusJ, annulusJ / wallPowerW);
+        if (double.IsPositiveInfinity(frozen.FreezeTimeS)) return new MeltFreeSolution(annulusJ, annulusJ / powerW) { HoldOpenPowerW = 0.0 };
 
         var steadyLossW = StallLimit.StallPowerW(StallLimit.ProbeCapacitanceM(radiusM, lengthM), ice.PotentialWPerM);
-        if (wallPowerW <= steadyLossW) return new MeltFreeSolution(double.PositiveInfinity, double.PositiveInfinity);
+        if (powerW <= steadyLossW) return new MeltFreeSolution(double.PositiveInfinity, double.PositiveInfinity) { HoldOpenPowerW = steadyLossW };
 
         var r2OverKappa = radiusM * radiusM / ice.DiffusivityM2PerS;
+        var holdS = Math.Max(heldForS, frozen.FreezeTimeS);
+        var wallScaleJ = 2.0 * Math.PI * radiusM * lengthM * ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS;
+        var tauExposure = exposureTimeS / r2OverKappa;
+        var storedJ = (wallScaleJ * CylinderConduction.H(tauExposure)) + annulusJ;
+        var coolingJ = Math.Clamp((wallScaleJ * (CylinderConduction.H(tauExposure + (holdS / r2OverKappa)) - CylinderConduction.H(tauExposure))) - annulusJ, 0.0, storedJ);
+
+        // The ice is at best as warm as when the gap froze; the cooling since is paid above, so the loss restarts there.
         var tauStart = (exposureTimeS + frozen.FreezeTimeS) / r2OverKappa;
         var transientJPerTau = 2.0 * Math.PI * lengthM * ice.PotentialWPerM * r2OverKappa;
 
@@ -91,11 +107,12 @@ public static class Refreeze
             return (transientJPerTau * (CylinderConduction.H(tauSwitch) - hStart)) + (steadyLossW * (tau - tauSwitch) * r2OverKappa);
         }
 
-        double Surplus(double t) => (wallPowerW * t) - annulusJ - LossJ(t);
-        var upper = annulusJ / wallPowerW;
+        var neededJ = annulusJ + coolingJ;
+        double Surplus(double t) => (powerW * t) - neededJ - LossJ(t);
+        var upper = neededJ / powerW;
         while (Surplus(upper) < 0) upper *= 2.0;
         var time = Brent.FindRoot(Surplus, 0.0, upper, 1e-9 * upper, 500);
-        return new MeltFreeSolution(wallPowerW * time, time);
+        return new MeltFreeSolution(powerW * time, time) { HoldOpenPowerW = steadyLossW, CoolingJ = coolingJ };
     }
 
     private static double SolveDecreasingG(double targetG, double tauLower)

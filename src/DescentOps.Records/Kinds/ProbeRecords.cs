@@ -8,11 +8,13 @@ public static class ProbeRecords
     public const string DebrisBandCrossed = "probe.debris_band_crossed";
     public const string DescentStarted = "probe.descent_started";
     public const string DockPower = "probe.dock_power";
+    public const string HeatPath = "probe.heat_path";
     public const string LoadRestored = "probe.load_restored";
     public const string LoadShed = "probe.load_shed";
     public const string MeltingFree = "probe.melting_free";
     public const string MissionComplete = "probe.mission_complete";
     public const string Power = "probe.power";
+    public const string RefreezeStall = "probe.refreeze_stall";
     public const string Refreezing = "probe.refreezing";
     public const string Regime = "probe.regime";
     public const string SensorFault = "probe.sensor_fault";

@@ -147,6 +147,11 @@ public static class ScenarioFormat
                     new IntegerField("priority", "Shedding priority: lower numbers are kept longer.", 0, 1000),
                     new QuantityField("power", "For a fixed load: the power it draws.", Power, 0, 1e6, Required: false),
                 ]), MinItems: 3, MaxItems: 64, Required: false),
+                new SectionField("heat_path", "Where the source's waste heat (thermal less electric output) goes: shares reaching the head and the side wall, the rest rejected. It flows whatever the bus does; omit for none.",
+                [
+                    new NumberField("head", "Share of the waste heat that reaches the melting head.", 0, 1),
+                    new NumberField("wall", "Share of the waste heat that reaches the side wall.", 0, 1),
+                ], Required: false),
                 new SectionField("turbine", "A current turbine that recharges the battery once the probe hangs in the ocean; omit for none.",
                 [
                     new QuantityField("rotor_diameter", "Diameter of the rotor.", Length, 0, 10, MinExclusive: true),

@@ -210,7 +210,11 @@ public static class ScenarioLoader
             power.OptionalQuantity("electric_power") ?? 0.0,
             battery,
             loads.Count == 0 ? DefaultLoads : [.. loads.Select(BuildLoad)],
-            turbine);
+            turbine)
+        {
+            WasteHeatToHead = power.OptionalSection("heat_path")?.Number("head") ?? 0.0,
+            WasteHeatToWall = power.OptionalSection("heat_path")?.Number("wall") ?? 0.0,
+        };
     }
 
     /// <summary>The bus a power section without loads gets: heat and electronics first, the wall heater shed first.</summary>
@@ -628,6 +632,11 @@ public static class ScenarioLoader
                 var word = role switch { BusLoadRole.HeadHeater => "head_heater", BusLoadRole.WallHeater => "wall_heater", _ => "electronics" };
                 errors.Add(new ScenarioError(section.LocationOf("loads"), "power.loads", $"the bus needs exactly one {word} load, found {count}"));
             }
+        }
+
+        if (power.WasteHeatToHead + power.WasteHeatToWall > 1.0)
+        {
+            errors.Add(new ScenarioError(section.Section("heat_path").Location, "power.heat_path", "the head and wall shares of the waste heat add up to more than 1"));
         }
 
         if (power.Turbine is { } turbine && turbine.CutInSpeedMPerS > turbine.RatedSpeedMPerS)

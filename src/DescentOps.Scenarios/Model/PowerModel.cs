@@ -16,4 +16,11 @@ public sealed record PowerModel(
     double ElectricPowerW,
     BatteryModel? Battery,
     IReadOnlyList<BusLoadModel> Loads,
-    TurbineModel? Turbine);
+    TurbineModel? Turbine)
+{
+    /// <summary>Share of the source's waste heat (thermal less electric output) that reaches the melting head (default 0).</summary>
+    public double WasteHeatToHead { get; init; }
+
+    /// <summary>Share of the source's waste heat that reaches the side wall (default 0); head and wall add up to at most 1.</summary>
+    public double WasteHeatToWall { get; init; }
+}

@@ -11,7 +11,7 @@ internal static class OnboardScenarios
             kind: power_dip
             at: 30 d
             duration: 12 h
-            remaining_fraction: 0.4
+            remaining_fraction: 0.7
         """;
 
     public static Scenario DepthRule(string placement, string? sampling, string extraFaults = "")
@@ -27,6 +27,15 @@ internal static class OnboardScenarios
               }
 
             """;
+        // Each edit must find its text in the default scenario: an edit that misses would silently run another scenario.
+        foreach (var expected in new[] { "until: 400 d", "faults:\n", Fault })
+        {
+            if (!MissionHarness.DefaultText.Contains(expected, StringComparison.Ordinal))
+            {
+                throw new InvalidOperationException($"the default scenario no longer contains: {expected}");
+            }
+        }
+
         var text = MissionHarness.DefaultText
             .Replace("until: 400 d", "until: 60 d", StringComparison.Ordinal)
             .Replace("faults:\n", (sampling ?? "") + rules + "faults:\n", StringComparison.Ordinal)

@@ -31,6 +31,7 @@ internal static class DescentSubcommand
         var wallPower = QuantityOption.WithDefault("--wall-power", QuantityKind.Power, "Side-wall heater power.", 0.0, "0 W");
         var mass = QuantityOption.NotRequired("--mass", QuantityKind.Mass, "Probe mass, which presses the head onto its melt film. Default: a mean density of 2000 kg/m³, i.e. 2000·πR²ℓ.");
         var gravity = QuantityOption.WithDefault("--gravity", QuantityKind.Acceleration, "Gravity, 0.001 to 30 m/s².", DefaultGravityMPerS2, "9.80665 m/s² (standard gravity)");
+        var gap = QuantityOption.WithDefault("--gap", QuantityKind.Length, "Water gap around the body where nothing froze or melted (the side balance's design gap).", SteadyDescent.DefaultDesignGapM, "0.5 mm");
         var json = PhysicsAction.JsonOption();
         var command = new Command(
             "descent",
@@ -38,13 +39,13 @@ internal static class DescentSubcommand
             + "sensible_w + latent_w + lateral_loss_w + wall_surplus_w = power_in_w = head_power_w + wall_power_w. "
             + "A stalled probe (power too low to hold its surface at the melting point) does not move and loses all its power laterally.")
         {
-            radius.Option, length.Option, headPower.Option, temperature.Option, pressure.Option, wallPower.Option, mass.Option, gravity.Option, json,
+            radius.Option, length.Option, headPower.Option, temperature.Option, pressure.Option, wallPower.Option, mass.Option, gravity.Option, gap.Option, json,
         };
         var map = new Dictionary<string, string>
         {
             ["RadiusM"] = radius.Name, ["LengthM"] = length.Name, ["MassKg"] = mass.Name, ["geometry"] = mass.Name,
             ["headPowerW"] = headPower.Name, ["wallPowerW"] = wallPower.Name, ["farFieldTemperatureK"] = temperature.Name,
-            ["pressurePa"] = pressure.Name, ["gravityMPerS2"] = gravity.Name,
+            ["pressurePa"] = pressure.Name, ["gravityMPerS2"] = gravity.Name, ["designGapM"] = gap.Name,
         };
         command.SetAction(parse => PhysicsAction.Run("descent", parse, json, p =>
         {
@@ -55,7 +56,7 @@ internal static class DescentSubcommand
             var wall = wallPower.Value(p);
             var pa = pressure.Value(p);
             var geometry = new ProbeGeometry(r, l, m);
-            var s = SteadyDescent.Solve(geometry, head, wall, temperature.Value(p), pa, gravity.Value(p));
+            var s = SteadyDescent.Solve(geometry, head, wall, temperature.Value(p), pa, gravity.Value(p), null, gap.Value(p));
             return new PhysicsReport("steady descent")
                 .Number("velocity_m_s", "descent speed", s.VelocityMPerS, "m/s")
                 .Number("ideal_velocity_m_s", "ideal speed (all head power melts ice ahead)", s.IdealVelocityMPerS, "m/s")
@@ -66,8 +67,15 @@ internal static class DescentSubcommand
                 .Number("latent_w", "  melting it", s.LatentW, "W")
                 .Number("lateral_loss_w", "  conducted through the side wall", s.LateralLossW, "W")
                 .Number("wall_surplus_w", "  wall surplus (widens the hole)", s.WallSurplusW, "W")
-                .Number("film_superheat_w", "film water superheat carried to the wall", s.FilmSuperheatW, "W")
-                .Number("required_wall_power_w", "wall power needed not to freeze in", s.RequiredWallPowerW, "W")
+                .Number("film_superheat_w", "film water heat carried to the wall (superheat and boil-off)", s.FilmSuperheatW, "W")
+                .Number("required_wall_power_w", "wall power needed to hold the whole wall at T_m", s.RequiredWallPowerW, "W")
+                .Number("required_side_heat_w", "side heat needed to keep the gap open (film + wall)", s.Side?.RequiredSideHeatW ?? double.NaN, "W")
+                .Number("side_heat_supplied_w", "side heat supplied (film + wall)", s.Side?.SideHeatSuppliedW ?? double.NaN, "W")
+                .Number("refreeze_closure_m", "refrozen water closes the gap this far behind the head", s.Side?.RefreezeClosureM ?? double.NaN, "m")
+                .Flag("held", "held by refrozen water within the body", s.Side?.Held ?? false)
+                .Number("clearance_m", "mean water gap along the body (steering clearance)", s.Side?.ClearanceM ?? double.NaN, "m")
+                .Number("boil_off_w", "head power boiling film water (film at the boiling point)", s.BoilOffW, "W")
+                .Number("boiling_temperature_k", "boiling point of water at p (IAPWS-IF97)", s.BoilingTemperatureK, "K")
                 .Flag("wall_power_sufficient", "wall power sufficient", s.WallPowerSufficient)
                 .Flag("stalled", "stalled", s.Stalled)
                 .Number("head_efficiency", "head efficiency", s.HeadEfficiency, "")

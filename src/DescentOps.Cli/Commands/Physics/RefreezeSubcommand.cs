@@ -5,7 +5,10 @@ using DescentOps.Scenarios.Format;
 
 namespace DescentOps.Cli.Commands.Physics;
 
-/// <summary><c>physics refreeze</c>: how fast a water gap against a cold wall freezes shut (planar Neumann solution).</summary>
+/// <summary>
+/// <c>physics refreeze</c>: how fast a water gap against a cold wall freezes shut, planar (Neumann solution) or around a
+/// cylindrical probe of radius R (the model the simulated probe uses, <see cref="Refreeze.FreezeInAroundProbe"/>).
+/// </summary>
 internal static class RefreezeSubcommand
 {
     public static Command Create()
@@ -13,19 +16,31 @@ internal static class RefreezeSubcommand
         var gap = QuantityOption.Required("--gap", QuantityKind.Length, "Width of the water gap.");
         var temperature = QuantityOption.Required("--temperature", QuantityKind.Temperature, "Temperature of the ice behind the wall, 50 K up to the melting temperature.");
         var melting = QuantityOption.WithDefault("--melting-temperature", QuantityKind.Temperature, "Melting temperature of the gap water, 269 K to 273.16 K.", TriplePoint.TemperatureK, "273.16 K (pure ice at the triple point)");
+        var geometry = new Option<RefreezeGeometry>("--geometry")
+        {
+            Description = "planar (a flat wall, the default) or cylinder (around a probe of --radius, as the runs use).",
+            DefaultValueFactory = _ => RefreezeGeometry.Planar,
+        };
+        var radius = QuantityOption.NotRequired("--radius", QuantityKind.Length, "Probe radius; required with --geometry cylinder.");
+        var exposure = QuantityOption.WithDefault("--exposure", QuantityKind.Duration, "Cylinder only: how long the wall had been at the melting point before the probe stopped (z/v for a moving probe).", 0.0, "0 s");
         var json = PhysicsAction.JsonOption();
         var command = new Command(
             "refreeze",
             "Freeze-in of a water gap at the melting point against ice at T: Stefan number Δh_s/L, Neumann front constant λ of "
-            + "λ√π·exp(λ²)·(1 + erf λ) = Ste, and the time s = 2λ√(κt) takes to reach the gap width.")
+            + "λ√π·exp(λ²)·(1 + erf λ) = Ste, and the time to freeze the gap: planar, s = 2λ√(κt) reaching the gap width; cylinder, "
+            + "the heat a probe wall of radius R held at the melting point loses, (ΦR/κ)[H(τ_e + τ) − H(τ_e)], reaching the gap's latent heat.")
         {
-            gap.Option, temperature.Option, melting.Option, json,
+            gap.Option, temperature.Option, melting.Option, geometry, radius.Option, exposure.Option, json,
         };
-        var map = new Dictionary<string, string> { ["gapM"] = gap.Name, ["iceTemperatureK"] = temperature.Name, ["meltingTemperatureK"] = melting.Name };
+        var map = new Dictionary<string, string> { ["gapM"] = gap.Name, ["iceTemperatureK"] = temperature.Name, ["meltingTemperatureK"] = melting.Name, ["radiusM"] = radius.Name, ["exposureTimeS"] = exposure.Name };
         command.SetAction(parse => PhysicsAction.Run("refreeze", parse, json, p =>
         {
-            var s = Refreeze.FreezeIn(gap.Value(p), temperature.Value(p), melting.Value(p));
+            var chosen = p.GetValue(geometry);
+            var s = chosen == RefreezeGeometry.Cylinder
+                ? Refreeze.FreezeInAroundProbe(gap.Value(p), radius.Optional(p) ?? throw new UsageException("--radius is required with --geometry cylinder."), exposure.Value(p), temperature.Value(p), melting.Value(p))
+                : Refreeze.FreezeIn(gap.Value(p), temperature.Value(p), melting.Value(p));
             return new PhysicsReport("refreezing gap")
+                .Text("geometry", "geometry", chosen == RefreezeGeometry.Cylinder ? "cylinder" : "planar")
                 .Number("stefan_number", "Stefan number", s.StefanNumber, "")
                 .Number("front_constant", "front constant λ", s.FrontConstant, "")
                 .Number("freeze_time_s", "time to freeze the gap shut", s.FreezeTimeS, "s");
