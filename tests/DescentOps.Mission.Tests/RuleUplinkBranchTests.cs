@@ -27,13 +27,13 @@ public sealed class RuleUplinkBranchTests
                 severity high
                 priority 5
                 when probe.regime is FrozenIn
-                then { send probe.wall set_power(power = 4.5 kW) }
+                then { send probe.wall set_power(power = 14 kW) }
               }
               rule trim-wall {
                 runs on ground
                 severity low
-                when probe.wall_power above 1 kW and probe.regime is Melting
-                then { send probe.wall set_power(power = 1 kW) }
+                when probe.wall_power above 9 kW and probe.regime is Melting
+                then { send probe.wall set_power(power = 8 kW) }
               }
         add_telecommands:
           - { at: 41 d, from: ground, send: "probe.head set_power(power = 5 kW)" }

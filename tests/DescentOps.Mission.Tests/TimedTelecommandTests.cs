@@ -75,7 +75,7 @@ public sealed class TimedTelecommandTests
 
     [Theory]
     [InlineData("probe.wall set_power(power = 1 m)", "UnitMismatch")]
-    [InlineData("probe.wall set_power(power = 9 kW)", "ArgumentOutOfRange")]
+    [InlineData("probe.wall set_power(power = 99 kW)", "ArgumentOutOfRange")]
     [InlineData("probe.tail wag", "UnknownCommand")]
     [InlineData("probe.wall set_power(power = 1 kW) extra", "UnexpectedToken")]
     public void A_bad_telecommand_is_refused_at_its_place_in_the_file(string send, string code)
