@@ -45,10 +45,14 @@ public static class UncertainDraw
 
         var patched = ScenarioPatch.Apply(scenario.SourceText, [.. values.Select(v => (v.Path, v.Text))]);
         var drawn = ScenarioLoader.LoadText(patched, scenario.SourceName);
-        // The text is the scenario as written; a variant or a branch changed the rules and the fault list after loading.
-        // Keep those changes: the rules as given, the faults in the given list, each with its drawn values if it has any.
+        // The text is the scenario as written; a variant or a branch changed the rules, the fault list, the telecommands
+        // and the rule uplinks after loading. Keep those changes: the rules as given, the faults in the given list, each
+        // with its drawn values if it has any.
         var faults = scenario.Faults.Select(f => drawn.Faults.FirstOrDefault(d => d.Name == f.Name && d.Kind == f.Kind) is { } d ? d : f).ToList();
-        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults }, values);
+        // Telecommands: the text's own (with any drawn times) and those a change added; rule uplinks only come from a change.
+        var added = scenario.Telecommands.Where(t => t.FieldPath.StartsWith("add_telecommands", StringComparison.Ordinal));
+        var telecommands = drawn.Telecommands.Concat(added).OrderBy(t => t.AtS).ToList();
+        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults, Telecommands = telecommands, RuleUplinks = scenario.RuleUplinks }, values);
     }
 
     /// <summary>The journal record of the draws, at the start of the run.</summary>

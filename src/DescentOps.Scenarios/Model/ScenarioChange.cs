@@ -9,6 +9,16 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
     /// <summary>Where each field's value stands in the change file, by field path ("remove_faults[0].name").</summary>
     public IReadOnlyDictionary<string, Loading.SourceLocation> FieldLocations { get; init; } = new Dictionary<string, Loading.SourceLocation>();
 
+    /// <summary>Time-tagged telecommands added to the parent's.</summary>
+    public IReadOnlyList<TimedTelecommandModel> AddTelecommands { get; init; } = [];
+
+    /// <summary>Rule sets the ground uplinks during the branch, each replacing the set in force from its time.</summary>
+    public IReadOnlyList<RuleUplinkModel> RuleUplinks { get; init; } = [];
+
+    /// <summary>The earliest instant the change acts at by its own times (telecommands and uplinks), if it gives any.</summary>
+    public double? EarliestTimedActionS =>
+        AddTelecommands.Select(t => (double?)t.AtS).Concat(RuleUplinks.Select(u => (double?)u.AtS)).Min();
+
     public Scenario ApplyTo(Scenario parent)
     {
         var missing = RemoveFaults.Select((n, i) => (Name: n, Index: i)).FirstOrDefault(r => parent.Faults.All(f => f.Name != r.Name));
@@ -31,7 +41,13 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
         }
 
         var faults = kept.Concat(AddFaults).ToList();
-        return parent with { Faults = faults, Rules = Rules ?? parent.Rules };
+        return parent with
+        {
+            Faults = faults,
+            Rules = Rules ?? parent.Rules,
+            Telecommands = [.. parent.Telecommands.Concat(AddTelecommands).OrderBy(t => t.AtS)],
+            RuleUplinks = [.. parent.RuleUplinks.Concat(RuleUplinks).OrderBy(u => u.AtS)],
+        };
     }
 
     private Loading.ScenarioException Refused(string fieldPath, string message) =>
