@@ -33,12 +33,43 @@ internal static class ClusterFixture
         return dir;
     }
 
+    /// <summary>
+    /// One folder per test process: other checkouts on the machine may run these tests at the same time, so a run
+    /// removes only the folders of earlier runs whose process is gone, never the whole tree.
+    /// </summary>
     private static readonly Lazy<string> Root = new(() =>
     {
-        var root = Path.Combine(Path.GetTempPath(), "descentops-cluster-tests");
-        if (Directory.Exists(root)) Directory.Delete(root, recursive: true);
-        return root;
+        var parent = Path.Combine(Path.GetTempPath(), "descentops-cluster-tests");
+        Directory.CreateDirectory(parent);
+        foreach (var stale in Directory.GetDirectories(parent))
+        {
+            if (int.TryParse(Path.GetFileName(stale), out var pid) && !Alive(pid))
+            {
+                try
+                {
+                    Directory.Delete(stale, recursive: true);
+                }
+                catch (IOException)
+                {
+                }
+            }
+        }
+
+        return Path.Combine(parent, Environment.ProcessId.ToString(System.Globalization.CultureInfo.InvariantCulture));
     });
+
+    private static bool Alive(int pid)
+    {
+        try
+        {
+            using var process = System.Diagnostics.Process.GetProcessById(pid);
+            return !process.HasExited;
+        }
+        catch (ArgumentException)
+        {
+            return false;
+        }
+    }
 
     /// <summary>A loopback port free a moment ago (the node binds it right after).</summary>
     public static int FreePort()
