@@ -41,6 +41,11 @@ public static class BranchCommand
         if (!File.Exists(changePath)) throw new FileNotFoundException($"no such change file: {changePath}", changePath);
         var changeText = await File.ReadAllTextAsync(changePath).ConfigureAwait(false);
         var change = ScenarioLoader.LoadChange(changeText, changePath);
+        if (change.EarliestTimedActionS is { } earliest && earliest < atS)
+        {
+            throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"{changePath}: a telecommand or rule uplink at {earliest:R} s is before the branch instant {atS:R} s; a branch changes nothing before its instant"));
+        }
+
         var scenario = change.ApplyTo(parent.Scenario);
 
         var parentSha = Convert.ToHexStringLower(SHA256.HashData(await File.ReadAllBytesAsync(parentPath).ConfigureAwait(false)));

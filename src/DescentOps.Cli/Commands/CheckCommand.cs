@@ -66,6 +66,9 @@ public static class CheckCommand
                     Collect(result, l => scenario.Rules.InFile(l.Line, l.Column).ToString(), errors, warnings);
                     rules = result.Succeeded ? result.RuleSet?.Rules.Count ?? 0 : 0;
                 }
+
+                // Time-tagged telecommands are checked as a rule's send is.
+                foreach (var error in MissionTimeline.Errors(scenario)) errors.Add(new Finding("", "", error.ToString()));
             }
 
             if (json) WriteJson(path, errors, warnings, rules);

@@ -20,20 +20,26 @@ namespace DescentOps.Mission.Autonomy;
 /// </summary>
 public sealed class RuleHost
 {
-    private readonly CompiledRuleSet _own;
+    private readonly CompiledRuleSet _initial;
     private readonly List<RuleOutput> _outputs = [];
 
-    /// <summary>Every input consumed, in order: a frame's or the on-board sampler's samples, or a wake-up at an instant (samples null).</summary>
-    private readonly List<(IReadOnlyList<TelemetrySample>? Samples, SimTime Time)> _inputs = [];
+    /// <summary>
+    /// Every input consumed, in order: a frame's or the on-board sampler's samples, a wake-up at an instant (samples
+    /// null), or an uplinked rule set loaded at an instant (Load set).
+    /// </summary>
+    private readonly List<(IReadOnlyList<TelemetrySample>? Samples, SimTime Time, CompiledRuleSet? Load)> _inputs = [];
+    private CompiledRuleSet _own;
     private RuleEvaluator _evaluator;
 
     public RuleHost(CompiledRuleSet rules, Placement placement)
     {
         Placement = placement;
-        _own = rules with { Rules = [.. rules.Rules.Where(r => r.Placement == placement)] };
-        RuleCount = _own.Rules.Count;
+        _initial = Own(rules);
+        _own = _initial;
         _evaluator = NewEvaluator();
     }
+
+    private CompiledRuleSet Own(CompiledRuleSet rules) => rules with { Rules = [.. rules.Rules.Where(r => r.Placement == Placement)] };
 
     /// <summary>How many inputs the evaluator has consumed: the rules' part of the hosting component's state.</summary>
     public int Version => _inputs.Count;
@@ -52,8 +58,9 @@ public sealed class RuleHost
 
         _inputs.RemoveRange(version, _inputs.Count - version);
         _evaluator.Dispose();
+        _own = _initial;
         _evaluator = NewEvaluator();
-        foreach (var (samples, time) in _inputs) Consume(samples, time);
+        foreach (var (samples, time, load) in _inputs) Consume(samples, time, load);
         _outputs.Clear();
     }
 
@@ -64,8 +71,18 @@ public sealed class RuleHost
         return evaluator;
     }
 
-    private void Consume(IReadOnlyList<TelemetrySample>? samples, SimTime time)
+    private void Consume(IReadOnlyList<TelemetrySample>? samples, SimTime time, CompiledRuleSet? load = null)
     {
+        if (load is not null)
+        {
+            // The new set starts afresh, as a newly loaded table would: no history, persistence, waits or held actuators.
+            _evaluator.Dispose();
+            _own = Own(load);
+            _evaluator = NewEvaluator();
+            _evaluator.AdvanceTo(time);
+            return;
+        }
+
         if (samples is null)
         {
             _evaluator.AdvanceTo(time);
@@ -77,7 +94,17 @@ public sealed class RuleHost
 
     public Placement Placement { get; }
 
-    public int RuleCount { get; }
+    /// <summary>How many rules of this placement are in force.</summary>
+    public int RuleCount => _own.Rules.Count;
+
+    /// <summary>Replaces the rules in force with this placement's part of an uplinked set, from now on; returns how many that is.</summary>
+    public int Load(CompiledRuleSet rules, ComponentContext context)
+    {
+        _inputs.Add((null, context.Now, rules));
+        Consume(null, context.Now, rules);
+        _outputs.Clear();
+        return RuleCount;
+    }
 
     /// <summary>Evaluates a frame, then journals what the rules did and returns the commands they sent, in order.</summary>
     public IReadOnlyList<Telecommand> OnFrame(TelemetryFrame frame, ComponentContext context) =>
@@ -86,7 +113,7 @@ public sealed class RuleHost
     /// <summary>Evaluates samples taken at one instant (a frame's, or the on-board sampler's), then journals as <see cref="OnFrame"/>.</summary>
     public IReadOnlyList<Telecommand> OnSamples(IReadOnlyList<TelemetrySample> samples, ComponentContext context)
     {
-        _inputs.Add((samples, context.Now));
+        _inputs.Add((samples, context.Now, null));
         Consume(samples, context.Now);
         return Drain(context);
     }
@@ -94,7 +121,7 @@ public sealed class RuleHost
     /// <summary>Runs rule steps due by now (persistence ends, waits, escalations).</summary>
     public IReadOnlyList<Telecommand> OnWake(ComponentContext context)
     {
-        _inputs.Add((null, context.Now));
+        _inputs.Add((null, context.Now, null));
         Consume(null, context.Now);
         return Drain(context);
     }

@@ -20,13 +20,27 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 {
     private readonly RuleHost _rules;
     private readonly SimDuration _uplink;
+    private readonly IReadOnlyList<TimedTelecommand> _timed;
+    private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
 
-    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules)
+    /// <param name="scenario">The mission: its distance home sets the uplink.</param>
+    /// <param name="rules">The mission's rules; the ground ones run here.</param>
+    /// <param name="timed">The mission's time-tagged telecommands; the ground sends those it holds at their times.</param>
+    /// <param name="uplinks">Rule sets the ground uplinks at the scenario's times (<see cref="Scenario.RuleUplinks"/>).</param>
+    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null)
         : base(MissionIds.Ground, FailurePolicy.RestartFromLastState)
     {
         _rules = new RuleHost(rules, Placement.Ground);
         _uplink = SimDuration.FromSeconds(scenario.Body.DistanceToGroundM / StationComponent.SpeedOfLightMPerS);
+        _timed = timed ?? [];
+        _uplinks = uplinks ?? [];
+        UplinkTimesS = [.. scenario.RuleUplinks.Select(u => u.AtS)];
+        UplinkOrigins = [.. scenario.RuleUplinks.Select(u => u.FieldPath)];
     }
+
+    private IReadOnlyList<double> UplinkTimesS { get; }
+
+    private IReadOnlyList<string> UplinkOrigins { get; }
 
     public override GroundState InitialState => new(0, 0, 0, 0.0, null);
 
@@ -36,7 +50,18 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         switch (message)
         {
             case RunStarted:
+                for (var i = 0; i < _timed.Count; i++)
+                {
+                    if (_timed[i].From == TelecommandSender.Ground) context.ScheduleSelf(SimDuration.FromSeconds(_timed[i].AtS), new TimedTelecommandDue(i), MissionPriority.Command);
+                }
+
+                for (var k = 0; k < _uplinks.Count; k++) context.ScheduleSelf(SimDuration.FromSeconds(UplinkTimesS[k]), new RuleUplinkDue(k), MissionPriority.Command);
                 return state;
+            case TimedTelecommandDue due:
+                Send(_timed[due.Index], context);
+                return state;
+            case RuleUplinkDue due:
+                return UplinkRules(state, due.Index, context);
             case TelemetryFrame frame:
                 var next = Receive(state, frame, context);
                 return next with { PendingWake = Uplink(_rules.OnFrame(frame, context), state.PendingWake, context), RulesVersion = _rules.Version };
@@ -45,6 +70,33 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
+    }
+
+    /// <summary>A time-tagged telecommand leaves the ground now and goes the way every ground command goes.</summary>
+    private void Send(TimedTelecommand timed, ComponentContext context)
+    {
+        context.Record(CommandRecords.Sent, Severity.Notice,
+            RecordField.Of("command", timed.Command.ToString()),
+            RecordField.Of("origin", timed.Origin),
+            RecordField.Of("uplink_s", _uplink.TotalSeconds));
+        context.Schedule(MissionIds.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
+    }
+
+    /// <summary>
+    /// The ground's rules are replaced now; the whole set goes up to the probe, whose autonomy loads its part when the
+    /// upload arrives (or never, if the station or the fibre loses it).
+    /// </summary>
+    private GroundState UplinkRules(GroundState state, int index, ComponentContext context)
+    {
+        var set = _uplinks[index];
+        var groundRules = _rules.Load(set, context);
+        context.Record(RuleRecords.SetUplinked, Severity.Notice,
+            RecordField.Of("origin", UplinkOrigins[index]),
+            RecordField.Of("ground_rules", groundRules),
+            RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
+            RecordField.Of("uplink_s", _uplink.TotalSeconds));
+        context.Schedule(MissionIds.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
+        return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
     }
 
     private static GroundState Receive(GroundState state, TelemetryFrame frame, ComponentContext context)

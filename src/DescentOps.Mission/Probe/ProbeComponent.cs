@@ -118,6 +118,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case FaultCleared { Fault.Kind: FaultKind.TiltKick }:
                 return state;
 
+            case Telecommand command when command.Command.Target == MissionIds.Autonomy:
+                // A rule set uplinked from the ground: the probe's autonomy loads it.
+                context.Schedule(MissionIds.Autonomy, SimDuration.Zero, command, MissionPriority.Command);
+                return state;
+
             case Telecommand command when command.Command.Target.Name.StartsWith("vehicle-", StringComparison.Ordinal):
                 // Commands for a vehicle arrive over the fibre and go on through the probe's acoustic modem.
                 context.Schedule(command.Command.Target, SimDuration.Zero, command, MissionPriority.Command);

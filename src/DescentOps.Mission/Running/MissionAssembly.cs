@@ -17,13 +17,15 @@ public static class MissionAssembly
     public static IReadOnlyList<ISimComponent> Components(Scenario scenario)
     {
         var rules = MissionRules.Compile(scenario);
+        var timed = MissionTimeline.CompileTelecommands(scenario);
+        var uplinks = MissionTimeline.CompileUplinks(scenario);
         return
         [
             new ProbeComponent(scenario, rules),
             new TetherComponent(scenario),
             new StationComponent(scenario),
-            new GroundTeamComponent(scenario, rules),
-            new OnboardAutonomyComponent(rules),
+            new GroundTeamComponent(scenario, rules, timed, uplinks),
+            new OnboardAutonomyComponent(rules, timed, uplinks),
             new FaultInjectorComponent(scenario),
             .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario)),
         ];

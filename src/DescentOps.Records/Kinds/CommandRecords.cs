@@ -5,4 +5,10 @@ public static class CommandRecords
 {
     public const string Executed = "command.executed";
     public const string Lost = "command.lost";
+
+    /// <summary>A time-tagged telecommand the ground sends at its time.</summary>
+    public const string Sent = "command.sent";
+
+    /// <summary>A stored telecommand the probe's store releases at its time.</summary>
+    public const string Released = "command.released";
 }

@@ -15,4 +15,10 @@ public static class RuleRecords
     public const string ActuatorReleased = "rule.actuator_released";
     public const string CommandBlocked = "rule.command_blocked";
     public const string SampleRejected = "rule.sample_rejected";
+
+    /// <summary>The ground sends a new rule set (and starts its own part of it).</summary>
+    public const string SetUplinked = "rule.set_uplinked";
+
+    /// <summary>A rule host replaced its rules with an uplinked set.</summary>
+    public const string SetLoaded = "rule.set_loaded";
 }

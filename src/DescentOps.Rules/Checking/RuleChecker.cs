@@ -37,6 +37,20 @@ public sealed class RuleChecker
         return Check(parsed, catalogue);
     }
 
+    /// <summary>
+    /// Checks one telecommand written alone ("probe.wall set_power(power = 3 kW)") against the catalogue, as a rule's
+    /// send is checked: target, command, arguments, units and ranges. The command is null exactly when there are errors.
+    /// </summary>
+    public static (CommandAction? Command, IReadOnlyList<RuleDiagnostic> Errors) CheckCommand(RuleSource source, TelemetryCatalogue catalogue)
+    {
+        var (send, syntaxErrors) = RuleParser.ParseCommand(source);
+        if (send is null) return (null, syntaxErrors);
+        var checker = new RuleChecker(catalogue, []);
+        var compiled = checker.CheckSend(send);
+        var errors = checker._diagnostics.Where(d => d.Severity == DiagnosticSeverity.Error).ToArray();
+        return (errors.Length == 0 ? compiled?.Command : null, errors);
+    }
+
     public static RuleCheckResult Check(ParseResult parsed, TelemetryCatalogue catalogue)
     {
         var checker = new RuleChecker(catalogue, parsed.RuleSet.RulesWithErrors);

@@ -260,26 +260,7 @@ public sealed class RuleParser
             if (step.IsWord("send"))
             {
                 Next();
-                var target = ExpectName("command target");
-                var command = ExpectName("command name");
-                var arguments = new List<ArgumentSyntax>();
-                if (Current.Kind == TokenKind.LeftParen)
-                {
-                    Next();
-                    if (Current.Kind != TokenKind.RightParen)
-                    {
-                        arguments.Add(ParseArgument());
-                        while (Current.Kind == TokenKind.Comma)
-                        {
-                            Next();
-                            arguments.Add(ParseArgument());
-                        }
-                    }
-
-                    Expect(TokenKind.RightParen, "',' or ')' after an argument");
-                }
-
-                actions.Add(new SendSyntax(target, command, arguments, step.Location));
+                actions.Add(ParseSend(step.Location));
             }
             else if (step.IsWord("wait"))
             {
@@ -304,6 +285,54 @@ public sealed class RuleParser
 
         Next();
         return actions;
+    }
+
+    /// <summary>"TARGET COMMAND(name = value, ...)", the part of a send after the keyword.</summary>
+    private SendSyntax ParseSend(SourceLocation location)
+    {
+        var target = ExpectName("command target");
+        var command = ExpectName("command name");
+        var arguments = new List<ArgumentSyntax>();
+        if (Current.Kind == TokenKind.LeftParen)
+        {
+            Next();
+            if (Current.Kind != TokenKind.RightParen)
+            {
+                arguments.Add(ParseArgument());
+                while (Current.Kind == TokenKind.Comma)
+                {
+                    Next();
+                    arguments.Add(ParseArgument());
+                }
+            }
+
+            Expect(TokenKind.RightParen, "',' or ')' after an argument");
+        }
+
+        return new SendSyntax(target, command, arguments, location);
+    }
+
+    /// <summary>
+    /// Reads one telecommand written as a rule's send is, without the keyword: "probe.wall set_power(power = 3 kW)".
+    /// Used where a command stands alone (a time-tagged telecommand); never throws.
+    /// </summary>
+    public static (SendSyntax? Send, IReadOnlyList<RuleDiagnostic> Errors) ParseCommand(RuleSource source)
+    {
+        var parser = new RuleParser(RuleLexer.Tokenize(source.Name ?? "", source.Text));
+        try
+        {
+            var send = parser.ParseSend(parser.Current.Location);
+            if (parser.Current.Kind != TokenKind.End)
+            {
+                throw parser.Fail(DiagnosticCode.UnexpectedToken, parser.Current.Location, $"expected the end of the command, found {parser.Current.Describe()}");
+            }
+
+            return (send, parser._errors.ToArray());
+        }
+        catch (SyntaxAbort)
+        {
+            return (null, parser._errors.ToArray());
+        }
     }
 
     private ArgumentSyntax ParseArgument()

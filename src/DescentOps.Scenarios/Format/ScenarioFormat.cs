@@ -72,6 +72,14 @@ public static class ScenarioFormat
         new QuantityField("initial_power", "Jet heat at the start of the run (default 0 W: off).", Power, 0, 1e7, Required: false),
     ], Required: false);
 
+    /// <summary>One time-tagged telecommand; shared with branch change files.</summary>
+    public static SectionField Telecommand { get; } = new("telecommand", "One telecommand at a time.",
+    [
+        new QuantityField("at", "Simulated time after the start of the run: when the ground sends it, or when the probe's store releases it.", Duration, 0, 1000 * Year),
+        new ChoiceField("from", "ground (sent at its time, executed one uplink later: light time, the station, the fibre or relays) or board (stored on board, executed at its time).", ["ground", "board"]),
+        new TextField("send", "The command as a rule's send writes it, without 'send': 'probe.wall set_power(power = 3 kW)'."),
+    ]);
+
     public static SectionField Root { get; } = new(
         "",
         "A DescentOps scenario: the icy body, its ice shell, the probe, tether, station and vehicles, the faults to inject and the run settings.",
@@ -313,6 +321,7 @@ public static class ScenarioFormat
                 new TextField("relay", "For relay_failure: the relay that fails, by name ('relay-2') or number ('2'); relays are numbered from the surface in the order they are dropped.", Required: false),
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
+            new ListField("telecommands", "Telecommands tagged with times: sent by the ground at its time (reaching the probe one uplink later) or stored on board and executed at its time.", Telecommand, 0, 1000, Required: false),
             new SectionField("run", "Run settings; the command line may override them.",
             [
                 new IntegerField("seed", "Seed of the run's random streams.", long.MinValue, long.MaxValue),

@@ -76,7 +76,7 @@ public static class ScenarioLoader
     {
         var errors = new List<ScenarioError>();
         var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
-        var scenario = Build(root, sourceName, text) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
+        var scenario = WithTimedParts(Build(root, sourceName, text), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -371,8 +371,27 @@ public static class ScenarioLoader
         for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
         if (errors.Count > 0) throw new ScenarioException(errors);
         var rules = root.OptionalText("rules") is null ? null : Rules(root, text);
-        return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules);
+        return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules)
+        {
+            AddTelecommands = Telecommands(root.List("add_telecommands"), "add_telecommands"),
+            RuleUplinks = [.. root.List("uplink_rules").Select((u, i) => new RuleUplinkModel(u.Quantity("at"), Rules(u, text), $"uplink_rules[{i}]")).OrderBy(u => u.AtS)],
+        };
     }
+
+    private static TimedTelecommandModel[] Telecommands(IReadOnlyList<BoundSection> list, string path) =>
+    [
+        .. list.Select((t, i) => new TimedTelecommandModel(
+            t.Quantity("at"),
+            t.Text("from") == "board" ? TelecommandSender.Board : TelecommandSender.Ground,
+            t.Text("send"),
+            t.LocationOf("send"),
+            $"{path}[{i}]")).OrderBy(t => t.AtS),
+    ];
+
+    private static Scenario WithTimedParts(Scenario scenario, BoundSection root) => scenario with
+    {
+        Telecommands = Telecommands(root.List("telecommands"), "telecommands"),
+    };
 
     /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
     private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths, out IReadOnlyDictionary<string, SourceLocation> locations)

@@ -28,6 +28,12 @@ public sealed record Scenario(
     /// <summary>The probe's on-board sensor rates; null: every point is sampled with the frames, as before.</summary>
     public OnboardSamplingModel? OnboardSampling { get; init; }
 
+    /// <summary>Telecommands tagged with times (the scenario's <c>telecommands:</c>, and a branch's additions), in time order.</summary>
+    public IReadOnlyList<TimedTelecommandModel> Telecommands { get; init; } = [];
+
+    /// <summary>Rule sets uplinked during the run (a branch's <c>uplink_rules:</c>), in time order; empty for a scenario as written.</summary>
+    public IReadOnlyList<RuleUplinkModel> RuleUplinks { get; init; } = [];
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {

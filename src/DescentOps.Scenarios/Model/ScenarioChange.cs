@@ -6,6 +6,16 @@ namespace DescentOps.Scenarios.Model;
 /// </summary>
 public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<FaultModel> AddFaults, IReadOnlyList<string> RemoveFaults, RulesSource? Rules)
 {
+    /// <summary>Time-tagged telecommands added to the parent's.</summary>
+    public IReadOnlyList<TimedTelecommandModel> AddTelecommands { get; init; } = [];
+
+    /// <summary>Rule sets the ground uplinks during the branch, each replacing the set in force from its time.</summary>
+    public IReadOnlyList<RuleUplinkModel> RuleUplinks { get; init; } = [];
+
+    /// <summary>The earliest instant the change acts at by its own times (telecommands and uplinks), if it gives any.</summary>
+    public double? EarliestTimedActionS =>
+        AddTelecommands.Select(t => (double?)t.AtS).Concat(RuleUplinks.Select(u => (double?)u.AtS)).Min();
+
     public Scenario ApplyTo(Scenario parent)
     {
         var missing = RemoveFaults.Where(n => parent.Faults.All(f => f.Name != n)).ToList();
@@ -30,6 +40,12 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
                 $"fault '{clash.Key}' is already in the parent scenario; remove it first to replace it")]);
         }
 
-        return parent with { Faults = faults, Rules = Rules ?? parent.Rules };
+        return parent with
+        {
+            Faults = faults,
+            Rules = Rules ?? parent.Rules,
+            Telecommands = [.. parent.Telecommands.Concat(AddTelecommands).OrderBy(t => t.AtS)],
+            RuleUplinks = [.. parent.RuleUplinks.Concat(RuleUplinks).OrderBy(u => u.AtS)],
+        };
     }
 }
