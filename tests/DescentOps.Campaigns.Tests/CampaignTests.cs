@@ -21,6 +21,11 @@ public sealed class CampaignTests
         Assert.Equal(CampaignFixture.Dump(a), CampaignFixture.Dump(b));
         Assert.Contains("<svg", File.ReadAllText(Path.Combine(a, "report.html")), StringComparison.Ordinal);
 
+        // `campaign show --json` prints the same figures as summary.json, from the stored runs.
+        var (showExit, shown, _) = await CampaignFixture.CliOutputAsync("campaign", "show", a, "--json");
+        Assert.Equal(0, showExit);
+        Assert.Equal(File.ReadAllText(Path.Combine(a, "summary.json")), shown);
+
         // The drawn inputs are recorded per run and differ between runs (two inputs, six runs).
         Assert.Equal(12, CampaignFixture.Dump(a).Split('\n').Count(l => l.StartsWith("baseline|", StringComparison.Ordinal) && (l.Contains("probe.head_power", StringComparison.Ordinal) || l.Contains("shell.surface_temperature", StringComparison.Ordinal))));
     }
@@ -102,6 +107,10 @@ public sealed class CampaignTests
     [InlineData("  - path: probe.head_power\n    distribution: normal\n    mean: 6 kW\n    sd: -1 kW\n", "uncertain[0].sd", "must be positive")]
     [InlineData("  - path: shell.thickness\n    distribution: uniform\n    low: 3 km\n    high: 2 km\n", "uncertain[0].low", "below the high end")]
     [InlineData("  - path: faults[no-such].at\n    distribution: uniform\n    low: 1 d\n    high: 2 d\n", "uncertain[0].path", "no item named")]
+    [InlineData("  - path: probe.head_power\n    distribution: gamma\n    mean: 6 kW\n    sd: 1 kW\n", "uncertain[0].distribution", "is not one of")]
+    [InlineData("  - path: probe.head_power\n    distribution: normal\n    mean: 6 kW\n    sd: 1e300 kW\n", "uncertain[0].sd", "wider than the field's whole valid range")]
+    [InlineData("  - path: probe.head_power\n    distribution: normal\n    mean: 1e300 kW\n    sd: 1 kW\n", "uncertain[0].mean", "outside the field's range")]
+    [InlineData("  - path: probe.head_power\n    distribution: uniform\n    low: 1 kW\n    high: 1e12 kW\n", "uncertain[0].low", "outside the field's")]
     public void ABadUncertainBlockIsRefusedWithItsPlace(string block, string field, string message)
     {
         var text = File.ReadAllText(CampaignFixture.Scenario);
@@ -113,6 +122,40 @@ public sealed class CampaignTests
         Assert.Contains(message, error.Message, StringComparison.Ordinal);
         Assert.Equal("bad.yaml", error.Location.File);
         Assert.True(error.Location.Line > text[..start].Count(c => c == '\n'));
+    }
+
+    [Theory]
+    [InlineData("probe.depht below 3 m", "starts with a run measure")]
+    [InlineData("breakthrough below -5 d", "never negative or infinite")]
+    [InlineData("frames_lost below 1e400", "")]
+    [InlineData("breakthrough sooner 5 d", "comes 'above Q'")]
+    [InlineData("final_depth inside 3 km to 1 km", "the lower end comes first")]
+    public void ABadCriterionIsRefusedAtItsLine(string requirement, string message)
+    {
+        var text = File.ReadAllText(CampaignFixture.Scenario);
+        var line = text[..text.IndexOf("require: breakthrough below 20 d", StringComparison.Ordinal)].Count(c => c == '\n') + 1;
+        var bad = text.Replace("require: breakthrough below 20 d", "require: " + requirement, StringComparison.Ordinal);
+        var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(bad, "bad.yaml")).Errors);
+        Assert.Equal("criteria[0].require", error.FieldPath);
+        Assert.Equal("bad.yaml", error.Location.File);
+        Assert.Equal(line, error.Location.Line);
+        Assert.Contains(message, error.Message, StringComparison.Ordinal);
+    }
+
+    [Theory]
+    [InlineData("--runs", "2000000000", "at most 1000000 runs")]
+    [InlineData("--jobs", "100000", "at most 256 workers")]
+    public async Task HugeCountsAreRefusedBeforeAnythingRuns(string option, string value, string message)
+    {
+        var dir = Path.Combine(CampaignFixture.TempDir(), "c");
+        string[] args = option == "--runs"
+            ? ["campaign", CampaignFixture.Scenario, "--runs", value, "--output", dir]
+            : ["campaign", CampaignFixture.Scenario, "--runs", "2", option, value, "--output", dir];
+        var (exit, _, stderr) = await CampaignFixture.CliOutputAsync(args);
+        Assert.Equal(2, exit);
+        Assert.Contains(option, stderr, StringComparison.Ordinal);
+        Assert.Contains(message, stderr, StringComparison.Ordinal);
+        Assert.False(Directory.Exists(dir));
     }
 
     [Fact]

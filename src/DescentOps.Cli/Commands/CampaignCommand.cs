@@ -24,6 +24,11 @@ public static class CampaignCommand
     /// <summary>Indices per precision check: the stop is decided on whole blocks so it does not depend on which worker finished first.</summary>
     private const int PrecisionBlock = 10;
 
+    /// <summary>Bounds on the options, so a slip of the keyboard cannot ask for years of work or thousands of threads.</summary>
+    public const int MaxRuns = 1_000_000;
+    public const int MaxJobs = 256;
+    public const int MaxVariants = 32;
+
     public static Command Create()
     {
         var scenarioArgument = new Argument<string>("SCENARIO") { Description = "Scenario file, or the name of a built-in scenario." };
@@ -75,8 +80,11 @@ public static class CampaignCommand
     private static int Execute(string scenarioArgument, int runs, long? seedOption, string[] versus, int? jobs, string? output, double? precision, bool resume, string? keepLogs, ClusterCampaign.Request? cluster = null)
     {
         if (runs < 1) throw new UsageException("--runs: a campaign needs at least 1 run");
+        if (runs > MaxRuns) throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"--runs: at most {MaxRuns} runs per variant (asked for {runs}); use --precision to stop when the intervals are narrow enough"));
         if (jobs is < 1 && !(jobs == 0 && cluster is not null)) throw new UsageException(cluster is null ? "--jobs: at least 1 worker" : "--jobs: 0 (the campaign node only dispatches) or more");
         if (cluster is not null && keepLogs is not null) throw new UsageException("--keep-logs: not with --cluster (the runs happen on other machines); regenerate any run's log with 'campaign log'");
+        if (jobs > MaxJobs) throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"--jobs: at most {MaxJobs} workers (asked for {jobs}); the machine has {Environment.ProcessorCount} cores"));
+        if (versus.Length + 1 > MaxVariants) throw new UsageException(string.Create(CultureInfo.InvariantCulture, $"--versus: at most {MaxVariants - 1} change files (given {versus.Length})"));
         if (precision is { } h && !(h > 0 && h <= 0.5)) throw new UsageException("--precision: a half-width between 0 and 0.5 (e.g. 0.05 for ±5 %)");
         if (keepLogs is not (null or "failed" or "all")) throw new UsageException("--keep-logs: 'failed' or 'all'");
 
@@ -90,6 +98,14 @@ public static class CampaignCommand
         }
 
         var plan = new CampaignPlan(scenario, variants, seed, scenario.Run.UntilS, ToolInfo.Version, RandomStream.AlgorithmName);
+
+        // Refused before anything runs: what `run` would refuse of any variant, and inputs the truncation cannot draw.
+        foreach (var variant in variants)
+        {
+            var refusals = MissionPreflight.Errors(plan.ScenarioOf(variant.Name));
+            if (refusals.Count > 0) throw new ScenarioException(refusals);
+            _ = UncertainDraw.Draw(plan.ScenarioOf(variant.Name), RunSeeds.ForRun(seed, 0));
+        }
         var settings = new Dictionary<string, string>(StringComparer.Ordinal)
         {
             ["scenario_name"] = scenario.Name,
@@ -126,9 +142,13 @@ public static class CampaignCommand
         settings["precision"] = precision?.ToString("R", CultureInfo.InvariantCulture) ?? "";
         store.SaveSettings(settings);
 
+        // Memory stays flat with the number of runs: the work is counted, not listed (run k is index k / V of variant
+        // k mod V), each record goes to the store as it arrives, and the per-run successes are kept only for --precision.
         var done = store.Done();
-        var success = store.Runs().ToDictionary(r => (r.Variant, r.Index), r => r.Success);
-        var work = Enumerable.Range(0, runs).SelectMany(i => variants.Select(v => (v.Name, Index: i))).Where(k => !done.Contains(k)).ToList();
+        var success = precision is null
+            ? new Dictionary<(string Variant, int Index), bool>()
+            : store.Runs().ToDictionary(r => (r.Variant, r.Index), r => r.Success);
+        var total = (long)runs * variants.Count;
         var workers = jobs ?? Environment.ProcessorCount;
         Console.Out.WriteLine(string.Create(CultureInfo.InvariantCulture,
             $"DescentOps {ToolInfo.Version}: campaign of '{scenario.Name}', {runs} runs x {variants.Count} variant(s), seed {seed}, {workers} worker(s){(cluster is null ? "" : " here and more as they join the cluster")}{(done.Count > 0 ? $", {done.Count} run(s) already stored" : "")}"));
@@ -136,7 +156,7 @@ public static class CampaignCommand
         using var interruption = Interruption.Watch();
         using var cancel = CancellationTokenSource.CreateLinkedTokenSource(interruption.Token);
         var progress = new CampaignProgress(runs * variants.Count, done.Count);
-        var next = -1;
+        var next = -1L;
         var stopAt = runs;
         var checkedBlocks = 0;
         var gate = new Lock();
@@ -149,9 +169,9 @@ public static class CampaignCommand
             while (!cancel.IsCancellationRequested)
             {
                 var k = Interlocked.Increment(ref next);
-                if (k >= work.Count) return;
-                var (variant, index) = work[k];
-                if (index >= Volatile.Read(ref stopAt)) continue;
+                if (k >= total) return;
+                var (variant, index) = (variants[(int)(k % variants.Count)].Name, (int)(k / variants.Count));
+                if (index >= Volatile.Read(ref stopAt) || done.Contains((variant, index))) continue;
                 try
                 {
                     var spec = plan.Spec(variant, index);
@@ -172,10 +192,13 @@ public static class CampaignCommand
         bool Accept(RunRecord record)
         {
             var stored = store.Add(record);
-            lock (gate)
+            if (precision is { } half)
             {
-                success[(record.Variant, record.Index)] = record.Success;
-                if (precision is { } half) CheckPrecision(half);
+                lock (gate)
+                {
+                    success[(record.Variant, record.Index)] = record.Success;
+                    CheckPrecision(half);
+                }
             }
 
             progress.RunFinished();
@@ -205,7 +228,9 @@ public static class CampaignCommand
 
         if (cluster is not null)
         {
-            failure = ClusterCampaign.Run(cluster, plan, settings, work, jobs ?? Environment.ProcessorCount, Accept, () => Volatile.Read(ref stopAt), progress, cancel.Token);
+            // The cluster's dispatcher lists the runs still to do (a key each), unlike the local workers, which count them.
+            var work = Enumerable.Range(0, runs).SelectMany(i => variants.Select(v => (v.Name, Index: i))).Where(k => !done.Contains(k)).ToList();
+            failure = ClusterCampaign.Run(cluster, plan, settings, work, workers, Accept, () => Volatile.Read(ref stopAt), progress, cancel.Token);
         }
         else
         {
@@ -213,7 +238,6 @@ public static class CampaignCommand
             threads.ForEach(t => t.Start());
             threads.ForEach(t => t.Join());
         }
-
         progress.Done();
         if (failure is not null) throw failure;
         if (cancel.IsCancellationRequested)

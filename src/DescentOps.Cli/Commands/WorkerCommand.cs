@@ -29,7 +29,7 @@ public static class WorkerCommand
         {
             var join = ClusterCampaign.Address(parse.GetValue(joinOption)!, "--join");
             var jobs = parse.GetValue(jobsOption) ?? Environment.ProcessorCount;
-            if (jobs is < 1 or > 1024) throw new UsageException("--jobs: 1 to 1024 runs at once");
+            if (jobs is < 1 or > CampaignCommand.MaxJobs) throw new UsageException($"--jobs: 1 to {CampaignCommand.MaxJobs} runs at once");
             var listenText = parse.GetValue(listenOption);
             if (listenText is null && !join.IsLoopback) throw new UsageException("--listen: name this machine's address as the campaign node can reach it (HOST:PORT; port 0 picks a free one)");
             var listen = listenText is null ? new NodeAddress("127.0.0.1", 0) : ClusterCampaign.Address(listenText, "--listen");

@@ -48,6 +48,7 @@ public sealed class FaultMeasures
     public static IReadOnlyList<string> AffectedPoints(string kind, string point) => kind switch
     {
         "PowerDip" => ["probe.velocity", "probe.depth", "probe.head_power", "probe.wall_power", "probe.regime", "probe.bus_power_available", "probe.battery_soc"],
+        "CloggedNozzle" => ["probe.velocity", "probe.depth", "probe.jet_power", "probe.regime"],
         "HeaterSegmentFailure" => ["probe.tilt", "probe.head_power"],
         "TiltKick" => ["probe.tilt"],
         "SensorStuck" or "SensorBias" or "SensorDropout" or "SensorNoise" => [point],
@@ -89,7 +90,7 @@ public sealed class FaultMeasures
                         if (tilt > UprightRad) f.LeftUpright = true;
                         if (f.LeftUpright) f.Sustain(t, tilt <= UprightRad, regime == "AtOcean");
                     }
-                    else if (f.Kind == "PowerDip")
+                    else if (f.Kind is "PowerDip" or "CloggedNozzle")
                     {
                         f.Sustain(t, regime == "AtOcean" || (regime == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS), regime == "AtOcean");
                     }
@@ -126,7 +127,7 @@ public sealed class FaultMeasures
             f.RecoveredS - f.StartS,
             f.Kind switch
             {
-                "PowerDip" => "descent back to 90 % of its pre-fault speed, held 6 h",
+                "PowerDip" or "CloggedNozzle" => "descent back to 90 % of its pre-fault speed, held 6 h",
                 "StationFailure" => "station relaying again",
                 "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",

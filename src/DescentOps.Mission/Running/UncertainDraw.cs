@@ -30,13 +30,14 @@ public static class UncertainDraw
         if (scenario.Uncertain.Count == 0) return (scenario, []);
         var random = new Xoshiro256StarStar(RandomStream.DeriveSeed(seed, StreamId), threadSafe: false);
         var values = new List<DrawnInput>();
-        foreach (var input in scenario.Uncertain)
+        for (var i = 0; i < scenario.Uncertain.Count; i++)
         {
+            var input = scenario.Uncertain[i];
             var value = double.NaN;
             for (var attempt = 0; attempt < MaxRedraws && !input.InRange(value); attempt++) value = Sample(input, random);
             if (!input.InRange(value))
             {
-                throw new ScenarioException([new ScenarioError(new SourceLocation(scenario.SourceName, 1, 1), "uncertain",
+                throw new ScenarioException([new ScenarioError(scenario.LocationOf($"uncertain[{i}].path"), $"uncertain[{i}].path",
                     $"'{input.Path}': {MaxRedraws} draws all fell outside the field's valid range; narrow the distribution")]);
             }
 

@@ -100,7 +100,7 @@ public sealed class HtmlReportWriter
         {
             Line("<h3>Criteria</h3>");
             Line("<table class=\"figures\" id=\"criteria\">");
-            foreach (var f in criteria) Line($"<tr><th scope=\"row\">{E(FigureFormatter.Label(f.Name))}</th><td>{E(FigureFormatter.Value(f))}</td></tr>");
+            foreach (var f in criteria) Line($"<tr><th scope=\"row\">{E(FigureFormatter.CriterionName(f.Name))}</th><td>{E(FigureFormatter.Verdict(f))}</td></tr>");
             Line("</table>");
         }
 

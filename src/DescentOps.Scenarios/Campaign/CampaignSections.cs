@@ -98,13 +98,21 @@ public static class CampaignSections
         error = "";
         if (measure.Kind is { } kind)
         {
-            if (QuantityParser.TryParseSi(kind, text, out si, out var parseError)) return true;
-            error = $"'{measure.Name}': {parseError}";
+            if (!QuantityParser.TryParseSi(kind, text, out si, out var parseError))
+            {
+                error = $"'{measure.Name}': {parseError}";
+                return false;
+            }
+        }
+        else if (!StrictNumber.TryParse(text, out si, out var why))
+        {
+            error = $"'{measure.Name}' is a count: give a plain number, not '{text}' ({why})";
             return false;
         }
 
-        if (StrictNumber.TryParse(text, out si, out var why)) return true;
-        error = $"'{measure.Name}' is a count: give a plain number, not '{text}' ({why})";
+        // Every measure is a time, a depth, an energy or a count: none is negative or infinite.
+        if (si >= 0 && double.IsFinite(si)) return true;
+        error = $"'{measure.Name}' is never negative or infinite: '{text}' cannot be a threshold";
         return false;
     }
 
@@ -166,6 +174,7 @@ public static class CampaignSections
                     var sd = Get("sd");
                     if (errors.Count > before) return null;
                     if (!(sd > 0)) Refuse("sd", "the standard deviation must be positive");
+                    else if (sd > max - min) Refuse("sd", $"a standard deviation of {Show(sd)} is wider than the field's whole valid range ({range}): almost every draw would fall outside it");
                     else if (!Inside(mean)) Refuse("mean", $"the mean is outside the field's range: {range}");
                     else result = new UncertainInput(path, UncertainDistribution.Normal, mean, sd, 0, min, max, minExclusive, unit);
                     break;
@@ -195,7 +204,7 @@ public static class CampaignSections
                     break;
                 }
 
-            default:
+            case "triangular":
                 {
                     var low = Get("low");
                     var mode = Get("mode");
@@ -207,6 +216,10 @@ public static class CampaignSections
                     else result = new UncertainInput(path, UncertainDistribution.Triangular, low, mode, high, min, max, minExclusive, unit);
                     break;
                 }
+
+            default:
+                // Not a distribution the format knows: the format's check has reported it at its line.
+                break;
         }
 
         // Read every parameter field, so the format's fields are all used (the loader test proves it).
