@@ -40,6 +40,10 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.bus_power_available", PhysicalDimension.Power, 0, maxBusW),
             new NumericPointSpec("probe.buffer_fill", PhysicalDimension.Dimensionless, 0, 1),
             new DiscretePointSpec("probe.regime", Regimes),
+            // What carries the frames, as the probe's transceivers sense it (the link tells the probe when it changes).
+            new DiscretePointSpec("probe.link_path", Tether.LinkPaths.All),
+            // No sensor measures the sideways drift: true state, for fault triggers only.
+            new NumericPointSpec("probe.lateral_drift", PhysicalDimension.Length, -scenario.Shell.ThicknessM, scenario.Shell.ThicknessM) { TrueStateOnly = true },
         ];
         CommandSpec[] commands =
         [
