@@ -38,7 +38,8 @@ public static class Refreeze
     /// probe), so the ice behind the wall is already warmed. The wall keeps drawing the cylinder flux of
     /// <see cref="CylinderConduction"/> while the gap water freezes at T_m: the gap is closed after t_f with
     /// (Φ R/κ_eff)[H(κ_eff (t_e + t_f)/R²) − H(κ_eff t_e/R²)] = c ρ_w L w (MODEL, reference note §5.2), where
-    /// c = Ste/(λ√π), λ the front constant of the planar case (b), makes the planar limit exact for any Stefan number
+    /// c = Φ/(√(πκ_eff) ρ_w L λ′), λ′ the front constant of planar freezing with the ice's properties at each temperature
+    /// (<see cref="VariablePropertyFreezing"/>), makes the planar limit exact for any Stefan number and ice temperature
     /// (c → 1 for small Ste, where the note's form holds). Checked against a radial enthalpy solver in the tests.
     /// <c>stefanCorrected: false</c> gives the note's uncorrected form (c = 1), kept for its check values.
     /// </summary>
@@ -52,9 +53,11 @@ public static class Refreeze
         var lambda = StefanProblem.ColdWallFrontConstant(ice.StefanNumber);
         var r2OverKappa = radiusM * radiusM / ice.DiffusivityM2PerS;
         var tauExposure = exposureTimeS / r2OverKappa;
-        // The wall-at-T_m heat balance is the small-Stefan limit; the factor Ste/(λ√π) (→ 1 as Ste → 0) makes its planar
-        // limit the Neumann case (b), whose frozen layer cools below T_m as it grows (checked against an enthalpy solver).
-        var stefanFactor = stefanCorrected ? ice.StefanNumber / (lambda * Math.Sqrt(Math.PI)) : 1.0;
+        // The wall-at-T_m heat balance is the small-Stefan limit. The factor c = Φ/(√(πκ_eff) ρ_w L λ′) makes its planar
+        // limit the exact planar freezing front s = 2λ′√t with the ice's properties at each temperature
+        // (VariablePropertyFreezing), whose frozen layer cools below T_m as it grows; with constant properties c is
+        // (ρ_i/ρ_w) Ste/(λ√π) of the Neumann case (b), → 1 as Ste → 0 (checked against an enthalpy solver, 100-270 K).
+        var stefanFactor = stefanCorrected ? StefanFactor(ice, iceTemperatureK, meltingTemperatureK) : 1.0;
         var target = CylinderConduction.H(tauExposure) + (stefanFactor * LiquidWater.DensityKgPerM3 * ice.LatentJPerKg * gapM / (ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS));
         var tauEnd = SolveTau(target, tauExposure);
         return new RefreezeSolution(ice.StefanNumber, lambda, (tauEnd - tauExposure) * r2OverKappa);
@@ -113,6 +116,14 @@ public static class Refreeze
         while (Surplus(upper) < 0) upper *= 2.0;
         var time = Brent.FindRoot(Surplus, 0.0, upper, 1e-9 * upper, 500);
         return new MeltFreeSolution(powerW * time, time) { HoldOpenPowerW = steadyLossW, CoolingJ = coolingJ };
+    }
+
+    /// <summary>c = Φ/(√(πκ_eff) ρ_w L λ′): the exact planar front λ′ (m/√s) in the cylinder model's units.</summary>
+    private static double StefanFactor(IceState ice, double iceTemperatureK, double meltingTemperatureK)
+    {
+        var latentPerVolume = LiquidWater.DensityKgPerM3 * ice.LatentJPerKg;
+        var front = VariablePropertyFreezing.FrontConstantMPerRootS(iceTemperatureK, meltingTemperatureK, latentPerVolume);
+        return ice.PotentialWPerM / (Math.Sqrt(Math.PI * ice.DiffusivityM2PerS) * latentPerVolume * front);
     }
 
     private static double SolveDecreasingG(double targetG, double tauLower)
