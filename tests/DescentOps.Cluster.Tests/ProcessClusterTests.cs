@@ -25,11 +25,14 @@ public sealed class ProcessClusterTests
         using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "2"); // two slots: it holds a run whenever it is killed
         using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
 
-        // Mid-campaign: both workers have joined and some runs are stored.
-        await ClusterFixture.Until(() => node.HasExited || (node.Stdout.Contains("w2 (", StringComparison.Ordinal) && node.Stdout.Contains("w3 (", StringComparison.Ordinal) && ClusterFixture.StoredRuns(clustered) >= 4), "both workers joined and 4 runs stored");
+        // Mid-campaign: both workers have joined and four more runs are stored since, so the doomed one is at work (with
+        // two slots it then always holds runs, and the campaign cannot end before the cluster downs it).
+        await ClusterFixture.Until(() => node.HasExited || (node.Stdout.Contains("w2 (", StringComparison.Ordinal) && node.Stdout.Contains("w3 (", StringComparison.Ordinal)), "both workers joined");
+        var atJoin = ClusterFixture.StoredRuns(clustered);
+        await ClusterFixture.Until(() => node.HasExited || ClusterFixture.StoredRuns(clustered) >= atJoin + 4, "4 runs stored after both joined");
         Assert.False(node.HasExited, node.Stdout + node.Stderr);
         doomed.KillHard();
-        await ClusterFixture.Until(() => node.HasExited || ClusterFixture.StoredRuns(clustered) >= 8, "8 runs stored");
+        await ClusterFixture.Until(() => node.HasExited || ClusterFixture.StoredRuns(clustered) >= atJoin + 8, "4 more runs stored");
         await stopping.SignalAsync("TERM");
         await stopping.WaitAsync(ClusterFixture.Guard);
         await node.WaitAsync(ClusterFixture.Guard);
