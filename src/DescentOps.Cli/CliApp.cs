@@ -26,6 +26,7 @@ public static class CliApp
         ScenariosCommand.Create(),
         RehearseCommand.Create(),
         SchemaCommand.Create(),
+        CampaignCommand.Create(),
         Commands.Physics.PhysicsCommand.Create(),
     };
 

@@ -24,6 +24,7 @@ public sealed class RehearsalSession
     private readonly object _gate = new();
     private readonly SessionSetup _setup;
     private readonly SteppedKernel _kernel;
+    private readonly PreparedRun _prepared;
     private readonly MissionSummarySink _summary;
     private readonly SessionView _view;
     private readonly TelemetryCatalogue _catalogue;
@@ -41,10 +42,11 @@ public sealed class RehearsalSession
         _catalogue = MissionCatalogue.For(setup.Scenario);
         Limits = RuleLimit.Of(MissionRules.Compile(setup.Scenario), _catalogue);
         _view = new SessionView(Feed, Limits);
-        _summary = new MissionSummarySink(new Tee(setup.Journal, _view));
+        _prepared = PreparedRun.For(setup.Scenario, setup.Manifest.Seed);
+        _summary = _prepared.SummarySink(new Tee(setup.Journal, _view));
         _until = SimTime.FromSecondsSinceEpoch(setup.Manifest.UntilSeconds);
         var additions = RehearsalLog.Additions(setup.Scenario, setup.PriorInputs);
-        _kernel = new SteppedKernel(new KernelSetup([.. MissionAssembly.Components(setup.Scenario), .. additions.Components], setup.Manifest.Seed, _until, _summary)
+        _kernel = new SteppedKernel(new KernelSetup([.. MissionAssembly.Components(_prepared.Scenario, _prepared.Rules), .. additions.Components], setup.Manifest.Seed, _until, _summary)
         {
             Inputs = additions.Inputs,
         });
@@ -295,7 +297,7 @@ public sealed class RehearsalSession
     {
         if (_kernel.Outcome is null || Result is not null) return;
         var result = _kernel.Result();
-        var summary = _summary.Summarize(result);
+        var summary = _prepared.Complete(_summary.Summarize(result));
         _setup.Journal.Complete(new RunSummary(summary.Outcome.Kind.ToString(), summary.Outcome.Reason, summary.FinalTimeS, summary.ToFields()));
         NowS = summary.FinalTimeS;
         Result = summary;

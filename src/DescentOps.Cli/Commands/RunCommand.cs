@@ -206,8 +206,10 @@ public static class RunCommand
             ("energy used", string.Create(c, $"{s.EnergyUsedJ / 3.6e9:F2} MWh ({s.EnergyUsedJ:F0} J)")),
             ("faults injected", s.FaultsInjected.ToString(c)),
             ("telemetry frames", string.Create(c, $"{s.FramesSent} sent = {s.FramesReceivedOnGround} received on ground + {s.FramesLost} lost + {s.FramesHeldOrInFlight} held or in flight at the end")),
-            ("time stopped", Hours(s.TimeStoppedS)),
+            ("time stopped", string.Create(c, $"{Hours(s.TimeStoppedS)} (longest {Hours(s.LongestStopS)}, frozen in {Hours(s.TimeFrozenS)})")),
             ("time blind", Hours(s.TimeBlindS) + " (the ground saw nothing of the probe)"),
+            ("most frames held", s.FramesHeldMax.ToString(c)),
+            ("vehicles lost", s.VehiclesLost.ToString(c)),
             ("vehicle profiles", s.VehicleProfiles.ToString(c)),
             ("component failures", s.ComponentFailures.ToString(c)),
             ("events", string.Create(c, $"{s.EventsDelivered} delivered, {s.RecordsWritten} logged")),
@@ -216,6 +218,12 @@ public static class RunCommand
             ("event log", path),
         };
         foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
+        foreach (var criterion in s.Criteria)
+        {
+            Console.Out.WriteLine(string.Create(c, $"  criterion {criterion.Name,-13}{(criterion.Passed ? "met" : "NOT met")}: {criterion.Requirement} (measured {(criterion.Value is { } v ? v.ToString("G6", c) : "none")})"));
+        }
+
+        if (s.Criteria.Count > 0) Console.Out.WriteLine($"  {"success",-22}{(s.Success ? "yes" : "no")}");
         foreach (var f in s.Faults)
         {
             Console.Out.WriteLine(string.Create(c, $"  fault {f.Fault} ({f.Kind}, at {f.StartS / 86400:F3} d): detected {After(f.DetectedAfterS)}, first action {After(f.FirstActionAfterS)}, recovered {After(f.RecoveredAfterS)} [{f.Recovery}]"));

@@ -37,6 +37,12 @@ public sealed record LoggedRun(string Path, RunManifest Manifest, Scenario Scena
             scenario = ScenarioLoader.LoadChange(branch.ChangeText, $"{path}#branch-{branch.Generation}").ApplyTo(scenario);
         }
 
+        // A campaign variant's log carries its change, as a branch does.
+        if (manifest.Extra.FirstOrDefault(f => f.Name == DescentOps.Campaigns.CampaignPlan.VariantChangeField).Text is { } variantChange)
+        {
+            scenario = ScenarioLoader.LoadChange(variantChange, $"{path}#variant").ApplyTo(scenario);
+        }
+
         return new LoggedRun(path, manifest, scenario, integrity);
     }
 }

@@ -5,4 +5,8 @@ namespace DescentOps.Mission.Running;
 /// first reached the probe (first action), when the physical state was back within limits (recovery); null for
 /// what never happened. <see cref="Recovery"/> says how recovery is judged for this kind of fault.
 /// </summary>
-public sealed record FaultMeasure(string Fault, string Kind, double StartS, double? DetectedAfterS, double? FirstActionAfterS, double? RecoveredAfterS, string Recovery);
+public sealed record FaultMeasure(string Fault, string Kind, double StartS, double? DetectedAfterS, double? FirstActionAfterS, double? RecoveredAfterS, string Recovery)
+{
+    /// <summary>False for faults with no physical recovery to measure (sensor faults); a broken fibre has one, and never meets it.</summary>
+    public bool HasRecoveryMeasure { get; init; } = true;
+}

@@ -4,22 +4,57 @@ using DescentOps.Records.Kinds;
 namespace DescentOps.Mission.Running;
 
 /// <summary>
-/// Derives <see cref="FaultMeasure"/>s from journal records as they are written. Recovery, by fault kind:
-/// a power dip is recovered when a frame shows the probe melting at 90 % or more of the speed in the last frame
-/// before the fault (a rule of thumb of ours: "back to nominal" within a typical telemetry noise band); a station
-/// failure when the station reports recovered; a tilt fault when the tilt, having left 1 degree of vertical, is
-/// back within it; a vehicle loss when that vehicle next docks (never if it is lost); a tether break never (no relays yet); a sensor fault does not
-/// move the physical state, so it has no recovery, only detection.
+/// Derives <see cref="FaultMeasure"/>s from journal records as they are written.
+/// <para>Detection is the first firing, at or after the fault began, of a rule whose condition reads a point the fault
+/// affects (<see cref="AffectedPoints"/>), or of a rule the fault names in <c>detected_by</c>; a rule about something
+/// else firing by chance is not a detection. The first action is the first command executed from such a rule.</para>
+/// <para>Recovery is a sustained return: the good state must hold for <see cref="RecoveryHoldS"/> (or until the probe
+/// reaches the ocean) and is dated from when it began. A power dip is recovered when the probe melts at 90 % or more of
+/// the speed in the last frame before the fault (a rule of thumb of ours: "back to nominal" within a typical telemetry
+/// noise band); a tilt fault when the tilt, having left 1 degree of vertical, is back within it. A station failure,
+/// upset or relay failure recovers when the component reports itself working, a spool jam when frames go home by the
+/// relays again, a vehicle loss when that vehicle next docks. A broken fibre never recovers. A sensor fault does not move
+/// the physical state, so it has no recovery, only detection.</para>
 /// </summary>
 public sealed class FaultMeasures
 {
+    /// <summary>How long a recovered state must hold: 6 h, a rule of thumb of ours (several frames and longer than the usual transient).</summary>
+    public const double RecoveryHoldS = 6 * 3600;
+
     private const double RecoveredSpeedShare = 0.9;
 
     /// <summary>Within one degree of vertical counts as upright (a rule of thumb of ours).</summary>
     private const double UprightRad = Math.PI / 180;
 
     private readonly List<Open> _faults = [];
+    private readonly IReadOnlyDictionary<string, IReadOnlyList<string>> _rulePoints;
+    private readonly IReadOnlyDictionary<string, IReadOnlyList<string>> _detectedBy;
     private double _lastSpeedMPerS;
+
+    /// <param name="rulePoints">Every rule's name and the points its condition reads.</param>
+    /// <param name="detectedBy">Per fault name, the rules named as meant to detect it.</param>
+    public FaultMeasures(IReadOnlyDictionary<string, IReadOnlyList<string>> rulePoints, IReadOnlyDictionary<string, IReadOnlyList<string>> detectedBy)
+    {
+        _rulePoints = rulePoints;
+        _detectedBy = detectedBy;
+    }
+
+    public FaultMeasures()
+        : this(new Dictionary<string, IReadOnlyList<string>>(), new Dictionary<string, IReadOnlyList<string>>())
+    {
+    }
+
+    /// <summary>The telemetry points a fault of this kind changes, as the rules and the ground see them.</summary>
+    public static IReadOnlyList<string> AffectedPoints(string kind, string point) => kind switch
+    {
+        "PowerDip" => ["probe.velocity", "probe.depth", "probe.head_power", "probe.wall_power", "probe.regime", "probe.bus_power_available", "probe.battery_soc"],
+        "CloggedNozzle" => ["probe.velocity", "probe.depth", "probe.jet_power", "probe.regime"],
+        "HeaterSegmentFailure" => ["probe.tilt", "probe.head_power"],
+        "TiltKick" => ["probe.tilt"],
+        "SensorStuck" or "SensorBias" or "SensorDropout" or "SensorNoise" => [point],
+        "TetherBreak" or "SpoolJam" or "RelayFailure" => ["probe.buffer_fill"],
+        _ => [],
+    };
 
     public void Observe(JournalRecord record)
     {
@@ -27,26 +62,38 @@ public sealed class FaultMeasures
         switch (record.Kind)
         {
             case FaultRecords.Injected:
-                _faults.Add(new Open(Text(record, "fault"), Text(record, "kind"), t, _lastSpeedMPerS) { Target = Text(record, "target") });
+                var name = Text(record, "fault");
+                var kind = Text(record, "kind");
+                var affected = AffectedPoints(kind, Text(record, "point"));
+                var named = _detectedBy.GetValueOrDefault(name) ?? [];
+                var relevant = _rulePoints.Where(r => named.Contains(r.Key) || r.Value.Any(affected.Contains)).Select(r => r.Key).ToHashSet(StringComparer.Ordinal);
+                foreach (var rule in named) relevant.Add(rule);
+                _faults.Add(new Open(name, kind, t, _lastSpeedMPerS, relevant) { Target = Text(record, "target") });
                 break;
             case RuleRecords.Fired:
-                foreach (var f in _faults) f.DetectedS ??= t > f.StartS || t == f.StartS ? t : null;
+                var firing = Text(record, "rule");
+                foreach (var f in _faults) if (f.DetectedS is null && t >= f.StartS && f.Rules.Contains(firing)) f.DetectedS = t;
                 break;
             case CommandRecords.Executed:
-                foreach (var f in _faults) f.ActionS ??= t >= f.StartS ? t : null;
+                var origin = Text(record, "origin");
+                foreach (var f in _faults) if (f.ActionS is null && t >= f.StartS && f.Rules.Contains(origin)) f.ActionS = t;
                 break;
             case ProbeRecords.Telemetry:
                 var speed = Number(record, "velocity_m_s");
                 var tilt = Math.Abs(Number(record, "tilt_rad"));
-                foreach (var f in _faults.Where(f => f.Kind is "HeaterSegmentFailure" or "TiltKick" && f.RecoveredS is null && t > f.StartS))
+                var regime = Text(record, "regime");
+                foreach (var f in _faults)
                 {
-                    if (tilt > UprightRad) f.LeftUpright = true;
-                    else if (f.LeftUpright) f.RecoveredS = t;
-                }
-
-                foreach (var f in _faults.Where(f => f.Kind is "PowerDip" or "CloggedNozzle" && f.RecoveredS is null && t > f.StartS))
-                {
-                    if (Text(record, "regime") == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS) f.RecoveredS = t;
+                    if (f.RecoveredS is not null || t <= f.StartS) continue;
+                    if (f.Kind is "HeaterSegmentFailure" or "TiltKick")
+                    {
+                        if (tilt > UprightRad) f.LeftUpright = true;
+                        if (f.LeftUpright) f.Sustain(t, tilt <= UprightRad, regime == "AtOcean");
+                    }
+                    else if (f.Kind is "PowerDip" or "CloggedNozzle")
+                    {
+                        f.Sustain(t, regime == "AtOcean" || (regime == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS), regime == "AtOcean");
+                    }
                 }
 
                 _lastSpeedMPerS = speed;
@@ -55,7 +102,7 @@ public sealed class FaultMeasures
                 foreach (var f in _faults.Where(f => f.Kind == "VehicleLoss" && f.RecoveredS is null && f.Target == record.Source.Name && t >= f.StartS)) f.RecoveredS = t;
                 break;
             case RelayRecords.PathUp:
-                foreach (var f in _faults.Where(f => f.Kind is "TetherBreak" or "SpoolJam" && f.RecoveredS is null && t >= f.StartS)) f.RecoveredS = t;
+                foreach (var f in _faults.Where(f => f.Kind == "SpoolJam" && f.RecoveredS is null && t >= f.StartS)) f.RecoveredS = t;
                 break;
             case RelayRecords.Recovered:
                 foreach (var f in _faults.Where(f => f.Kind == "RelayFailure" && f.RecoveredS is null && f.Name == Text(record, "fault"))) f.RecoveredS = t;
@@ -80,32 +127,58 @@ public sealed class FaultMeasures
             f.RecoveredS - f.StartS,
             f.Kind switch
             {
-                "PowerDip" or "CloggedNozzle" => "descent back to 90 % of its pre-fault speed",
+                "PowerDip" or "CloggedNozzle" => "descent back to 90 % of its pre-fault speed, held 6 h",
                 "StationFailure" => "station relaying again",
                 "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",
-                "TetherBreak" or "SpoolJam" => "frames going home again by the relays (the fibre itself stays broken)",
+                "SpoolJam" => "frames going home again by the relays (the fibre itself stays jammed)",
                 "RelayFailure" => "the relay working again",
-                "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it",
+                "HeaterSegmentFailure" or "TiltKick" => "tilt back within 1 deg of vertical after leaving it, held 6 h",
                 "VehicleLoss" => "the vehicle back in its dock",
                 _ => "none: a sensor fault leaves the physical state alone",
-            })),
+            })
+        {
+            HasRecoveryMeasure = !f.Kind.StartsWith("Sensor", StringComparison.Ordinal),
+        }),
     ];
 
-    private static string Text(JournalRecord record, string name) => record.Fields.First(f => f.Name == name).Text ?? "";
+    private static string Text(JournalRecord record, string name)
+    {
+        foreach (var field in record.Fields)
+        {
+            if (field.Name == name) return field.Text ?? "";
+        }
+
+        return "";
+    }
 
     private static double Number(JournalRecord record, string name) => record.Fields.First(f => f.Name == name).Number;
 
-    private sealed class Open(string name, string kind, double startS, double speedBeforeMPerS)
+    private sealed class Open(string name, string kind, double startS, double speedBeforeMPerS, HashSet<string> rules)
     {
         public string Name { get; } = name;
         public string Kind { get; } = kind;
         public double StartS { get; } = startS;
         public double SpeedBeforeMPerS { get; } = speedBeforeMPerS;
+        public HashSet<string> Rules { get; } = rules;
         public double? DetectedS { get; set; }
         public double? ActionS { get; set; }
         public double? RecoveredS { get; set; }
         public bool LeftUpright { get; set; }
         public string Target { get; init; } = "";
+        private double? GoodSinceS { get; set; }
+
+        /// <summary>A good state counts once it has held <see cref="RecoveryHoldS"/>, or when the descent ends in the ocean while it holds.</summary>
+        public void Sustain(double t, bool good, bool descentOver)
+        {
+            if (!good)
+            {
+                GoodSinceS = null;
+                return;
+            }
+
+            GoodSinceS ??= t;
+            if (t - GoodSinceS.Value >= RecoveryHoldS || descentOver) RecoveredS = GoodSinceS;
+        }
     }
 }

@@ -14,9 +14,11 @@ namespace DescentOps.Mission.Running;
 public static class MissionAssembly
 {
     /// <summary>The components of a run; the scenario's rules are compiled first, so a bad rule stops the run before it starts.</summary>
-    public static IReadOnlyList<ISimComponent> Components(Scenario scenario)
+    public static IReadOnlyList<ISimComponent> Components(Scenario scenario) => Components(scenario, MissionRules.Compile(scenario));
+
+    /// <summary>The components of a run with its rules already compiled.</summary>
+    public static IReadOnlyList<ISimComponent> Components(Scenario scenario, Rules.Compiled.CompiledRuleSet rules)
     {
-        var rules = MissionRules.Compile(scenario);
         var timed = MissionTimeline.CompileTelecommands(scenario);
         var uplinks = MissionTimeline.CompileUplinks(scenario);
         return

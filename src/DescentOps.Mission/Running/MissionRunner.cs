@@ -27,8 +27,9 @@ public static class MissionRunner
         Action<KernelProgress>? progress = null,
         RunAdditions? additions = null)
     {
-        var summary = new MissionSummarySink(journal);
-        var setup = new KernelSetup([.. MissionAssembly.Components(scenario), .. additions?.Components ?? []], seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress)
+        var prepared = PreparedRun.For(scenario, seed);
+        var summary = prepared.SummarySink(journal);
+        var setup = new KernelSetup([.. MissionAssembly.Components(prepared.Scenario, prepared.Rules), .. additions?.Components ?? []], seed, SimTime.FromSecondsSinceEpoch(untilS), summary, progress)
         {
             Inputs = additions?.Inputs ?? [],
         };
@@ -50,6 +51,6 @@ public static class MissionRunner
             }
         }
 
-        return summary.Summarize(result);
+        return prepared.Complete(summary.Summarize(result));
     }
 }

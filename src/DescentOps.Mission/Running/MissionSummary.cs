@@ -26,8 +26,34 @@ public sealed record MissionSummary(
     /// <summary>Time the probe spent stopped or frozen in, not descending.</summary>
     public double TimeStoppedS { get; init; }
 
+    /// <summary>The longest single stretch stopped or frozen in.</summary>
+    public double LongestStopS { get; init; }
+
+    /// <summary>Time the probe spent frozen in (part of <see cref="TimeStoppedS"/>).</summary>
+    public double TimeFrozenS { get; init; }
+
     /// <summary>Time the ground saw nothing of the probe: see <see cref="GroundBlindness"/>.</summary>
     public double TimeBlindS { get; init; }
+
+    /// <summary>The most frames held at once in the link's buffers.</summary>
+    public long FramesHeldMax { get; init; }
+
+    public int VehiclesLost { get; init; }
+
+    /// <summary>Firings per rule (rules that never fired are absent).</summary>
+    public IReadOnlyDictionary<string, int> RuleFirings { get; init; } = new Dictionary<string, int>();
+
+    /// <summary>Every rule of the run's rule set, in declaration order.</summary>
+    public IReadOnlyList<string> RuleNames { get; init; } = [];
+
+    /// <summary>The uncertain inputs this run drew.</summary>
+    public IReadOnlyList<DrawnInput> Inputs { get; init; } = [];
+
+    /// <summary>The scenario's criteria judged on this run.</summary>
+    public IReadOnlyList<CriterionResult> Criteria { get; init; } = [];
+
+    /// <summary>A run succeeds when it completes and meets every criterion.</summary>
+    public bool Success => Outcome.Kind == RunOutcomeKind.Completed && Criteria.All(c => c.Passed);
 
     /// <summary>The summary's figures as journal fields, in a fixed order.</summary>
     public IReadOnlyList<RecordField> ToFields() =>
@@ -41,7 +67,11 @@ public sealed record MissionSummary(
         RecordField.Of("frames_lost", FramesLost),
         RecordField.Of("frames_held_or_in_flight", FramesHeldOrInFlight),
         RecordField.Of("time_stopped_s", TimeStoppedS),
+        RecordField.Of("longest_stop_s", LongestStopS),
+        RecordField.Of("time_frozen_s", TimeFrozenS),
         RecordField.Of("time_blind_s", TimeBlindS),
+        RecordField.Of("frames_held_max", FramesHeldMax),
+        RecordField.Of("vehicles_lost", VehiclesLost),
         RecordField.Of("vehicle_profiles", VehicleProfiles),
         RecordField.Of("events_delivered", EventsDelivered),
         RecordField.Of("records_written", RecordsWritten),
@@ -52,5 +82,7 @@ public sealed record MissionSummary(
             RecordField.Of($"fault.{f.Fault}.first_action_after_s", f.FirstActionAfterS ?? double.NaN),
             RecordField.Of($"fault.{f.Fault}.recovered_after_s", f.RecoveredAfterS ?? double.NaN),
         }),
+        .. Criteria.Select(c => RecordField.Of($"criterion.{c.Name}", c.Passed)),
+        .. Criteria.Count > 0 ? new[] { RecordField.Of("success", Success) } : [],
     ];
 }

@@ -19,17 +19,26 @@ public sealed class MissionSummarySink : IJournalSink
     private long _framesReceived;
     private long _framesLost;
     private int _profiles;
-    private readonly FaultMeasures _faultMeasures = new();
+    private readonly FaultMeasures _faultMeasures;
+    private readonly RunFigures _figures = new();
     private readonly GroundBlindness _blind = new();
-    private double _timeStoppedS;
-    private double? _stoppedSinceS;
 
-    public MissionSummarySink(IJournalSink next) => _next = next;
+    public MissionSummarySink(IJournalSink next)
+        : this(next, new FaultMeasures())
+    {
+    }
+
+    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures)
+    {
+        _next = next;
+        _faultMeasures = faultMeasures;
+    }
 
     public void Write(JournalRecord record)
     {
         _next.Write(record);
         _faultMeasures.Observe(record);
+        _figures.Observe(record);
         switch (record.Kind)
         {
             case ProbeRecords.Telemetry:
@@ -50,16 +59,6 @@ public sealed class MissionSummarySink : IJournalSink
                 _framesReceived++;
                 _blind.FrameReceived(record.Time.SecondsSinceEpoch, Field(record, "latency_s"));
                 break;
-            case "probe.regime":
-                var stoppedNow = IsStopped(Text(record, "to"));
-                if (stoppedNow && _stoppedSinceS is null) _stoppedSinceS = record.Time.SecondsSinceEpoch;
-                if (!stoppedNow && _stoppedSinceS is { } since)
-                {
-                    _timeStoppedS += record.Time.SecondsSinceEpoch - since;
-                    _stoppedSinceS = null;
-                }
-
-                break;
             case DataRecords.Lost when Text(record, "kind") == "telemetry":
             case StationRecords.FrameLost:
                 _framesLost++;
@@ -76,28 +75,34 @@ public sealed class MissionSummarySink : IJournalSink
         }
     }
 
-    /// <summary>The probe is not descending: stopped by a command or a shed head, or frozen in.</summary>
-    private static bool IsStopped(string? regime) => regime is "Stopped" or "FrozenIn";
-
-    public MissionSummary Summarize(RunResult result) => new(
-        result.Outcome,
-        result.FinalTime.SecondsSinceEpoch,
-        _breakthroughS,
-        _depthM,
-        _energyJ,
-        _faults,
-        _framesSent,
-        _framesReceived,
-        _framesLost,
-        _profiles,
-        result.EventsDelivered,
-        result.RecordsWritten,
-        result.ComponentFailures,
-        _faultMeasures.Measures())
+    public MissionSummary Summarize(RunResult result)
     {
-        TimeStoppedS = _timeStoppedS + (_stoppedSinceS is { } since ? result.FinalTime.SecondsSinceEpoch - since : 0),
-        TimeBlindS = _blind.TotalS(),
-    };
+        _figures.Finish(result.FinalTime.SecondsSinceEpoch);
+        return new MissionSummary(
+            result.Outcome,
+            result.FinalTime.SecondsSinceEpoch,
+            _breakthroughS,
+            _depthM,
+            _energyJ,
+            _faults,
+            _framesSent,
+            _framesReceived,
+            _framesLost,
+            _profiles,
+            result.EventsDelivered,
+            result.RecordsWritten,
+            result.ComponentFailures,
+            _faultMeasures.Measures())
+        {
+            TimeStoppedS = _figures.TimeStoppedS,
+            LongestStopS = _figures.LongestStopS,
+            TimeFrozenS = _figures.TimeFrozenS,
+            TimeBlindS = _blind.TotalS(),
+            FramesHeldMax = _figures.FramesHeldMax,
+            VehiclesLost = _figures.VehiclesLost,
+            RuleFirings = new Dictionary<string, int>(_figures.RuleFirings, StringComparer.Ordinal),
+        };
+    }
 
     private static string? Text(JournalRecord record, string name) => record.Fields.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault();
 

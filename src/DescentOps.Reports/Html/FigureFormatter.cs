@@ -30,6 +30,22 @@ public static class FigureFormatter
     public static bool IsCriterion(string name) =>
         name.StartsWith("criterion.", StringComparison.Ordinal) || name.StartsWith("criteria.", StringComparison.Ordinal);
 
+    /// <summary>A criterion's name from its summary field (<c>criterion.on-time</c> → <c>on-time</c>).</summary>
+    public static string CriterionName(string name)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        foreach (var prefix in new[] { "criterion.", "criteria." })
+        {
+            if (name.StartsWith(prefix, StringComparison.Ordinal)) return name[prefix.Length..];
+        }
+
+        return name;
+    }
+
+    /// <summary>A criterion's verdict as the run summary prints it: "met" or "NOT met" for a boolean, the value otherwise.</summary>
+    public static string Verdict(RecordField field) =>
+        field.Kind == RecordFieldKind.Boolean ? (field.Integer != 0 ? "met" : "NOT met") : Value(field);
+
     public static string Label(string name)
     {
         ArgumentNullException.ThrowIfNull(name);

@@ -77,7 +77,8 @@ public sealed class HtmlReportWriter
             var css = s.Summary.OutcomeKind == "Completed" ? "completed" : "not-completed";
             Line($"<p class=\"verdict {css}\" id=\"verdict\">{E(HumanText.Sentence(s.Summary.OutcomeKind))}: {E(s.Summary.Reason)}</p>");
             figures.Add(new SummaryFigure("simulated time", FigureFormatter.Duration(s.Summary.FinalTimeS)));
-            figures.AddRange(s.Summary.Data.Where(f => !FigureFormatter.IsCriterion(f.Name)).Select(FigureFormatter.Format));
+            // The summary's count of vehicles lost is shown by the row below, which names each one.
+            figures.AddRange(s.Summary.Data.Where(f => !FigureFormatter.IsCriterion(f.Name) && f.Name != "vehicles_lost").Select(FigureFormatter.Format));
         }
         else
         {
@@ -99,7 +100,7 @@ public sealed class HtmlReportWriter
         {
             Line("<h3>Criteria</h3>");
             Line("<table class=\"figures\" id=\"criteria\">");
-            foreach (var f in criteria) Line($"<tr><th scope=\"row\">{E(FigureFormatter.Label(f.Name))}</th><td>{E(FigureFormatter.Value(f))}</td></tr>");
+            foreach (var f in criteria) Line($"<tr><th scope=\"row\">{E(FigureFormatter.CriterionName(f.Name))}</th><td>{E(FigureFormatter.Verdict(f))}</td></tr>");
             Line("</table>");
         }
 

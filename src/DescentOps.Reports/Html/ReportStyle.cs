@@ -4,7 +4,7 @@ namespace DescentOps.Reports.Html;
 /// The report's one style sheet, inline so the file needs nothing else. The SVGs name DejaVu Sans (the face
 /// their glyphs were placed with); viewers without it fall back to a similar sans-serif.
 /// </summary>
-internal static class ReportStyle
+public static class ReportStyle
 {
     public const string Css = """
         :root { color-scheme: light; }

@@ -319,9 +319,12 @@ public static class ScenarioFormat
                 new ChoiceField("cause", "For vehicle_loss: battery (the charge falls to remaining_fraction), entrapment (held until the fault clears) or out_of_range (the acoustic link is dead until it clears).", ["battery", "entrapment", "out_of_range"], Required: false),
                 new TextField("value", "For sensor_stuck (optional: the reading at the fault's start otherwise), sensor_bias (the offset) and sensor_noise (the noise's standard deviation): a quantity in the point's unit, e.g. '0.5 m/h'.", Required: false),
                 new TextField("relay", "For relay_failure: the relay that fails, by name ('relay-2') or number ('2'); relays are numbered from the surface in the order they are dropped.", Required: false),
+                CampaignFields.DetectedBy,
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
             new ListField("telecommands", "Telecommands tagged with times: sent by the ground at its time (reaching the probe one uplink later) or stored on board and executed at its time.", Telecommand, 0, 1000, Required: false),
+            CampaignFields.Uncertain,
+            CampaignFields.Criteria,
             new SectionField("run", "Run settings; the command line may override them.",
             [
                 new IntegerField("seed", "Seed of the run's random streams.", long.MinValue, long.MaxValue),

@@ -76,7 +76,7 @@ public static class ScenarioLoader
     {
         var errors = new List<ScenarioError>();
         var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
-        var scenario = WithTimedParts(Build(root, sourceName, text), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
+        var scenario = DescentOps.Scenarios.Campaign.CampaignSections.Read(WithTimedParts(Build(root, sourceName, text), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) }, root, text, errors);
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -365,7 +365,7 @@ public static class ScenarioLoader
     public static ScenarioChange LoadChange(string text, string sourceName)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out _);
+        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out var locations);
         var added = root.List("add_faults");
         var faults = added.Select(BuildFault).ToList();
         for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
@@ -373,6 +373,7 @@ public static class ScenarioLoader
         var rules = root.OptionalText("rules") is null ? null : Rules(root, text);
         return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules)
         {
+            FieldLocations = locations,
             AddTelecommands = Telecommands(root.List("add_telecommands"), "add_telecommands"),
             RuleUplinks = [.. root.List("uplink_rules").Select((u, i) => new RuleUplinkModel(u.Quantity("at"), Rules(u, text), $"uplink_rules[{i}]")).OrderBy(u => u.AtS)],
         };
@@ -455,7 +456,10 @@ public static class ScenarioLoader
         f.OptionalQuantity("mean_interval"),
         f.OptionalQuantity("not_before") ?? 0.0,
         (int)(f.OptionalInteger("occurrences") ?? 1),
-        RelayNumber(f));
+        RelayNumber(f))
+    {
+        DetectedBy = DescentOps.Scenarios.Campaign.CampaignSections.RuleNames(f.OptionalText("detected_by")),
+    };
 
     /// <summary>"relay-2" or "2" is relay number 2; 0 marks a name that does not parse (reported by <see cref="CheckFault"/>).</summary>
     private static int? RelayNumber(BoundSection fault)

@@ -33,4 +33,7 @@ public sealed record FaultModel(
 {
     /// <summary>True when the fault starts at random (a Poisson process with mean interval <see cref="MeanIntervalS"/>).</summary>
     public bool IsRandom => MeanIntervalS is not null;
+
+    /// <summary>Rules named as meant to detect this fault (<c>detected_by</c>).</summary>
+    public IReadOnlyList<string> DetectedBy { get; init; } = [];
 }

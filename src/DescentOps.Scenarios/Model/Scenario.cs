@@ -22,6 +22,12 @@ public sealed record Scenario(
     AcousticsModel? Acoustics = null,
     RelayPlanModel? Relays = null)
 {
+    /// <summary>Values drawn per run from the run's own stream (the <c>uncertain</c> section).</summary>
+    public IReadOnlyList<Campaign.UncertainInput> Uncertain { get; init; } = [];
+
+    /// <summary>Named pass/fail criteria over a run (the <c>criteria</c> section).</summary>
+    public IReadOnlyList<Campaign.MissionCriterion> Criteria { get; init; } = [];
+
     /// <summary>Where each field's value stands in the file, by field path ("probe.radius", "faults[0].at"): checks made after loading are located with it.</summary>
     public IReadOnlyDictionary<string, Loading.SourceLocation> FieldLocations { get; init; } = new Dictionary<string, Loading.SourceLocation>();
 

@@ -6,6 +6,9 @@ namespace DescentOps.Scenarios.Model;
 /// </summary>
 public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<FaultModel> AddFaults, IReadOnlyList<string> RemoveFaults, RulesSource? Rules)
 {
+    /// <summary>Where each field's value stands in the change file, by field path ("remove_faults[0].name").</summary>
+    public IReadOnlyDictionary<string, Loading.SourceLocation> FieldLocations { get; init; } = new Dictionary<string, Loading.SourceLocation>();
+
     /// <summary>Time-tagged telecommands added to the parent's.</summary>
     public IReadOnlyList<TimedTelecommandModel> AddTelecommands { get; init; } = [];
 
@@ -18,28 +21,26 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
 
     public Scenario ApplyTo(Scenario parent)
     {
-        var missing = RemoveFaults.Where(n => parent.Faults.All(f => f.Name != n)).ToList();
-        if (missing.Count > 0)
+        var missing = RemoveFaults.Select((n, i) => (Name: n, Index: i)).FirstOrDefault(r => parent.Faults.All(f => f.Name != r.Name));
+        if (missing.Name is not null)
         {
-            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "remove_faults",
-                $"the parent scenario has no fault named {string.Join(", ", missing)}")]);
+            throw Refused($"remove_faults[{missing.Index}].name", $"the parent scenario has no fault named {missing.Name}");
         }
 
-        var stranger = AddFaults.FirstOrDefault(f => f.Vehicle is { } v && parent.Vehicles.All(p => p.Name != v));
-        if (stranger is not null)
+        var stranger = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => a.Fault.Vehicle is { } v && parent.Vehicles.All(p => p.Name != v));
+        if (stranger.Fault is not null)
         {
-            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "add_faults",
-                $"fault '{stranger.Name}' names vehicle '{stranger.Vehicle}', which the parent scenario does not have")]);
+            throw Refused($"add_faults[{stranger.Index}].vehicle", $"fault '{stranger.Fault.Name}' names vehicle '{stranger.Fault.Vehicle}', which the parent scenario does not have");
         }
 
-        var faults = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).Concat(AddFaults).ToList();
-        var clash = faults.GroupBy(f => f.Name).FirstOrDefault(g => g.Count() > 1);
-        if (clash is not null)
+        var kept = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).ToList();
+        var clash = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => kept.Any(k => k.Name == a.Fault.Name) || AddFaults.Take(a.Index).Any(b => b.Name == a.Fault.Name));
+        if (clash.Fault is not null)
         {
-            throw new Loading.ScenarioException([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), "add_faults",
-                $"fault '{clash.Key}' is already in the parent scenario; remove it first to replace it")]);
+            throw Refused($"add_faults[{clash.Index}].name", $"fault '{clash.Fault.Name}' is already in the parent scenario; remove it first to replace it");
         }
 
+        var faults = kept.Concat(AddFaults).ToList();
         return parent with
         {
             Faults = faults,
@@ -48,4 +49,7 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
             RuleUplinks = [.. parent.RuleUplinks.Concat(RuleUplinks).OrderBy(u => u.AtS)],
         };
     }
+
+    private Loading.ScenarioException Refused(string fieldPath, string message) =>
+        new([new Loading.ScenarioError(FieldLocations.TryGetValue(fieldPath, out var at) ? at : new Loading.SourceLocation(Name, 1, 1), fieldPath, message)]);
 }

@@ -24,7 +24,8 @@ public sealed class ProjectGraphTests
         ["DescentOps.Mission"] = ["DescentOps.Physics", "DescentOps.Engine", "DescentOps.Scenarios", "DescentOps.Rules"],
         ["DescentOps.Rehearsal"] = ["DescentOps.Mission", "DescentOps.Journal"],
         ["DescentOps.Rehearsal.Web"] = ["DescentOps.Rehearsal"],
-        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports", "DescentOps.Rehearsal.Web"],
+        ["DescentOps.Campaigns"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports"],
+        ["DescentOps.Cli"] = ["DescentOps.Mission", "DescentOps.Journal", "DescentOps.Reports", "DescentOps.Campaigns", "DescentOps.Rehearsal.Web"],
     };
 
     /// <summary>Projects whose whole reference closure must be free of the actor framework.</summary>

@@ -1,0 +1,33 @@
+using DescentOps.Mission.Running;
+
+namespace DescentOps.Campaigns;
+
+/// <summary>
+/// What a campaign keeps of one run: the outcome, the summary figures, the drawn inputs, each criterion, each fault's
+/// measures, each rule's firings, and the summary line's chain value (which a regenerated log must end with).
+/// Keyed by (variant, index): a result that arrives twice is the same result.
+/// </summary>
+public sealed record RunRecord(
+    string Variant,
+    int Index,
+    long Seed,
+    string Outcome,
+    string Reason,
+    bool Success,
+    double? BreakthroughTimeS,
+    double FinalTimeS,
+    double FinalDepthM,
+    double EnergyUsedJ,
+    long FramesLost,
+    long FramesHeldMax,
+    double TimeStoppedS,
+    double LongestStopS,
+    double TimeFrozenS,
+    double TimeBlindS,
+    int VehiclesLost,
+    int ComponentFailures,
+    string SummaryChain,
+    IReadOnlyList<DrawnInput> Inputs,
+    IReadOnlyList<CriterionResult> Criteria,
+    IReadOnlyList<FaultMeasure> Faults,
+    IReadOnlyList<(string Rule, int Firings)> RuleFirings);

@@ -1,0 +1,50 @@
+using DescentOps.Records;
+using DescentOps.Rules.Compiled;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Running;
+
+/// <summary>
+/// A scenario made ready for one seed, the same way for every kind of run (run, replay, branch, campaign, rehearsal):
+/// its uncertain inputs drawn, its rules compiled, and the summary sink that knows which rule reads what (so a fault's
+/// detection is judged the same everywhere) and that judges the scenario's criteria at the end.
+/// </summary>
+public sealed class PreparedRun
+{
+    private PreparedRun(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<DrawnInput> inputs)
+    {
+        Scenario = scenario;
+        Rules = rules;
+        Inputs = inputs;
+    }
+
+    /// <summary>The scenario with this seed's drawn values written in.</summary>
+    public Scenario Scenario { get; }
+
+    public CompiledRuleSet Rules { get; }
+
+    public IReadOnlyList<DrawnInput> Inputs { get; }
+
+    public static PreparedRun For(Scenario scenario, long seed)
+    {
+        var (drawn, inputs) = UncertainDraw.Draw(scenario, seed);
+        return new PreparedRun(drawn, Autonomy.MissionRules.Compile(drawn), inputs);
+    }
+
+    /// <summary>The summary sink in front of <paramref name="journal"/>; the drawn inputs are its first record.</summary>
+    public MissionSummarySink SummarySink(IJournalSink journal)
+    {
+        var rulePoints = Rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
+        var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
+        var summary = new MissionSummarySink(journal, new FaultMeasures(rulePoints, detectedBy));
+        if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
+        return summary;
+    }
+
+    /// <summary>The summary with what the sink cannot know: the drawn inputs, the rule set, and the criteria judged.</summary>
+    public MissionSummary Complete(MissionSummary summary)
+    {
+        var figures = summary with { Inputs = Inputs, RuleNames = [.. Rules.Rules.Select(r => r.Name)] };
+        return figures with { Criteria = CriterionResult.Judge(Scenario.Criteria, figures) };
+    }
+}

@@ -1,0 +1,89 @@
+using DescentOps.Cli;
+using Microsoft.Data.Sqlite;
+
+namespace DescentOps.Campaigns.Tests;
+
+/// <summary>Runs the command line in this process, as the tool runs it, and reads a campaign's tables.</summary>
+internal static class CampaignFixture
+{
+    public static string Scenario => Path.Combine(AppContext.BaseDirectory, "short-stall.yaml");
+
+    public static string NoBoost => Path.Combine(AppContext.BaseDirectory, "no-boost.yaml");
+
+    /// <summary>A fresh folder under one test root that is emptied when the test process starts.</summary>
+    public static string TempDir()
+    {
+        var dir = Path.Combine(Root.Value, Guid.NewGuid().ToString("N"));
+        Directory.CreateDirectory(dir);
+        return dir;
+    }
+
+    private static readonly Lazy<string> Root = new(() =>
+    {
+        var root = Path.Combine(Path.GetTempPath(), "descentops-campaign-tests");
+        if (Directory.Exists(root)) Directory.Delete(root, recursive: true);
+        return root;
+    });
+
+    private static readonly SemaphoreSlim Turn = new(1, 1);
+
+    /// <summary>The exit code of the command line run in this process (<see cref="CliApp.RunAsync"/>, as the tool runs it).</summary>
+    public static async Task<int> CliAsync(params string[] args) => (await CliOutputAsync(args)).ExitCode;
+
+    /// <summary>The command line in this process with its output captured; the console is process-wide, so calls take turns.</summary>
+    public static async Task<(int ExitCode, string Stdout, string Stderr)> CliOutputAsync(params string[] args)
+    {
+        await Turn.WaitAsync();
+        var (oldOut, oldError) = (Console.Out, Console.Error);
+        using var stdout = new StringWriter();
+        using var stderr = new StringWriter();
+        try
+        {
+            Console.SetOut(stdout);
+            Console.SetError(stderr);
+            var exit = await CliApp.RunAsync(args);
+            return (exit, stdout.ToString(), stderr.ToString());
+        }
+        finally
+        {
+            Console.SetOut(oldOut);
+            Console.SetError(oldError);
+            Turn.Release();
+        }
+    }
+
+    /// <summary>Every table's rows, ordered by their key, as text: two equal dumps mean equal tables.</summary>
+    public static string Dump(string dir)
+    {
+        using var connection = new SqliteConnection($"Data Source={Path.Combine(dir, "campaign.sqlite")};Pooling=False");
+        connection.Open();
+        var text = new System.Text.StringBuilder();
+        foreach (var (table, order) in new[]
+        {
+            ("runs", "variant, run_index"), ("inputs", "variant, run_index, path"), ("criteria", "variant, run_index, criterion"),
+            ("fault_measures", "variant, run_index, ordinal"), ("rule_firings", "variant, run_index, rule"),
+        })
+        {
+            using var command = connection.CreateCommand();
+            command.CommandText = $"SELECT * FROM {table} ORDER BY {order}";
+            using var reader = command.ExecuteReader();
+            text.Append(table).Append('\n');
+            while (reader.Read())
+            {
+                for (var i = 0; i < reader.FieldCount; i++) text.Append(reader.IsDBNull(i) ? "NULL" : Convert.ToString(reader.GetValue(i), System.Globalization.CultureInfo.InvariantCulture)).Append('|');
+                text.Append('\n');
+            }
+        }
+
+        return text.ToString();
+    }
+
+    public static void Execute(string dir, string sql)
+    {
+        using var connection = new SqliteConnection($"Data Source={Path.Combine(dir, "campaign.sqlite")};Pooling=False");
+        connection.Open();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        command.ExecuteNonQuery();
+    }
+}
