@@ -13,7 +13,7 @@ public static class FaultCatalogue
     public static IReadOnlyList<string> SensorPoints { get; } =
     [
         "probe.depth", "probe.velocity", "probe.ice_temperature", "probe.head_power", "probe.wall_power", "probe.energy_used",
-        "probe.tilt", "probe.battery_soc", "probe.bus_power_available", "probe.buffer_fill",
+        "probe.tilt", "probe.battery_soc", "probe.bus_power_available", "probe.buffer_fill", "probe.jet_power", "probe.hole_radius",
     ];
 
     /// <summary>Per kind: its word, what it does, and its fields (name, what to give, an example).</summary>
@@ -21,6 +21,7 @@ public static class FaultCatalogue
     [
         (FaultKind.PowerDip, "power_dip", "heater (or source) power falls to a share", [Duration, Fraction("0.3")]),
         (FaultKind.HeaterSegmentFailure, "heater_segment_failure", "one head half keeps a share of its power", [Duration, Fraction("0.2")]),
+        (FaultKind.CloggedNozzle, "clogged_nozzle", "the hot-water jets keep a share of their heat at the hole's bottom", [Duration, Fraction("0.5")]),
         (FaultKind.TiltKick, "tilt_kick", "a sudden tilt", [("angle", "angle", "3 deg")]),
         (FaultKind.SensorStuck, "sensor_stuck", "a reading stuck at a value", [Point, ("value", "the stuck reading, in the unit of the point", "0.0001 m/s"), Duration]),
         (FaultKind.SensorBias, "sensor_bias", "a reading offset by a value", [Point, ("value", "the offset, in the unit of the point", "0.0002 m/s"), Duration]),

@@ -32,7 +32,7 @@ public sealed class PowerSectionTests
         Assert.Equal(3000, power.Battery.MaxChargePowerW, 9);
         Assert.Equal(288.15, power.Battery.CellTemperatureK, 9);
         Assert.Equal(0.9, power.Battery.InitialStateOfCharge, 12);
-        Assert.Equal(["electronics", "head", "wall", "sampling-pump"], power.Loads.Select(l => l.Name));
+        Assert.Equal(["electronics", "head", "wall", "sampling-pump", "jets"], power.Loads.Select(l => l.Name));
         Assert.Equal(new BusLoadModel("sampling-pump", BusLoadRole.Fixed, 3, 400), power.Loads[3]);
         Assert.Equal(0.15, power.Turbine!.CurrentSpeedMPerS, 12);
         Assert.Equal(1030, power.Turbine.WaterDensityKgPerM3, 9);
@@ -71,8 +71,9 @@ public sealed class PowerSectionTests
         Assert.Equal(1.0, power.Battery.InitialStateOfCharge);
         Assert.Equal(ScenarioLoader.DefaultBatteryTemperatureK, power.Battery.CellTemperatureK);
         Assert.Equal(ScenarioLoader.DefaultWaterDensityKgPerM3, power.Turbine!.WaterDensityKgPerM3);
-        Assert.Equal([BusLoadRole.Electronics, BusLoadRole.HeadHeater, BusLoadRole.WallHeater], power.Loads.Select(l => l.Role));
-        Assert.Equal([0, 0, 1], power.Loads.Select(l => l.Priority));
+        // The fixture's probe has jets, so the default bus carries their load too, beside the wall heater.
+        Assert.Equal([BusLoadRole.Electronics, BusLoadRole.HeadHeater, BusLoadRole.WallHeater, BusLoadRole.Jets], power.Loads.Select(l => l.Role));
+        Assert.Equal([0, 0, 1, 1], power.Loads.Select(l => l.Priority));
     }
 
     [Fact]

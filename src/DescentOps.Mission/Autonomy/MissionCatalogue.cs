@@ -18,6 +18,9 @@ public static class MissionCatalogue
     /// <summary>The probe's power bus, target of the load commands (only with a power system).</summary>
     public const string Bus = "probe.bus";
 
+    /// <summary>The probe's hot-water jets (only a probe with a jets section).</summary>
+    public const string Jets = "probe.jets";
+
     public static IReadOnlyList<string> Regimes { get; } = [.. Enum.GetNames<Probe.ProbeRegime>()];
 
     public static TelemetryCatalogue For(Scenario scenario)
@@ -39,6 +42,9 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.battery_soc", PhysicalDimension.Dimensionless, 0, 1),
             new NumericPointSpec("probe.bus_power_available", PhysicalDimension.Power, 0, maxBusW),
             new NumericPointSpec("probe.buffer_fill", PhysicalDimension.Dimensionless, 0, 1),
+            // Without jets the jet power is always 0 and the hole is the probe's own radius.
+            new NumericPointSpec("probe.jet_power", PhysicalDimension.Power, 0, scenario.Probe.Jets?.MaxHeatW ?? 0.0),
+            new NumericPointSpec("probe.hole_radius", PhysicalDimension.Length, 0, scenario.Probe.Jets is null ? scenario.Probe.RadiusM : Scenarios.Model.ProbeJetsModel.MaxHoleRadiusM),
             new DiscretePointSpec("probe.regime", Regimes),
         ];
         CommandSpec[] commands =
@@ -51,11 +57,19 @@ public static class MissionCatalogue
             new(MissionIds.Probe, "enter_safe_mode", []),
             new(MissionIds.Probe, "drop_relay", []),
             .. power is null ? [] : BusCommands(power),
+            .. scenario.Probe.Jets is not { } jets ? [] : JetCommands(jets),
             // Each vehicle is its own actuator, so that rules recalling different vehicles never exclude each other.
             .. scenario.Vehicles.Select(v => new CommandSpec(MissionIds.Vehicle(v.Name), Vehicles.VehicleComponent.RecallCommand, [])),
         ];
         return new TelemetryCatalogue(points, commands);
     }
+
+    /// <summary>The jets' heat (0 W: off) and the hole radius they cut.</summary>
+    private static CommandSpec[] JetCommands(ProbeJetsModel jets) =>
+    [
+        new(new(Jets), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0, jets.MaxHeatW)]),
+        new(new(Jets), "set_hole_radius", [new QuantityArgumentSpec("radius", PhysicalDimension.Length, jets.MinimumHoleRadiusM, ProbeJetsModel.MaxHoleRadiusM)]),
+    ];
 
     /// <summary>Switching a bus load off and on again, by the names the scenario gives its loads.</summary>
     private static CommandSpec[] BusCommands(Probe.ProbePowerSystem power)

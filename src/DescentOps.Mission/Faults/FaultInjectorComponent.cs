@@ -36,7 +36,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         FaultKind.TetherBreak or FaultKind.SpoolJam or FaultKind.RelayFailure => MissionIds.Tether,
         FaultKind.StationFailure or FaultKind.StationUpset => MissionIds.Station,
         FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise => MissionIds.Probe,
-        FaultKind.HeaterSegmentFailure or FaultKind.TiltKick => MissionIds.Probe,
+        FaultKind.HeaterSegmentFailure or FaultKind.TiltKick or FaultKind.CloggedNozzle => MissionIds.Probe,
         FaultKind.VehicleLoss => MissionIds.Vehicle(fault.Vehicle ?? throw new ArgumentException("A vehicle_loss names its vehicle.", nameof(fault))),
         _ => throw new ArgumentOutOfRangeException(nameof(fault), fault.Kind, null),
     };

@@ -22,9 +22,10 @@ public static class ProbeBusControl
     {
         if (state.Bus is not { } bus) return state;
         var power = design.Power!;
-        var head = ProbeHeaters.HeadDemandW(state);
+        var head = ProbeHeaters.HeadDemandW(design, state);
         var wall = ProbeHeaters.WallDemandW(state);
-        var loads = power.Loads(head, wall, bus.SwitchedOff, state.DockDemandsW);
+        var jets = ProbeJets.LoadDemandW(design, state);
+        var loads = power.Loads(head, wall, bus.SwitchedOff, state.DockDemandsW, jets);
         var allocation = power.Allocate(context.Now.SecondsSinceEpoch, state.PowerFraction, state.Regime == ProbeRegime.AtOcean, bus.StateOfCharge, bus.BatteryLockedOut, loads);
         var isStart = bus.Allocation.Loads.Running.Count == 0 && bus.Allocation.Loads.Shed.Count == 0;
         foreach (var model in power.LoadModels)
@@ -32,7 +33,7 @@ public static class ProbeBusControl
             var wasOff = isStart ? null : OffCause(bus.Allocation, model.Name);
             var isOff = OffCause(allocation, model.Name);
             if (wasOff == isOff) continue;
-            var demandW = power.Loads(head, wall, ImmutableSortedSet<string>.Empty).Single(l => l.Name == model.Name).PowerW;
+            var demandW = power.Loads(head, wall, ImmutableSortedSet<string>.Empty, null, jets).Single(l => l.Name == model.Name).PowerW;
             context.Record(isOff is null ? ProbeRecords.LoadRestored : ProbeRecords.LoadShed, isOff is null ? Severity.Notice : Severity.Warning,
                 RecordField.Of("load", model.Name),
                 RecordField.Of("priority", model.Priority),

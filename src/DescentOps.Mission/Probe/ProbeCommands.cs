@@ -9,7 +9,9 @@ namespace DescentOps.Mission.Probe;
 
 /// <summary>
 /// Telecommands the probe carries out. Set points are what the heaters are asked for; a power dip still scales what
-/// they get. Safe mode stops the head and runs the wall heaters at their maximum to keep the water gap open.
+/// they get. Safe mode stops the head (and the jets: a paused probe runs no jets) and runs the wall heaters at their
+/// maximum to keep the water gap open. The jets' commands change their heat and hole radius; the next retune logs the
+/// operating point that follows (<see cref="ProbeJets.RecordChange"/>).
 /// </summary>
 public static class ProbeCommands
 {
@@ -30,6 +32,12 @@ public static class ProbeCommands
             (MissionCatalogue.Bus, "shed_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Add(Load()) } },
             (MissionCatalogue.Bus, "restore_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Remove(Load()) } },
             ("probe", "drop_relay") => LetRelayGo(state, command, context),
+            (MissionCatalogue.Jets, "set_power") when probe.Jets is { } jets => state with { JetSetpointW = Math.Min(Power(), jets.MaxHeatW), MeltFreeRefusedAtWallW = null },
+            (MissionCatalogue.Jets, "set_hole_radius") when probe.Jets is { } jets => state with
+            {
+                JetHoleRadiusM = Math.Clamp(action.Arguments.Single(a => a.Name == "radius").ValueSi!.Value, jets.MinimumHoleRadiusM, Scenarios.Model.ProbeJetsModel.MaxHoleRadiusM),
+                MeltFreeRefusedAtWallW = null,
+            },
             _ => throw new InvalidOperationException($"The probe has no command {action}."),
         };
         context.Record(CommandRecords.Executed, Severity.Notice,

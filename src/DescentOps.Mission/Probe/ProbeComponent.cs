@@ -41,7 +41,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             ImmutableSortedSet<string>.Empty.WithComparer(StringComparer.Ordinal),
             BusEnergy.Zero,
             false),
-        HeldAtSurface: _design.Scenario.Station.Dwell is not null);
+        HeldAtSurface: _design.Scenario.Station.Dwell is not null)
+    {
+        JetSetpointW = _design.Probe.Jets?.InitialHeatW ?? 0.0,
+        JetHoleRadiusM = _design.Probe.Jets?.HoleRadiusM ?? 0.0,
+    };
 
     public override ProbeState Handle(ProbeState state, object message, ComponentContext context)
     {
@@ -100,6 +104,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
             case FaultCleared { Fault.Kind: FaultKind.HeaterSegmentFailure }:
                 return Settle(Advance(state, context) with { SegmentLossFraction = 0.0 }, context);
+
+            case FaultStarted { Fault.Kind: FaultKind.CloggedNozzle } clog:
+                return Settle(ProbeJets.Clog(d, Advance(state, context), clog.Fault.RemainingFraction, clog.Fault.Name, context), context);
+
+            case FaultCleared { Fault.Kind: FaultKind.CloggedNozzle } cleared:
+                return Settle(ProbeJets.Clog(d, Advance(state, context), 1.0, cleared.Fault.Name, context), context);
 
             case FaultStarted { Fault.Kind: FaultKind.TiltKick } kick:
                 var kicked = Advance(state, context);

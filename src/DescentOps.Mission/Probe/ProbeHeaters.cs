@@ -8,9 +8,12 @@ public static class ProbeHeaters
 {
     public static bool IsMoving(ProbeRegime regime) => regime is ProbeRegime.Sublimating or ProbeRegime.Melting;
 
-    /// <summary>What the head heater asks of the bus: its set point less a failed segment's share; nothing at rest or while held at the surface.</summary>
-    public static double HeadDemandW(ProbeState state) =>
-        state.Regime == ProbeRegime.AtOcean || state.Paused || state.HeldAtSurface ? 0.0 : state.HeadSetpointW * (1 - (state.SegmentLossFraction / 2));
+    /// <summary>
+    /// What the head heater asks of the bus: its set point less a failed segment's share; nothing at rest, while held at
+    /// the surface, or while the hot-water jets cut the hole (the head is then out of contact, <see cref="ProbeJets"/>).
+    /// </summary>
+    public static double HeadDemandW(ProbeDesign design, ProbeState state) =>
+        state.Regime == ProbeRegime.AtOcean || state.Paused || state.HeldAtSurface || ProbeJets.Engaged(design, state) ? 0.0 : state.HeadSetpointW * (1 - (state.SegmentLossFraction / 2));
 
     public static double WallDemandW(ProbeState state) =>
         state.Regime == ProbeRegime.AtOcean || state.HeldAtSurface ? 0.0 : state.WallSetpointW;
@@ -19,14 +22,16 @@ public static class ProbeHeaters
     public static double HeadScale(ProbeDesign design, ProbeState state) =>
         state.Bus is null ? state.PowerFraction : IsRunning(state.Bus, design.Power!.HeadLoad) ? 1.0 : 0.0;
 
-    public static double HeadPowerW(ProbeDesign design, ProbeState state) => HeadDemandW(state) * HeadScale(design, state);
+    public static double HeadPowerW(ProbeDesign design, ProbeState state) => HeadDemandW(design, state) * HeadScale(design, state);
 
     public static double WallPowerW(ProbeDesign design, ProbeState state) =>
         state.Bus is null ? WallDemandW(state) * state.PowerFraction : IsRunning(state.Bus, design.Power!.WallLoad) ? WallDemandW(state) : 0.0;
 
-    /// <summary>What the bus delivers: heaters and electronics without a power system, the allocation's supplied power with one.</summary>
+    /// <summary>What the bus delivers: heaters, jets and electronics without a power system, the allocation's supplied power with one.</summary>
     public static double BusPowerW(ProbeDesign design, ProbeState state) =>
-        state.Bus is null ? HeadPowerW(design, state) + WallPowerW(design, state) + design.Probe.ElectronicsPowerW : state.Bus.Allocation.Loads.SuppliedPowerW;
+        state.Bus is null
+            ? HeadPowerW(design, state) + WallPowerW(design, state) + ProbeJets.HeatW(design, state) + ProbeJets.PumpPowerW(design, state) + design.Probe.ElectronicsPowerW
+            : state.Bus.Allocation.Loads.SuppliedPowerW;
 
     /// <summary>
     /// Heat reaching the head: its heater's electric power and the source's waste heat along the heat path, which flows

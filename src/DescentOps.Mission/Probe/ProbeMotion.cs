@@ -51,6 +51,14 @@ public static class ProbeMotion
         var v = state.VelocityMPerS;
         if (v <= 0 || !ProbeHeaters.IsMoving(state.Regime)) return 0.0;
         var probe = design.Probe;
+        if (ProbeJets.Engaged(design, state) && state.JetHoleAroundBodyM > probe.RadiusM)
+        {
+            // MODEL: the jets cut the hole, the head is out of contact and melts nothing unevenly, so a failed segment or
+            // a steering difference does not turn it; the pendulum still relaxes it, within the jets' wider clearance.
+            var jetLimit = TiltDynamics.KinematicTurnRateLimitRadPerS(v, state.JetHoleAroundBodyM - probe.RadiusM, probe.LengthM);
+            return TiltDynamics.TiltRateRadPerS(state.TiltRad, 0.0, 0.0, 0.0, probe.LengthM / v, jetLimit);
+        }
+
         var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadHeatW(design, state), ProbeHeaters.WallHeatW(design, state));
         var area = Math.PI * probe.RadiusM * probe.RadiusM;
         var density = Physics.Ice.IceIh.DensityKgPerM3(rate.IceTemperatureK, Math.Max(rate.PressurePa, 0));

@@ -40,6 +40,7 @@ public sealed class ProbePowerSystem
             : null;
         HeadLoad = power.Loads.Single(l => l.Role == BusLoadRole.HeadHeater).Name;
         WallLoad = power.Loads.Single(l => l.Role == BusLoadRole.WallHeater).Name;
+        JetsLoad = power.Loads.SingleOrDefault(l => l.Role == BusLoadRole.Jets)?.Name;
     }
 
     public BusBattery? Battery { get; }
@@ -51,6 +52,9 @@ public sealed class ProbePowerSystem
 
     /// <summary>Name of the wall heater's load on the bus.</summary>
     public string WallLoad { get; }
+
+    /// <summary>Name of the jets' load (heat and pump) on the bus; null for a probe without jets.</summary>
+    public string? JetsLoad { get; }
 
     public IEnumerable<BusLoadModel> LoadModels => _power.Loads;
 
@@ -98,13 +102,14 @@ public sealed class ProbePowerSystem
     /// The loads that ask for power now; a load switched off by telecommand does not ask. Docked vehicles' chargers
     /// come last of all (one priority below the least important scenario load): the probe's own descent goes first.
     /// </summary>
-    public IReadOnlyList<PoweredLoad> Loads(double headDemandW, double wallDemandW, IReadOnlySet<string> switchedOff, IReadOnlyDictionary<string, double>? dockDemandsW = null) =>
+    public IReadOnlyList<PoweredLoad> Loads(double headDemandW, double wallDemandW, IReadOnlySet<string> switchedOff, IReadOnlyDictionary<string, double>? dockDemandsW = null, double jetsDemandW = 0.0) =>
     [
         .. _power.Loads.Where(l => !switchedOff.Contains(l.Name)).Select(l => new PoweredLoad(l.Name, l.Priority, l.Role switch
         {
             BusLoadRole.HeadHeater => headDemandW,
             BusLoadRole.WallHeater => wallDemandW,
             BusLoadRole.Electronics => _probe.ElectronicsPowerW,
+            BusLoadRole.Jets => jetsDemandW,
             _ => l.PowerW,
         })),
         .. (dockDemandsW ?? new Dictionary<string, double>()).Select(d => new PoweredLoad(DockLoadName(d.Key), DockPriority, d.Value)),

@@ -25,13 +25,15 @@ public static class ProbeRegimeMachine
                 return state with { VelocityMPerS = 0.0 };
             case ProbeRegime.FrozenIn:
                 return StartMeltingFree(design, state, context);
-            case ProbeRegime.MeltingFree when ProbeHeaters.HeadHeatW(design, state) + ProbeHeaters.WallHeatW(design, state) <= 0:
+            case ProbeRegime.MeltingFree when ProbeHeaters.HeadHeatW(design, state) + ProbeHeaters.WallHeatW(design, state) + ProbeJets.HeatAtBottomW(design, state) <= 0:
                 context.Cancel(state.PendingThermal!.Value);
                 return ChangeRegime(state with { PendingThermal = null }, ProbeRegime.FrozenIn, context, "heaters lost while melting free");
             case ProbeRegime.MeltingFree:
                 return state with { VelocityMPerS = 0.0 };
         }
 
+        if (ProbeJets.Engaged(design, state)) return JetRetune(design, state, context);
+        if (design.Probe.Jets is not null) state = ProbeJets.RecordChange(design, state, null, context);
         var rate = design.Descent.Rate(state.DepthM, ProbeHeaters.HeadHeatW(design, state), ProbeHeaters.WallHeatW(design, state));
         if (rate.Regime == DescentRegimeKind.Stalled)
         {
@@ -61,7 +63,46 @@ public static class ProbeRegimeMachine
                 RecordField.Of("ice_temperature_k", rate.IceTemperatureK));
         }
 
-        return state with { VelocityMPerS = rate.VelocityMPerS, LastMovingVelocityMPerS = rate.VelocityMPerS, WallDeficit = deficit };
+        return state with { VelocityMPerS = rate.VelocityMPerS, LastMovingVelocityMPerS = rate.VelocityMPerS, WallDeficit = deficit, JetHoleAroundBodyM = 0.0 };
+    }
+
+    /// <summary>
+    /// The jets cut the hole (<see cref="ProbeJets"/>): the speed is the jets' for their hole radius. A hole that would
+    /// freeze back on the body before it passed holds the probe (a refreeze stall); jets that deliver no heat at the
+    /// bottom (shed by the bus, a nozzle fully clogged) leave it stopped in their hole.
+    /// </summary>
+    private static ProbeState JetRetune(ProbeDesign design, ProbeState state, ComponentContext context)
+    {
+        var point = ProbeJets.Operating(design, state);
+        state = ProbeJets.RecordChange(design, state, point, context);
+        if (point is null)
+        {
+            var idle = design.Descent.Rate(state.DepthM, 0.0, ProbeHeaters.WallHeatW(design, state));
+            return state.Regime == ProbeRegime.Stopped ? state with { VelocityMPerS = 0.0 } : Stop(design, state, idle, context);
+        }
+
+        if (ProbeJets.ClosesOnBody(design, state, point))
+        {
+            if (state.PendingThermal is { } pending) context.Cancel(pending);
+            context.Record(ProbeRecords.RefreezeStall, Severity.Critical,
+                RecordField.Of("depth_m", state.DepthM),
+                RecordField.Of("hole_radius_m", point.HoleRadiusM),
+                RecordField.Of("clearance_m", point.ClearanceM),
+                RecordField.Of("freeze_back_s", point.FreezeBackTimeS),
+                RecordField.Of("body_passage_s", design.Probe.LengthM / point.SpeedMPerS),
+                RecordField.Of("body_length_m", design.Probe.LengthM));
+            var held = state with { VelocityMPerS = 0.0, PendingThermal = null, StoppedAt = context.Now, JetHoleAroundBodyM = point.HoleRadiusM };
+            return ChangeRegime(held, ProbeRegime.FrozenIn, context, "the jets' hole froze back before the body passed");
+        }
+
+        if (state.PendingThermal is { } freezing)
+        {
+            context.Cancel(freezing);
+            state = state with { PendingThermal = null };
+        }
+
+        state = ChangeRegime(state, ProbeRegime.Melting, context, "hot-water jets cut the hole");
+        return state with { VelocityMPerS = point.SpeedMPerS, LastMovingVelocityMPerS = point.SpeedMPerS, JetHoleAroundBodyM = point.HoleRadiusM };
     }
 
     /// <summary>
@@ -81,10 +122,12 @@ public static class ProbeRegimeMachine
             if (ProbeHeaters.HeadHeatW(design, state) + ProbeHeaters.WallHeatW(design, state) < holdOpenW)
             {
                 var exposureS = probe.LengthM / (2 * state.LastMovingVelocityMPerS);
-                var freeze = Refreeze.FreezeInAroundProbe(probe.FreezeGapM, probe.RadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
+                // In a hole the jets cut, the water to freeze is their whole clearance: a wider hole freezes in later.
+                var (gapM, wallRadiusM) = state.JetHoleAroundBodyM > 0 ? (state.JetHoleAroundBodyM - probe.RadiusM, state.JetHoleAroundBodyM) : (probe.FreezeGapM, probe.RadiusM);
+                var freeze = Refreeze.FreezeInAroundProbe(gapM, wallRadiusM, exposureS, rate.IceTemperatureK, rate.MeltingTemperatureK);
                 context.Record(ProbeRecords.Refreezing, Severity.Alarm,
                     RecordField.Of("depth_m", state.DepthM),
-                    RecordField.Of("gap_m", probe.FreezeGapM),
+                    RecordField.Of("gap_m", gapM),
                     RecordField.Of("freeze_time_s", freeze.FreezeTimeS),
                     RecordField.Of("stefan_number", freeze.StefanNumber),
                     RecordField.Of("hold_open_power_w", holdOpenW));
@@ -138,10 +181,26 @@ public static class ProbeRegimeMachine
         var probe = design.Probe;
         var headW = ProbeHeaters.HeadHeatW(design, state);
         var wallW = ProbeHeaters.WallHeatW(design, state);
-        var powerW = headW + wallW;
+        // Hot water from the jets reaches the frozen gap too (MODEL: as the heaters' heat does, through the water).
+        var jetW = ProbeJets.HeatAtBottomW(design, state);
+        var powerW = headW + wallW + jetW;
         if (powerW <= 0 || state.MeltFreeRefusedAtWallW == powerW) return state with { VelocityMPerS = 0.0 };
-        var moving = design.Descent.Rate(state.DepthM, headW, wallW);
-        if (moving.Regime == DescentRegimeKind.Melting && moving.Held)
+        if (ProbeJets.Engaged(design, state))
+        {
+            if (ProbeJets.Operating(design, state) is { } jet && ProbeJets.ClosesOnBody(design, state, jet))
+            {
+                context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
+                    RecordField.Of("depth_m", state.DepthM),
+                    RecordField.Of("head_power_w", headW),
+                    RecordField.Of("wall_power_w", wallW),
+                    RecordField.Of("cause", "the jets' hole would freeze back on the body"),
+                    RecordField.Of("jet_heat_at_bottom_w", jetW),
+                    RecordField.Of("freeze_back_s", jet.FreezeBackTimeS),
+                    RecordField.Of("body_passage_s", probe.LengthM / jet.SpeedMPerS));
+                return state with { VelocityMPerS = 0.0, MeltFreeRefusedAtWallW = powerW };
+            }
+        }
+        else if (design.Descent.Rate(state.DepthM, headW, wallW) is { Regime: DescentRegimeKind.Melting, Held: true } moving)
         {
             context.Record(ProbeRecords.CannotMeltFree, Severity.Critical,
                 RecordField.Of("depth_m", state.DepthM),

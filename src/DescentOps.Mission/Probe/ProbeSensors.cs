@@ -25,6 +25,8 @@ public static class ProbeSensors
         ("probe.battery_soc", state.Bus?.StateOfCharge ?? 0.0),
         ("probe.bus_power_available", state.Bus?.Allocation.AvailablePowerW ?? ProbeHeaters.BusPowerW(design, state)),
         ("probe.buffer_fill", state.BufferFill),
+        ("probe.jet_power", ProbeJets.HeatW(design, state)),
+        ("probe.hole_radius", ProbeJets.HoleRadiusM(design, state)),
     ];
 
     /// <summary>

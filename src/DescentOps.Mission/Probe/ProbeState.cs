@@ -62,6 +62,21 @@ public sealed record ProbeState(
     /// <summary>Charging power each docked vehicle asks of the bus, by vehicle name.</summary>
     public ImmutableSortedDictionary<string, double> DockDemandsW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 
+    /// <summary>Heat the jets are set to put into the water (0: off); only a probe with jets.</summary>
+    public double JetSetpointW { get; init; }
+
+    /// <summary>Hole radius the jets are set to cut.</summary>
+    public double JetHoleRadiusM { get; init; }
+
+    /// <summary>Share of the jets' heat that reaches the hole's bottom: 1, less while a nozzle is clogged.</summary>
+    public double NozzleShare { get; init; } = 1.0;
+
+    /// <summary>Radius of the jet-cut hole around the body; 0 while the head cuts the hole itself.</summary>
+    public double JetHoleAroundBodyM { get; init; }
+
+    /// <summary>Heat at the bottom and hole radius of the jets' operating point last logged.</summary>
+    public (double HeatW, double HoleRadiusM)? JetLogged { get; init; }
+
     /// <summary>What the bus last granted each docked vehicle, as the vehicle was told.</summary>
     public ImmutableSortedDictionary<string, double> DockGrantedW { get; init; } = ImmutableSortedDictionary<string, double>.Empty.WithComparers(StringComparer.Ordinal);
 }

@@ -29,7 +29,7 @@ public static class ProbeTelemetry
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + design.FrameInterval };
     }
 
-    /// <summary>The true values of a frame as logged; the bus figures only for a probe with a power system.</summary>
+    /// <summary>The true values of a frame as logged; the jets' figures only for a probe with jets, the bus figures only for a probe with a power system.</summary>
     private static IEnumerable<RecordField> Fields(ProbeDesign design, ProbeState state, TelemetryFrame frame, IReadOnlyList<(string Point, double Value)> truth)
     {
         IEnumerable<RecordField> fields =
@@ -46,6 +46,16 @@ public static class ProbeTelemetry
             RecordField.Of("lateral_drift_m", state.LateralDriftM),
             RecordField.Of("buffer_fill", state.BufferFill),
         ];
+        if (design.Probe.Jets is not null)
+        {
+            fields = fields.Concat(
+            [
+                RecordField.Of("jet_heat_w", ProbeJets.HeatW(design, state)),
+                RecordField.Of("jet_pump_power_w", ProbeJets.PumpPowerW(design, state)),
+                RecordField.Of("hole_radius_m", ProbeJets.HoleRadiusM(design, state)),
+            ]);
+        }
+
         if (state.Bus is not { } bus) return fields;
         var e = bus.Energy;
         return fields.Concat(

@@ -44,7 +44,7 @@ public sealed class FaultMeasures
                     else if (f.LeftUpright) f.RecoveredS = t;
                 }
 
-                foreach (var f in _faults.Where(f => f.Kind == "PowerDip" && f.RecoveredS is null && t > f.StartS))
+                foreach (var f in _faults.Where(f => f.Kind is "PowerDip" or "CloggedNozzle" && f.RecoveredS is null && t > f.StartS))
                 {
                     if (Text(record, "regime") == "Melting" && speed >= RecoveredSpeedShare * f.SpeedBeforeMPerS) f.RecoveredS = t;
                 }
@@ -80,7 +80,7 @@ public sealed class FaultMeasures
             f.RecoveredS - f.StartS,
             f.Kind switch
             {
-                "PowerDip" => "descent back to 90 % of its pre-fault speed",
+                "PowerDip" or "CloggedNozzle" => "descent back to 90 % of its pre-fault speed",
                 "StationFailure" => "station relaying again",
                 "StationUpset" => "station recovered from the reset",
                 "TetherBreak" => "none: a broken fibre stays broken",

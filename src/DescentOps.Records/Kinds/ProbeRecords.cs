@@ -9,6 +9,9 @@ public static class ProbeRecords
     public const string DescentStarted = "probe.descent_started";
     public const string DockPower = "probe.dock_power";
     public const string HeatPath = "probe.heat_path";
+    public const string Jets = "probe.jets";
+    public const string NozzleClogged = "probe.nozzle_clogged";
+    public const string NozzleCleared = "probe.nozzle_cleared";
     public const string LoadRestored = "probe.load_restored";
     public const string LoadShed = "probe.load_shed";
     public const string MeltingFree = "probe.melting_free";

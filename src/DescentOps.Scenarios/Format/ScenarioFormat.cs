@@ -58,6 +58,20 @@ public static class ScenarioFormat
         new QuantityField("forwarding_delay", "Time each relay takes to pass a frame on (default 0 s).", Duration, 0, 3600, Required: false),
     ], Required: false);
 
+    /// <summary>
+    /// The probe's hot-water jets (omit for a probe that melts by its head alone). While they run the head is out of
+    /// contact and idle: the jets cut the hole by the energy balance of hot-water drilling.
+    /// </summary>
+    private static SectionField Jets { get; } = new("jets", "Hot-water jets that cut the hole ahead of the probe; 'send probe.jets set_power(power = ...)' switches them (0 W: off). While they run the head heater idles and the jets' heat sets the speed for the hole radius.",
+    [
+        new QuantityField("heat", "Most heat the jets put into the water (the ceiling of set_power).", Power, 0, 1e7, MinExclusive: true),
+        new QuantityField("pump_power", "Electric power the pump draws while the jets run.", Power, 0, 1e6),
+        new QuantityField("minimum_hole_radius", "Smallest hole radius the jets may cut; wider than the probe.", Length, 0, 2, MinExclusive: true),
+        new QuantityField("hole_radius", "Hole radius the jets cut at the start (default: minimum_hole_radius); set_hole_radius changes it.", Length, 0, 2, Required: false, MinExclusive: true),
+        new NumberField("efficiency", "Share of the jets' heat that melts ice, the rest carried up the hole (default 0.8, a rule of thumb of hot-water drilling, 0.6-0.9).", 0.01, 1, Required: false),
+        new QuantityField("initial_power", "Jet heat at the start of the run (default 0 W: off).", Power, 0, 1e7, Required: false),
+    ], Required: false);
+
     /// <summary>One time-tagged telecommand; shared with branch change files.</summary>
     public static SectionField Telecommand { get; } = new("telecommand", "One telecommand at a time.",
     [
@@ -121,6 +135,7 @@ public static class ScenarioFormat
                 new QuantityField("max_tilt", "Tilt from the vertical beyond which the probe is lost (default 10 deg).", Angle, 0, Math.PI / 2, Required: false, MinExclusive: true),
                 new QuantityField("freeze_gap", "Water gap around the body that refreezes when the probe stops (default 0.5 mm).", Length, 0, 0.05, Required: false, MinExclusive: true),
                 new QuantityField("telemetry_interval", "Time between telemetry frames.", Duration, 1, Day),
+                Jets,
             ]),
             new SectionField("power", "The probe's electrical power system: heat source, bus loads by priority, battery and current turbine. Omit it for the simple model, in which a power dip scales the heater power directly.",
             [
@@ -140,10 +155,10 @@ public static class ScenarioFormat
                     new NumberField("initial_charge", "State of charge at the start of the run, 0 to 1 (default 1).", 0, 1, Required: false),
                     new QuantityField("temperature", "Cell temperature, held constant; cold cells hold less and refuse charge below 0 °C (default 20 °C).", Temperature, 213.15, 333.15, Required: false),
                 ], Required: false),
-                new ListField("loads", "Consumers on the bus with their priorities (0 = kept longest); when they ask for more than source and battery give, the least important are shed. Default: electronics and head heater at 0, wall heater at 1. Must name one head_heater, one wall_heater and one electronics load.", new SectionField("load", "One consumer.",
+                new ListField("loads", "Consumers on the bus with their priorities (0 = kept longest); when they ask for more than source and battery give, the least important are shed. Default: electronics and head heater at 0, wall heater at 1 (and the jets at 1 for a probe with jets). Must name one head_heater, one wall_heater and one electronics load, and one jets load for a probe with jets.", new SectionField("load", "One consumer.",
                 [
                     new TextField("name", "Load identifier (lowercase letters, digits, '-'); rules shed and restore loads by it.", IsIdentifier: true),
-                    new ChoiceField("role", "head_heater and wall_heater draw their set points, electronics the probe's electronics_power, fixed its own power.", ["head_heater", "wall_heater", "electronics", "fixed"]),
+                    new ChoiceField("role", "head_heater and wall_heater draw their set points, electronics the probe's electronics_power, jets the jets' heat and pump while they run, fixed its own power.", ["head_heater", "wall_heater", "electronics", "jets", "fixed"]),
                     new IntegerField("priority", "Shedding priority: lower numbers are kept longer.", 0, 1000),
                     new QuantityField("power", "For a fixed load: the power it draws.", Power, 0, 1e6, Required: false),
                 ]), MinItems: 3, MaxItems: 64, Required: false),
@@ -289,7 +304,7 @@ public static class ScenarioFormat
             new ListField("faults", "Faults injected during the run.", new SectionField("fault", "One fault.",
             [
                 new TextField("name", "Fault identifier (lowercase letters, digits, '-').", IsIdentifier: true),
-                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "sensor_noise", "heater_segment_failure", "tilt_kick", "station_upset", "vehicle_loss", "relay_failure", "spool_jam"]),
+                new ChoiceField("kind", "What fails.", ["power_dip", "tether_break", "station_failure", "sensor_stuck", "sensor_bias", "sensor_dropout", "sensor_noise", "heater_segment_failure", "tilt_kick", "station_upset", "vehicle_loss", "relay_failure", "spool_jam", "clogged_nozzle"]),
                 new QuantityField("at", "Trigger: simulated time after the start of the run when the fault begins (give exactly one of at, at_depth, when, mean_interval).", Duration, 0, 1000 * Year, Required: false),
                 new QuantityField("at_depth", "Trigger: head depth at which the fault begins.", Length, 0, 200_000, Required: false),
                 new TextField("when", "Trigger: a condition in the rule language on the probe's true state (not its sensors), e.g. 'probe.ice_temperature above 250 K for 2 samples'; checked on every frame, the fault begins the first time it holds.", Required: false),
@@ -297,7 +312,7 @@ public static class ScenarioFormat
                 new QuantityField("not_before", "For a random trigger: simulated time before which the fault cannot begin (default 0).", Duration, 0, 1000 * Year, Required: false),
                 new IntegerField("occurrences", "For a random trigger: how many times the fault happens at most (default 1); each begins a random interval after the previous one ended.", 1, 1000, Required: false),
                 new QuantityField("duration", "How long the fault lasts; omit for a fault that stays.", Duration, 0, 1000 * Year, Required: false, MinExclusive: true),
-                new NumberField("remaining_fraction", "For power_dip: the share of heater power left during the dip; for heater_segment_failure: the share one head half keeps; for a vehicle_loss by battery: the share of the charge left (0 to 1).", 0, 1, Required: false),
+                new NumberField("remaining_fraction", "For power_dip: the share of heater power left during the dip; for heater_segment_failure: the share one head half keeps; for clogged_nozzle: the share of the jets' heat that still reaches the hole's bottom; for a vehicle_loss by battery: the share of the charge left (0 to 1).", 0, 1, Required: false),
                 new QuantityField("angle", "For tilt_kick: the sudden change of tilt (a debris band or an inclined layer under the head).", Angle, -Math.PI / 4, Math.PI / 4, Required: false),
                 new ChoiceField("point", "For sensor faults: the telemetry point that lies.", [.. Model.ProbeTelemetryPoints.Numeric.Select(p => p.Name)], Required: false),
                 new TextField("vehicle", "For vehicle_loss: the vehicle it strikes.", Required: false),

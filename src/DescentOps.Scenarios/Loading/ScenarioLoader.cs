@@ -115,7 +115,10 @@ public static class ScenarioLoader
                 probe.OptionalQuantity("freeze_gap") ?? DefaultFreezeGapM,
                 probe.OptionalQuantity("max_head_power") ?? probe.Quantity("head_power"),
                 probe.OptionalQuantity("max_wall_power") ?? probe.Quantity("wall_power"),
-                probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad),
+                probe.OptionalQuantity("max_tilt") ?? DefaultMaxTiltRad)
+            {
+                Jets = probe.OptionalSection("jets") is { } jets ? BuildJets(jets) : null,
+            },
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed"), Optics(tether), (int)(tether.OptionalInteger("buffer_frames") ?? 0)),
             BuildStation(station),
             [.. root.List("vehicles").Select(BuildVehicle)],
@@ -124,7 +127,7 @@ public static class ScenarioLoader
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
             text,
-            root.OptionalSection("power") is { } power ? BuildPower(power) : null,
+            root.OptionalSection("power") is { } power ? BuildPower(power, probe.OptionalSection("jets") is not null) : null,
             BuildAcoustics(root.OptionalSection("acoustics")),
             RelayPlan(root.OptionalSection("relays"), shell.Quantity("thickness")));
     }
@@ -178,7 +181,7 @@ public static class ScenarioLoader
             relays.OptionalQuantity("forwarding_delay") ?? 0.0);
     }
 
-    private static PowerModel BuildPower(BoundSection power)
+    private static PowerModel BuildPower(BoundSection power, bool hasJets)
     {
         var battery = power.OptionalSection("battery") is { } b
             ? new BatteryModel(
@@ -209,7 +212,7 @@ public static class ScenarioLoader
             power.OptionalQuantity("fuel_age") ?? 0.0,
             power.OptionalQuantity("electric_power") ?? 0.0,
             battery,
-            loads.Count == 0 ? DefaultLoads : [.. loads.Select(BuildLoad)],
+            loads.Count == 0 ? (hasJets ? [.. DefaultLoads, DefaultJetsLoad] : DefaultLoads) : [.. loads.Select(BuildLoad)],
             turbine)
         {
             WasteHeatToHead = power.OptionalSection("heat_path")?.Number("head") ?? 0.0,
@@ -225,6 +228,18 @@ public static class ScenarioLoader
         new("wall", BusLoadRole.WallHeater, 1, 0.0),
     ];
 
+    /// <summary>The jets' load on a default bus: shed with the wall heater, before the head and the electronics.</summary>
+    private static readonly BusLoadModel DefaultJetsLoad = new("jets", BusLoadRole.Jets, 1, 0.0);
+
+    /// <summary>The jets section; the efficiency defaults to the rule of thumb the jet model carries (<see cref="Physics.Descent.HotWaterJet.DefaultEfficiency"/>).</summary>
+    private static ProbeJetsModel BuildJets(BoundSection jets) => new(
+        jets.Quantity("heat"),
+        jets.Quantity("pump_power"),
+        jets.Quantity("minimum_hole_radius"),
+        jets.OptionalQuantity("hole_radius") ?? jets.Quantity("minimum_hole_radius"),
+        jets.OptionalNumber("efficiency") ?? Physics.Descent.HotWaterJet.DefaultEfficiency,
+        jets.OptionalQuantity("initial_power") ?? 0.0);
+
     private static BusLoadModel BuildLoad(BoundSection load) => new(
         load.Text("name"),
         load.Text("role") switch
@@ -232,6 +247,7 @@ public static class ScenarioLoader
             "head_heater" => BusLoadRole.HeadHeater,
             "wall_heater" => BusLoadRole.WallHeater,
             "electronics" => BusLoadRole.Electronics,
+            "jets" => BusLoadRole.Jets,
             _ => BusLoadRole.Fixed,
         },
         (int)load.Integer("priority"),
@@ -530,8 +546,38 @@ public static class ScenarioLoader
             CheckVehicle(scenario.Vehicles[i], vehicles[i], $"vehicles[{i}]", errors);
         }
 
-        if (scenario.Power is { } power) CheckPower(power, root.Section("power"), errors);
+        if (scenario.Power is { } power) CheckPower(power, root.Section("power"), scenario.Probe.Jets is not null, errors);
+        CheckJets(scenario, root, errors);
         CheckStation(scenario.Station, root.Section("station"), errors);
+    }
+
+    /// <summary>The jets cut a hole wider than the probe, no narrower than their minimum, with no more heat than they have; a clogged nozzle needs jets.</summary>
+    private static void CheckJets(Scenario scenario, BoundSection root, List<ScenarioError> errors)
+    {
+        var faults = root.List("faults");
+        for (var i = 0; i < scenario.Faults.Count; i++)
+        {
+            if (scenario.Faults[i].Kind == FaultKind.CloggedNozzle && scenario.Probe.Jets is null)
+            {
+                errors.Add(new ScenarioError(faults[i].LocationOf("kind"), $"faults[{i}].kind", "a clogged_nozzle needs a probe with jets (probe.jets)"));
+            }
+        }
+
+        if (scenario.Probe.Jets is not { } jets || root.Section("probe").OptionalSection("jets") is not { } section) return;
+        if (jets.MinimumHoleRadiusM <= scenario.Probe.RadiusM)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("minimum_hole_radius"), "probe.jets.minimum_hole_radius", $"the jets' hole must be wider than the probe's radius of {scenario.Probe.RadiusM.ToString("G6", System.Globalization.CultureInfo.InvariantCulture)} m"));
+        }
+
+        if (jets.HoleRadiusM < jets.MinimumHoleRadiusM)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("hole_radius"), "probe.jets.hole_radius", "the hole radius is below minimum_hole_radius"));
+        }
+
+        if (jets.InitialHeatW > jets.MaxHeatW)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("initial_power"), "probe.jets.initial_power", "the initial jet power is above the jets' heat"));
+        }
     }
 
     /// <summary>A propeller needs its speed and one source of power; a glider its trim, which must be one it can fly.</summary>
@@ -591,7 +637,7 @@ public static class ScenarioLoader
     }
 
     /// <summary>The cross-field rules of the power section: the source's own fields, and a bus that has every heater.</summary>
-    private static void CheckPower(PowerModel power, BoundSection section, List<ScenarioError> errors)
+    private static void CheckPower(PowerModel power, BoundSection section, bool hasJets, List<ScenarioError> errors)
     {
         var radioisotope = power.Source == PowerSourceKind.Radioisotope;
         if (radioisotope && section.OptionalQuantity("thermal_power") is null)
@@ -632,6 +678,14 @@ public static class ScenarioLoader
                 var word = role switch { BusLoadRole.HeadHeater => "head_heater", BusLoadRole.WallHeater => "wall_heater", _ => "electronics" };
                 errors.Add(new ScenarioError(section.LocationOf("loads"), "power.loads", $"the bus needs exactly one {word} load, found {count}"));
             }
+        }
+
+        var jetLoads = power.Loads.Count(l => l.Role == BusLoadRole.Jets);
+        if (jetLoads != (hasJets ? 1 : 0))
+        {
+            errors.Add(new ScenarioError(section.LocationOf("loads"), "power.loads", hasJets
+                ? $"a probe with jets needs exactly one jets load on its bus, found {jetLoads}"
+                : "a jets load belongs to a probe with a probe.jets section"));
         }
 
         if (power.WasteHeatToHead + power.WasteHeatToWall > 1.0)
@@ -804,6 +858,7 @@ public static class ScenarioLoader
         "vehicle_loss" => FaultKind.VehicleLoss,
         "relay_failure" => FaultKind.RelayFailure,
         "spool_jam" => FaultKind.SpoolJam,
+        "clogged_nozzle" => FaultKind.CloggedNozzle,
         _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
     };
 
@@ -821,6 +876,7 @@ public static class ScenarioLoader
         FaultKind.VehicleLoss => "vehicle_loss",
         FaultKind.RelayFailure => "relay_failure",
         FaultKind.SpoolJam => "spool_jam",
+        FaultKind.CloggedNozzle => "clogged_nozzle",
         _ => "tilt_kick",
     };
 

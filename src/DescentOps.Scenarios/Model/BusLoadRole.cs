@@ -7,6 +7,9 @@ public enum BusLoadRole
     WallHeater,
     Electronics,
 
+    /// <summary>The hot-water jets: their heat set point and their pump, while they run (a probe with a jets section).</summary>
+    Jets,
+
     /// <summary>A load of constant power given in the scenario (a pump, an instrument).</summary>
     Fixed,
 }

@@ -41,4 +41,7 @@ public enum FaultKind
 
     /// <summary>The spool jams and the paying-out fibre snaps: a tether break with its own cause.</summary>
     SpoolJam,
+
+    /// <summary>A clogged nozzle: the hot-water jets keep only a share of their heat at the hole's bottom; the rest is lost up the hole.</summary>
+    CloggedNozzle,
 }

@@ -20,6 +20,8 @@ public static class ProbeTelemetryPoints
         ("probe.battery_soc", QuantityKind.Ratio),
         ("probe.bus_power_available", QuantityKind.Power),
         ("probe.buffer_fill", QuantityKind.Ratio),
+        ("probe.jet_power", QuantityKind.Power),
+        ("probe.hole_radius", QuantityKind.Length),
     ];
 
     public static QuantityKind? KindOf(string name) =>

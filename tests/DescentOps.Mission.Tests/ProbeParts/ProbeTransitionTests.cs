@@ -145,8 +145,8 @@ public sealed class ProbeTransitionTests
     public void AFailedHeadSegmentHalvesItsShareOfTheHeadDemand()
     {
         var state = Component.InitialState with { Regime = ProbeRegime.Melting, HeldAtSurface = false, SegmentLossFraction = 1.0 };
-        Assert.Equal(DefaultScenario.Probe.HeadPowerW / 2, ProbeHeaters.HeadDemandW(state));
-        Assert.Equal(0.0, ProbeHeaters.HeadDemandW(state with { Paused = true }));
+        Assert.Equal(DefaultScenario.Probe.HeadPowerW / 2, ProbeHeaters.HeadDemandW(Design, state));
+        Assert.Equal(0.0, ProbeHeaters.HeadDemandW(Design, state with { Paused = true }));
         Assert.Equal(0.0, ProbeHeaters.WallDemandW(state with { Regime = ProbeRegime.AtOcean }));
     }
 }
