@@ -26,6 +26,27 @@ public sealed class CatalogueAgreementTests
         Assert.Equal(formatPoints, framePoints);
     }
 
+    [Fact]
+    public void The_readme_documents_every_point_rules_and_triggers_may_read_and_which_are_true_state()
+    {
+        var catalogue = MissionCatalogue.For(BuiltInScenarios.Default());
+        string? root = null;
+        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null && root is null; dir = dir.Parent)
+        {
+            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) root = dir.FullName;
+        }
+
+        var rows = File.ReadAllLines(Path.Combine(root!, "README.md"))
+            .Where(l => l.StartsWith("| `probe.", StringComparison.Ordinal))
+            .Select(l => l.Split('|', StringSplitOptions.TrimEntries))
+            .ToDictionary(c => c[1].Trim('`'), c => c[4]);
+        Assert.Equal(catalogue.Points.Select(p => p.Name).Order(StringComparer.Ordinal), rows.Keys.Order(StringComparer.Ordinal));
+        foreach (var point in catalogue.Points)
+        {
+            Assert.Equal(point.TrueStateOnly, rows[point.Name] == "triggers only");
+        }
+    }
+
     /// <summary>Runs the probe alone for its first second and returns the first frame it sends.</summary>
     internal static TelemetryFrame FirstFrame(Probe.ProbeComponent probe)
     {

@@ -23,15 +23,22 @@ public static class CheckCommand
         var fileArgument = new Argument<string>("RULES-OR-SCENARIO") { Description = "A scenario file (.yaml), a built-in scenario's name, or a rule-set file (.dorules)." };
         var scenarioOption = new Option<string?>("--scenario", "-S") { Description = "For a rule-set file: the scenario (file or built-in name) whose telemetry points and commands the rules may use (default: the built-in default).", HelpName = "SCENARIO" };
         var jsonOption = CommonOptions.Json();
+        var traceOption = new Option<string?>("--trace") { Description = "Run the rules on a recorded telemetry trace (a CSV with t_s and point columns; the export's telemetry.csv is one) and print what they did as CSV.", HelpName = "TRACE.csv" };
+        var expectOption = new Option<string?>("--expect") { Description = "With --trace: compare what the rules did with these rows (a CSV as --trace prints it); exit 8 when they differ.", HelpName = "EXPECTED.csv" };
         var command = new Command("check", "Check recovery rules: syntax, unknown points or commands, unit mismatches, out-of-range thresholds, conflicts, rules that can never fire.")
         {
-            fileArgument, scenarioOption, jsonOption,
+            fileArgument, scenarioOption, jsonOption, traceOption, expectOption,
         };
         command.SetAction(parse =>
         {
             var path = parse.GetValue(fileArgument)!;
             var json = parse.GetValue(jsonOption);
             var isRuleSet = path.EndsWith(".dorules", StringComparison.OrdinalIgnoreCase);
+            var trace = parse.GetValue(traceOption);
+            var expect = parse.GetValue(expectOption);
+            if (expect is not null && trace is null) throw new UsageException("--expect compares the rows of a trace: give --trace too");
+            if (trace is not null && !isRuleSet) throw new UsageException("--trace runs a rule-set file (.dorules) on a trace");
+            if (trace is not null) return RunTrace(path, ScenarioSource.Load(parse.GetValue(scenarioOption)), trace, expect);
             var errors = new List<Finding>();
             var warnings = new List<Finding>();
             var rules = 0;
@@ -76,6 +83,78 @@ public static class CheckCommand
             return (int)(errors.Count == 0 ? ExitCode.Ok : ExitCode.InvalidInput);
         });
         return command;
+    }
+
+    /// <summary>
+    /// <c>check RULES --trace TRACE [--expect EXPECTED]</c>: the rules on a recorded trace. Without EXPECTED the rows go
+    /// to standard output as CSV (save them as the expected rows of a test); with it, the two are compared row by row.
+    /// </summary>
+    private static int RunTrace(string rulesPath, Scenario scenario, string tracePath, string? expectPath)
+    {
+        if (!File.Exists(rulesPath)) throw new FileNotFoundException($"no such file: {rulesPath}", rulesPath);
+        var catalogue = MissionCatalogue.For(scenario);
+        var result = RuleChecker.CheckSource(new RuleSource(rulesPath, File.ReadAllText(rulesPath)), catalogue);
+        if (result.RuleSet is not { } rules)
+        {
+            foreach (var error in result.Errors) Console.Error.WriteLine($"error: {error.Location}: {error.Code}: {error.Message}");
+            return (int)ExitCode.InvalidInput;
+        }
+
+        var problems = new List<string>();
+        IReadOnlyList<IReadOnlyList<string>> rows;
+        List<IReadOnlyList<string>>? expected = null;
+        try
+        {
+            var table = Files.CsvTable.Open(tracePath);
+            rows = TraceReplay.Run(rules, catalogue, table.Header, table.Rows(), problems);
+            if (expectPath is not null)
+            {
+                var expectedTable = Files.CsvTable.Open(expectPath);
+                if (!expectedTable.Header.SequenceEqual(TraceReplay.Header))
+                {
+                    problems.Add($"{expectPath}: the header must be {string.Join(",", TraceReplay.Header)}");
+                }
+
+                expected = [.. expectedTable.Rows().Select(r => r.Cells)];
+            }
+        }
+        catch (InvalidDataException exception)
+        {
+            problems.Add(exception.Message);
+            rows = [];
+        }
+
+        if (problems.Count > 0)
+        {
+            foreach (var problem in problems) Console.Error.WriteLine($"error: {(problem.StartsWith(tracePath, StringComparison.Ordinal) || problem.StartsWith(expectPath ?? "\0", StringComparison.Ordinal) ? "" : tracePath + ": ")}{problem}");
+            return (int)ExitCode.InvalidInput;
+        }
+
+        if (expected is null)
+        {
+            Console.Out.Write(Reports.Export.CsvText.Row([.. TraceReplay.Header]));
+            foreach (var row in rows) Console.Out.Write(Reports.Export.CsvText.Row([.. row.Select(c => Reports.Export.CsvText.Cell(c))]));
+            return (int)ExitCode.Ok;
+        }
+
+        static string Key(IReadOnlyList<string> row) => string.Join("\u001f", row);
+        var actualKeys = rows.Select(Key).ToList();
+        var expectedKeys = expected.Select(Key).ToList();
+        var silent = rules.Rules.Select(r => r.Name).Where(n => rows.All(r => r[1] != n)).ToList();
+        var coverage = silent.Count == 0 ? "every rule acted" : $"never acted: {string.Join(", ", silent)}";
+        if (actualKeys.SequenceEqual(expectedKeys, StringComparer.Ordinal))
+        {
+            Console.Out.WriteLine($"{tracePath}: {rows.Count} rows as expected; {coverage}");
+            return (int)ExitCode.Ok;
+        }
+
+        var missing = expectedKeys.Except(actualKeys, StringComparer.Ordinal).ToList();
+        var unexpected = actualKeys.Except(expectedKeys, StringComparer.Ordinal).ToList();
+        Console.Out.WriteLine($"{tracePath}: the rules did not do what {expectPath} expects ({rows.Count} rows, {expected.Count} expected); {coverage}");
+        foreach (var row in missing.Take(20)) Console.Out.WriteLine($"  expected, not done: {row.Replace("\u001f", ",", StringComparison.Ordinal)}");
+        foreach (var row in unexpected.Take(20)) Console.Out.WriteLine($"  done, not expected: {row.Replace("\u001f", ",", StringComparison.Ordinal)}");
+        if (missing.Count == 0 && unexpected.Count == 0) Console.Out.WriteLine("  the same rows in another order");
+        return (int)ExitCode.RunsDiffer;
     }
 
     private static void Collect(RuleCheckResult result, Func<SourceLocation, string> where, List<Finding> errors, List<Finding> warnings)

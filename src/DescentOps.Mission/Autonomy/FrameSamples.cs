@@ -15,5 +15,9 @@ public static class FrameSamples
         }
 
         yield return new TelemetrySample("probe.regime", t, new DiscreteValue(frame.Regime));
+        foreach (var (point, state) in frame.DiscreteReadings)
+        {
+            yield return new TelemetrySample(point, t, new DiscreteValue(state));
+        }
     }
 }

@@ -46,6 +46,10 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.jet_power", PhysicalDimension.Power, 0, scenario.Probe.Jets?.MaxHeatW ?? 0.0),
             new NumericPointSpec("probe.hole_radius", PhysicalDimension.Length, 0, scenario.Probe.Jets is null ? scenario.Probe.RadiusM : Scenarios.Model.ProbeJetsModel.MaxHoleRadiusM),
             new DiscretePointSpec("probe.regime", Regimes),
+            // What carries the frames, as the probe's transceivers sense it (the link tells the probe when it changes).
+            new DiscretePointSpec("probe.link_path", Tether.LinkPaths.All),
+            // No sensor measures the sideways drift: true state, for fault triggers only.
+            new NumericPointSpec("probe.lateral_drift", PhysicalDimension.Length, -scenario.Shell.ThicknessM, scenario.Shell.ThicknessM) { TrueStateOnly = true },
         ];
         CommandSpec[] commands =
         [

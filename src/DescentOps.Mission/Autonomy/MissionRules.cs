@@ -15,8 +15,21 @@ public static class MissionRules
 {
     public static CompiledRuleSet Empty { get; } = new(null, [], []);
 
-    public static RuleCheckResult Check(Scenario scenario) =>
-        RuleChecker.CheckSource(new RuleSource(scenario.SourceName, scenario.Rules.Text), MissionCatalogue.For(scenario));
+    public static RuleCheckResult Check(Scenario scenario)
+    {
+        var result = RuleChecker.CheckSource(new RuleSource(scenario.SourceName, scenario.Rules.Text), MissionCatalogue.For(scenario));
+        if (scenario.OnboardSampling is null || result.RuleSet is not { } set) return result;
+        // The on-board sampler reads the probe's sensors, not the link's report; the link path comes with the frames.
+        const string LinkPath = "probe.link_path";
+        if (!set.Rules.Any(r => r.Placement == Rules.Syntax.Placement.Board && r.Condition.Points.Contains(LinkPath, StringComparer.Ordinal))) return result;
+        var text = scenario.Rules.Text;
+        var at = text.IndexOf(LinkPath, StringComparison.Ordinal);
+        var line = text[..Math.Max(at, 0)].Count(c => c == '\n') + 1;
+        var column = at - (text.LastIndexOf('\n', Math.Max(at - 1, 0)) + 1) + 1;
+        var error = new RuleDiagnostic(new Rules.Text.SourceLocation(scenario.SourceName, line, column), DiagnosticSeverity.Error, DiagnosticCode.UnknownPoint,
+            $"on-board rules cannot read '{LinkPath}' with onboard_sampling: the on-board sampler reads the probe's sensors, and the link path comes with the frames");
+        return result with { Errors = [.. result.Errors, error], RuleSet = null };
+    }
 
     public static CompiledRuleSet Compile(Scenario scenario)
     {

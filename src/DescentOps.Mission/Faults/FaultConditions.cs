@@ -32,7 +32,7 @@ public static class FaultConditions
     /// <summary>The located errors of every trigger condition (for <c>descentops check</c> and the run alike).</summary>
     public static IReadOnlyList<ScenarioError> Check(Scenario scenario, out IReadOnlyDictionary<int, CompiledRuleSet> compiled)
     {
-        var catalogue = MissionCatalogue.For(scenario);
+        var catalogue = MissionCatalogue.For(scenario).ForFaultTriggers();
         var sets = new Dictionary<int, CompiledRuleSet>();
         var errors = new List<ScenarioError>();
         for (var i = 0; i < scenario.Faults.Count; i++)

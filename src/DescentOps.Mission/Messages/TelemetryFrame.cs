@@ -13,8 +13,12 @@ public sealed record TelemetryFrame(
     string Regime,
     IReadOnlyList<(string Point, double Value)> Readings,
     double PaidOutM,
-    int VehiclesActive)
+    int VehiclesActive,
+    IReadOnlyList<(string Point, string State)>? States = null)
 {
+    /// <summary>Discrete readings besides the regime (the link path), in the order the rules take them.</summary>
+    public IReadOnlyList<(string Point, string State)> DiscreteReadings => States ?? [];
+
     public double? Reading(string point)
     {
         foreach (var (name, value) in Readings)

@@ -92,6 +92,9 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case LinkBufferFill fill:
                 return state with { BufferFill = fill.Fraction };
 
+            case LinkPathChanged path:
+                return state with { LinkPath = path.Path };
+
             case VehicleFinished finished:
                 return ProbeMilestones.VehicleFinished(d, Advance(state, context), finished, context);
 

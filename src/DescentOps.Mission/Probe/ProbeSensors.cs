@@ -29,6 +29,12 @@ public static class ProbeSensors
         ("probe.hole_radius", ProbeJets.HoleRadiusM(design, state)),
     ];
 
+    /// <summary>True state that no sensor reports: only a fault's trigger reads it (the catalogue marks it so).</summary>
+    public static IReadOnlyList<(string Point, double Value)> TrueStateOnly(ProbeState state) =>
+    [
+        ("probe.lateral_drift", state.LateralDriftM),
+    ];
+
     /// <summary>
     /// The readings as reported: the last fault on a point decides. A noisy sensor draws from <paramref name="random"/>
     /// only while its fault lasts, so runs without it keep their draws.

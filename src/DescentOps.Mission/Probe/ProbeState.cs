@@ -47,6 +47,9 @@ public sealed record ProbeState(
     int VehiclesLost = 0,
     double BufferFill = 0.0)
 {
+    /// <summary>The path that carries the frames, as the link last told the probe (<see cref="Tether.LinkPaths"/>).</summary>
+    public string LinkPath { get; init; } = Tether.LinkPaths.Fibre;
+
     /// <summary>Depth down to which the shell's debris bands have been accounted for (tilt scatter, debris on the head).</summary>
     public double DebrisAccountedToM { get; init; }
 

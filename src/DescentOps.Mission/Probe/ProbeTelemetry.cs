@@ -16,14 +16,15 @@ public static class ProbeTelemetry
     {
         var truth = ProbeSensors.TrueReadings(design, state);
         var reported = ProbeSensors.Reported(truth, state.SensorFaults, context.Random);
-        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive);
+        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive, [("probe.link_path", state.LinkPath)]);
         context.Record(ProbeRecords.Telemetry, Severity.Debug, [.. Fields(design, state, frame, truth)]);
         context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         // With on-board sampling the rules read the sensors themselves (Onboard.OnboardSampler), not the frames.
         if (design.Onboard is null) context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         if (design.WatchedByFaults)
         {
-            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = truth }), MissionPriority.Telemetry);
+            // A fault's trigger also reads true state no sensor reports (ProbeSensors.TrueStateOnly).
+            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = [.. truth, .. ProbeSensors.TrueStateOnly(state)] }), MissionPriority.Telemetry);
         }
 
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + design.FrameInterval };

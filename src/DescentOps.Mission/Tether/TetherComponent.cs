@@ -308,6 +308,13 @@ public sealed class TetherComponent : SimComponent<TetherState>
     /// <summary>The probe reports its buffer's fill in its next frame; it is told only when the fill changes.</summary>
     private static TetherState Report(TetherState state, ComponentContext context)
     {
+        var path = LinkPaths.Of(state);
+        if (path != state.ReportedPath)
+        {
+            context.Schedule(MissionIds.Probe, SimDuration.Zero, new LinkPathChanged(path), MissionPriority.Telemetry);
+            state = state with { ReportedPath = path };
+        }
+
         var fill = state.ProbeHold.Fill;
         if (fill == state.ReportedFill) return state;
         context.Schedule(MissionIds.Probe, SimDuration.Zero, new LinkBufferFill(fill), MissionPriority.Telemetry);

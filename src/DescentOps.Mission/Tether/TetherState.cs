@@ -34,5 +34,8 @@ public sealed record TetherState(
     /// <summary>The run of consecutive frames lost, for one warning per episode.</summary>
     public LossEpisode LossEpisode { get; init; } = LossEpisode.None;
 
+    /// <summary>The path the probe was last told carries its frames (<see cref="LinkPaths"/>).</summary>
+    public string ReportedPath { get; init; } = LinkPaths.Fibre;
+
     public long FramesHeld => ProbeHold.Count + Relays.Sum(r => (long)r.Hold.Count);
 }

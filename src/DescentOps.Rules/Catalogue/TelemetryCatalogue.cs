@@ -21,7 +21,16 @@ public sealed class TelemetryCatalogue
         }
     }
 
+    /// <summary>Whether conditions checked against this catalogue may read true-state points (fault triggers do, rules do not).</summary>
+    public bool ReadsTrueState { get; private init; }
+
+    /// <summary>The same points and commands, read as a fault trigger reads them: true state allowed.</summary>
+    public TelemetryCatalogue ForFaultTriggers() => new(_points.Values, _commands.Values) { ReadsTrueState = true };
+
     public TelemetryPointSpec? FindPoint(string name) => _points.GetValueOrDefault(name);
+
+    /// <summary>Every point, in the order given, for documentation and tests.</summary>
+    public IEnumerable<TelemetryPointSpec> Points => _points.Values;
 
     public CommandSpec? FindCommand(string target, string name) => _commands.GetValueOrDefault((target, name));
 

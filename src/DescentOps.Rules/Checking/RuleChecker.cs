@@ -165,6 +165,11 @@ public sealed class RuleChecker
                     return null;
                 }
 
+                if (!Readable(spec, state.Point))
+                {
+                    return null;
+                }
+
                 if (spec is not DiscretePointSpec discrete)
                 {
                     Error(DiagnosticCode.WrongPointKind, state.Point.Location, $"point '{spec.Name}' is numeric; compare it with above, below, inside or outside, not 'is'");
@@ -251,7 +256,14 @@ public sealed class RuleChecker
             return null;
         }
 
-        return numeric;
+        return Readable(spec, point) ? numeric : null;
+    }
+
+    private bool Readable(TelemetryPointSpec spec, NameSyntax point)
+    {
+        if (!spec.TrueStateOnly || _catalogue.ReadsTrueState) return true;
+        Error(DiagnosticCode.TrueStateOnly, point.Location, $"'{spec.Name}' is true state that no sensor reports: only a fault's 'when' may read it, not a rule");
+        return false;
     }
 
     private void UnknownPoint(NameSyntax point) =>

@@ -29,6 +29,7 @@ public enum DiagnosticCode
     NonPositiveDuration,
     ActuatorConflict,
     PlacementNotAllowed,
+    TrueStateOnly,
 
     // Meaning (checker), warnings: the rule set runs, but a rule can never act.
     ContradictoryBounds,
