@@ -18,12 +18,33 @@ internal static class CampaignFixture
         return dir;
     }
 
+    // One folder per test process under a shared parent: other worktrees run these tests on the same machine, so a
+    // process removes only the folders of processes that no longer exist, never another live run's.
     private static readonly Lazy<string> Root = new(() =>
     {
-        var root = Path.Combine(Path.GetTempPath(), "descentops-campaign-tests");
-        if (Directory.Exists(root)) Directory.Delete(root, recursive: true);
-        return root;
+        var parent = Path.Combine(Path.GetTempPath(), "descentops-campaign-test-runs");
+        Directory.CreateDirectory(parent);
+        foreach (var dir in Directory.GetDirectories(parent))
+        {
+            var alive = int.TryParse(Path.GetFileName(dir).Replace("pid", "", StringComparison.Ordinal), out var pid) && ProcessExists(pid);
+            if (!alive) Directory.Delete(dir, recursive: true);
+        }
+
+        return Path.Combine(parent, $"pid{Environment.ProcessId}");
     });
+
+    private static bool ProcessExists(int pid)
+    {
+        try
+        {
+            using var process = System.Diagnostics.Process.GetProcessById(pid);
+            return !process.HasExited;
+        }
+        catch (ArgumentException)
+        {
+            return false;
+        }
+    }
 
     private static readonly SemaphoreSlim Turn = new(1, 1);
 

@@ -23,7 +23,8 @@ namespace DescentOps.Physics.Tests.Descent;
 /// Further published tests found give a power and a speed or an efficiency but not the diameter (Colgan et al. 2023,
 /// Geosci. Instrum. Method. Data Syst. 12, 121: 35 % laboratory and 15 % field efficiency at 6 kW; Heinen et al. 2021,
 /// Ann. Glaciol.: 8.8 cm³/(W h) against an ideal 10.5-11.8; Winebrenner et al. 2014, AGU Fall Meeting: 2.2 kW for 400 m
-/// in some 120 h and 8 m/h at 4.5 kW; LaChapelle 1963, J. Glaciol. 4(35): 5-6 m/h at 220 W in temperate ice), a diameter
+/// in some 120 h and 8 m/h at 4.5 kW; LaChapelle 1963, J. Glaciol. 4(35): 5-6 m/h at 220 W in temperate ice; do Vale
+/// Pereira et al., laboratory probes in 79 K ice under vacuum and in 253 K ice: 5.3-59 cm/h at 120-1135 W), a diameter
 /// and speed but no power (Gillet 1975, J. Glaciol. 14(70): 25 mm holes at 15 m/h and more in temperate ice), or a
 /// diameter and length but no power or speed (Philberth 1972, CRREL TL 373: about 10 cm by 2 m). The model's head
 /// efficiency depends on the diameter (0.37 to 0.92 at 2 kW in temperate ice for radii of 2 to 8 cm), so none of them
