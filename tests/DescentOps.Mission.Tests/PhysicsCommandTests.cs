@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using System.Globalization;
 using System.Text.Json;
 using DescentOps.Mission.Probe;
@@ -225,8 +226,7 @@ public sealed class PhysicsCommandTests
     [Fact]
     public async Task A_probe_that_cannot_melt_has_no_crossing_time()
     {
-        var text = MissionHarness.DefaultText.Replace("  head_power: 6 kW", "  head_power: 20 W", StringComparison.Ordinal)
-            .Replace("  wall_power: 10 kW", "  wall_power: 0 W", StringComparison.Ordinal);
+        var text = TestScenario.Of(MissionHarness.DefaultText, "weak.yaml").Set("probe.head_power", "20 W").Set("probe.wall_power", "0 W").Text;
         var path = Path.Combine(ToolProcess.NewTempDirectory(), "weak.yaml");
         await File.WriteAllTextAsync(path, text);
         var c = await JsonAsync("crossing", path);
