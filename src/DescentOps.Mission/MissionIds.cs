@@ -12,5 +12,8 @@ public static class MissionIds
     public static ComponentId FaultInjector { get; } = new("fault-injector");
     public static ComponentId Autonomy { get; } = new("autonomy");
 
+    /// <summary>The link home several landers share (none in a single-lander scenario).</summary>
+    public static ComponentId LinkHome { get; } = new("link-home");
+
     public static ComponentId Vehicle(string name) => new("vehicle-" + name);
 }

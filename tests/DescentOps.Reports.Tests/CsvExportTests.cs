@@ -15,11 +15,12 @@ public sealed class CsvExportTests(RunLogs logs)
         var facts = LogFacts.Of(logs.DefaultLog);
 
         var events = CsvRows.Read(result.EventsPath);
-        Assert.Equal(["seq", "t_s", "source", "kind", "severity", "data"], events[0]);
+        Assert.Equal(["seq", "t_s", "source", "lander", "kind", "severity", "data"], events[0]);
         Assert.Equal(facts.Events, events.Count - 1);
-        var breakthrough = events.Single(r => r[3] == "probe.breakthrough");
+        var breakthrough = events.Single(r => r[4] == "probe.breakthrough");
+        Assert.Equal("", breakthrough[3]);
         Assert.Equal(facts.BreakthroughTS, double.Parse(breakthrough[1], CultureInfo.InvariantCulture));
-        using (var data = JsonDocument.Parse(breakthrough[5]))
+        using (var data = JsonDocument.Parse(breakthrough[6]))
         {
             Assert.Equal(2500.0, data.RootElement.GetProperty("depth_m").GetDouble());
         }

@@ -175,6 +175,53 @@ public sealed class LanderSectionTests
         Assert.Contains("landers", error.Message);
     }
 
+    [Fact]
+    public void Without_a_link_home_section_the_landers_share_one_channel_in_their_order()
+    {
+        var link = ScenarioLoader.LoadText(TwoLanders, "two-landers.yaml").LinkHome!;
+        Assert.Equal((1, Model.LinkPolicy.Priority), (link.Channels, link.Policy));
+        Assert.Equal(["tarn", "brack"], link.Priority);
+    }
+
+    [Fact]
+    public void A_contact_plan_is_read_with_its_windows_in_seconds()
+    {
+        var text = TwoLandersWith("run:\n", "link_home:\n  policy: contact_plan\n  priority: brack\n  repeat: 1 d\n  contact_plan:\n    - lander: tarn\n      from: 0 h\n      to: 8 h\n    - lander: brack\n      from: 8 h\n      to: 20 h\n\nrun:\n");
+        var link = ScenarioLoader.LoadText(text, "plan.yaml").LinkHome!;
+        Assert.Equal(Model.LinkPolicy.ContactPlan, link.Policy);
+        Assert.Equal(["brack", "tarn"], link.Priority);
+        Assert.Equal(86_400.0, link.RepeatS);
+        // 8 h = 28 800 s, 20 h = 72 000 s (unit arithmetic).
+        Assert.Equal([new Model.ContactWindowModel("tarn", 0, 28_800), new Model.ContactWindowModel("brack", 28_800, 72_000)], link.Windows);
+    }
+
+    [Fact]
+    public void A_contact_plan_with_more_windows_open_at_once_than_channels_is_refused_at_the_window()
+    {
+        var text = TwoLandersWith("run:\n", "link_home:\n  policy: contact_plan\n  contact_plan:\n    - lander: tarn\n      from: 0 h\n      to: 8 h\n    - lander: brack\n      from: 6 h\n      to: 20 h\n\nrun:\n");
+        var error = SingleError(text);
+        Assert.Equal("link_home.contact_plan[1]", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "- lander: brack"), error.Location.Line);
+        Assert.Contains("more than the 1 channel", error.Message);
+    }
+
+    [Fact]
+    public void A_contact_plan_window_of_no_lander_is_refused_where_it_stands()
+    {
+        var text = TwoLandersWith("run:\n", "link_home:\n  policy: contact_plan\n  contact_plan:\n    - lander: fell\n      from: 0 h\n      to: 8 h\n\nrun:\n");
+        var error = SingleError(text);
+        Assert.Equal("link_home.contact_plan[0].lander", error.FieldPath);
+        Assert.Equal(ScenarioText.LineOf(text, "- lander: fell"), error.Location.Line);
+    }
+
+    [Fact]
+    public void A_link_home_without_landers_is_refused()
+    {
+        var text = ScenarioText.DefaultWith("\nrun:\n", "\nlink_home:\n  channels: 2\n\nrun:\n");
+        var error = SingleError(text);
+        Assert.Equal("link_home", error.FieldPath);
+    }
+
     private static int NthLineOf(string text, string fragment, int n) =>
         text.Split('\n').Select((l, i) => (l, i)).Where(x => x.l.Contains(fragment, StringComparison.Ordinal)).ElementAt(n - 1).i + 1;
 }

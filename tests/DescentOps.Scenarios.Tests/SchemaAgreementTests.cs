@@ -71,6 +71,11 @@ public sealed class SchemaAgreementTests
         var link = (YamlMappingNode)station.Children.Single(kv => ((YamlScalarNode)kv.Key).Value == "link").Value;
         link.Children.Remove(link.Children.Single(kv => ((YamlScalarNode)kv.Key).Value == "latitude").Key);
         root.Add("landers", new YamlSequenceNode(lander));
+        root.Add("link_home", new YamlMappingNode
+        {
+            { "channels", "1" }, { "policy", "contact_plan" }, { "priority", "tarn" }, { "repeat", "1 d" },
+            { "contact_plan", new YamlSequenceNode(new YamlMappingNode { { "lander", "tarn" }, { "from", "0 h" }, { "to", "12 h" } }) },
+        });
         var writer = new StringWriter();
         stream.Save(writer, assignAnchors: false);
         return writer.ToString();

@@ -19,13 +19,14 @@ public static class EventsCommand
         var severityOption = new Option<Severity>("--severity", "-l") { Description = "Lowest severity shown: debug, info, notice, warning, alarm, critical.", DefaultValueFactory = _ => Severity.Debug, HelpName = "LEVEL" };
         var fromOption = new Option<string?>("--from") { Description = "Start of the time window, simulated time with a unit (e.g. '40 d').", HelpName = "TIME" };
         var toOption = new Option<string?>("--to") { Description = "End of the time window, inclusive (e.g. '41 d').", HelpName = "TIME" };
+        var landerOption = new Option<string[]>("--lander") { Description = "Only the events of this lander of a run with landers (repeatable).", AllowMultipleArgumentsPerToken = true, HelpName = "NAME" };
         var fieldOption = new Option<string?>("--point") { Description = "Only events that carry this data field or telemetry point (e.g. depth_m).", HelpName = "FIELD" };
         var formatOption = new Option<string>("--format") { Description = "table (default), jsonl (the original log lines) or clef (Compact Log Event Format, for structured-log viewers).", DefaultValueFactory = _ => "table", HelpName = "table|jsonl|clef" };
         formatOption.AcceptOnlyFromAmong("table", "jsonl", "clef");
         var epochOption = new Option<string?>("--epoch") { Description = "For clef: the date and time that simulated time zero is shown at (ISO 8601; default 1970-01-01T00:00:00Z).", HelpName = "DATE" };
         var command = new Command("events", "Filter and print the events of a log.")
         {
-            logArgument, kindOption, sourceOption, severityOption, fromOption, toOption, fieldOption, formatOption, epochOption,
+            logArgument, kindOption, sourceOption, landerOption, severityOption, fromOption, toOption, fieldOption, formatOption, epochOption,
         };
         command.SetAction(parse =>
         {
@@ -36,7 +37,10 @@ public static class EventsCommand
                 parse.GetValue(severityOption),
                 Seconds(parse.GetValue(fromOption), "--from") ?? double.NegativeInfinity,
                 Seconds(parse.GetValue(toOption), "--to") ?? double.PositiveInfinity,
-                parse.GetValue(fieldOption));
+                parse.GetValue(fieldOption))
+            {
+                Landers = parse.GetValue(landerOption) ?? [],
+            };
             var epoch = Epoch(parse.GetValue(epochOption));
             var format = parse.GetValue(formatOption) switch
             {

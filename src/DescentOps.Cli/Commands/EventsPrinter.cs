@@ -53,7 +53,7 @@ public static class EventsPrinter
         }
 
         if (noteTruncation && truncated is { } cut) notes.WriteLine($"note: the log is truncated at line {cut}; events up to its last intact line are shown.");
-        if (count == 0 && (filter.Kinds.Count > 0 || filter.Sources.Count > 0)) notes.WriteLine(WhatExists(path, filter));
+        if (count == 0 && (filter.Kinds.Count > 0 || filter.Sources.Count > 0 || filter.Landers.Count > 0)) notes.WriteLine(WhatExists(path, filter));
         return new Result(count, ReaderGone: false, truncated);
     }
 
@@ -63,8 +63,10 @@ public static class EventsPrinter
         ArgumentNullException.ThrowIfNull(filter);
         var kinds = new SortedDictionary<string, long>(StringComparer.Ordinal);
         var sources = new SortedDictionary<string, long>(StringComparer.Ordinal);
+        var landers = new SortedDictionary<string, long>(StringComparer.Ordinal);
         foreach (var (entry, _) in JournalQuery.Events(path, EventFilter.All))
         {
+            if (EventFilter.LanderOf(entry) is { } lander) landers[lander] = landers.GetValueOrDefault(lander) + 1;
             kinds[entry.Kind] = kinds.GetValueOrDefault(entry.Kind) + 1;
             sources[entry.Source] = sources.GetValueOrDefault(entry.Source) + 1;
         }
@@ -78,6 +80,13 @@ public static class EventsPrinter
         if (filter.Sources.Count > 0 && !filter.Sources.Any(s => sources.Keys.Any(known => new EventFilter([], [s]).MatchesSource(known))))
         {
             lines.Add($"note: no event from source {string.Join(", ", filter.Sources)} in this log; its sources are: {List(sources)}");
+        }
+
+        if (filter.Landers.Count > 0 && !filter.Landers.Any(landers.ContainsKey))
+        {
+            lines.Add(landers.Count == 0
+                ? $"note: no event of lander {string.Join(", ", filter.Landers)}: this run has no landers"
+                : $"note: no event of lander {string.Join(", ", filter.Landers)} in this log; its landers are: {List(landers)}");
         }
 
         if (lines.Count == 0)

@@ -82,7 +82,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("command", timed.Command.ToString()),
             RecordField.Of("origin", timed.Origin),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(_ids.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
+        Uplink(context, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
     }
 
     /// <summary>
@@ -98,7 +98,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("ground_rules", groundRules),
             RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(_ids.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
+        Uplink(context, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
         return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
     }
 
@@ -131,9 +131,19 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     {
         foreach (var command in commands)
         {
-            context.Schedule(_ids.Station, _uplink, command, MissionPriority.Command);
+            Uplink(context, command, MissionPriority.Command);
         }
 
         return _rules.Rearm(pendingWake, context, RulesWake.Instance);
+    }
+
+    /// <summary>
+    /// A command on its way up: alone, to the station one uplink later; one of several landers, to the shared link home,
+    /// which sends it at the lander's turn (and adds the light time).
+    /// </summary>
+    private void Uplink(ComponentContext context, Telecommand command, Engine.Scheduling.EventPriority priority)
+    {
+        if (_ids.Lander is { } lander) context.Schedule(MissionIds.LinkHome, SimDuration.Zero, new UplinkBound(lander, command), priority);
+        else context.Schedule(_ids.Station, _uplink, command, priority);
     }
 }

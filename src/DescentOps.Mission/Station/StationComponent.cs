@@ -27,10 +27,12 @@ public sealed class StationComponent : SimComponent<StationState>
 
     private readonly StationModel _station;
     private readonly LanderIds _ids;
+    private readonly bool _shared;
     private readonly SimDuration _delayHome;
     private readonly SimDuration _forwarding;
     private readonly StationDose? _dose;
     private readonly HomeLink _link;
+    private readonly HomeLink _siteLink;
 
     /// <summary>Whether frames and commands go through the queues: only when windows or upsets (discharges or faults) can hold them up.</summary>
     private readonly bool _queued;
@@ -40,12 +42,18 @@ public sealed class StationComponent : SimComponent<StationState>
     {
         _ids = ids ?? LanderIds.Single;
         _station = scenario.Station;
-        _link = new HomeLink(scenario);
-        OneWayLightTimeS = _link.OneWayLightTimeS;
+        _siteLink = new HomeLink(scenario);
+        OneWayLightTimeS = _siteLink.OneWayLightTimeS;
         _delayHome = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS + OneWayLightTimeS);
         _forwarding = SimDuration.FromSeconds(scenario.Station.ForwardingDelayS);
         _dose = scenario.Station.Radiation is { } radiation ? new StationDose(radiation) : null;
-        _queued = scenario.Station.Link is not null || scenario.Station.Charging is not null || scenario.Faults.Any(f => f.Kind == FaultKind.StationUpset);
+        // A lander of several hands its frames to the shared link home, which holds them for the lander's turn and
+        // sees the station's windows; the station itself then only forwards.
+        _shared = _ids.Lander is not null;
+        // With several landers the shared link home sees the windows; the station's own queue then holds only what
+        // arrives while it recovers from a reset, as if home were always in view.
+        _link = _shared ? new HomeLink(scenario with { Station = scenario.Station with { Link = null } }) : _siteLink;
+        _queued = (scenario.Station.Link is not null && !_shared) || scenario.Station.Charging is not null || scenario.Faults.Any(f => f.Kind == FaultKind.StationUpset);
     }
 
     public double OneWayLightTimeS { get; }
@@ -53,7 +61,7 @@ public sealed class StationComponent : SimComponent<StationState>
     /// <summary>The station's dose model, or null when the scenario gives no radiation.</summary>
     public StationDose? Dose => _dose;
 
-    public HomeLink Link => _link;
+    public HomeLink Link => _siteLink;
 
     public override StationState InitialState => new(false, 0, 0, null, null, [], 0, [], 0, null, SimTime.Epoch, null, 0, 0);
 
@@ -73,6 +81,9 @@ public sealed class StationComponent : SimComponent<StationState>
             }
             case TelemetryFrame frame when _queued:
                 return Pump(Enqueue(state, frame, context), context);
+            case TelemetryFrame frame when _shared:
+                context.Schedule(MissionIds.LinkHome, _forwarding, new HomeBound(_ids.Lander!, frame), MissionPriority.Telemetry);
+                return state with { FramesForwarded = state.FramesForwarded + 1 };
             case TelemetryFrame frame:
                 context.Schedule(_ids.Ground, _delayHome, frame, MissionPriority.Telemetry);
                 return state with { FramesForwarded = state.FramesForwarded + 1 };
@@ -105,11 +116,13 @@ public sealed class StationComponent : SimComponent<StationState>
                 context.Record(StationRecords.Failed, Severity.Critical,
                     RecordField.Of("fault", fault.Fault.Name),
                     RecordField.Of("frames_forwarded", state.FramesForwarded));
+                TellLink(new StationDown(_ids.Lander ?? ""), context);
                 return DropQueues(state, "station failed", context) with { Failed = true, FailureCause = "fault" };
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } when state.FailureCause == "dose":
                 return state;
             case FaultCleared { Fault.Kind: FaultKind.StationFailure } fault:
                 context.Record(StationRecords.Recovered, Severity.Notice, RecordField.Of("fault", fault.Fault.Name));
+                TellLink(new StationUp(_ids.Lander ?? ""), context);
                 return state with { Failed = false, FailureCause = null };
             default:
                 throw new InvalidOperationException($"The station cannot handle {message.GetType().Name}.");
@@ -142,12 +155,12 @@ public sealed class StationComponent : SimComponent<StationState>
         if (_station.Link is not null)
         {
             context.Record(StationRecords.Link, Severity.Info,
-                RecordField.Of("in_view_fraction", _link.InViewFraction),
-                RecordField.Of("occultation_per_turn_s", _link.OccultationPerTurnS),
-                RecordField.Of("open_fraction", _link.Windows!.OpenFraction),
-                RecordField.Of("data_rate_bit_s", _link.DataRateBitPerS),
-                RecordField.Of("frame_time_s", _link.FrameTimeS),
-                RecordField.Of("open_now", _link.IsOpen(0.0)));
+                RecordField.Of("in_view_fraction", _siteLink.InViewFraction),
+                RecordField.Of("occultation_per_turn_s", _siteLink.OccultationPerTurnS),
+                RecordField.Of("open_fraction", _siteLink.Windows!.OpenFraction),
+                RecordField.Of("data_rate_bit_s", _siteLink.DataRateBitPerS),
+                RecordField.Of("frame_time_s", _siteLink.FrameTimeS),
+                RecordField.Of("open_now", _siteLink.IsOpen(0.0)));
         }
 
         if (_station.Dwell is { } dwell)
@@ -276,7 +289,8 @@ public sealed class StationComponent : SimComponent<StationState>
         if (context.Now < head.ReadyAt || _link.NextFrameStartS(nowS) > nowS) return state;
 
         var onAir = SimDuration.FromSeconds(_link.FrameTimeS);
-        context.Schedule(_ids.Ground, onAir + SimDuration.FromSeconds(OneWayLightTimeS), head.Frame, MissionPriority.Telemetry);
+        if (_shared) context.Schedule(MissionIds.LinkHome, SimDuration.Zero, new HomeBound(_ids.Lander!, head.Frame), MissionPriority.Telemetry);
+        else context.Schedule(_ids.Ground, onAir + SimDuration.FromSeconds(OneWayLightTimeS), head.Frame, MissionPriority.Telemetry);
         return state with
         {
             Frames = state.Frames.Dequeue(),
@@ -295,7 +309,14 @@ public sealed class StationComponent : SimComponent<StationState>
             RecordField.Of("failure_dose_gy_si", limit.FailureDoseGy),
             RecordField.Of("frames_forwarded", state.FramesForwarded),
             RecordField.Of("already_failed", state.Failed));
+        if (!state.Failed) TellLink(new StationDown(_ids.Lander ?? ""), context);
         return DropQueues(state, "station failed", context) with { Failed = true, FailureCause = "dose" };
+    }
+
+    /// <summary>The shared link home learns of this station's death or return (only with several landers).</summary>
+    private void TellLink(object message, ComponentContext context)
+    {
+        if (_shared) context.Schedule(MissionIds.LinkHome, SimDuration.Zero, message, MissionPriority.Fault);
     }
 
     /// <summary>What waits at a station that dies is lost with it, and counted.</summary>

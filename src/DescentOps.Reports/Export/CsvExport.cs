@@ -7,7 +7,9 @@ namespace DescentOps.Reports.Export;
 
 /// <summary>
 /// Writes a log as two CSV files into a folder: <c>events.csv</c> (every event, its data as one JSON cell) and
-/// <c>telemetry.csv</c> (one row per <c>probe.telemetry</c> event, one column per field) for spreadsheets.
+/// <c>telemetry.csv</c> (one row per <c>probe.telemetry</c> event, one column per field) for spreadsheets. In a run with
+/// landers, <c>events.csv</c>'s <c>lander</c> column names each event's lander (empty for the shared link's own events
+/// and in runs without landers), and <c>telemetry.csv</c> has the probe records' <c>lander</c> field as a column.
 /// </summary>
 public static class CsvExport
 {
@@ -35,14 +37,14 @@ public static class CsvExport
         AtomicFile.Write(eventsPath, partial =>
         {
             using var output = new StreamWriter(partial, append: false, Utf8, 1 << 16);
-            output.Write(CsvText.Row(["seq", "t_s", "source", "kind", "severity", "data"]));
+            output.Write(CsvText.Row(["seq", "t_s", "source", "lander", "kind", "severity", "data"]));
             using var reader = Open(logPath, progress, from: 0);
             foreach (var e in reader.ReadAll().OfType<EventEntry>())
             {
                 events++;
                 output.Write(CsvText.Row([
                     e.Sequence.ToString(CultureInfo.InvariantCulture), DataJson.Number(e.TimeSeconds), CsvText.Cell(e.Source),
-                    CsvText.Cell(e.Kind), e.Severity.ToString().ToLowerInvariant(), CsvText.Cell(DataJson.Of(e.Data))]));
+                    CsvText.Cell(Journal.Querying.EventFilter.LanderOf(e) ?? ""), CsvText.Cell(e.Kind), e.Severity.ToString().ToLowerInvariant(), CsvText.Cell(DataJson.Of(e.Data))]));
                 if (e.Kind != TelemetryKind) continue;
                 foreach (var f in e.Data)
                 {

@@ -23,6 +23,24 @@ public static class LanderFormat
     /// <summary>On a fault: the lander it strikes.</summary>
     public static TextField FaultLander { get; } = new("lander", "With landers: the lander whose components the fault strikes (may be omitted when there is one lander).", Required: false, IsIdentifier: true);
 
+    /// <summary>The link home the landers share (with landers only).</summary>
+    public static SectionField LinkHome { get; } = new("link_home", "With landers: how the ground's antenna time is shared. Frames wait at each station for its turn; what a station's store cannot hold is lost and logged. Default: one channel, by priority in the landers' order.",
+    [
+        new IntegerField("channels", "Stations the ground hears at once (default 1).", 1, MaxLanders, Required: false),
+        new ChoiceField("policy", "priority (default): a free channel goes to the first lander in 'priority' with frames waiting; contact_plan: each lander sends in its windows, and a dead station's windows go to the others by priority.", ["priority", "contact_plan"], Required: false),
+        new TextField("priority", "Landers in order of precedence, comma-separated (default: the landers' order); landers not named come after, in their order.", Required: false),
+        new QuantityField("repeat", "For contact_plan: the plan repeats with this period (default: it does not; outside its windows nobody sends).", Duration, 60, 1000 * Day, Required: false),
+        new ListField("contact_plan", "For contact_plan: the windows, each a lander and a span of run time (of each period when the plan repeats).", new SectionField("window", "One window of the contact plan.",
+        [
+            new TextField("lander", "The lander that sends in this window.", IsIdentifier: true),
+            new QuantityField("from", "Start of the window.", Duration, 0, 1000 * Year),
+            new QuantityField("to", "End of the window.", Duration, 0, 1000 * Year, MinExclusive: true),
+        ]), MinItems: 1, MaxItems: 10_000, Required: false),
+    ], Required: false);
+
+    private const double Day = 86_400;
+    private const double Year = 365.25 * Day;
+
     /// <summary><paramref name="root"/> with the landers list inserted before the faults, and the lander's own sections optional at the top.</summary>
     public static SectionField Attach(SectionField root)
     {
@@ -39,7 +57,7 @@ public static class LanderFormat
         var fields = new List<FieldSpec>();
         foreach (var field in root.Fields)
         {
-            if (field.Name == "faults") fields.Add(landers);
+            if (field.Name == "faults") fields.AddRange([landers, LinkHome]);
             fields.Add(RequiredSections.Contains(field.Name) ? field with { Required = false } : field);
         }
 

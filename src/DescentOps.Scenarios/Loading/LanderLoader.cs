@@ -36,6 +36,11 @@ internal static partial class LanderLoader
             }
         }
 
+        if (root.OptionalSection("link_home") is { } shared)
+        {
+            errors.Add(new ScenarioError(shared.Location, "link_home", "the link home is shared among landers: this scenario has no 'landers' list"));
+        }
+
         if (root.OptionalSection("station")?.OptionalSection("link") is { } link && link.OptionalQuantity("latitude") is null)
         {
             errors.Add(new ScenarioError(link.Location, "station.link.latitude", "missing required field (the station's latitude)"));
@@ -92,12 +97,14 @@ internal static partial class LanderLoader
             faults.AddRange(faultIndices.Select((k, n) => (k, scenario.Faults[n])));
         }
 
+        var linkHome = LinkHome(root.OptionalSection("link_home"), names, errors);
         ThrowIfAny(errors);
         var first = models[0].View;
         var whole = first with
         {
             Faults = [.. faults.OrderBy(x => x.Index).Select(x => x.Fault)],
             Landers = models,
+            LinkHome = linkHome,
             FieldLocations = locations,
         };
         whole = Campaign.CampaignSections.Read(whole, root, text, errors);
@@ -137,6 +144,69 @@ internal static partial class LanderLoader
                 errors.Add(new ScenarioError(faults[i].LocationOf("lander"), $"faults[{i}].lander", $"there is no lander named '{lander}' (landers: {string.Join(", ", names)})"));
             }
         }
+    }
+
+    /// <summary>The link_home section: names that are landers, a policy with what it needs, and a plan that fits the channels.</summary>
+    private static LinkHomeModel LinkHome(BoundSection? section, IReadOnlyList<string> names, List<ScenarioError> errors)
+    {
+        if (section is null) return LinkHomeModel.Default(names);
+        var channels = (int)(section.OptionalInteger("channels") ?? 1);
+        var policy = section.OptionalText("policy") == "contact_plan" ? LinkPolicy.ContactPlan : LinkPolicy.Priority;
+        var named = section.OptionalText("priority") is { } text ? text.Split(',', StringSplitOptions.TrimEntries) : [];
+        foreach (var name in named.Where(n => !names.Contains(n)).Distinct())
+        {
+            errors.Add(new ScenarioError(section.LocationOf("priority"), "link_home.priority", $"'{name}' is not a lander (landers: {string.Join(", ", names)})"));
+        }
+
+        foreach (var name in named.GroupBy(n => n).Where(g => g.Count() > 1).Select(g => g.Key))
+        {
+            errors.Add(new ScenarioError(section.LocationOf("priority"), "link_home.priority", $"'{name}' is named twice"));
+        }
+
+        var priority = named.Where(names.Contains).Distinct().Concat(names.Where(n => !named.Contains(n))).ToList();
+        var repeat = section.OptionalQuantity("repeat");
+        var items = section.List("contact_plan");
+        var windows = items.Select(w => new ContactWindowModel(w.Text("lander"), w.Quantity("from"), w.Quantity("to"))).ToList();
+        if (policy == LinkPolicy.ContactPlan && items.Count == 0)
+        {
+            errors.Add(new ScenarioError(section.LocationOf("policy"), "link_home.contact_plan", "policy contact_plan needs its contact_plan windows"));
+        }
+
+        if (policy == LinkPolicy.Priority && (items.Count > 0 || repeat is not null))
+        {
+            errors.Add(new ScenarioError(section.LocationOf(items.Count > 0 ? "contact_plan" : "repeat"), "link_home.policy", "a contact plan (and its repeat) belongs to policy contact_plan"));
+        }
+
+        for (var i = 0; i < windows.Count; i++)
+        {
+            var w = windows[i];
+            var path = $"link_home.contact_plan[{i}]";
+            if (!names.Contains(w.Lander)) errors.Add(new ScenarioError(items[i].LocationOf("lander"), $"{path}.lander", $"there is no lander named '{w.Lander}'"));
+            if (w.ToS <= w.FromS) errors.Add(new ScenarioError(items[i].LocationOf("to"), $"{path}.to", "a window ends after it starts"));
+            if (repeat is { } period && w.ToS > period) errors.Add(new ScenarioError(items[i].LocationOf("to"), $"{path}.to", "a window of a repeating plan ends within its period"));
+            for (var j = 0; j < i; j++)
+            {
+                if (windows[j].Lander == w.Lander && w.FromS < windows[j].ToS && windows[j].FromS < w.ToS)
+                {
+                    errors.Add(new ScenarioError(items[i].Location, path, $"overlaps window {j} of the same lander"));
+                }
+            }
+        }
+
+        // More windows open at once than there are channels: found by a sweep over the window edges, ends before starts.
+        var edges = windows.Select((w, i) => (At: w.FromS, Step: 1, Index: i)).Concat(windows.Select((w, i) => (At: w.ToS, Step: -1, Index: i))).OrderBy(e => e.At).ThenBy(e => e.Step);
+        var open = 0;
+        foreach (var edge in edges)
+        {
+            open += edge.Step;
+            if (open > channels)
+            {
+                errors.Add(new ScenarioError(items[edge.Index].Location, $"link_home.contact_plan[{edge.Index}]", $"{open} windows are open at once from {edge.At.ToString("G6", CultureInfo.InvariantCulture)} s, more than the {channels} channel(s)"));
+                break;
+            }
+        }
+
+        return new LinkHomeModel(channels, policy, priority, windows, repeat);
     }
 
     /// <summary>A view's field path as the file's: a lander's own section under the lander, a fault at its place in the whole list.</summary>

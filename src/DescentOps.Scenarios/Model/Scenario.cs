@@ -47,6 +47,9 @@ public sealed record Scenario(
     /// </summary>
     public IReadOnlyList<LanderModel> Landers { get; init; } = [];
 
+    /// <summary>The link home the landers share; null without landers.</summary>
+    public LinkHomeModel? LinkHome { get; init; }
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {

@@ -19,13 +19,16 @@ public sealed class LanderRunTests
         var (_, sink) = await MissionHarness.RunAsync(scenario);
 
         Assert.NotEmpty(sink.Records);
-        foreach (var record in sink.Records.Where(r => r.Kind != "run.inputs"))
+        foreach (var record in sink.Records.Where(r => r.Source != MissionIds.LinkHome))
         {
             var lander = record.Source.Name.Split('/')[0];
             Assert.Contains(lander, LanderNames);
             Assert.Equal(LanderTagSink.Field, record.Fields[0].Name);
             Assert.Equal(lander, record.Fields[0].Text);
         }
+
+        // The shared link's records about a lander name it first too.
+        Assert.All(sink.Records.Where(r => r.Source == MissionIds.LinkHome && r.Kind != Records.Kinds.LinkHomeRecords.Started), r => Assert.Equal("lander", r.Fields[0].Name));
 
         // Both landers ran their probe, tether and station, and tarn its vehicle, each under its own id.
         var sources = sink.Records.Select(r => r.Source.Name).ToHashSet(StringComparer.Ordinal);
@@ -41,7 +44,8 @@ public sealed class LanderRunTests
         const double Days = 2;
         var parts = lander == "tarn" ? LanderTexts.TarnParts : LanderTexts.BrackParts;
         var alone = ScenarioLoader.LoadText(LanderTexts.Single(site, parts, withFault, Days), "alone.yaml");
-        var together = ScenarioLoader.LoadText(LanderTexts.Two(Days), "two.yaml");
+        // Two channels for two landers: neither ever waits for the other.
+        var together = ScenarioLoader.LoadText(LanderTexts.Two(Days, "link_home:\n  channels: 2\n"), "two.yaml");
 
         var (_, single) = await MissionHarness.RunAsync(alone);
         var (_, both) = await MissionHarness.RunAsync(together);
@@ -67,6 +71,39 @@ public sealed class LanderRunTests
         var actors = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
         Assert.True(sequential.Length > 100_000, "a day of two landers' frames");
         Assert.Equal(sequential, actors);
+    }
+
+    [Fact]
+    public async Task Under_a_contact_plan_each_lander_sends_only_in_its_windows_and_its_ledger_closes_at_every_frame()
+    {
+        const double Hour = 3600;
+        var plan = "link_home:\n  policy: contact_plan\n  repeat: 12 h\n  contact_plan:\n    - lander: tarn\n      from: 0 h\n      to: 6 h\n    - lander: brack\n      from: 6 h\n      to: 12 h\n";
+        var scenario = ScenarioLoader.LoadText(LanderTexts.Two(days: 2, plan), "plan.yaml");
+        var (_, sink) = await MissionHarness.RunAsync(scenario);
+
+        var sent = sink.OfKind(Records.Kinds.LinkHomeRecords.Sent).ToList();
+        foreach (var lander in LanderNames)
+        {
+            var own = sent.Where(r => CollectingSink.TextField(r, "lander") == lander).ToList();
+            Assert.NotEmpty(own);
+            for (var k = 0; k < own.Count; k++)
+            {
+                var local = own[k].Time.SecondsSinceEpoch % (12 * Hour);
+                Assert.True(lander == "tarn" ? local < 6 * Hour : local >= 6 * Hour, $"{lander} sent at {own[k].Time.SecondsSinceEpoch / Hour:F2} h");
+                Assert.Equal(k + 1, CollectingSink.IntegerField(own[k], "frames_sent"));
+                Assert.Equal(
+                    CollectingSink.IntegerField(own[k], "frames_offered"),
+                    CollectingSink.IntegerField(own[k], "frames_sent") + CollectingSink.IntegerField(own[k], "frames_lost") + CollectingSink.IntegerField(own[k], "frames_queued"));
+            }
+
+            // What the link sent reached the lander's desk one light time later (about an hour), unless the run ended first.
+            var lightS = CollectingSink.Field(sink.OfKind(Records.Kinds.LinkHomeRecords.Started).Single(), "one_way_light_time_s");
+            var delivered = own.Count(r => r.Time.SecondsSinceEpoch + lightS <= scenario.Run.UntilS);
+            Assert.Equal(delivered, sink.Records.Count(r => r.Source.Name == $"{lander}/ground" && r.Kind == Records.Kinds.GroundRecords.Telemetry));
+        }
+
+        // Frames wait for their window: the first six hours of brack's frames go together at 6 h.
+        Assert.True(sent.Count(r => r.Time.SecondsSinceEpoch == 6 * Hour && CollectingSink.TextField(r, "lander") == "brack") >= 20);
     }
 
     private static string Line(JournalRecord r) =>
