@@ -32,6 +32,8 @@ public sealed class RunLog
         VehiclesLost = digest.VehiclesLost;
         LastTelemetry = digest.LastTelemetry;
         BreakthroughTimeS = digest.BreakthroughTimeS;
+        Landers = [.. digest.Landers.Values];
+        SharedLink = digest.SharedLink.Channels > 0 ? digest.SharedLink : null;
         _series = digest.Series.ToDictionary(p => p.Key, p => p.Value.Lines());
     }
 
@@ -76,6 +78,12 @@ public sealed class RunLog
 
     public double? BreakthroughTimeS { get; }
 
+    /// <summary>Each lander's figures in a run with landers, in order of first appearance; empty for one lander.</summary>
+    public IReadOnlyList<LanderFigures> Landers { get; }
+
+    /// <summary>The shared link home's figures in a run with landers; null for one lander.</summary>
+    public SharedLinkFigures? SharedLink { get; }
+
     /// <summary>The lines of one series; a definition not gathered at load is read in a further streaming pass.</summary>
     public IReadOnlyList<PlotSeries> Series(SeriesDefinition definition)
     {
@@ -97,11 +105,11 @@ public sealed class RunLog
 
     /// <summary>Reads the log once, gathering the series of the default plots.</summary>
     /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
-    public static RunLog Load(string path) => Load(path, ReportPlots.Default.SelectMany(p => p.Series));
+    public static RunLog Load(string path) => Load(path, ReportPlots.Gathered);
 
     /// <summary>Reads the log once, gathering the series of the default plots and reporting the share read.</summary>
     /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
-    public static RunLog Load(string path, Action<double>? progress) => Load(path, ReportPlots.Default.SelectMany(p => p.Series), progress);
+    public static RunLog Load(string path, Action<double>? progress) => Load(path, ReportPlots.Gathered, progress);
 
     /// <summary>Reads the log once, gathering the given series.</summary>
     /// <exception cref="InvalidDataException">The log has no intact manifest or a malformed line.</exception>
@@ -162,9 +170,20 @@ public sealed class RunLog
 
         public double? BreakthroughTimeS { get; private set; }
 
+        public Dictionary<string, LanderFigures> Landers { get; } = new(StringComparer.Ordinal);
+
+        public SharedLinkFigures SharedLink { get; } = new();
+
         public void Add(EventEntry e)
         {
             EventCount++;
+            if (Journal.Querying.EventFilter.LanderOf(e) is { } lander)
+            {
+                if (!Landers.TryGetValue(lander, out var figures)) Landers[lander] = figures = new LanderFigures(lander);
+                figures.Add(e);
+            }
+
+            SharedLink.Add(e);
             LastEventTimeS = e.TimeSeconds;
             foreach (var collector in Series.Values) collector.Add(e);
             Timeline.Add(e);

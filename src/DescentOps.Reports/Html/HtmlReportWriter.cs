@@ -49,6 +49,7 @@ public sealed class HtmlReportWriter
         var unit = TimeUnit.For(log.LengthS);
         if (log.IsTruncated) Truncation(log);
         Outcome(log, unit);
+        Landers(log, unit);
         Plots(plots, unit);
         NotableEvents(log, unit);
         Inputs(log);
@@ -57,6 +58,42 @@ public sealed class HtmlReportWriter
         Line($"<footer><p>Made by {E(generator)} from {E(Path.GetFileName(log.Path))}; figures come from the log alone.</p></footer>");
         Line("</body>");
         Line("</html>");
+    }
+
+    /// <summary>A run with landers: a section for each lander's figures, and one for the link they share.</summary>
+    private void Landers(RunLog log, TimeUnit unit)
+    {
+        if (log.Landers.Count == 0) return;
+        Line("<section id=\"landers\">");
+        Line("<h2>Landers</h2>");
+        foreach (var lander in log.Landers)
+        {
+            Line($"<section id=\"lander-{E(lander.Name)}\">");
+            Line($"<h3>{E(lander.Name)}</h3>");
+            Line("<dl>");
+            Pair("final depth", lander.FinalDepthM is { } depth ? F(depth, "0.0") + " m" + (lander.FinalRegime is { } regime ? $" ({regime})" : "") : "no frame");
+            Pair("breakthrough", lander.BreakthroughTimeS is { } b ? unit.Format(b) + " " + unit.Symbol : "not reached");
+            Pair("frames", $"{N(lander.FramesSent)} sent, {N(lander.FramesOnGround)} heard by the team, {N(lander.FramesLost)} lost");
+            Pair("last heard", lander.LastHeardS is { } heard ? unit.Format(heard) + " " + unit.Symbol : "never");
+            Pair("faults injected", N(lander.FaultsInjected) + (lander.StationFailed ? "; its station failed" : ""));
+            Line("</dl>");
+            Line("</section>");
+        }
+
+        if (log.SharedLink is { } link)
+        {
+            Line("<section id=\"shared-link\">");
+            Line("<h3>The shared link home</h3>");
+            Line("<dl>");
+            Pair("channels", $"{N(link.Channels)} ({link.Policy.Replace('_', ' ')})");
+            Pair("frames carried", N(link.FramesCarried));
+            Pair("channel use", F(100 * link.Use(log.LengthS), "0.###") + " % of the channels' time on the air");
+            Pair("most channels busy at once", N(link.MostBusy));
+            Line("</dl>");
+            Line("</section>");
+        }
+
+        Line("</section>");
     }
 
     private void Truncation(RunLog log)

@@ -15,7 +15,7 @@ public static class PostMortemReport
     {
         ArgumentNullException.ThrowIfNull(log);
         var timeline = FaultTimeline.Of(log);
-        var rendered = (plots ?? ReportPlots.Default).Select(p => SvgPlotRenderer.Render(log, p, timeline)).ToList();
+        var rendered = (plots ?? ReportPlots.For(log)).Select(p => SvgPlotRenderer.Render(log, p, timeline)).ToList();
         AtomicFile.Write(outputPath, partial =>
         {
             using var stream = new FileStream(partial, FileMode.CreateNew, FileAccess.Write, FileShare.None, 1 << 16);

@@ -17,12 +17,13 @@ internal sealed class SeriesCollector(SeriesDefinition definition)
     {
         if (!string.Equals(e.Kind, definition.Kind, StringComparison.Ordinal)) return;
         if (!SeriesExtractor.TryValue(e.Data, definition.Field, out var value) || !double.IsFinite(value)) return;
-        var key = definition.PerSource ? e.Source : "";
+        var lander = definition.PerLander ? Journal.Querying.EventFilter.LanderOf(e) : null;
+        var key = definition.PerSource ? e.Source : lander ?? "";
         if (!_bySource.TryGetValue(key, out var index))
         {
             index = _lines.Count;
             _bySource[key] = index;
-            _lines.Add((definition.PerSource ? HumanText.Source(e.Source) : definition.Label, new PointBuffer(), new PointBuffer()));
+            _lines.Add((definition.PerSource ? HumanText.Source(e.Source) : lander is null ? definition.Label : $"{definition.Label} ({lander})", new PointBuffer(), new PointBuffer()));
         }
 
         _lines[index].Days.Add(e.TimeSeconds / SecondsPerDay);

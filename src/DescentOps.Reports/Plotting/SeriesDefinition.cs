@@ -9,4 +9,6 @@ namespace DescentOps.Reports.Plotting;
 /// <param name="Label">The legend text; ignored when <paramref name="PerSource"/>, where each source names its line.</param>
 /// <param name="Scale">Multiplies every value, to show SI fields in operator units (W to kW, J to MWh).</param>
 /// <param name="PerSource">One line per source component (each vehicle its own battery line) instead of one line.</param>
-public sealed record SeriesDefinition(string Kind, string Field, string Label, double Scale = 1.0, bool PerSource = false);
+/// <param name="PerLander">In a run with landers, one line per lander (by the records' <c>lander</c> field), labelled
+/// "label (lander)"; a run without landers draws its one line as before.</param>
+public sealed record SeriesDefinition(string Kind, string Field, string Label, double Scale = 1.0, bool PerSource = false, bool PerLander = false);
