@@ -390,6 +390,7 @@ public static class ScenarioLoader
         {
             FieldLocations = locations,
             AddTelecommands = Telecommands(root.List("add_telecommands"), "add_telecommands"),
+            AddFaultLanders = [.. added.Select(f => f.OptionalText("lander"))],
             RuleUplinks = [.. root.List("uplink_rules").Select((u, i) => new RuleUplinkModel(u.Quantity("at"), Rules(u, text), $"uplink_rules[{i}]")).OrderBy(u => u.AtS)],
         };
     }
