@@ -26,7 +26,7 @@ public static class MissionAssembly
             new ProbeComponent(scenario, rules),
             new TetherComponent(scenario),
             new StationComponent(scenario),
-            new GroundTeamComponent(scenario, rules, timed, uplinks),
+            new GroundTeamComponent(scenario, rules, timed, uplinks, Procedures.MissionProcedures.Compile(scenario)),
             new OnboardAutonomyComponent(rules, timed, uplinks),
             new FaultInjectorComponent(scenario),
             .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario)),

@@ -40,6 +40,9 @@ public sealed record Scenario(
     /// <summary>Rule sets uplinked during the run (a branch's <c>uplink_rules:</c>), in time order; empty for a scenario as written.</summary>
     public IReadOnlyList<RuleUplinkModel> RuleUplinks { get; init; } = [];
 
+    /// <summary>The ground team's operating procedures (the <c>procedures</c> section), in the order written.</summary>
+    public IReadOnlyList<ProcedureModel> Procedures { get; init; } = [];
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {
