@@ -1,4 +1,5 @@
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Scenarios.Tests;
 
@@ -24,7 +25,7 @@ public sealed class ProceduresSectionTests
     [Fact]
     public void A_procedure_without_steps_is_refused_at_its_place()
     {
-        var text = ScenarioText.Default.Replace("    steps:\n      - name: lower-head", "    steps: []\n    unused:\n      - name: lower-head", StringComparison.Ordinal);
+        string text = TestScenario.Of(ScenarioText.Default, "every-field.yaml").Replace("    steps:\n      - name: lower-head", "    steps: []\n    unused:\n      - name: lower-head");
         var error = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "every-field.yaml"));
         Assert.Contains(error.Errors, e => e.FieldPath.StartsWith("procedures[0]", StringComparison.Ordinal));
     }

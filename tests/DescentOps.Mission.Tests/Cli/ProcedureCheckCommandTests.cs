@@ -1,4 +1,4 @@
-using DescentOps.Scenarios;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Cli;
 
@@ -18,7 +18,7 @@ public sealed class ProcedureCheckCommandTests
     public async Task A_goto_to_a_missing_step_fails_check_with_file_line_and_field()
     {
         var folder = ToolProcess.NewTempDirectory();
-        var text = BuiltInScenarios.Text("ground-frees-stalled-probe.yaml").Replace("        on_pass: done\n", "        on_pass: finish\n", StringComparison.Ordinal);
+        string text = TestScenario.BuiltIn("ground-frees-stalled-probe.yaml").Replace("        on_pass: done\n", "        on_pass: finish\n");
         var path = Path.Combine(folder, "bad-goto.yaml");
         await File.WriteAllTextAsync(path, text);
         var line = Array.IndexOf(text.Split('\n'), "        on_pass: finish") + 1;
@@ -34,7 +34,7 @@ public sealed class ProcedureCheckCommandTests
     {
         var folder = ToolProcess.NewTempDirectory();
         var path = Path.Combine(folder, "bad-start.yaml");
-        await File.WriteAllTextAsync(path, BuiltInScenarios.Text("ground-frees-stalled-probe.yaml").Replace("{ start free-frozen-probe }", "{ start free-probe }", StringComparison.Ordinal));
+        await File.WriteAllTextAsync(path, TestScenario.BuiltIn("ground-frees-stalled-probe.yaml").Replace("{ start free-frozen-probe }", "{ start free-probe }").Text);
 
         var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "check", path);
 

@@ -1,8 +1,7 @@
 using DescentOps.Primitives.Time;
 using DescentOps.Records;
 using DescentOps.Records.Kinds;
-using DescentOps.Scenarios;
-using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Procedures;
 
@@ -24,7 +23,7 @@ public sealed class GroundProcedureRunTests
 
     private static async Task<CollectingSink> RunAsync()
     {
-        var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(Name).Replace("until: 30 d", "until: 2 d", StringComparison.Ordinal), "builtin:" + Name);
+        var scenario = TestScenario.BuiltIn(Name).Set("run.until", "2 d").Load();
         return (await MissionHarness.RunAsync(scenario)).Sink;
     }
 
@@ -87,9 +86,9 @@ public sealed class GroundProcedureRunTests
     public async Task A_step_given_less_time_than_the_round_trip_is_late_and_the_procedure_falls_back_to_safe_mode()
     {
         // The round trip alone is two light times, over 7205 s: a 55 min limit on the boost cannot be met from the ground.
-        var text = BuiltInScenarios.Text(Name).Replace("until: 30 d", "until: 2 d", StringComparison.Ordinal)
-            .Replace("        wait_for: probe.wall_power above 13 kW\n        within: 3 h", "        wait_for: probe.wall_power above 13 kW\n        within: 55 min", StringComparison.Ordinal);
-        var sink = (await MissionHarness.RunAsync(ScenarioLoader.LoadText(text, "late.yaml"))).Sink;
+        var scenario = TestScenario.BuiltIn(Name).Set("run.until", "2 d")
+            .Replace("        wait_for: probe.wall_power above 13 kW\n        within: 3 h", "        wait_for: probe.wall_power above 13 kW\n        within: 55 min").Load();
+        var sink = (await MissionHarness.RunAsync(scenario)).Sink;
 
         var boost = Step(sink, ProcedureRecords.StepStarted, "boost-wall");
         var late = Step(sink, ProcedureRecords.StepLate, "boost-wall");

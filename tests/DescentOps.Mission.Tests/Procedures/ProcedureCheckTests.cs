@@ -1,6 +1,7 @@
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Procedures;
 using DescentOps.Rules.Text;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Procedures;
 
@@ -24,7 +25,7 @@ public sealed class ProcedureCheckTests
         """;
 
     private static string Block(string send = "probe.wall set_power(power = 3 kW)", string wait = "probe.wall_power above 2.5 kW", string @goto = "fallback") =>
-        Template.Replace("SEND", send, StringComparison.Ordinal).Replace("WAIT", wait, StringComparison.Ordinal).Replace("GOTO", @goto, StringComparison.Ordinal);
+        TestScenario.Of(Template, "block").Replace("SEND", send).Replace("WAIT", wait).Replace("GOTO", @goto).Text;
 
     private static (DescentOps.Scenarios.Loading.ScenarioError Error, string Line) SingleError(string block)
     {
@@ -98,7 +99,7 @@ public sealed class ProcedureCheckTests
     [Fact]
     public void A_wait_without_a_time_limit_is_refused()
     {
-        var (error, _) = SingleError(Block().Replace("        within: 3 h\n", "", StringComparison.Ordinal));
+        var (error, _) = SingleError(TestScenario.Of(Block(), "block").Replace("        within: 3 h\n", "").Text);
         Assert.Equal("procedures[0].steps[0].name", error.FieldPath);
         Assert.Contains("needs 'within'", error.Message, StringComparison.Ordinal);
     }
@@ -123,7 +124,7 @@ public sealed class ProcedureCheckTests
     [Fact]
     public void A_goto_word_is_not_a_step_name()
     {
-        var (error, _) = SingleError(Block().Replace("- name: fallback", "- name: done", StringComparison.Ordinal).Replace("on_fail: fallback", "on_fail: abort", StringComparison.Ordinal));
+        var (error, _) = SingleError(TestScenario.Of(Block(), "block").Replace("- name: fallback", "- name: done").Replace("on_fail: fallback", "on_fail: abort").Text);
         Assert.Contains("is a goto word", error.Message, StringComparison.Ordinal);
     }
 
