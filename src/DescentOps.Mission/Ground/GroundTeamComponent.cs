@@ -20,6 +20,7 @@ namespace DescentOps.Mission.Ground;
 public sealed class GroundTeamComponent : SimComponent<GroundState>
 {
     private readonly RuleHost _rules;
+    private readonly LanderIds _ids;
     private readonly SimDuration _uplink;
     private readonly IReadOnlyList<TimedTelecommand> _timed;
     private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
@@ -29,10 +30,12 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     /// <param name="rules">The mission's rules; the ground ones run here.</param>
     /// <param name="timed">The mission's time-tagged telecommands; the ground sends those it holds at their times.</param>
     /// <param name="uplinks">Rule sets the ground uplinks at the scenario's times (<see cref="Scenario.RuleUplinks"/>).</param>
+    /// <param name="ids">The ids of the lander whose frames it reads and whose station it commands; a single lander's by default.</param>
     /// <param name="procedures">The team's procedures, started by its rules or at their times.</param>
-    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null, IReadOnlyList<CompiledProcedure>? procedures = null)
-        : base(MissionIds.Ground, FailurePolicy.RestartFromLastState)
+    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null, LanderIds? ids = null, IReadOnlyList<CompiledProcedure>? procedures = null)
+        : base((ids ?? LanderIds.Single).Ground, FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         _rules = new RuleHost(rules, Placement.Ground);
         _uplink = SimDuration.FromSeconds(scenario.Body.DistanceToGroundM / StationComponent.SpeedOfLightMPerS);
         _timed = timed ?? [];
@@ -98,7 +101,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("command", timed.Command.ToString()),
             RecordField.Of("origin", timed.Origin),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(MissionIds.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
+        context.Schedule(_ids.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
     }
 
     /// <summary>
@@ -114,7 +117,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("ground_rules", groundRules),
             RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(MissionIds.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
+        context.Schedule(_ids.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
         return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
     }
 
@@ -154,7 +157,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 continue;
             }
 
-            context.Schedule(MissionIds.Station, _uplink, command, MissionPriority.Command);
+            context.Schedule(_ids.Station, _uplink, command, MissionPriority.Command);
         }
 
         return _rules.Rearm(pendingWake, context, RulesWake.Instance);
@@ -166,7 +169,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         if (outputs.Count == 0 && state.ProceduresVersion == _procedures.Version) return state;
         foreach (var command in ProcedureJournal.Write(outputs, context))
         {
-            context.Schedule(MissionIds.Station, _uplink, command, MissionPriority.Command);
+            context.Schedule(_ids.Station, _uplink, command, MissionPriority.Command);
         }
 
         var wake = state.ProcedureWake;
