@@ -33,7 +33,7 @@ public static class MissionAssembly
             new ProbeComponent(scenario, rules, ids),
             new TetherComponent(scenario, ids),
             new StationComponent(scenario, ids),
-            new GroundTeamComponent(scenario, rules, timed, uplinks, ids),
+            new GroundTeamComponent(scenario, rules, timed, uplinks, ids, Procedures.MissionProcedures.Compile(scenario)),
             new OnboardAutonomyComponent(rules, timed, uplinks, ids),
             new FaultInjectorComponent(scenario, ids),
             .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario, ids)),

@@ -44,7 +44,7 @@ public static class MissionPreflight
         {
             // The first telemetry interval of the run itself, without rules (their errors are the rule checker's).
             var sink = NullJournalSink.Instance;
-            var start = scenario with { Rules = RulesSource.None, Telecommands = [], RuleUplinks = [] };
+            var start = scenario with { Rules = RulesSource.None, Telecommands = [], RuleUplinks = [], Procedures = [] };
             var summary = MissionRunner.RunAsync(start, scenario.Run.Seed, scenario.Probe.TelemetryIntervalS, sink, KernelChoice.Sequential).GetAwaiter().GetResult();
             if (summary.Outcome.Kind is RunOutcomeKind.ComponentFailed or RunOutcomeKind.KernelFault)
             {

@@ -15,7 +15,7 @@ public static class LanderFormat
     public static IReadOnlyList<string> OwnSections { get; } = ["probe", "power", "tether", "relays", "station", "vehicles", "telecommands"];
 
     /// <summary>Sections a lander may hold for itself; the top level's, when given, stand for every lander without its own.</summary>
-    public static IReadOnlyList<string> DefaultableSections { get; } = ["acoustics", "onboard_sampling", "rules"];
+    public static IReadOnlyList<string> DefaultableSections { get; } = ["acoustics", "onboard_sampling", "rules", "procedures"];
 
     /// <summary>Sections every lander must hold (they are required at the top level of a single-lander scenario).</summary>
     public static IReadOnlyList<string> RequiredSections { get; } = ["probe", "tether", "station"];
@@ -45,7 +45,7 @@ public static class LanderFormat
     public static SectionField Attach(SectionField root)
     {
         var own = OwnSections.Concat(DefaultableSections).Select(name => root.Find(name) ?? throw new InvalidOperationException($"The format has no '{name}' section for landers to hold."));
-        var lander = new SectionField("lander", "One lander: its site, and its own probe, power, tether, relays, station and vehicles (and, when they differ from the top level's, acoustics, on-board sampling and rules).",
+        var lander = new SectionField("lander", "One lander: its site, and its own probe, power, tether, relays, station and vehicles (and, when they differ from the top level's, acoustics, on-board sampling, rules and procedures).",
         [
             new TextField("name", "Lander identifier (lowercase letters, digits, '-'); records, faults, criteria and the contact plan name it.", IsIdentifier: true),
             new TextField("site", "Name of the landing site."),

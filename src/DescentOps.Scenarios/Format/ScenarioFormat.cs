@@ -325,6 +325,7 @@ public static class ScenarioFormat
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
             new ListField("telecommands", "Telecommands tagged with times: sent by the ground at its time (reaching the probe one uplink later) or stored on board and executed at its time.", Telecommand, 0, 1000, Required: false),
+            ProceduresFormat.Section,
             CampaignFields.Uncertain,
             CampaignFields.Criteria,
             new SectionField("run", "Run settings; the command line may override them.",

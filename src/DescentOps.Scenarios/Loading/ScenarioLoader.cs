@@ -408,6 +408,7 @@ public static class ScenarioLoader
     private static Scenario WithTimedParts(Scenario scenario, BoundSection root) => scenario with
     {
         Telecommands = Telecommands(root.List("telecommands"), "telecommands"),
+        Procedures = ProceduresReader.Read(root),
     };
 
     /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
