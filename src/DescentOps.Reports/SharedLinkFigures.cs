@@ -27,7 +27,7 @@ public sealed class SharedLinkFigures
     {
         switch (e.Kind)
         {
-            case LinkHomeRecords.Started:
+            case LinkRecords.Started:
                 foreach (var f in e.Data)
                 {
                     if (f.Name == "channels") Channels = f.Integer;
@@ -35,7 +35,7 @@ public sealed class SharedLinkFigures
                 }
 
                 break;
-            case LinkHomeRecords.Sent:
+            case LinkRecords.Sent:
                 FramesCarried++;
                 foreach (var f in e.Data)
                 {

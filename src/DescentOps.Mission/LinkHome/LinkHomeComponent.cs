@@ -38,7 +38,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
         switch (message)
         {
             case RunStarted:
-                context.Record(LinkHomeRecords.Started, Severity.Info,
+                context.Record(LinkRecords.Started, Severity.Info,
                     RecordField.Of("channels", _scheduler.Channels),
                     RecordField.Of("policy", _scheduler.Policy == LinkPolicy.ContactPlan ? "contact_plan" : "priority"),
                     RecordField.Of("precedence", string.Join(",", _scheduler.Precedence)),
@@ -59,13 +59,13 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
             case StationDown down:
             {
                 var (next, frames, commands) = _scheduler.StationDown(state, down.Lander);
-                context.Record(LinkHomeRecords.StationDown, Severity.Warning, [RecordField.Of("lander", down.Lander), .. Ledger(next, down.Lander)]);
+                context.Record(LinkRecords.StationDown, Severity.Warning, [RecordField.Of("lander", down.Lander), .. Ledger(next, down.Lander)]);
                 if (frames.Count > 0) RecordLost(next, down.Lander, frames[0].Sequence, frames.Count, "station failed", context);
                 foreach (var command in commands) RecordCommandLost(down.Lander, command, "station failed", context);
                 return Serve(next, context);
             }
             case StationUp up:
-                context.Record(LinkHomeRecords.StationUp, Severity.Notice, RecordField.Of("lander", up.Lander));
+                context.Record(LinkRecords.StationUp, Severity.Notice, RecordField.Of("lander", up.Lander));
                 return Serve(_scheduler.StationUp(state, up.Lander), context);
             case LinkHomeDue:
                 return Serve(state with { Pending = null }, context);
@@ -84,7 +84,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
             var after = --behind[sent.Lander];
             var onAir = sent.End - sent.Start;
             context.Schedule(_ids[sent.Lander].Ground, onAir + _lightTime, sent.Frame, MissionPriority.Telemetry);
-            context.Record(LinkHomeRecords.Sent, Severity.Debug,
+            context.Record(LinkRecords.Sent, Severity.Debug,
             [
                 RecordField.Of("lander", sent.Lander),
                 RecordField.Of("frame", sent.Frame.Sequence),
@@ -99,7 +99,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
         foreach (var (lander, command) in round.CommandsUp)
         {
             context.Schedule(_ids[lander].Station, _lightTime, command, MissionPriority.Command);
-            context.Record(LinkHomeRecords.CommandSent, Severity.Info,
+            context.Record(LinkRecords.CommandSent, Severity.Info,
                 RecordField.Of("lander", lander),
                 RecordField.Of("command", command.Command.ToString()),
                 RecordField.Of("origin", command.Origin),

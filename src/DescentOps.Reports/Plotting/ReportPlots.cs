@@ -33,9 +33,9 @@ public static class ReportPlots
     public static IReadOnlyList<PlotDefinition> SharedLink { get; } =
     [
         new("link-channels", "Shared link: channels in use", "channels busy as each frame goes",
-            [new(LinkHomeRecords.Sent, "channels_busy", "channels busy")]),
+            [new(LinkRecords.Sent, "channels_busy", "channels busy")]),
         new("link-waiting", "Shared link: frames waiting at each station", "frames queued",
-            [new(LinkHomeRecords.Sent, "frames_queued", "frames queued", PerLander: true)]),
+            [new(LinkRecords.Sent, "frames_queued", "frames queued", PerLander: true)]),
     ];
 
     /// <summary>The series a report gathers in its one pass over the log.</summary>

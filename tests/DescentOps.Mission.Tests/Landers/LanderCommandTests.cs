@@ -44,7 +44,7 @@ public sealed class LanderCommandTests
         var rows = File.ReadLines(Path.Combine(folder, "parent-csv", "events.csv")).ToList();
         Assert.StartsWith("seq,t_s,source,lander,", rows[0]);
         Assert.Contains(rows, r => r.Contains(",brack/station,brack,station.failed,", StringComparison.Ordinal));
-        Assert.Contains(rows, r => r.Contains(",link-home,,link_home.started,", StringComparison.Ordinal));
+        Assert.Contains(rows, r => r.Contains(",link-home,,link.started,", StringComparison.Ordinal));
 
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "report", "parent.jsonl")).ExitCode);
         var html = await File.ReadAllTextAsync(Path.Combine(folder, "parent.html"));

@@ -28,7 +28,7 @@ public sealed class LanderRunTests
         }
 
         // The shared link's records about a lander name it first too.
-        Assert.All(sink.Records.Where(r => r.Source == MissionIds.LinkHome && r.Kind != Records.Kinds.LinkHomeRecords.Started), r => Assert.Equal("lander", r.Fields[0].Name));
+        Assert.All(sink.Records.Where(r => r.Source == MissionIds.LinkHome && r.Kind != Records.Kinds.LinkRecords.Started), r => Assert.Equal("lander", r.Fields[0].Name));
 
         // Both landers ran their probe, tether and station, and tarn its vehicle, each under its own id.
         var sources = sink.Records.Select(r => r.Source.Name).ToHashSet(StringComparer.Ordinal);
@@ -81,7 +81,7 @@ public sealed class LanderRunTests
         var scenario = ScenarioLoader.LoadText(LanderTexts.Two(days: 2, plan), "plan.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);
 
-        var sent = sink.OfKind(Records.Kinds.LinkHomeRecords.Sent).ToList();
+        var sent = sink.OfKind(Records.Kinds.LinkRecords.Sent).ToList();
         foreach (var lander in LanderNames)
         {
             var own = sent.Where(r => CollectingSink.TextField(r, "lander") == lander).ToList();
@@ -97,7 +97,7 @@ public sealed class LanderRunTests
             }
 
             // What the link sent reached the lander's desk one light time later (about an hour), unless the run ended first.
-            var lightS = CollectingSink.Field(sink.OfKind(Records.Kinds.LinkHomeRecords.Started).Single(), "one_way_light_time_s");
+            var lightS = CollectingSink.Field(sink.OfKind(Records.Kinds.LinkRecords.Started).Single(), "one_way_light_time_s");
             var delivered = own.Count(r => r.Time.SecondsSinceEpoch + lightS <= scenario.Run.UntilS);
             Assert.Equal(delivered, sink.Records.Count(r => r.Source.Name == $"{lander}/ground" && r.Kind == Records.Kinds.GroundRecords.Telemetry));
         }

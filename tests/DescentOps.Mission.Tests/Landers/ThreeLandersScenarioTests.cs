@@ -30,7 +30,7 @@ public sealed class ThreeLandersScenarioTests
     {
         var sink = await RunTwoDaysAsync();
         var plan = ScenarioLoader.LoadText(BuiltInScenarios.Text(Name), Name).LinkHome!;
-        var light = CollectingSink.Field(sink.OfKind(LinkHomeRecords.Started).Single(), "one_way_light_time_s");
+        var light = CollectingSink.Field(sink.OfKind(LinkRecords.Started).Single(), "one_way_light_time_s");
         var died = sink.OfKind(StationRecords.Failed).Single(r => Lander(r) == "brack").Time.SecondsSinceEpoch;
 
         var stalled = sink.Records.First(r => r.Source.Name == "fell/probe" && r.Kind == ProbeRecords.Regime && CollectingSink.TextField(r, "to") == "FrozenIn");
@@ -53,14 +53,14 @@ public sealed class ThreeLandersScenarioTests
     {
         var sink = await RunTwoDaysAsync();
         var died = sink.OfKind(StationRecords.Failed).Single(r => Lander(r) == "brack").Time.SecondsSinceEpoch;
-        var down = sink.OfKind(LinkHomeRecords.StationDown).Single();
+        var down = sink.OfKind(LinkRecords.StationDown).Single();
         var lost = sink.Records.Single(r => r.Source == MissionIds.LinkHome && r.Kind == StationRecords.DataLost);
         Assert.Equal(CollectingSink.IntegerField(down, "frames_lost"), CollectingSink.IntegerField(lost, "count"));
         Assert.Equal(0, CollectingSink.IntegerField(down, "frames_queued"));
 
         // Brack's next window (8 h to 16 h of the day) after the death is worked by fell first (it leads the precedence).
         var day = Math.Floor(died / (24 * Hour)) * 24 * Hour;
-        var inBrackWindow = sink.OfKind(LinkHomeRecords.Sent).Where(r => r.Time.SecondsSinceEpoch >= day + 8 * Hour && r.Time.SecondsSinceEpoch < day + 16 * Hour && r.Time.SecondsSinceEpoch > died).ToList();
+        var inBrackWindow = sink.OfKind(LinkRecords.Sent).Where(r => r.Time.SecondsSinceEpoch >= day + 8 * Hour && r.Time.SecondsSinceEpoch < day + 16 * Hour && r.Time.SecondsSinceEpoch > died).ToList();
         Assert.NotEmpty(inBrackWindow);
         Assert.DoesNotContain(inBrackWindow, r => Lander(r) == "brack");
         Assert.Equal("fell", Lander(inBrackWindow[0]));
@@ -70,7 +70,7 @@ public sealed class ThreeLandersScenarioTests
     public async Task Every_lander_s_ledger_closes_and_the_link_never_carries_two_frames_at_once()
     {
         var sink = await RunTwoDaysAsync();
-        var sent = sink.OfKind(LinkHomeRecords.Sent).ToList();
+        var sent = sink.OfKind(LinkRecords.Sent).ToList();
         foreach (var lander in new[] { "tarn", "brack", "fell" })
         {
             var last = sink.Records.Last(r => r.Source == MissionIds.LinkHome && r.Fields.Any(f => f.Name == "frames_offered") && Lander(r) == lander);
