@@ -27,10 +27,10 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
             throw Refused($"remove_faults[{missing.Index}].name", $"the parent scenario has no fault named {missing.Name}");
         }
 
-        var stranger = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => a.Fault.Vehicle is { } v && parent.Vehicles.All(p => p.Name != v));
+        var stranger = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => a.Fault.Effect is FaultEffect.VehicleLoss { Vehicle: var v } && parent.Vehicles.All(p => p.Name != v));
         if (stranger.Fault is not null)
         {
-            throw Refused($"add_faults[{stranger.Index}].vehicle", $"fault '{stranger.Fault.Name}' names vehicle '{stranger.Fault.Vehicle}', which the parent scenario does not have");
+            throw Refused($"add_faults[{stranger.Index}].vehicle", $"fault '{stranger.Fault.Name}' names vehicle '{((FaultEffect.VehicleLoss)stranger.Fault.Effect).Vehicle}', which the parent scenario does not have");
         }
 
         var kept = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).ToList();
