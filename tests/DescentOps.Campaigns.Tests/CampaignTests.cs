@@ -11,7 +11,7 @@ public sealed class CampaignTests
     private static JsonObject Summary(string dir) => JsonNode.Parse(File.ReadAllText(Path.Combine(dir, "summary.json")))!.AsObject();
 
     [Fact]
-    public async Task ACampaignRunTwiceGivesTheSameSummaryAndTablesWhateverTheWorkers()
+    public async Task A_campaign_run_twice_gives_the_same_summary_and_tables_whatever_the_workers()
     {
         var a = CampaignFixture.TempDir();
         var b = CampaignFixture.TempDir();
@@ -31,7 +31,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public async Task AnInterruptedCampaignResumedEqualsAnUninterruptedOne()
+    public async Task An_interrupted_campaign_resumed_equals_an_uninterrupted_one()
     {
         var whole = CampaignFixture.TempDir();
         var cut = CampaignFixture.TempDir();
@@ -56,7 +56,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public async Task ARegeneratedRunIsByteIdenticalToDescentOpsRunWithItsSeed()
+    public async Task A_regenerated_run_is_byte_identical_to_descent_ops_run_with_its_seed()
     {
         var dir = CampaignFixture.TempDir();
         Assert.Equal(0, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "3", "--seed", "21", "--output", dir));
@@ -70,7 +70,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public async Task RemovingTheRescuingRuleScoresWorseAt200Runs()
+    public async Task Removing_the_rescuing_rule_scores_worse_at_200_runs()
     {
         var dir = CampaignFixture.TempDir();
         Assert.Equal(0, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "200", "--seed", "2026", "--versus", CampaignFixture.NoBoost, "--output", dir));
@@ -84,7 +84,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public async Task BadInputIsRefusedBeforeAnythingRuns()
+    public async Task Bad_input_is_refused_before_anything_runs()
     {
         var dir = CampaignFixture.TempDir();
         var (exit, _, stderr) = await CampaignFixture.CliOutputAsync("campaign", CampaignFixture.Scenario, "--runs", "0", "--output", Path.Combine(dir, "a"));
@@ -111,7 +111,7 @@ public sealed class CampaignTests
     [InlineData("  - path: probe.head_power\n    distribution: normal\n    mean: 6 kW\n    sd: 1e300 kW\n", "uncertain[0].sd", "wider than the field's whole valid range")]
     [InlineData("  - path: probe.head_power\n    distribution: normal\n    mean: 1e300 kW\n    sd: 1 kW\n", "uncertain[0].mean", "outside the field's range")]
     [InlineData("  - path: probe.head_power\n    distribution: uniform\n    low: 1 kW\n    high: 1e12 kW\n", "uncertain[0].low", "outside the field's")]
-    public void ABadUncertainBlockIsRefusedWithItsPlace(string block, string field, string message)
+    public void A_bad_uncertain_block_is_refused_with_its_place(string block, string field, string message)
     {
         var text = File.ReadAllText(CampaignFixture.Scenario);
         var start = text.IndexOf("uncertain:\n", StringComparison.Ordinal);
@@ -130,7 +130,7 @@ public sealed class CampaignTests
     [InlineData("frames_lost below 1e400", "")]
     [InlineData("breakthrough sooner 5 d", "comes 'above Q'")]
     [InlineData("final_depth inside 3 km to 1 km", "the lower end comes first")]
-    public void ABadCriterionIsRefusedAtItsLine(string requirement, string message)
+    public void A_bad_criterion_is_refused_at_its_line(string requirement, string message)
     {
         var text = File.ReadAllText(CampaignFixture.Scenario);
         var line = text[..text.IndexOf("require: breakthrough below 20 d", StringComparison.Ordinal)].Count(c => c == '\n') + 1;
@@ -145,7 +145,7 @@ public sealed class CampaignTests
     [Theory]
     [InlineData("--runs", "2000000000", "at most 1000000 runs")]
     [InlineData("--jobs", "100000", "at most 256 workers")]
-    public async Task HugeCountsAreRefusedBeforeAnythingRuns(string option, string value, string message)
+    public async Task Huge_counts_are_refused_before_anything_runs(string option, string value, string message)
     {
         var dir = Path.Combine(CampaignFixture.TempDir(), "c");
         string[] args = option == "--runs"
@@ -159,7 +159,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public void AnUnknownCriterionMeasureIsRefused()
+    public void An_unknown_criterion_measure_is_refused()
     {
         var text = File.ReadAllText(CampaignFixture.Scenario).Replace("require: longest_stop below 2 d", "require: longest_nap below 2 d", StringComparison.Ordinal);
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "bad.yaml")).Errors);
@@ -167,7 +167,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public void TheSameSeedDrawsTheSameInputsAndTheDrawIsInTheRunsScenario()
+    public void The_same_seed_draws_the_same_inputs_and_the_draw_is_in_the_runs_scenario()
     {
         var scenario = ScenarioLoader.LoadFile(CampaignFixture.Scenario);
         var (drawn, values) = Mission.Running.UncertainDraw.Draw(scenario, 99);
@@ -181,7 +181,7 @@ public sealed class CampaignTests
     }
 
     [Fact]
-    public void AVariantKeepsItsRulesAndFaultsWhenTheInputsAreDrawn()
+    public void A_variant_keeps_its_rules_and_faults_when_the_inputs_are_drawn()
     {
         var scenario = ScenarioLoader.LoadFile(CampaignFixture.Scenario);
         var variant = CampaignPlan.ApplyVariant(scenario, new CampaignVariant("no-boost", File.ReadAllText(CampaignFixture.NoBoost)));

@@ -13,7 +13,7 @@ public sealed class CriteriaReportingTests
     [Theory]
     [InlineData("3 d")]
     [InlineData("20 d")]
-    public async Task ASingleRunReportsEachCriterionInItsSummaryAndItsReport(string until)
+    public async Task A_single_run_reports_each_criterion_in_its_summary_and_its_report(string until)
     {
         var dir = CampaignFixture.TempDir();
         var log = Path.Combine(dir, "run.jsonl");

@@ -24,7 +24,7 @@ public sealed class FaultMeasureTests
         new(SimTime.FromSecondsSinceEpoch(t), new ComponentId("autonomy"), "rule.fired", Severity.Warning, [RecordField.Of("rule", rule)]);
 
     [Fact]
-    public void AProbeStopped46HoursDoesNotRecoverOnATenthOfAnHourOfMelting()
+    public void A_probe_stopped_46_hours_does_not_recover_on_a_tenth_of_an_hour_of_melting()
     {
         var measures = new FaultMeasures();
         measures.Observe(Frame(0, "Melting", 2.6e-4));
@@ -43,7 +43,7 @@ public sealed class FaultMeasureTests
     }
 
     [Fact]
-    public void APermanentTetherBreakNeverRecoversEvenWhenRelaysCarryTheFrames()
+    public void A_permanent_tether_break_never_recovers_even_when_relays_carry_the_frames()
     {
         var measures = new FaultMeasures();
         measures.Observe(Injected(10 * Hour, "TetherBreak"));
@@ -55,7 +55,7 @@ public sealed class FaultMeasureTests
     }
 
     [Fact]
-    public void ARuleAboutSomethingElseDoesNotDetectTheFault()
+    public void A_rule_about_something_else_does_not_detect_the_fault()
     {
         var rules = new Dictionary<string, IReadOnlyList<string>>
         {

@@ -17,7 +17,7 @@ public sealed class StatisticsTests
     [InlineData(15, 148, 0.0624, 0.1605)]
     [InlineData(0, 20, 0.0000, 0.1611)]
     [InlineData(1, 29, 0.0061, 0.1718)]
-    public void WilsonMatchesNewcombesTable(int successes, int n, double low, double high)
+    public void Wilson_matches_newcombes_table(int successes, int n, double low, double high)
     {
         var (l, h) = WilsonInterval.Compute95(successes, n);
         Assert.Equal(low, l, 4);
@@ -30,7 +30,7 @@ public sealed class StatisticsTests
     /// (from memory of that table).
     /// </summary>
     [Fact]
-    public void PairedDifferenceMatchesNewcombesExample()
+    public void Paired_difference_matches_newcombes_example()
     {
         var (difference, low, high) = NewcombePairedDifference.Compute95(36, 12, 2, 0);
         Assert.Equal(0.2, difference, 12);
@@ -39,7 +39,7 @@ public sealed class StatisticsTests
     }
 
     [Fact]
-    public void PairedDifferenceIsSymmetricAndHoldsItsEstimate()
+    public void Paired_difference_is_symmetric_and_holds_its_estimate()
     {
         // Computed: swapping the variants negates the difference and mirrors the interval.
         var (d1, l1, h1) = NewcombePairedDifference.Compute95(59, 6, 16, 80);
@@ -56,7 +56,7 @@ public sealed class StatisticsTests
     /// (Bentur et al. 2009) has 1 and 7 discordant pairs and an exact conditional p-value of 0.070 (from memory).
     /// </summary>
     [Fact]
-    public void McNemarMatchesTheTextbookExample() => Assert.Equal(0.070, McNemarExact.PValue(1, 7), 3);
+    public void McNemar_matches_the_textbook_example() => Assert.Equal(0.070, McNemarExact.PValue(1, 7), 3);
 
     [Theory]
     [InlineData(0, 0)]
@@ -65,7 +65,7 @@ public sealed class StatisticsTests
     [InlineData(15, 4)]
     [InlineData(0, 25)]
     [InlineData(40, 61)]
-    public void McNemarEqualsTheDirectBinomialSum(int b, int c)
+    public void McNemar_equals_the_direct_binomial_sum(int b, int c)
     {
         // Computed: 2 * sum_{k <= min(b, c)} C(n, k) / 2^n, exactly in integers, capped at 1.
         var n = b + c;
@@ -82,7 +82,7 @@ public sealed class StatisticsTests
     }
 
     [Fact]
-    public void MedianIntervalUsesTheBinomialRanks()
+    public void Median_interval_uses_the_binomial_ranks()
     {
         // Computed: for n = 20, P(Bin(20, 1/2) <= 5) = 0.0207 <= 0.025 < P(<= 6) = 0.0577, and P(<= 14) = 0.9793 >= 0.975,
         // so the interval is [x(6), x(15)] (Conover 1999, section 3.2, gives the same ranks for n = 20).
@@ -94,7 +94,7 @@ public sealed class StatisticsTests
     }
 
     [Fact]
-    public void AQuantileAmongRunsThatNeverGotThereIsNull()
+    public void A_quantile_among_runs_that_never_got_there_is_null()
     {
         var values = new List<double> { 1, 2, double.PositiveInfinity, double.PositiveInfinity, double.PositiveInfinity };
         Assert.Null(QuantileInterval.Compute(values, 0.9).Estimate);
@@ -102,7 +102,7 @@ public sealed class StatisticsTests
 
     /// <summary>SplitMix64's published test vector: seeded with 1234567 it gives 6457827717110365317 first (Vigna's splitmix64.c; from memory).</summary>
     [Fact]
-    public void RunSeedsAreSplitMix64Outputs()
+    public void Run_seeds_are_SplitMix64_outputs()
     {
         Assert.Equal(6457827717110365317UL, unchecked((ulong)RunSeeds.ForRun(1234567, 0)));
         Assert.Equal(3203168211198807973UL, unchecked((ulong)RunSeeds.ForRun(1234567, 1)));

@@ -11,7 +11,7 @@ public sealed class ClusterOptionTests
     [InlineData("--keep-logs all", "--keep-logs")]
     [InlineData("--jobs -1", "--jobs")]
     [InlineData("--akka-config /no/such/file.conf", "--akka-config")]
-    public async Task ABadClusteredCampaignIsRefusedAndLeavesNothing(string extra, string message)
+    public async Task A_bad_clustered_campaign_is_refused_and_leaves_nothing(string extra, string message)
     {
         var dir = Path.Combine(ClusterFixture.TempDir(), "out");
         var (exit, _, stderr) = await ClusterFixture.CliAsync(["campaign", ClusterFixture.Scenario, "--runs", "2", "--cluster", "--output", dir, .. extra.Split(' ')]);
@@ -21,7 +21,7 @@ public sealed class ClusterOptionTests
     }
 
     [Fact]
-    public async Task ClusterOptionsWithoutClusterAreRefused()
+    public async Task Cluster_options_without_cluster_are_refused()
     {
         var (exit, _, stderr) = await ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "2", "--listen", "127.0.0.1:4053", "--output", Path.Combine(ClusterFixture.TempDir(), "out"));
         Assert.Equal(2, exit);
@@ -36,7 +36,7 @@ public sealed class ClusterOptionTests
     [InlineData("--join 127.0.0.1:4053 --listen 10.20.30.40:0", "shared secret")]
     [InlineData("--join nowhere", "HOST:PORT")]
     [InlineData("--join 127.0.0.1:4053 --jobs 0", "--jobs")]
-    public async Task ABadWorkerIsRefusedBeforeItJoins(string arguments, string message)
+    public async Task A_bad_worker_is_refused_before_it_joins(string arguments, string message)
     {
         var (exit, _, stderr) = await ClusterFixture.CliAsync(["worker", .. arguments.Split(' ')]);
         Assert.Equal(2, exit);
@@ -46,7 +46,7 @@ public sealed class ClusterOptionTests
     [Theory]
     [InlineData("akka.remote.dot-netty.tcp.port = ${no.such.setting}")]
     [InlineData("akka.remote = = =")]
-    public void AnAkkaConfigFileThatIsNotHoconIsRefusedNamingIt(string bad)
+    public void An_Akka_config_file_that_is_not_hocon_is_refused_naming_it(string bad)
     {
         var file = Path.Combine(ClusterFixture.TempDir(), "tls.conf");
         File.WriteAllText(file, bad);

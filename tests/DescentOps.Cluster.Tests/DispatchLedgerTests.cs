@@ -9,7 +9,7 @@ public sealed class DispatchLedgerTests
         [.. Enumerable.Range(0, runs).SelectMany(i => variants.Select(v => new RunKey(v, i)))];
 
     [Fact]
-    public void NothingGoesToAWorkerThatDidNotAskAndRunsGoOutInTheCampaignsOrder()
+    public void Nothing_goes_to_a_worker_that_did_not_ask_and_runs_go_out_in_the_campaigns_order()
     {
         var ledger = new DispatchLedger(Work(3, "baseline", "no-boost"));
         ledger.AddWorker("a");
@@ -26,7 +26,7 @@ public sealed class DispatchLedgerTests
     }
 
     [Fact]
-    public void ALostWorkersRunsGoBackToTheirPlaceAndToTheNextWorkerThatAsks()
+    public void A_lost_workers_runs_go_back_to_their_place_and_to_the_next_worker_that_asks()
     {
         var ledger = new DispatchLedger(Work(4, "baseline"));
         ledger.AddWorker("a");
@@ -48,7 +48,7 @@ public sealed class DispatchLedgerTests
     }
 
     [Fact]
-    public void AResultIsAcceptedOnceAndALateDuplicateIsDiscarded()
+    public void A_result_is_accepted_once_and_a_late_duplicate_is_discarded()
     {
         var ledger = new DispatchLedger(Work(2, "baseline"));
         ledger.AddWorker("a");
@@ -68,7 +68,7 @@ public sealed class DispatchLedgerTests
     }
 
     [Fact]
-    public void AStoppingWorkerHandsBackOnlyWhatItHolds()
+    public void A_stopping_worker_hands_back_only_what_it_holds()
     {
         var ledger = new DispatchLedger(Work(3, "baseline"));
         ledger.AddWorker("a");
@@ -84,7 +84,7 @@ public sealed class DispatchLedgerTests
     }
 
     [Fact]
-    public void APrecisionStopDropsLaterRunsAndFinishesWithoutThem()
+    public void A_precision_stop_drops_later_runs_and_finishes_without_them()
     {
         var ledger = new DispatchLedger(Work(30, "baseline"));
         ledger.AddWorker("a");
@@ -97,7 +97,7 @@ public sealed class DispatchLedgerTests
     }
 
     [Fact]
-    public void AListedTwiceRunIsRefused() =>
+    public void A_listed_twice_run_is_refused() =>
         Assert.Throws<ArgumentException>(() => new DispatchLedger([new RunKey("baseline", 0), new RunKey("baseline", 0)]));
 
     /// <summary>
@@ -110,7 +110,7 @@ public sealed class DispatchLedgerTests
     [InlineData(3)]
     [InlineData(4)]
     [InlineData(5)]
-    public void UnderRandomChurnEveryRunIsAcceptedExactlyOnce(int seed)
+    public void Under_random_churn_every_run_is_accepted_exactly_once(int seed)
     {
         var random = new Random(seed);
         var work = Work(40, "baseline", "variant");

@@ -12,7 +12,7 @@ namespace DescentOps.Cluster.Tests;
 public sealed class InProcessClusterTests
 {
     [Fact]
-    public async Task AClusteredCampaignGivesTheLocalCampaignsSummaryAndTables()
+    public async Task A_clustered_campaign_gives_the_local_campaigns_summary_and_tables()
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();
@@ -34,7 +34,7 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
-    public async Task APrecisionStopEndsAClusteredCampaignWhereItEndsALocalOne()
+    public async Task A_precision_stop_ends_a_clustered_campaign_where_it_ends_a_local_one()
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();
@@ -52,7 +52,7 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
-    public async Task AWorkerThatJoinsLateGetsWork()
+    public async Task A_worker_that_joins_late_gets_work()
     {
         var dir = ClusterFixture.TempDir();
         var port = ClusterFixture.FreePort();
@@ -70,7 +70,7 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
-    public async Task AStoppedWorkerHandsBackItsRunAndAnotherFinishesIt()
+    public async Task A_stopped_worker_hands_back_its_run_and_another_finishes_it()
     {
         var dir = ClusterFixture.TempDir();
         var port = ClusterFixture.FreePort();
@@ -92,7 +92,7 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
-    public async Task ADuplicateResultIsDiscardedAndLogged()
+    public async Task A_duplicate_result_is_discarded_and_logged()
     {
         var plan = ClusterFixture.Plan(seed: 5);
         var work = Enumerable.Range(0, 3).Select(i => new RunKey(CampaignVariant.BaselineName, i)).ToList();
@@ -120,7 +120,7 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
-    public async Task AWorkerWithoutTheSharedSecretGetsNoWork()
+    public async Task A_worker_without_the_shared_secret_gets_no_work()
     {
         var plan = ClusterFixture.Plan(seed: 9, toolVersion: Cli.ToolInfo.Version);
         var secret = JoinSecret.FromText("the-campaign-secret-of-this-test");

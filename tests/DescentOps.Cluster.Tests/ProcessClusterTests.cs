@@ -11,7 +11,7 @@ namespace DescentOps.Cluster.Tests;
 public sealed class ProcessClusterTests
 {
     [Fact]
-    public async Task AKilledWorkersRunsAreRedoneAndTheCampaignEqualsTheLocalOne()
+    public async Task A_killed_workers_runs_are_redone_and_the_campaign_equals_the_local_one()
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();
@@ -50,7 +50,7 @@ public sealed class ProcessClusterTests
     }
 
     [Fact]
-    public async Task ACampaignNodeKilledAndResumedCarriesOnWithTheWorkerThatRejoins()
+    public async Task A_campaign_node_killed_and_resumed_carries_on_with_the_worker_that_rejoins()
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();

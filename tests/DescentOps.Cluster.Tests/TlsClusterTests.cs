@@ -9,7 +9,7 @@ namespace DescentOps.Cluster.Tests;
 public sealed class TlsClusterTests
 {
     [Fact]
-    public async Task WithTlsSettingsTheClusterRunsOverTls()
+    public async Task With_tls_settings_the_cluster_runs_over_tls()
     {
         var dir = ClusterFixture.TempDir();
         var pfx = Path.Combine(dir, "node.pfx");

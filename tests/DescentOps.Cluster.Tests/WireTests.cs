@@ -7,7 +7,7 @@ namespace DescentOps.Cluster.Tests;
 public sealed class WireTests
 {
     [Fact]
-    public void ARunRecordCrossesTheWireBitForBit()
+    public void A_run_record_crosses_the_wire_bit_for_bit()
     {
         var plan = ClusterFixture.Plan(seed: 7);
         var record = RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, 1));
@@ -35,10 +35,10 @@ public sealed class WireTests
     [InlineData("{}")]
     [InlineData("null")]
     [InlineData("{\"Variant\":\"baseline\"}")]
-    public void AMalformedRecordIsRefused(string json) => Assert.Throws<InvalidDataException>(() => RunRecordCodec.Decode(json));
+    public void A_malformed_record_is_refused(string json) => Assert.Throws<InvalidDataException>(() => RunRecordCodec.Decode(json));
 
     [Fact]
-    public void AnOversizedRecordIsRefusedBeforeItIsRead() =>
+    public void An_oversized_record_is_refused_before_it_is_read() =>
         Assert.Contains("at most", Assert.Throws<InvalidDataException>(() => RunRecordCodec.Decode(new string(' ', RunRecordCodec.MaxChars + 1))).Message, StringComparison.Ordinal);
 
     [Theory]
@@ -48,7 +48,7 @@ public sealed class WireTests
     [InlineData("127.8.9.10:1", "127.8.9.10", 1, true)] // all of 127.0.0.0/8 is loopback (RFC 1122, 3.2.1.3)
     [InlineData("10.1.2.3:4053", "10.1.2.3", 4053, false)]
     [InlineData("node-7.example:4053", "node-7.example", 4053, false)]
-    public void AnAddressIsReadAndItsReachIsKnown(string text, string host, int port, bool loopback)
+    public void An_address_is_read_and_its_reach_is_known(string text, string host, int port, bool loopback)
     {
         var address = NodeAddress.Parse(text, "--listen");
         Assert.Equal(host, address.Host);
@@ -63,11 +63,11 @@ public sealed class WireTests
     [InlineData("::1:4053")]
     [InlineData(":4053")]
     [InlineData("127.0.0.1:-1")]
-    public void ABadAddressIsRefusedNamingTheOption(string text) =>
+    public void A_bad_address_is_refused_naming_the_option(string text) =>
         Assert.StartsWith("--join:", Assert.Throws<FormatException>(() => NodeAddress.Parse(text, "--join")).Message, StringComparison.Ordinal);
 
     [Fact]
-    public void TheSecretsProofIsHmacSha256()
+    public void The_secrets_proof_is_HMAC_SHA256()
     {
         // RFC 4231 (HMAC-SHA-256 test vectors), test case 2: key "Jefe", data "what do ya want for nothing?".
         var secret = JoinSecret.FromText("Jefe");
@@ -80,7 +80,7 @@ public sealed class WireTests
     }
 
     [Fact]
-    public void ASecretComesFromAFileOrTheEnvironmentAndMustBeLongEnough()
+    public void A_secret_comes_from_a_file_or_the_environment_and_must_be_long_enough()
     {
         var dir = ClusterFixture.TempDir();
         var file = Path.Combine(dir, "secret");
@@ -95,7 +95,7 @@ public sealed class WireTests
     }
 
     [Fact]
-    public void AResultIsStoredOnlyIfItIsTheRunItClaimsWithThePlansSeed()
+    public void A_result_is_stored_only_if_it_is_the_run_it_claims_with_the_plans_seed()
     {
         var plan = ClusterFixture.Plan(seed: 3);
         var record = RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, 2));

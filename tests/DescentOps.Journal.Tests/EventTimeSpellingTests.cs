@@ -16,7 +16,7 @@ public sealed class EventTimeSpellingTests
     private const long ShortcutLimit = (1L << 33) * 1_000_000;
 
     [Fact]
-    public void TimesAroundTheShortcutsBoundariesAreSpelledAsTheGeneralFormatterSpellsThem()
+    public void Times_around_the_shortcuts_boundaries_are_spelled_as_the_general_formatter_spells_them()
     {
         long[] ticks =
         [
@@ -28,7 +28,7 @@ public sealed class EventTimeSpellingTests
     }
 
     [Fact]
-    public void RandomTimesOfEveryMagnitudeAreSpelledAsTheGeneralFormatterSpellsThem()
+    public void Random_times_of_every_magnitude_are_spelled_as_the_general_formatter_spells_them()
     {
         // A fixed seed: the same 20,000 times on every run, spread over every power of two a tick count can reach.
         var random = new Random(20_260_601);

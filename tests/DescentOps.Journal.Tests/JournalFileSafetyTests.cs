@@ -8,7 +8,7 @@ namespace DescentOps.Journal.Tests;
 public sealed class JournalFileSafetyTests
 {
     [Fact]
-    public void ASymbolicLinkAtTheOldTemporaryNameIsNotFollowed()
+    public void A_symbolic_link_at_the_old_temporary_name_is_not_followed()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -26,7 +26,7 @@ public sealed class JournalFileSafetyTests
     }
 
     [Fact]
-    public void AnEarlierCrashedRunsPartialLogIsLeftAlone()
+    public void An_earlier_crashed_runs_partial_log_is_left_alone()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -42,7 +42,7 @@ public sealed class JournalFileSafetyTests
     }
 
     [Fact]
-    public void TwoRunsToOnePathWriteTwoFilesAndTheSecondMayNotReplaceTheFirst()
+    public void Two_runs_to_one_path_write_two_files_and_the_second_may_not_replace_the_first()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");

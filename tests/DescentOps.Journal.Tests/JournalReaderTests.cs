@@ -5,7 +5,7 @@ namespace DescentOps.Journal.Tests;
 public sealed class JournalReaderTests
 {
     [Fact]
-    public void ACutTailEndsTheReadCleanlyAndSaysWhere()
+    public void A_cut_tail_ends_the_read_cleanly_and_says_where()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         var cut = JournalSamples.Join(lines.Take(3)).Concat(lines[3].Take(20)).ToArray();
@@ -18,7 +18,7 @@ public sealed class JournalReaderTests
     }
 
     [Fact]
-    public void AJournalWithoutItsSummaryIsTruncated()
+    public void A_journal_without_its_summary_is_truncated()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
 
@@ -31,7 +31,7 @@ public sealed class JournalReaderTests
     }
 
     [Fact]
-    public void ACompleteJournalIsNotTruncated()
+    public void A_complete_journal_is_not_truncated()
     {
         JournalSamples.ReadAll(JournalSamples.Standard(), out var reader);
 
@@ -40,7 +40,7 @@ public sealed class JournalReaderTests
     }
 
     [Fact]
-    public void AMalformedLineInTheMiddleIsAnErrorNamingTheLine()
+    public void A_malformed_line_in_the_middle_is_an_error_naming_the_line()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines[2] = "{\"type\":\"event\",\"seq\":\n"u8.ToArray();
@@ -51,7 +51,7 @@ public sealed class JournalReaderTests
     }
 
     [Fact]
-    public void AScenarioTextThatDoesNotMatchItsDigestIsRejected()
+    public void A_scenario_text_that_does_not_match_its_digest_is_rejected()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines[0] = Encoding.UTF8.GetBytes(Encoding.UTF8.GetString(lines[0]).Replace("heater_w: 5000", "heater_w: 9000", StringComparison.Ordinal));
@@ -62,7 +62,7 @@ public sealed class JournalReaderTests
     }
 
     [Fact]
-    public void ALineAfterTheSummaryIsAnError()
+    public void A_line_after_the_summary_is_an_error()
     {
         var bytes = JournalSamples.Standard();
 

@@ -9,7 +9,7 @@ namespace DescentOps.Journal.Tests;
 public sealed class JournalRoundTripTests
 {
     [Fact]
-    public void ManifestEventsAndSummaryReadBackAsWritten()
+    public void Manifest_events_and_summary_read_back_as_written()
     {
         var manifest = JournalSamples.Manifest();
         var events = JournalSamples.Events(5);
@@ -45,13 +45,13 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void TheSameInputGivesTheSameBytes()
+    public void The_same_input_gives_the_same_bytes()
     {
         Assert.Equal(JournalSamples.Standard(), JournalSamples.Standard());
     }
 
     [Fact]
-    public void TheStandardSampleKeepsItsBytesAcrossBuildsAndProcesses()
+    public void The_standard_sample_keeps_its_bytes_across_builds_and_processes()
     {
         // Pinned from the first build of this format. A change here means journals written by earlier builds
         // would no longer be reproduced byte for byte: bump the format id rather than update this value lightly.
@@ -61,7 +61,7 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void AnEventLineHasTheDocumentedLayout()
+    public void An_event_line_has_the_documented_layout()
     {
         var record = new JournalRecord(
             new SimTime(2_500_000),
@@ -82,7 +82,7 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void TheManifestLineCarriesTheScenarioAndItsDigest()
+    public void The_manifest_line_carries_the_scenario_and_its_digest()
     {
         var manifest = JournalSamples.Manifest();
         var firstLine = Encoding.UTF8.GetString(JournalSamples.SplitLines(JournalSamples.Standard())[0]);
@@ -98,7 +98,7 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void EachChainValueIsXxHash128OfThePreviousValueAndTheLineBeforeItsChainMember()
+    public void Each_chain_value_is_XxHash128_of_the_previous_value_and_the_line_before_its_chain_member()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         var previous = new string('0', 32);
@@ -115,7 +115,7 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void AnEventReadBackGivesTheEngineRecordItCameFrom()
+    public void An_event_read_back_gives_the_engine_record_it_came_from()
     {
         // About 3.9 years of microseconds, with a last digit that a careless seconds conversion would lose.
         var record = new JournalRecord(new SimTime(123_456_789_012_345), new ComponentId("vehicle-2"), "vehicle.move", Severity.Notice, [RecordField.Of("x", 1.5)]);
@@ -130,7 +130,7 @@ public sealed class JournalRoundTripTests
     }
 
     [Fact]
-    public void AManifestWithoutExtraHasNoExtraMember()
+    public void A_manifest_without_extra_has_no_extra_member()
     {
         var bytes = JournalSamples.Write(JournalSamples.Manifest() with { Extra = [] }, [], JournalSamples.Summary());
         var firstLine = Encoding.UTF8.GetString(JournalSamples.SplitLines(bytes)[0]);

@@ -8,7 +8,7 @@ public sealed class JournalVerifierTests
     private const int StandardLineCount = 7;
 
     [Fact]
-    public void AnUntouchedJournalVerifies()
+    public void An_untouched_journal_verifies()
     {
         var report = Verify(JournalSamples.Standard());
 
@@ -18,7 +18,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AJournalFileVerifiesFromItsPath()
+    public void A_journal_file_verifies_from_its_path()
     {
         using var directory = new TemporaryDirectory();
         var path = directory.File("run.jsonl");
@@ -28,7 +28,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void OneEditedByteInAnEventIsReportedAtItsLine()
+    public void One_edited_byte_in_an_event_is_reported_at_its_line()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         var line = Encoding.UTF8.GetString(lines[3]);
@@ -41,7 +41,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AnEditedScenarioTextIsReportedAtTheManifest()
+    public void An_edited_scenario_text_is_reported_at_the_manifest()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         var position = Encoding.UTF8.GetString(lines[0]).IndexOf("5000", StringComparison.Ordinal);
@@ -51,7 +51,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void ADeletedLineIsReportedAtTheLineAfterTheGap()
+    public void A_deleted_line_is_reported_at_the_line_after_the_gap()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines.RemoveAt(2);
@@ -60,7 +60,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void SwappedLinesAreReportedAtTheFirstOfThem()
+    public void Swapped_lines_are_reported_at_the_first_of_them()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         (lines[2], lines[3]) = (lines[3], lines[2]);
@@ -69,7 +69,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void ATailCutInsideALineIsReportedAsTruncatedAtThatLine()
+    public void A_tail_cut_inside_a_line_is_reported_as_truncated_at_that_line()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         var kept = JournalSamples.Join(lines.Take(4)).Concat(lines[4].Take(lines[4].Length / 2)).ToArray();
@@ -78,7 +78,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void ALastLineWithoutItsNewlineIsTruncated()
+    public void A_last_line_without_its_newline_is_truncated()
     {
         var bytes = JournalSamples.Standard();
 
@@ -86,7 +86,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AJournalWithoutItsSummaryIsTruncated()
+    public void A_journal_without_its_summary_is_truncated()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines.RemoveAt(lines.Count - 1);
@@ -95,7 +95,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AJournalWithoutItsManifestIsReportedAsSuch()
+    public void A_journal_without_its_manifest_is_reported_as_such()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines.RemoveAt(0);
@@ -104,13 +104,13 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AnEmptyFileHasNoManifest()
+    public void An_empty_file_has_no_manifest()
     {
         AssertFailure(Verify([]), VerificationFailure.MissingManifest, line: 1);
     }
 
     [Fact]
-    public void ALineWithoutAChainMemberIsUnparseable()
+    public void A_line_without_a_chain_member_is_unparseable()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines.Insert(2, "{\"type\":\"event\",\"seq\":99}\n"u8.ToArray());
@@ -119,7 +119,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AChainValueThatIsNotLowercaseHexIsUnparseable()
+    public void A_chain_value_that_is_not_lowercase_hex_is_unparseable()
     {
         var lines = JournalSamples.SplitLines(JournalSamples.Standard());
         lines[1][^4] = (byte)'G';
@@ -128,7 +128,7 @@ public sealed class JournalVerifierTests
     }
 
     [Fact]
-    public void AnythingAfterTheSummaryIsRejected()
+    public void Anything_after_the_summary_is_rejected()
     {
         var bytes = JournalSamples.Standard();
         var twice = bytes.Concat(bytes).ToArray();

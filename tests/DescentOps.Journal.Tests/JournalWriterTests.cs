@@ -7,7 +7,7 @@ namespace DescentOps.Journal.Tests;
 public sealed class JournalWriterTests
 {
     [Fact]
-    public void NothingIsUnderTheFinalNameUntilCompleteRenamesThePartialFile()
+    public void Nothing_is_under_the_final_name_until_complete_renames_the_partial_file()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -32,7 +32,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void CompleteReplacesAnOlderJournal()
+    public void Complete_replaces_an_older_journal()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -47,7 +47,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void AbandonLeavesNoFile()
+    public void Abandon_leaves_no_file()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -62,7 +62,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void DisposingAnUnfinishedJournalKeepsEveryLineUnderThePartialName()
+    public void Disposing_an_unfinished_journal_keeps_every_line_under_the_partial_name()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -84,7 +84,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void WhatIsOnDiskWhileARunIsInProgressIsAnIntactPrefix()
+    public void What_is_on_disk_while_a_run_is_in_progress_is_an_intact_prefix()
     {
         using var directory = new TemporaryDirectory();
         var finalPath = directory.File("run.jsonl");
@@ -107,7 +107,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void ARecordThatCannotBeEncodedLeavesNoTraceAndTheJournalStillCompletes()
+    public void A_record_that_cannot_be_encoded_leaves_no_trace_and_the_journal_still_completes()
     {
         using var stream = new MemoryStream();
         using (var writer = JournalWriter.Create(stream, JournalSamples.Manifest()))
@@ -130,7 +130,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void ALoneSurrogateIsRefusedRatherThanReplaced()
+    public void A_lone_surrogate_is_refused_rather_than_replaced()
     {
         // One fact rather than a theory: xunit serializes theory data through UTF-8, which would already have
         // replaced the lone surrogates with U+FFFD before the test ran.
@@ -145,7 +145,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void AWellFormedSurrogatePairIsKept()
+    public void A_well_formed_surrogate_pair_is_kept()
     {
         var text = "face \U0001F600 end";
         var record = new JournalRecord(SimTime.Epoch, new ComponentId("probe"), "probe.note", Severity.Info, [RecordField.Of("text", text)]);
@@ -156,7 +156,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void AfterAnOutputFailureTheWriterRefusesMoreLinesAndStillDisposes()
+    public void After_an_output_failure_the_writer_refuses_more_lines_and_still_disposes()
     {
         // Room for the sample manifest (460 bytes) but not for the first 64 KiB buffer of events.
         var stream = new FailingStream(acceptedBytes: 1_000);
@@ -177,7 +177,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void NoLineCanBeWrittenAfterComplete()
+    public void No_line_can_be_written_after_complete()
     {
         using var writer = JournalWriter.Create(new MemoryStream(), JournalSamples.Manifest());
         writer.Complete(JournalSamples.Summary());
@@ -187,7 +187,7 @@ public sealed class JournalWriterTests
     }
 
     [Fact]
-    public void AManifestLongerThanTheBufferIsWrittenWhole()
+    public void A_manifest_longer_than_the_buffer_is_written_whole()
     {
         // Twice the writer's 64 KiB buffer.
         var manifest = JournalSamples.Manifest() with { ScenarioText = new string('x', 128 * 1024) };

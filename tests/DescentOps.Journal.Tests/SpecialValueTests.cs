@@ -24,7 +24,7 @@ public sealed class SpecialValueTests
 
     [Theory]
     [MemberData(nameof(Doubles))]
-    public void ADoubleFieldIsSpelledAsDocumentedAndReadsBackBitForBit(double value, string spelling)
+    public void A_double_field_is_spelled_as_documented_and_reads_back_bit_for_bit(double value, string spelling)
     {
         var (line, data) = RoundTrip(RecordField.Of("v", value));
 
@@ -40,7 +40,7 @@ public sealed class SpecialValueTests
     [InlineData("-Infinity")]
     [InlineData("1.5")]
     [InlineData("")]
-    public void TextThatSpellsANumberStaysText(string text)
+    public void Text_that_spells_a_number_stays_text(string text)
     {
         var (_, data) = RoundTrip(RecordField.Of("v", text));
 
@@ -50,7 +50,7 @@ public sealed class SpecialValueTests
     }
 
     [Fact]
-    public void ControlCharactersAreEscapedAndOtherCharactersKeptAsUtf8()
+    public void Control_characters_are_escaped_and_other_characters_kept_as_UTF8()
     {
         var (line, data) = RoundTrip(RecordField.Of("v", "\u0001\u001f\b\f\r\n\t\"\\ é ж \u2028 /"));
 
@@ -62,7 +62,7 @@ public sealed class SpecialValueTests
     [InlineData(long.MinValue)]
     [InlineData(long.MaxValue)]
     [InlineData(0L)]
-    public void IntegersStayIntegers(long value)
+    public void Integers_stay_integers(long value)
     {
         var (line, data) = RoundTrip(RecordField.Of("v", value));
 
@@ -73,7 +73,7 @@ public sealed class SpecialValueTests
     }
 
     [Fact]
-    public void SpecialDoublesInTheManifestAndSummaryRoundTrip()
+    public void Special_doubles_in_the_manifest_and_summary_round_trip()
     {
         var manifest = JournalSamples.Manifest() with { UntilSeconds = double.PositiveInfinity };
         var summary = JournalSamples.Summary() with { FinalTimeS = -0.0 };

@@ -11,7 +11,7 @@ public sealed class BasalLayerTests
     [InlineData("{ top: 2499.4 m, bottom: 2499.7 m, salinity: 3 g/kg }", 2499.9, 12.0)]   // below it
     [InlineData("{ top: 2400 m, bottom: 2499.5 m, salinity: 3 g/kg }", 2499.2, 3.0)]      // a layer reaching in from above
     [InlineData("{ top: 2400 m, bottom: 2499.5 m, salinity: 3 g/kg }", 2499.8, 12.0)]
-    public void TheOceansSaltFillsTheBottomMetreAroundTheScenariosLayers(string layer, double depthM, double expectedGPerKg)
+    public void The_oceans_salt_fills_the_bottom_metre_around_the_scenarios_layers(string layer, double depthM, double expectedGPerKg)
     {
         // The default scenario's shell is 2.5 km thick over an ocean of 12 g/kg.
         var scenario = MissionHarness.Edited(("  ocean_salinity: 12 g/kg", $"  ocean_salinity: 12 g/kg\n  layers:\n    - {layer}"));

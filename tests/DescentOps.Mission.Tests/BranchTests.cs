@@ -17,7 +17,7 @@ public sealed class BranchTests
         """;
 
     [Fact]
-    public async Task ABranchEqualsItsParentBeforeTheInstantAndPartsWhereTheChangeActs()
+    public async Task A_branch_equals_its_parent_before_the_instant_and_parts_where_the_change_acts()
     {
         var folder = ToolProcess.NewTempDirectory();
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
@@ -41,7 +41,7 @@ public sealed class BranchTests
     }
 
     [Fact]
-    public async Task AChangeThatActsBeforeTheInstantIsRefusedAndLeavesNoLog()
+    public async Task A_change_that_acts_before_the_instant_is_refused_and_leaves_no_log()
     {
         var folder = ToolProcess.NewTempDirectory();
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
@@ -55,7 +55,7 @@ public sealed class BranchTests
     }
 
     [Fact]
-    public async Task ABranchOfABranchCarriesBothChangesAndReplays()
+    public async Task A_branch_of_a_branch_carries_both_changes_and_replays()
     {
         var folder = ToolProcess.NewTempDirectory();
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
@@ -72,7 +72,7 @@ public sealed class BranchTests
     }
 
     [Fact]
-    public async Task ABranchNeverOverwritesAnExistingLogNotEvenItsParent()
+    public async Task A_branch_never_overwrites_an_existing_log_not_even_its_parent()
     {
         var folder = ToolProcess.NewTempDirectory();
         Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);

@@ -13,7 +13,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class CatalogueAgreementTests
 {
     [Fact]
-    public void FramesCatalogueAndScenarioFormatNameTheSameNumericPoints()
+    public void Frames_catalogue_and_scenario_format_name_the_same_numeric_points()
     {
         var scenario = BuiltInScenarios.Default();
         var catalogue = MissionCatalogue.For(scenario);

@@ -4,7 +4,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class CommandLineTests
 {
     [Fact]
-    public async Task AMalformedScenarioIsReportedWithItsLocationAndLeavesNoLog()
+    public async Task A_malformed_scenario_is_reported_with_its_location_and_leaves_no_log()
     {
         var folder = ToolProcess.NewTempDirectory();
         var scenario = Path.Combine(folder, "bad.yaml");
@@ -21,7 +21,7 @@ public sealed class CommandLineTests
     }
 
     [Fact]
-    public async Task AnUnknownOptionIsAUsageError()
+    public async Task An_unknown_option_is_a_usage_error()
     {
         var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "run", "--sed", "3");
         Assert.Equal(2, exit); // ExitCode.UsageError
@@ -29,7 +29,7 @@ public sealed class CommandLineTests
     }
 
     [Fact]
-    public async Task ARunStoppedByItsTimeLimitSaysSoInItsExitCodeAndLog()
+    public async Task A_run_stopped_by_its_time_limit_says_so_in_its_exit_code_and_log()
     {
         var folder = ToolProcess.NewTempDirectory();
         var (exit, stdout, _) = await InProcessTool.RunAsync(folder, "run", "--until", "10 d", "--log", "short.jsonl");
@@ -41,7 +41,7 @@ public sealed class CommandLineTests
     }
 
     [Fact]
-    public async Task VerifyFindsAnEditedLineAndNamesIt()
+    public async Task Verify_finds_an_edited_line_and_names_it()
     {
         var folder = ToolProcess.NewTempDirectory();
         await InProcessTool.RunAsync(folder, "run", "--until", "2 d", "--log", "a.jsonl");
@@ -57,7 +57,7 @@ public sealed class CommandLineTests
     }
 
     [Fact]
-    public async Task SchemaPrintsTheCommittedSchema()
+    public async Task Schema_prints_the_committed_schema()
     {
         var (exit, stdout, _) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), "schema");
         Assert.Equal(0, exit);
@@ -65,7 +65,7 @@ public sealed class CommandLineTests
     }
 
     [Fact]
-    public async Task CheckLocatesARuleErrorInTheScenarioFileAndPassesAGoodOne()
+    public async Task Check_locates_a_rule_error_in_the_scenario_file_and_passes_a_good_one()
     {
         var folder = ToolProcess.NewTempDirectory();
         var good = Path.Combine(folder, "good.yaml");

@@ -19,7 +19,7 @@ public sealed class ContingencyTests
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));
 
     [Fact]
-    public async Task AFrozenInProbeIsFreedSoonerByTheWallBoostRule()
+    public async Task A_frozen_in_probe_is_freed_sooner_by_the_wall_boost_rule()
     {
         var (withRules, sinkWith) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
         var (withoutRules, sinkWithout) = await RunAsync(MissionHarness.WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
@@ -37,7 +37,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public async Task TheSummaryMeasuresDetectionActionAndRecoveryOfTheStall()
+    public async Task The_summary_measures_detection_action_and_recovery_of_the_stall()
     {
         var (summary, sink) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
         var measure = Assert.Single(summary.Faults);
@@ -57,7 +57,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public async Task AStuckVelocitySensorFoolsTheNaiveRuleButNotTheDepthRateCrossCheck()
+    public async Task A_stuck_velocity_sensor_fools_the_naive_rule_but_not_the_depth_rate_cross_check()
     {
         var better = Text("stuck-velocity-sensor.yaml");
         const string crossCheck = "when rate of probe.depth over 2 h below 0.7 m/h and probe.depth above 20 m";
@@ -82,7 +82,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public async Task TheSameRuleOnTheGroundActsOneRoundTripLaterThanOnBoard()
+    public async Task The_same_rule_on_the_ground_acts_one_round_trip_later_than_on_board()
     {
         var onBoard = Text("stall-wall-boost.yaml");
         var onGround = onBoard.Replace("    runs on board\n    severity high", "    runs on ground\n    severity high", StringComparison.Ordinal);
@@ -115,7 +115,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public void ARuleErrorIsReportedAtItsPlaceInTheScenarioFile()
+    public void A_rule_error_is_reported_at_its_place_in_the_scenario_file()
     {
         var text = Text("stall-wall-boost.yaml").Replace("when probe.regime is FrozenIn", "when probe.regme is FrozenIn", StringComparison.Ordinal);
         var scenario = ScenarioLoader.LoadText(text, "typo.yaml");
@@ -130,7 +130,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public async Task AFailedHeadSegmentTurnsTheProbePastItsLimitUnlessARuleSteersBack()
+    public async Task A_failed_head_segment_turns_the_probe_past_its_limit_unless_a_rule_steers_back()
     {
         var (steered, steeredSink) = await RunAsync(Text("tilt-steering.yaml"), "steered.yaml");
         var (unsteered, unsteeredSink) = await RunAsync(MissionHarness.WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
@@ -145,7 +145,7 @@ public sealed class ContingencyTests
     }
 
     [Fact]
-    public async Task AnUnevenHeadTurnsTheProbeAtTheKinematicLimitOfItsClearance()
+    public async Task An_uneven_head_turns_the_probe_at_the_kinematic_limit_of_its_clearance()
     {
         var scenario = ScenarioLoader.LoadText(MissionHarness.WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);

@@ -7,7 +7,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class DebrisBandTests
 {
     [Fact]
-    public void ACrossingCountsOnlyTheOverlapWithEachBand()
+    public void A_crossing_counts_only_the_overlap_with_each_band()
     {
         DebrisBandModel[] bands = [new(100, 110, 0.003, 0.01), new(200, 240, 0.0005, 0.02)];
 
@@ -27,7 +27,7 @@ public sealed class DebrisBandTests
         ("until: 400 d", "until: 40 d"));
 
     [Fact]
-    public async Task TheHeadCollectsTheBandsDebrisAndTheBandScattersItsTilt()
+    public async Task The_head_collects_the_bands_debris_and_the_band_scatters_its_tilt()
     {
         var (_, calm) = await MissionHarness.RunAsync(WithBand("0 deg"));
         var (_, rough) = await MissionHarness.RunAsync(WithBand("0.2 deg"));

@@ -8,7 +8,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class DeterminismTests
 {
     [Fact]
-    public async Task TheSameSeedTwiceInOneProcessGivesByteIdenticalLogs()
+    public async Task The_same_seed_twice_in_one_process_gives_byte_identical_logs()
     {
         var scenario = BuiltInScenarios.Default();
         var first = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
@@ -18,7 +18,7 @@ public sealed class DeterminismTests
     }
 
     [Fact]
-    public async Task TheActorKernelWritesTheSameLogAsTheSequentialReference()
+    public async Task The_actor_kernel_writes_the_same_log_as_the_sequential_reference()
     {
         var scenario = BuiltInScenarios.Default();
         var actors = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
@@ -27,7 +27,7 @@ public sealed class DeterminismTests
     }
 
     [Fact]
-    public async Task ASeparateProcessWritesTheSameBytes()
+    public async Task A_separate_process_writes_the_same_bytes()
     {
         var scenario = BuiltInScenarios.Default();
         var inProcess = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
@@ -41,7 +41,7 @@ public sealed class DeterminismTests
     }
 
     [Fact]
-    public async Task ADifferentSeedChangesTheDrawsAndSoTheEvents()
+    public async Task A_different_seed_changes_the_draws_and_so_the_events()
     {
         var scenario = BuiltInScenarios.Default();
         var a = EventLines(await MissionHarness.JournalBytesAsync(scenario, 1, KernelChoice.Sequential));

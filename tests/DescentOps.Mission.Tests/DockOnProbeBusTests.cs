@@ -34,7 +34,7 @@ public sealed class DockOnProbeBusTests
         sink.OfKind("vehicle.sortie").First(r => r.Source.Name == "vehicle-wisp-1").Time.SecondsSinceEpoch;
 
     [Fact]
-    public async Task TheChargerDrawsOnTheProbesBusAndFillsTheBatteryAtItsPower()
+    public async Task The_charger_draws_on_the_probes_bus_and_fills_the_battery_at_its_power()
     {
         var scenario = ScenarioLoader.LoadText(WithPower(), "dock.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);
@@ -53,7 +53,7 @@ public sealed class DockOnProbeBusTests
     }
 
     [Fact]
-    public async Task WhileTheBusShedsTheChargerTheVehicleWaits()
+    public async Task While_the_bus_sheds_the_charger_the_vehicle_waits()
     {
         // A dip leaves 1 % of 10 kW = 100 W from before the glider docks until a day later: the electronics (60 W) run,
         // the science load and the charger (lowest priority) are shed, so charging starts only when the dip ends.

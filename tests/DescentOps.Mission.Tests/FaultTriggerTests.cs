@@ -26,7 +26,7 @@ public sealed class FaultTriggerTests
         [.. sink.OfKind("fault.drawn").Where(r => CollectingSink.TextField(r, "fault") == fault).SelectMany(r => CollectingSink.NumbersField(r, "starts_s"))];
 
     [Fact]
-    public async Task AConditionTriggerFiresOnTheFirstFrameCompletingItsPersistenceOnTheTrueState()
+    public async Task A_condition_trigger_fires_on_the_first_frame_completing_its_persistence_on_the_true_state()
     {
         var scenario = WithFaults("""
               - name: warm-ice-sag
@@ -58,7 +58,7 @@ public sealed class FaultTriggerTests
     }
 
     [Fact]
-    public async Task RandomOccurrencesAreDrawnFromTheSeedAndNeverOverlap()
+    public async Task Random_occurrences_are_drawn_from_the_seed_and_never_overlap()
     {
         var faults = """
               - name: random-sag
@@ -83,7 +83,7 @@ public sealed class FaultTriggerTests
     }
 
     [Fact]
-    public async Task RandomIntervalsFollowTheExponentialDistributionOfTheirMean()
+    public async Task Random_intervals_follow_the_exponential_distribution_of_their_mean()
     {
         // 1000 occurrences of a 1 s fault with a mean interval of 1 d. For an exponential law the standard deviation
         // equals the mean, so the sample mean of n = 1000 gaps lies within 4 standard errors (4 / sqrt(1000) = 12.6 %)
@@ -109,7 +109,7 @@ public sealed class FaultTriggerTests
     [Theory]
     [InlineData("probe.depht above 1 km", "unknown")]
     [InlineData("probe.depth above 5 kW", "unit")]
-    public void ABadConditionIsRefusedAtItsPlaceInTheScenarioFile(string condition, string expected)
+    public void A_bad_condition_is_refused_at_its_place_in_the_scenario_file(string condition, string expected)
     {
         var scenario = WithFaults($"""
               - name: bad-trigger
@@ -132,7 +132,7 @@ public sealed class FaultTriggerTests
     [InlineData("at: 3 d\n    when: probe.depth above 1 km", "exactly one trigger")]
     [InlineData("at: 3 d\n    occurrences: 2", "belong to a random trigger")]
     [InlineData("mean_interval: 3 d\n    occurrences: 2", "happens once")]
-    public void TriggerFieldsThatContradictEachOtherAreRefused(string trigger, string expected)
+    public void Trigger_fields_that_contradict_each_other_are_refused(string trigger, string expected)
     {
         var text = MissionHarness.DefaultText.Replace(
             ScheduledDip,

@@ -6,7 +6,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class GliderCommandTests
 {
     [Fact]
-    public async Task GliderSpeedStrokeAndEnduranceFollowTheSteadyGlide()
+    public async Task Glider_speed_stroke_and_endurance_follow_the_steady_glide()
     {
         var (exit, stdout, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(),
             ["physics", "glider", "--net-buoyancy", "0.3 kg", "--glide-angle", "25 deg", "--gravity", "1.0 m/s^2", "--hotel-power", "2 W", "--battery", "0.1 kWh", "--pressure", "33 kPa", "--water-density", "1028 kg/m³", "--json"]);
@@ -36,7 +36,7 @@ public sealed class GliderCommandTests
     }
 
     [Fact]
-    public async Task AGlideShallowerThanTheWingCanFlyIsRefusedNamingTheOption()
+    public async Task A_glide_shallower_than_the_wing_can_fly_is_refused_naming_the_option()
     {
         var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), ["physics", "glider", "--net-buoyancy", "0.3 kg", "--glide-angle", "3 deg"]);
         Assert.Equal(3, exit); // ExitCode.InvalidInput

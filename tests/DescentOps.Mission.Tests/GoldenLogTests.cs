@@ -31,7 +31,7 @@ public sealed class GoldenLogTests
 
     [Theory]
     [MemberData(nameof(Scenarios))]
-    public async Task EveryBuiltInScenarioWritesItsGoldenLogWithBothKernels(string name)
+    public async Task Every_built_in_scenario_writes_its_golden_log_with_both_kernels(string name)
     {
         var path = Path.Combine(GoldenFolder, Path.ChangeExtension(name, ".jsonl"));
         var sequential = await JournalBytesAsync(name, KernelChoice.Sequential);
@@ -46,7 +46,7 @@ public sealed class GoldenLogTests
     }
 
     [Fact]
-    public void NoGoldenLogIsLeftWithoutItsScenario()
+    public void No_golden_log_is_left_without_its_scenario()
     {
         var expected = BuiltInScenarios.Names.Select(n => Path.ChangeExtension(n, ".jsonl")).Order(StringComparer.Ordinal);
         var present = Directory.GetFiles(GoldenFolder, "*.jsonl").Select(Path.GetFileName).Order(StringComparer.Ordinal);

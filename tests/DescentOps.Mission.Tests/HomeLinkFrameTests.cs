@@ -10,7 +10,7 @@ public sealed class HomeLinkFrameTests
     [Theory]
     [InlineData(4096)]          // the scenario's frame: about a second on the air
     [InlineData(100_000_000)]   // about 22 h on the air at about 1.3 kbit/s, longer than any window of an 8 h turn (41 % open)
-    public void AFrameStartIsAFixedPoint(long frameBits)
+    public void A_frame_start_is_a_fixed_point(long frameBits)
     {
         var text = BuiltInScenarios.Text("station-dies-before-breakthrough.yaml").Replace("frame_bits: 4096", $"frame_bits: {frameBits}", StringComparison.Ordinal)
             .Replace("rotation_period: 260 h", "rotation_period: 8 h", StringComparison.Ordinal);

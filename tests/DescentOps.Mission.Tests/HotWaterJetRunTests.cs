@@ -66,7 +66,7 @@ public sealed class HotWaterJetRunTests
     private static double F(JournalRecord r, string name) => CollectingSink.Field(r, name);
 
     [Fact]
-    public async Task SwitchingTheJetsOnGivesTheSpeedOfTheReferenceNotesWorkedFigure()
+    public async Task Switching_the_jets_on_gives_the_speed_of_the_reference_notes_worked_figure()
     {
         var (summary, sink) = await MissionHarness.RunAsync(Load(Text()));
         Assert.Equal(RunOutcomeKind.TimeLimit, summary.Outcome.Kind); // a 3-day slice of the descent
@@ -112,7 +112,7 @@ public sealed class HotWaterJetRunTests
     }
 
     [Fact]
-    public async Task ACloggedNozzleSlowsTheJetsByTheShareOfHeatItLeaves()
+    public async Task A_clogged_nozzle_slows_the_jets_by_the_share_of_heat_it_leaves()
     {
         var fault = "faults:\n" +
             "  - name: nozzle-clog\n" +
@@ -148,7 +148,7 @@ public sealed class HotWaterJetRunTests
     }
 
     [Fact]
-    public async Task AWiderHoleIsSlowerAndFreezesInLaterWhenTheProbeStops()
+    public async Task A_wider_hole_is_slower_and_freezes_in_later_when_the_probe_stops()
     {
         // Two runs, hole radius 11.45 cm and 16 cm, paused at 35 m with the wall heaters off: the wider hole is cut more
         // slowly (v ∝ 1/R_h² at the same heat) and its wider clearance takes longer to freeze in around the stopped body.
@@ -172,7 +172,7 @@ public sealed class HotWaterJetRunTests
     }
 
     [Fact]
-    public async Task OnABusTheJetsAreOneLoadOfHeatAndPump()
+    public async Task On_a_bus_the_jets_are_one_load_of_heat_and_pump()
     {
         // A fission source of 20 kW electric and the default loads: the jets join them at priority 1, beside the wall.
         const string power = "power:\n  source: fission\n  electric_power: 20 kW\n  conversion_efficiency: 0.3\n\ntether:\n";
@@ -193,7 +193,7 @@ public sealed class HotWaterJetRunTests
     }
 
     [Fact]
-    public void JetsThatDoNotFitTheProbeOrItsBusAreRefusedAtTheirField()
+    public void Jets_that_do_not_fit_the_probe_or_its_bus_are_refused_at_their_field()
     {
         var narrow = Assert.Throws<ScenarioException>(() => Load(Text(("    minimum_hole_radius: 11 cm\n", "    minimum_hole_radius: 9 cm\n"))));
         Assert.Contains(narrow.Errors, e => e.FieldPath == "probe.jets.minimum_hole_radius");

@@ -7,7 +7,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class KilledRunTests
 {
     [Fact]
-    public async Task ARunKilledMidWayLeavesAnIntactPrefixUnderThePartialName()
+    public async Task A_run_killed_mid_way_leaves_an_intact_prefix_under_the_partial_name()
     {
         var folder = ToolProcess.NewTempDirectory();
         var scenario = Path.Combine(folder, "stuck.yaml");

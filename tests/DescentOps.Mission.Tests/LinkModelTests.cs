@@ -15,7 +15,7 @@ public sealed class LinkModelTests
     private static TetherModel Tether(double lengthM, FibreOpticsModel optics) => new(lengthM, 2.04e8, optics);
 
     [Fact]
-    public void TheTetherBudgetIsThePhysicsReferencesCheckValuesFo1ToFo3()
+    public void The_tether_budget_is_the_physics_references_check_values_FO1_to_FO3()
     {
         // Physics reference (links-power-ocean.md §1.6), FO-1 (CALC): α = 0.30 dB/km over 20 km, 10 splices × 0.1 dB,
         // 2 connectors × 0.5 dB, 1.0 dB of bends: loss = 0.30·20 + 10·0.1 + 2·0.5 + 1.0 = 9.0 dB, the whole fibre paid out.
@@ -32,7 +32,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void TheDefaultTetherClosesEvenOnTheWorstFibreG652DAllows()
+    public void The_default_tether_closes_even_on_the_worst_fibre_G652D_allows()
     {
         // ITU-T G.652 (11/2016), table of G.652.D attributes: cabled attenuation at most 0.40 dB/km at 1310–1625 nm and
         // 0.30 dB/km at 1550 nm (as the physics reference's §1.2 quotes them). The defaults' typical 0.35 dB/km lies below.
@@ -50,7 +50,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void PackLossShrinksWithTheShareOfFibreStillWound()
+    public void Pack_loss_shrinks_with_the_share_of_fibre_still_wound()
     {
         var optics = FibreOpticsModel.Default with { PackLossDb = 2.0 };
         var tether = new TetherOptics(Tether(4_000, optics));
@@ -66,7 +66,7 @@ public sealed class LinkModelTests
         new(1, null, [], transmitPowerDbm, 0.0, 100e6, 10e3, 5.0, 10.0, 6.0, 0.0, "m07-std", 1e6, 1.0, 0, 0.0);
 
     [Fact]
-    public void TheRelayRangeIsThePhysicsReferencesCheckValueRf12AtTheTemperaturesOfRf2AndRf4()
+    public void The_relay_range_is_the_physics_references_check_value_RF12_at_the_temperatures_of_RF2_and_RF4()
     {
         // Physics reference §2.4, RF-12 (CALC): 30 dBm, 0 dBi, 10 kHz, NF 5 dB, SNR 10 dB, margin 6 dB, no misc loss,
         // 100 MHz: allowed path loss 143.0 dB; spacing 7.92 km at N_a = 6 dB/km and 1.69 km at 36 dB/km (1 % rel).
@@ -81,7 +81,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void AHopClosesExactlyWithinTheRange()
+    public void A_hop_closes_exactly_within_the_range()
     {
         var radio = new RelayRadio(Rf12Plan(-25.0), z => 132.0 * Math.Pow(272.0 / 132.0, z / 2500.0));
         foreach (var depth in new[] { 600.0, 1500.0, 2300.0, 2490.0 })
@@ -93,7 +93,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void RangeFallsAsTheIceWarms()
+    public void Range_falls_as_the_ice_warms()
     {
         // Property over 300 random radios and temperature pairs (seeded, so every run draws the same cases).
         var random = new Random(20261202);
@@ -109,7 +109,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void SettlingMovesItemsInOrderAndLosesNone()
+    public void Settling_moves_items_in_order_and_loses_none()
     {
         // Property over 2000 random chains: every item is either still held or delivered exactly once; no hold exceeds
         // its capacity; an item moves only across closed hops; a closed run of hops to the surface empties; CanLeave
@@ -161,7 +161,7 @@ public sealed class LinkModelTests
     }
 
     [Fact]
-    public void AFullHoldRefusesAndSaysSo()
+    public void A_full_hold_refuses_and_says_so()
     {
         var hold = FrameHold<int>.Empty(2).Offer(1)!.Offer(2)!;
         Assert.Null(hold.Offer(3));

@@ -11,7 +11,7 @@ public sealed class MissionBehaviourTests
     private static readonly (string, string) NoFaults = ("faults:\n  - name: bus-sag-day-30\n    kind: power_dip\n    at: 30 d\n    duration: 12 h\n    remaining_fraction: 0.7\n", "");
 
     [Fact]
-    public async Task TheCrossingTimeIsTheIntegralOfOneOverTheDescentRate()
+    public async Task The_crossing_time_is_the_integral_of_one_over_the_descent_rate()
     {
         var scenario = MissionHarness.Edited(NoFaults);
         var (summary, _) = await MissionHarness.RunAsync(scenario);
@@ -36,7 +36,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task EnergyUsedToBreakthroughIsBusPowerTimesTime()
+    public async Task Energy_used_to_breakthrough_is_bus_power_times_time()
     {
         var scenario = MissionHarness.Edited(NoFaults);
         var (_, sink) = await MissionHarness.RunAsync(scenario);
@@ -49,7 +49,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task APowerDipDelaysBreakthroughByTheDistanceItCost()
+    public async Task A_power_dip_delays_breakthrough_by_the_distance_it_cost()
     {
         var nominal = MissionHarness.Edited(NoFaults);
         var dipped = BuiltInScenarios();
@@ -75,7 +75,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task AProbeWithoutPowerFreezesInAfterTheStefanTimeAndMeltsFreeWhenPowerReturns()
+    public async Task A_probe_without_power_freezes_in_after_the_Stefan_time_and_melts_free_when_power_returns()
     {
         var scenario = MissionHarness.Edited(
             ("    remaining_fraction: 0.7\n", "    remaining_fraction: 0\n"),
@@ -94,7 +94,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task WallHeatersTooWeakToMeltFreeLeaveTheProbeHeldByTheIce()
+    public async Task Wall_heaters_too_weak_to_melt_free_leave_the_probe_held_by_the_ice()
     {
         // Head and wall heat together (6.3 kW) would melt the frozen gap open, but 0.3 kW of wall heat is far below
         // the some 8 kW the side balance needs for a moving 2.4 m probe of 12 cm radius in this cold ice (issue 12):
@@ -111,7 +111,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task OverlappingPowerDipsLeaveTheSmallestShareUntilTheLastOneEnds()
+    public async Task Overlapping_power_dips_leave_the_smallest_share_until_the_last_one_ends()
     {
         // Day 30-30.5 at 70 % (the default's dip) and day 30.25-31 at 85 %: full power must not return at day 30.5.
         var scenario = MissionHarness.Edited(("run:\n", "  - name: long-sag\n    kind: power_dip\n    at: 30.25 d\n    duration: 0.75 d\n    remaining_fraction: 0.85\nrun:\n"));
@@ -125,7 +125,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task AStuckSensorRepeatsTheTrueReadingOfTheInstantItStuck()
+    public async Task A_stuck_sensor_repeats_the_true_reading_of_the_instant_it_stuck()
     {
         // Stuck between two frames (at day 10 plus 5 minutes): the reading it keeps is the depth at that instant.
         var scenario = MissionHarness.Edited(("run:\n", "  - name: depth-stuck\n    kind: sensor_stuck\n    at: 864300 s\n    point: probe.depth\nrun:\n"));
@@ -141,7 +141,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task GroundLatencyIsFibrePlusStationPlusLightTime()
+    public async Task Ground_latency_is_fibre_plus_station_plus_light_time()
     {
         var scenario = DescentOps.Scenarios.BuiltInScenarios.Default();
         var (_, sink) = await MissionHarness.RunAsync(scenario);
@@ -156,7 +156,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task ABrokenTetherLosesEveryLaterFrameAndSaysSo()
+    public async Task A_broken_tether_loses_every_later_frame_and_says_so()
     {
         var scenario = MissionHarness.Edited(("run:\n", "  - name: fibre-shear\n    kind: tether_break\n    at: 60 d\nrun:\n"));
         var (summary, sink) = await MissionHarness.RunAsync(scenario);
@@ -170,7 +170,7 @@ public sealed class MissionBehaviourTests
     }
 
     [Fact]
-    public async Task AStationOutageShowsOnTheGroundAsAGapOfTheLostFrames()
+    public async Task A_station_outage_shows_on_the_ground_as_a_gap_of_the_lost_frames()
     {
         var scenario = MissionHarness.Edited(("run:\n", "  - name: station-brownout\n    kind: station_failure\n    at: 100 d\n    duration: 2 d\nrun:\n"));
         var (_, sink) = await MissionHarness.RunAsync(scenario);

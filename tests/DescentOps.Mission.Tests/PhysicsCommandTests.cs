@@ -19,7 +19,7 @@ public sealed class PhysicsCommandTests
     // ---- ice ----
 
     [Fact]
-    public async Task IceMatchesTheIapwsR1006CheckValuesAtTheTriplePoint()
+    public async Task Ice_matches_the_IAPWS_R1006_check_values_at_the_triple_point()
     {
         var ice = await JsonAsync("ice", "--temperature", "273.16 K", "--pressure", "611.657 Pa");
         AssertFields(ice, "temperature_k", "pressure_pa", "density_kg_m3", "heat_capacity_j_kg_k", "thermal_conductivity_w_m_k", "melting_temperature_k", "sublimation_pressure_pa");
@@ -35,7 +35,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task IceMatchesTheIapwsR1006CheckValuesAtTheNormalMeltingPointAndUnderHighPressure()
+    public async Task Ice_matches_the_IAPWS_R1006_check_values_at_the_normal_melting_point_and_under_high_pressure()
     {
         // IAPWS R10-06 Table 6, T = 273.152519 K, p = 101325 Pa: ρ = 916.721463419 kg/m³, c_p = 2096.71391024 J/(kg·K).
         var normal = await JsonAsync("ice", "--temperature", "273.152519 K", "--pressure", "101325 Pa");
@@ -52,7 +52,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task IcePhaseBoundariesMatchTheIapwsR1408CheckValues()
+    public async Task Ice_phase_boundaries_match_the_IAPWS_R1408_check_values()
     {
         // IAPWS R14-08(2011) Table 3 (check values): ice Ih melts at 260 K under p = 138.268 MPa, and the
         // sublimation pressure at 230 K is 8.94735 Pa. The pressure is given to 1 kPa, which moves T_m by < 1e-4 K.
@@ -62,7 +62,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task IceBelowTheTriplePointPressureHasNoMeltingTemperature()
+    public async Task Ice_below_the_triple_point_pressure_has_no_melting_temperature()
     {
         // No liquid exists below 611.657 Pa: the answer is null, not an error and not an extrapolated number.
         var ice = await JsonAsync("ice", "--temperature", "120 K", "--pressure", "0 Pa");
@@ -73,7 +73,7 @@ public sealed class PhysicsCommandTests
     // ---- descent ----
 
     [Fact]
-    public async Task DescentPowerBreakdownSumsToThePowerIn()
+    public async Task Descent_power_breakdown_sums_to_the_power_in()
     {
         var d = await JsonAsync("descent", "--radius", "12 cm", "--length", "2.4 m", "--head-power", "6 kW", "--wall-power", "3 kW",
             "--temperature", "200 K", "--pressure", "1 MPa", "--mass", "210 kg", "--gravity", "1.0 m/s^2");
@@ -85,7 +85,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task DescentLatentPowerIsTheMeltRateTimesThePublishedLatentHeat()
+    public async Task Descent_latent_power_is_the_melt_rate_times_the_published_latent_heat()
     {
         // Just above the triple-point pressure (at p_t itself water boils at its melting point, so the boiling-bounded
         // film cannot melt at all: issue 12), at 1 kPa. Independent pieces: the ice density at the far-field state from
@@ -105,7 +105,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task ADescentWithTooLittlePowerStallsAndLosesEverythingSideways()
+    public async Task A_descent_with_too_little_power_stalls_and_loses_everything_sideways()
     {
         var d = await JsonAsync("descent", "--radius", "12 cm", "--length", "2.4 m", "--head-power", "50 W", "--temperature", "100 K", "--pressure", "1 MPa");
         Assert.True(d.GetProperty("stalled").GetBoolean());
@@ -116,7 +116,7 @@ public sealed class PhysicsCommandTests
     // ---- refreeze ----
 
     [Fact]
-    public async Task RefreezeFrontConstantSolvesTheNeumannEquationAndTimeGoesAsTheGapSquared()
+    public async Task Refreeze_front_constant_solves_the_Neumann_equation_and_time_goes_as_the_gap_squared()
     {
         var r = await JsonAsync("refreeze", "--gap", "0.5 mm", "--temperature", "200 K");
         AssertFields(r, "stefan_number", "front_constant", "freeze_time_s");
@@ -130,7 +130,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task RefreezeStefanNumberIsTheIntegratedHeatCapacityOverTheLatentHeat()
+    public async Task Refreeze_Stefan_number_is_the_integrated_heat_capacity_over_the_latent_heat()
     {
         // Independent: Ste = ∫c_p dT / L from 200 K to 273.16 K, with c_p from the ice subcommand (R10-06) by
         // Simpson's rule on four intervals, and L = 333 426.5 J/kg at the triple point (Feistel and Wagner 2006).
@@ -151,7 +151,7 @@ public sealed class PhysicsCommandTests
     // ---- crossing ----
 
     [Fact]
-    public async Task CrossingAgreesWithAnIndependentQuadratureAndWithTheSimulatorsBreakthrough()
+    public async Task Crossing_agrees_with_an_independent_quadrature_and_with_the_simulators_breakthrough()
     {
         // A fault-free copy of the default scenario: the simulated probe then runs at full power all the way.
         var text = MissionHarness.DefaultText;
@@ -197,7 +197,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task CrossingUsesTheSameModelAsTheProbe()
+    public async Task Crossing_uses_the_same_model_as_the_probe()
     {
         var scenario = BuiltInScenarios.Default();
         var c = await JsonAsync("crossing", BuiltInScenarios.DefaultName);
@@ -207,7 +207,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task AProbeThatCannotMeltHasNoCrossingTime()
+    public async Task A_probe_that_cannot_melt_has_no_crossing_time()
     {
         var text = MissionHarness.DefaultText.Replace("  head_power: 6 kW", "  head_power: 20 W", StringComparison.Ordinal)
             .Replace("  wall_power: 10 kW", "  wall_power: 0 W", StringComparison.Ordinal);
@@ -221,7 +221,7 @@ public sealed class PhysicsCommandTests
     // ---- seawater ----
 
     [Fact]
-    public async Task SeawaterFreezingPointMatchesTheUnesco1983CheckValue()
+    public async Task Seawater_freezing_point_matches_the_UNESCO1983_check_value()
     {
         // UNESCO (1983) Tech. Pap. Mar. Sci. 44, freezing point check value: S = 40, p = 500 dbar → −2.588567 °C.
         var w = await JsonAsync("seawater", "--salinity", "40", "--pressure", "500 dbar", "--temperature", "0 °C", "--standard", "eos-80");
@@ -230,7 +230,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task SeawaterDensityMatchesTheEos80CheckValueAndSalinityUnitsAgree()
+    public async Task Seawater_density_matches_the_EOS80_check_value_and_salinity_units_agree()
     {
         // EOS-80 check values (Millero and Poisson 1981, UNESCO 1983): ρ(S = 35, t68 = 5 °C, p = 0) = 1027.67547 kg/m³.
         // The formula is on IPTS-68: 5 °C there is 5/1.00024 °C on ITS-90 (Saunders 1990).
@@ -244,7 +244,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task SeawaterSoundSpeedMatchesTheMackenzie1981CheckValue()
+    public async Task Seawater_sound_speed_matches_the_Mackenzie1981_check_value()
     {
         // Mackenzie (1981), J. Acoust. Soc. Am. 70(3), check value: T = 25 °C, S = 35, D = 1000 m → 1550.744 m/s.
         var w = await JsonAsync("seawater", "--salinity", "35", "--pressure", "0 Pa", "--temperature", "25 °C", "--terrestrial-depth", "1000 m", "--standard", "eos-80");
@@ -254,7 +254,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task SeawaterByTeos10AnswersAtTheFreezingPointUnderOneHundredMegapascals()
+    public async Task Seawater_by_TEOS10_answers_at_the_freezing_point_under_one_hundred_megapascals()
     {
         // GSW 3.6.16 (Debian python3-gsw), gsw.t_freezing(35.16504, 2420, 0) = −3.8226 °C (project note links-power-ocean SW-7)
         // and gsw.t_freezing(0, 10000, 0) = −8.951978831 °C; gsw.rho_t_exact and gsw.sound_speed_t_exact at that point.
@@ -271,7 +271,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task JetsAnswerHoleRadiusSpeedAndFreezeBack()
+    public async Task Jets_answer_hole_radius_speed_and_freeze_back()
     {
         // Reference note §4.6, PRB-10: 5 kW of jet heat, η 0.8, 1 m/h, 250 K ice (melting at 273.15 K) → R_h = 0.11450 m.
         var j = await JsonAsync("jets", "--power", "5 kW", "--speed", "1 m/h", "--temperature", "250 K", "--melting-temperature", "273.15 K",
@@ -285,7 +285,7 @@ public sealed class PhysicsCommandTests
     // ---- acoustic ----
 
     [Fact]
-    public async Task AcousticLossAndMarginFollowTheSonarEquation()
+    public async Task Acoustic_loss_and_margin_follow_the_sonar_equation()
     {
         var a = await JsonAsync("acoustic", "--frequency", "10 kHz", "--range", "2 km", "--temperature", "0 °C", "--salinity", "35", "--depth", "100 m",
             "--source-level", "180 dB", "--noise-level", "60", "--detection-threshold", "10");
@@ -305,7 +305,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task AcousticThorpAbsorptionMatchesAHandComputation()
+    public async Task Acoustic_Thorp_absorption_matches_a_hand_computation()
     {
         // Thorp (1967) at 10 kHz: 0.1·100/101 + 40·100/4200 + 2.75e-4·100 + 0.003 = 1.081891 dB/kyd = 1.183170 dB/km.
         var a = await JsonAsync("acoustic", "--frequency", "10 kHz", "--range", "1 km", "--temperature", "4 °C", "--salinity", "35", "--depth", "1 km", "--absorption-formula", "Thorp");
@@ -316,7 +316,7 @@ public sealed class PhysicsCommandTests
     // ---- fibre ----
 
     [Fact]
-    public async Task FibreBudgetAddsUpTheLosses()
+    public async Task Fibre_budget_adds_up_the_losses()
     {
         // 3.2 km at 0.35 dB/km (typical 1310 nm) + 2 connector pairs at 0.3 dB = 1.72 dB; the default optics are the
         // 1000BASE-LX class (IEEE 802.3 clause 38): −11 dBm minimum launch, −19 dBm sensitivity → margin 6.28 dB.
@@ -333,7 +333,7 @@ public sealed class PhysicsCommandTests
     // ---- radio in ice ----
 
     [Fact]
-    public async Task RadioIceAttenuationAndSpreadingFollowTheirFormulas()
+    public async Task Radio_ice_attenuation_and_spreading_follow_their_formulas()
     {
         var r = await JsonAsync("radio-ice", "--temperature", "251 K", "--distance", "100 m", "--frequency", "100 MHz");
         AssertFields(r, "attenuation_db_per_km", "path_loss_db");
@@ -349,7 +349,7 @@ public sealed class PhysicsCommandTests
     // ---- station and light time ----
 
     [Fact]
-    public async Task StationMedianLifeIsTheMedianDoseOverTheRate()
+    public async Task Station_median_life_is_the_median_dose_over_the_rate()
     {
         var lognormal = await JsonAsync("station", "--dose-rate", "0.1 Gy/d", "--median-dose", "30 krad");
         AssertFields(lognormal, "median_life_s");
@@ -361,7 +361,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task LightTimeIsDistanceOverTheSpeedOfLight()
+    public async Task Light_time_is_distance_over_the_speed_of_light()
     {
         // 1 au = 149 597 870 700 m (IAU 2012, exact); over c = 299 792 458 m/s that is 499.004 783 836 s.
         var l = await JsonAsync("light-time", "--distance", "1 au");
@@ -374,7 +374,7 @@ public sealed class PhysicsCommandTests
     // ---- vehicle ----
 
     [Fact]
-    public async Task VehicleSpeedEnergyAndEnduranceFollowTheDragLaw()
+    public async Task Vehicle_speed_energy_and_endurance_follow_the_drag_law()
     {
         var v = await JsonAsync("vehicle", "--speed", "0.5 m/s", "--battery", "1 kWh", "--hotel-power", "8 W", "--diameter", "20 cm", "--water-density", "1030 kg/m³");
         AssertFields(v, "speed_m_s", "energy_per_km_j", "endurance_s");
@@ -392,7 +392,7 @@ public sealed class PhysicsCommandTests
     // ---- refusals ----
 
     [Fact]
-    public async Task ATemperatureBelowAbsoluteZeroIsAUsageErrorNamingTheOption()
+    public async Task A_temperature_below_absolute_zero_is_a_usage_error_naming_the_option()
     {
         var (exit, stdout, stderr) = await RunAsync("ice", "--temperature", "-5 K", "--pressure", "1 MPa", "--json");
         Assert.Equal(2, exit); // ExitCode.UsageError
@@ -402,7 +402,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task AZeroRadiusIsRefusedWithTheRange()
+    public async Task A_zero_radius_is_refused_with_the_range()
     {
         var (exit, stdout, stderr) = await RunAsync("descent", "--radius", "0 m", "--length", "2 m", "--head-power", "5 kW", "--temperature", "250 K", "--json");
         Assert.Equal(3, exit); // ExitCode.InvalidInput
@@ -413,7 +413,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task APressureBeyondTheModelsRangeIsRefusedWithTheRange()
+    public async Task A_pressure_beyond_the_models_range_is_refused_with_the_range()
     {
         var (exit, _, stderr) = await RunAsync("descent", "--radius", "10 cm", "--length", "2 m", "--head-power", "5 kW", "--temperature", "250 K", "--pressure", "80 MPa", "--json");
         Assert.Equal(3, exit);
@@ -427,7 +427,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task ALengthGivenForAPowerIsAUsageError()
+    public async Task A_length_given_for_a_power_is_a_usage_error()
     {
         var (exit, _, stderr) = await RunAsync("descent", "--radius", "10 cm", "--length", "2 m", "--head-power", "12 cm", "--temperature", "250 K");
         Assert.Equal(2, exit);
@@ -435,7 +435,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task AMissingOptionIsAUsageErrorNamingIt()
+    public async Task A_missing_option_is_a_usage_error_naming_it()
     {
         var (exit, _, stderr) = await RunAsync("refreeze", "--gap", "1 mm");
         Assert.Equal(2, exit);
@@ -443,7 +443,7 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
-    public async Task ThePrintedTableCarriesTheSameNumbersAsTheJson()
+    public async Task The_printed_table_carries_the_same_numbers_as_the_JSON()
     {
         var (exit, stdout, _) = await RunAsync("light-time", "--distance", "1 au");
         Assert.Equal(0, exit);

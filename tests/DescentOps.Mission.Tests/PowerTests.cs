@@ -34,7 +34,7 @@ public sealed class PowerTests
         sink.OfKind("probe.regime").Where(r => TextField(r, "to") == to);
 
     [Fact]
-    public async Task SheddingKeepsTheHeadMeltingThroughTheDipAndWithoutTheRuleTheProbeFreezesIn()
+    public async Task Shedding_keeps_the_head_melting_through_the_dip_and_without_the_rule_the_probe_freezes_in()
     {
         var (shed, shedSink) = await RunAsync(Text, "with.yaml");
         var (unshed, unshedSink) = await RunAsync(MissionHarness.WithoutRules(Text), "without.yaml");
@@ -73,7 +73,7 @@ public sealed class PowerTests
     }
 
     [Fact]
-    public async Task TheEnergyBookkeepingBalancesOnEveryFrame()
+    public async Task The_energy_bookkeeping_balances_on_every_frame()
     {
         var scenario = ScenarioLoader.LoadText(Text, "with.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);
@@ -96,7 +96,7 @@ public sealed class PowerTests
     }
 
     [Fact]
-    public async Task UnderTheIceOnlyTheTurbineRechargesAFlatBattery()
+    public async Task Under_the_ice_only_the_turbine_recharges_a_flat_battery()
     {
         // Contrived to isolate the turbine: the source fails at breakthrough for good (a long dip to nothing), the
         // current is 0.5 m/s, the rules are removed. The pack runs flat on the electronics and the pump, which the
@@ -130,7 +130,7 @@ public sealed class PowerTests
     }
 
     [Fact]
-    public void TheBusSourceFollowsPlutonium238Decay()
+    public void The_bus_source_follows_Plutonium238_decay()
     {
         // Pu-238 half-life 87.7 years (ENSDF evaluation as listed in NNDC NuDat, value from memory): with no converter
         // degradation the bus gets half the electric power one half-life into the run, whatever the fuel's age.
@@ -144,7 +144,7 @@ public sealed class PowerTests
     }
 
     [Fact]
-    public async Task AFissionSourceHoldsItsOutputAndRecordsTheCoreHeatBehindIt()
+    public async Task A_fission_source_holds_its_output_and_records_the_core_heat_behind_it()
     {
         var text = Edit(MissionHarness.WithoutRules(Text), "  source: radioisotope\n  thermal_power: 40 kW\n  conversion_efficiency: 0.25\n  degradation_per_year: 0.01\n  fuel_age: 1 yr\n",
             "  source: fission\n  electric_power: 10 kW\n  conversion_efficiency: 0.25\n");
@@ -163,7 +163,7 @@ public sealed class PowerTests
     }
 
     [Fact]
-    public async Task WithoutAPowerSectionFramesReportAnEmptyBatteryAndTheBusPowerDrawn()
+    public async Task Without_a_power_section_frames_report_an_empty_battery_and_the_bus_power_drawn()
     {
         var scenario = BuiltInScenarios.Default();
         Assert.Null(scenario.Power);
@@ -186,7 +186,7 @@ public sealed class PowerTests
         CatalogueAgreementTests.FirstFrame(probe).Readings;
 
     [Fact]
-    public void AShedCommandForALoadTheBusDoesNotHaveIsRefusedAtItsPlace()
+    public void A_shed_command_for_a_load_the_bus_does_not_have_is_refused_at_its_place()
     {
         var text = Edit(Text, "shed_load(load = sampling-pump)", "shed_load(load = kettle)");
         var scenario = ScenarioLoader.LoadText(text, "kettle.yaml");

@@ -17,7 +17,7 @@ public sealed class ReplayAndQueryTests
 
     [Theory]
     [MemberData(nameof(ScenarioFiles))]
-    public async Task EveryScenarioReplaysIdentically(string name)
+    public async Task Every_scenario_replays_identically(string name)
     {
         var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(name), name);
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
@@ -30,7 +30,7 @@ public sealed class ReplayAndQueryTests
     }
 
     [Fact]
-    public async Task AReplayOfEventsThatDoNotFollowFromTheManifestDivergesWhereTheDrawsDiffer()
+    public async Task A_replay_of_events_that_do_not_follow_from_the_manifest_diverges_where_the_draws_differ()
     {
         // A log with an intact chain whose events came from seed 2 while its manifest says seed 1: what a
         // replay sees when a run cannot be reproduced (a changed binary, a hidden input).
@@ -46,7 +46,7 @@ public sealed class ReplayAndQueryTests
     }
 
     [Fact]
-    public async Task AnEditedLogIsRefusedForReplay()
+    public async Task An_edited_log_is_refused_for_replay()
     {
         var scenario = BuiltInScenarios.Default();
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
@@ -59,7 +59,7 @@ public sealed class ReplayAndQueryTests
     }
 
     [Fact]
-    public async Task ATruncatedLogReplaysItsIntactPrefix()
+    public async Task A_truncated_log_replays_its_intact_prefix()
     {
         var scenario = BuiltInScenarios.Default();
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
@@ -75,7 +75,7 @@ public sealed class ReplayAndQueryTests
     }
 
     [Fact]
-    public async Task DiffOfARunWithItselfIsEmptyAndWithAnotherSeedNamesTheFirstVehicleDraw()
+    public async Task Diff_of_a_run_with_itself_is_empty_and_with_another_seed_names_the_first_vehicle_draw()
     {
         var scenario = BuiltInScenarios.Default();
         var a = await WriteLogAsync(1, 1, scenario);
@@ -92,7 +92,7 @@ public sealed class ReplayAndQueryTests
     }
 
     [Fact]
-    public async Task EventFiltersReturnExactlyTheMatchingLines()
+    public async Task Event_filters_return_exactly_the_matching_lines()
     {
         var scenario = BuiltInScenarios.Default();
         var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);

@@ -13,7 +13,7 @@ public sealed class RoughShellTests
     private static string Text => BuiltInScenarios.Text("rough-shell.yaml");
 
     [Fact]
-    public async Task SteeringRulesBringTheProbeThroughAndWithoutThemTheSameFaultsLoseIt()
+    public async Task Steering_rules_bring_the_probe_through_and_without_them_the_same_faults_lose_it()
     {
         var scenario = ScenarioLoader.LoadText(Text, "rough-shell.yaml");
         var (steered, sink) = await MissionHarness.RunAsync(scenario);
@@ -30,7 +30,7 @@ public sealed class RoughShellTests
     }
 
     [Fact]
-    public async Task TheShellsStructureAndTheTriggersShowInTheLog()
+    public async Task The_shells_structure_and_the_triggers_show_in_the_log()
     {
         var scenario = ScenarioLoader.LoadText(Text, "rough-shell.yaml");
         var (_, sink) = await MissionHarness.RunAsync(scenario);

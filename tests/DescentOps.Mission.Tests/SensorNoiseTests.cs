@@ -4,7 +4,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class SensorNoiseTests
 {
     [Fact]
-    public async Task ANoisyDepthSensorScattersWithItsStandardDeviationAndOnlyDuringTheFault()
+    public async Task A_noisy_depth_sensor_scatters_with_its_standard_deviation_and_only_during_the_fault()
     {
         var scenario = MissionHarness.Edited(
             ("""

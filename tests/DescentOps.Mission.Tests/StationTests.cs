@@ -41,7 +41,7 @@ public sealed class StationTests
     private static string TextField(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Text!;
 
     [Fact]
-    public async Task TheStationDiesByDoseBeforeBreakthroughAndTheGroundGoesBlind()
+    public async Task The_station_dies_by_dose_before_breakthrough_and_the_ground_goes_blind()
     {
         var text = Text(ScenarioName);
         var scenario = ScenarioLoader.LoadText(text, ScenarioName);
@@ -111,7 +111,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public async Task WithAStationThatLivesTheSameGroundRuleCatchesTheSag()
+    public async Task With_a_station_that_lives_the_same_ground_rule_catches_the_sag()
     {
         var text = Text(ScenarioName);
         var start = text.IndexOf("  radiation:\n", StringComparison.Ordinal);
@@ -126,7 +126,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public void TheFailureDoseIsFixedBySeedAndDiffersBetweenSeeds()
+    public void The_failure_dose_is_fixed_by_seed_and_differs_between_seeds()
     {
         var model = ScenarioLoader.LoadText(Text(ScenarioName), ScenarioName).Station.Radiation!;
         var dose = new StationDose(model);
@@ -164,7 +164,7 @@ public sealed class StationTests
         """;
 
     [Fact]
-    public async Task AGroundCommandThatReachesTheStationOutOfViewWaitsForTheNextWindow()
+    public async Task A_ground_command_that_reaches_the_station_out_of_view_waits_for_the_next_window()
     {
         // Light time: 3 h × c = 10 800 s × 299 792 458 m/s = 3 237 758 546.4 km, as written in the scenario.
         const double lightS = 10_800.0, forwardS = 2.0, turnS = 36_000.0;
@@ -197,7 +197,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public async Task AFullQueueLosesFramesWithARecordAndNoneSilently()
+    public async Task A_full_queue_loses_frames_with_a_record_and_none_silently()
     {
         // Home is down for 5 h of each 10-hour turn: 30 frames at 10-minute intervals arrive in a gap; the queue
         // holds 10, so at least 20 of each gap's frames are lost (the 31st, at the rising instant, may queue too).
@@ -215,7 +215,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public async Task TheProbeWaitsOutTheDwellAndTheLogShowsTheLogReduction()
+    public async Task The_probe_waits_out_the_dwell_and_the_log_shows_the_log_reduction()
     {
         // Test inputs: 5 Gy/d at the surface for a 10-day dwell with a D10 of 20 Gy (invented; real spore D10 values
         // are far larger). The station's lognormal parts are rated well above what 10 days give.
@@ -249,7 +249,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public async Task UpsetsResetTheStationAndFramesArrivingDuringRecoveryAreLostByRuleOrQueued()
+    public async Task Upsets_reset_the_station_and_frames_arriving_during_recovery_are_lost_by_rule_or_queued()
     {
         // Test inputs: a mean of 2 days between upsets over a 20-day run (about 10 expected; the chance of none is
         // e^-10), each costing 6 hours.
@@ -297,7 +297,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public async Task AScheduledUpsetHoldsFramesForItsRecoveryTimeAndTheSummaryMeasuresIt()
+    public async Task A_scheduled_upset_holds_frames_for_its_recovery_time_and_the_summary_measures_it()
     {
         // Test inputs: an upset fault at day 2 lasting 3 h on the plain relay of the default scenario, run for 3 days.
         const double startS = 2 * Day, recoveryS = 3 * 3600.0;
@@ -324,7 +324,7 @@ public sealed class StationTests
     }
 
     [Fact]
-    public void AFrameGoesOnlyIfItFitsWholeBeforeTheWindowCloses()
+    public void A_frame_goes_only_if_it_fits_whole_before_the_window_closes()
     {
         // The windowed geometry above (up for [0, 5 h) of each 10 h) with a radio whose rate the link equation sets.
         var text = Edit(

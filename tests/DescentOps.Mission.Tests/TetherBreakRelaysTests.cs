@@ -35,7 +35,7 @@ public sealed class TetherBreakRelaysTests
     }
 
     [Fact]
-    public async Task RelaysCarryEveryFrameHomeAfterTheBreakAndTheGroundRuleActs()
+    public async Task Relays_carry_every_frame_home_after_the_break_and_the_ground_rule_acts()
     {
         var scenario = Load(BuiltInScenarios.Text(Name));
         var (summary, sink) = await WithRelaysRun.Value;
@@ -69,7 +69,7 @@ public sealed class TetherBreakRelaysTests
     }
 
     [Fact]
-    public async Task WhileTheWarmIceRelayIsOutTheProbeHoldsItsFramesAndSendsThemWhenItReturns()
+    public async Task While_the_warm_ice_relay_is_out_the_probe_holds_its_frames_and_sends_them_when_it_returns()
     {
         var (_, sink) = await WithRelaysRun.Value;
         var failed = sink.OfKind("relay.failed").Single();
@@ -94,7 +94,7 @@ public sealed class TetherBreakRelaysTests
     }
 
     [Fact]
-    public async Task EachRelayReachesLessFarThanTheOneAboveItAsTheIceWarms()
+    public async Task Each_relay_reaches_less_far_than_the_one_above_it_as_the_ice_warms()
     {
         var (_, sink) = await WithRelaysRun.Value;
         var drops = sink.OfKind("relay.dropped").ToList();
@@ -109,7 +109,7 @@ public sealed class TetherBreakRelaysTests
     }
 
     [Fact]
-    public async Task WithoutRelaysTheSameBreakLeavesTheGroundBlindLosesFramesAndTheGroundRuleNeverActs()
+    public async Task Without_relays_the_same_break_leaves_the_ground_blind_loses_frames_and_the_ground_rule_never_acts()
     {
         var (withRelays, withSink) = await WithRelaysRun.Value;
         var (summary, sink) = await MissionHarness.RunAsync(Load(WithoutRelays()));

@@ -56,7 +56,7 @@ public sealed class TetherCommandPathTests
     }
 
     [Fact]
-    public void AGroundCommandWaitsAtTheSurfaceAndGoesDownTheRelayChainWithTheHeldFrame()
+    public void A_ground_command_waits_at_the_surface_and_goes_down_the_relay_chain_with_the_held_frame()
     {
         var scenario = WeakRadio(bufferFrames: 5);
         var radio = new RelayRadio(scenario.Relays!, ShellTemperature(scenario));
@@ -82,7 +82,7 @@ public sealed class TetherCommandPathTests
     }
 
     [Fact]
-    public void WithoutBuffersTheSameFrameAndCommandAreRecordedAsLost()
+    public void Without_buffers_the_same_frame_and_command_are_recorded_as_lost()
     {
         var (sink, atProbe, atStation) = Run(WeakRadio(bufferFrames: 0));
         var lost = sink.OfKind("data.lost").ToList();

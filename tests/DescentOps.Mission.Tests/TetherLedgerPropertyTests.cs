@@ -21,7 +21,7 @@ public sealed class TetherLedgerPropertyTests
     private const int Frames = 1500;
 
     [Fact]
-    public void EveryFrameIsDeliveredHeldOrRecordedAsLost()
+    public void Every_frame_is_delivered_held_or_recorded_as_lost()
     {
         var random = new Random(4);
         var baseline = BuiltInScenarios.Default();

@@ -10,7 +10,7 @@ public sealed class TetherLinkRunTests
     private static string Text(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Text!;
 
     [Fact]
-    public async Task AFibreWhoseBudgetClosesOnlyOnceThePackLossShrinksHoldsTheFirstFramesAndThenSendsThemAll()
+    public async Task A_fibre_whose_budget_closes_only_once_the_pack_loss_shrinks_holds_the_first_frames_and_then_sends_them_all()
     {
         var scenario = MissionHarness.Edited(
             ("  signal_speed: 2.04e8 m/s\n", "  signal_speed: 2.04e8 m/s\n  pack_loss: 8\n  buffer_frames: 20000\n"),
@@ -40,7 +40,7 @@ public sealed class TetherLinkRunTests
     }
 
     [Fact]
-    public void TheBufferFillIsAPointASensorFaultMayName()
+    public void The_buffer_fill_is_a_point_a_sensor_fault_may_name()
     {
         var scenario = MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 0.5\n    at: 2 d\nrun:\n"));
         Assert.Equal(new FaultEffect.SensorStuck("probe.buffer_fill", 0.5), scenario.Faults.Single(f => f.Name == "fill-stuck").Effect);

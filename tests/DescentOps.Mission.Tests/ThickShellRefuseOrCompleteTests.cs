@@ -59,7 +59,7 @@ public sealed class ThickShellRefuseOrCompleteTests
     // Diving 20 km (some 43 MPa, inside TEOS-10's 100 MPa) the glide leaves the link's 24 km before the profile's end:
     // every model holds, and the run tells the operational story, the glider lost out of range.
     [InlineData("25 km glider diving 20 km", GliderAlone + "|profile_depth: 1.5 km=>profile_depth: 20 km", "lost: out of acoustic range too long")]
-    public async Task EitherRunsItsCourseOrIsRefusedAtLoadWithItsFieldAndRange(string name, string edits, string expected)
+    public async Task Either_runs_its_course_or_is_refused_at_load_with_its_field_and_range(string name, string edits, string expected)
     {
         var text = Build(edits);
         var scenario = ScenarioLoader.LoadText(text, "variant.yaml");

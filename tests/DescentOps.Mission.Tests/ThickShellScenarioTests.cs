@@ -14,7 +14,7 @@ namespace DescentOps.Mission.Tests;
 public sealed class ThickShellScenarioTests
 {
     [Fact]
-    public async Task TheThickShellRunsToCompletionWithItsVehiclesInTheColdHighPressureOcean()
+    public async Task The_thick_shell_runs_to_completion_with_its_vehicles_in_the_cold_high_pressure_ocean()
     {
         var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text("thick-shell-deep-ocean.yaml"), "thick-shell-deep-ocean.yaml");
         Assert.True(scenario.Shell.ThicknessM >= 20_000);

@@ -15,7 +15,7 @@ public sealed class VehicleModelTests
     [InlineData(0.0, 0.7)]
     [InlineData(180.0, 0.3)]
     [InlineData(90.0, 0.458257569495584)]
-    public void HomingSpeedAddsTheCurrentAlongTheLineAndCrabsAcrossIt(double currentDirectionDeg, double expected)
+    public void Homing_speed_adds_the_current_along_the_line_and_crabs_across_it(double currentDirectionDeg, double expected)
     {
         // The dock lies due north of the vehicle.
         var toDock = new OceanVector(0.0, 1000.0, 0.0);
@@ -24,13 +24,13 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void ACrossCurrentAsFastAsTheVehicleLeavesNoHeadway()
+    public void A_cross_current_as_fast_as_the_vehicle_leaves_no_headway()
     {
         Assert.Equal(0.0, HomingSpeed.ClosingSpeedMPerS(0.3, OceanVector.Horizontal(0.3, Math.PI / 2), new OceanVector(0.0, 500.0, 20.0)));
     }
 
     [Fact]
-    public void TheBatteryRuleTurnsHomeAtItsLevelOrWhenTheNextLegWouldCutIntoTheWayHome()
+    public void The_battery_rule_turns_home_at_its_level_or_when_the_next_leg_would_cut_into_the_way_home()
     {
         // Computed cases on a 1000 J battery with a 40 % return level and a 20 % reserve.
         Assert.Equal(DockRule.AtReturnLevel, DockRule.ReturnReason(400.0, 1000.0, 0.4, 0.2, 10.0, 10.0));
@@ -39,7 +39,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void AProfilersLegsAreTheOriginalOnes()
+    public void A_profilers_legs_are_the_original_ones()
     {
         // The original component budgeted a leg as (hotel + propulsion) · depth / speed = 38 W · 300 m / 0.4 m/s.
         var performance = VehiclePerformance.For(Profiler, double.NaN, 1.0, 0.0);
@@ -56,7 +56,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void EveryTaskReturnsToItsStartingDepthOverACycle()
+    public void Every_task_returns_to_its_starting_depth_over_a_cycle()
     {
         var performance = VehiclePerformance.For(Profiler, double.NaN, 1.0, 0.0);
         foreach (var task in Enum.GetValues<VehicleTask>())
@@ -76,7 +76,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void AGlidersPumpStrokeCostsMoreWithDepthAtTwoM0GOverEta()
+    public void A_gliders_pump_stroke_costs_more_with_depth_at_two_m0_g_over_eta()
     {
         // ΔV·Δp/η with ΔV = 2·m0/ρ and Δp = ρ·g·Δz: the density cancels, 2 · 0.3 kg · 1.0 m/s² / 0.5 = 1.2 J per m.
         var glider = Profiler with { Kind = VehicleKind.Glider, Glider = new GliderSettings(0.3, 25 * Math.PI / 180, 132.5, 2.15, 25.0, 0.5) };
@@ -90,7 +90,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void AboveItsBestSpeedAHullVehicleSpendsMoreEnergyPerKilometre()
+    public void Above_its_best_speed_a_hull_vehicle_spends_more_energy_per_kilometre()
     {
         // Property over a grid of speeds above the optimum of the default hull (PropelledVehicle.Default, 8 W hotel).
         var hull = new HullSettings(0.2, 0.2, 0.5);
@@ -106,7 +106,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void TheLinksRangeFallsAsAbsorptionRises()
+    public void The_links_range_falls_as_absorption_rises()
     {
         // Francois-Garrison absorption rises with frequency from 5 to 40 kHz in cold seawater; the range must fall.
         var previousAbsorption = 0.0;
@@ -129,7 +129,7 @@ public sealed class VehicleModelTests
     }
 
     [Fact]
-    public void TheLinkReproducesPublishedSeawaterValuesAtTheSurfaceOfStandardSeawater()
+    public void The_link_reproduces_published_seawater_values_at_the_surface_of_standard_seawater()
     {
         // 35.16504 g/kg is practical salinity 35 (TEOS-10 reference ratio); 0 °C; no overburden.
         var acoustics = new AcousticsModel(10e3, 160.0, 50.0, 2000.0, 10.0, 1.5, 273.15, 8.0, AbsorptionFormula.FrancoisGarrison, 600.0);

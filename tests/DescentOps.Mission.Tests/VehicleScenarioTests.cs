@@ -30,7 +30,7 @@ public sealed class VehicleScenarioTests
     private static string Text(JournalRecord record, string field) => record.Fields.Single(f => f.Name == field).Text!;
 
     [Fact]
-    public async Task AVehicleDriftsOutOfAcousticRangeKeepsItsDataAndDeliversItWhenBack()
+    public async Task A_vehicle_drifts_out_of_acoustic_range_keeps_its_data_and_delivers_it_when_back()
     {
         var (summary, sink) = await RunAsync(BuiltInScenarios.Text(Drift), Drift);
 
@@ -64,7 +64,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task TheLinkBudgetInTheLogIsTheFrancoisGarrisonAbsorptionAtTheScenarioValues()
+    public async Task The_link_budget_in_the_log_is_the_Francois_Garrison_absorption_at_the_scenario_values()
     {
         var (_, sink) = await RunAsync(BuiltInScenarios.Text(Drift), Drift);
         var link = sink.OfKind("vehicle.acoustic_link").Single();
@@ -87,7 +87,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task AVehicleThatCannotMakeHeadwayAgainstTheCurrentIsLostToAFlatBattery()
+    public async Task A_vehicle_that_cannot_make_headway_against_the_current_is_lost_to_a_flat_battery()
     {
         var (summary, sink) = await RunAsync(BuiltInScenarios.Text(Flat), Flat);
 
@@ -113,7 +113,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task WithoutTheCurrentTheSameVehicleComesHome()
+    public async Task Without_the_current_the_same_vehicle_comes_home()
     {
         var text = Edit(Flat, "    current:\n      speed: 0.3 m/s\n      direction: 90 deg\n", "");
         var (summary, sink) = await RunAsync(text);
@@ -124,7 +124,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task EveryVehicleEnergyAccountBalances()
+    public async Task Every_vehicle_energy_account_balances()
     {
         foreach (var name in new[] { Drift, Flat })
         {
@@ -141,7 +141,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task VehiclesWithoutTheNewFieldsWriteOnlyTheOriginalRecords()
+    public async Task Vehicles_without_the_new_fields_write_only_the_original_records()
     {
         var (_, sink) = await MissionHarness.RunAsync(BuiltInScenarios.Default());
         var kinds = sink.Records.Where(r => r.Source.Name.StartsWith("vehicle-", StringComparison.Ordinal)).Select(r => r.Kind).ToHashSet();
@@ -151,7 +151,7 @@ public sealed class VehicleScenarioTests
     [Theory]
     [InlineData("entrapment", "", "entrapped")]
     [InlineData("battery", "    remaining_fraction: 0\n", "flat battery")]
-    public async Task AVehicleLossFaultLosesTheVehicleWithItsCause(string cause, string extra, string reason)
+    public async Task A_vehicle_loss_fault_loses_the_vehicle_with_its_cause(string cause, string extra, string reason)
     {
         // The vehicle is released at about 1.63 d (the logged breakthrough of this scenario); the fault comes later.
         var fault = $"faults:\n  - name: wisp-1-{cause}\n    kind: vehicle_loss\n    at: 1.8 d\n    vehicle: wisp-1\n    cause: {cause}\n{extra}\n";
@@ -164,7 +164,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task AnEntrapmentThatEndsLeavesTheVehicleToComeHomeAndTheSummaryMeasuresTheRecovery()
+    public async Task An_entrapment_that_ends_leaves_the_vehicle_to_come_home_and_the_summary_measures_the_recovery()
     {
         var fault = "faults:\n  - name: wisp-1-caught\n    kind: vehicle_loss\n    at: 1.8 d\n    duration: 3 h\n    vehicle: wisp-1\n    cause: entrapment\n\n";
         var (summary, sink) = await RunAsync(Edit(Drift, "run:\n", fault + "run:\n"));
@@ -181,7 +181,7 @@ public sealed class VehicleScenarioTests
     }
 
     [Fact]
-    public async Task ADeadLinkLongerThanTheToleranceLosesTheVehicleAndItsHeldData()
+    public async Task A_dead_link_longer_than_the_tolerance_loses_the_vehicle_and_its_held_data()
     {
         var fault = "faults:\n  - name: wisp-1-modem\n    kind: vehicle_loss\n    at: 1.7 d\n    vehicle: wisp-1\n    cause: out_of_range\n\n";
         var text = Edit(Drift, "    max_out_of_range: 12 h\n", "    max_out_of_range: 2 h\n").Replace("run:\n", fault + "run:\n", StringComparison.Ordinal);
@@ -198,7 +198,7 @@ public sealed class VehicleScenarioTests
     [Theory]
     [InlineData("board")]
     [InlineData("ground")]
-    public async Task ARecallFromARuleBringsTheVehicleHomeEarly(string placement)
+    public async Task A_recall_from_a_rule_brings_the_vehicle_home_early(string placement)
     {
         var rules = $"rules: |\n  autonomy E3\n  rule recall-at-ocean {{\n    runs on {placement}\n    severity low\n    when probe.regime is AtOcean for 6 samples\n    then {{ send vehicle-wisp-1 recall_vehicle }}\n  }}\n\n";
         var (summary, sink) = await RunAsync(Edit(Drift, "run:\n", rules + "run:\n"));

@@ -25,7 +25,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 200)]
-    public void VelocityIsFiniteNonNegativeAndThePowerBalances(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    public void Velocity_is_finite_non_negative_and_the_power_balances(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
     {
         var x = Case(a, b, c, d, e, f);
         var s = SteadyDescent.Solve(x.Probe, x.HeadW, x.WallW, x.FarFieldK, x.PressurePa, x.G);
@@ -36,7 +36,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 200)]
-    public void MorePowerMeansFasterDescent(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    public void More_power_means_faster_descent(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
     {
         var x = Case(a, b, c, d, e, f);
         var slow = SteadyDescent.Solve(x.Probe, x.HeadW, x.WallW, x.FarFieldK, x.PressurePa, x.G);
@@ -47,7 +47,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 300)]
-    public void TheFilmIsNeverHotterThanBoilingWaterAtThePressure(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    public void The_film_is_never_hotter_than_boiling_water_at_the_pressure(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
     {
         // Issue 12: the film may not be superheated above the boiling point at the local pressure (IAPWS-IF97); what
         // the bound keeps from melting boils water and is still accounted for in the power balance.
@@ -61,7 +61,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 200)]
-    public void ColderIceMeansSlowerDescent(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
+    public void Colder_ice_means_slower_descent(ushort a, ushort b, ushort c, ushort d, ushort e, ushort f)
     {
         var x = Case(a, b, c, d, e, f);
         var warm = SteadyDescent.Solve(x.Probe, x.HeadW, x.WallW, x.FarFieldK, x.PressurePa, x.G);
@@ -72,7 +72,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 200)]
-    public void RefreezeTimeGrowsWithGapAndShrinksInColderIce(ushort a, ushort b, ushort c)
+    public void Refreeze_time_grows_with_gap_and_shrinks_in_colder_ice(ushort a, ushort b, ushort c)
     {
         var gap = Map(a, 1e-5, 0.05);
         var meltingK = Map(c, 270.0, 273.16);
@@ -86,7 +86,7 @@ public class PhysicsProperties
     }
 
     [Property(MaxTest = 100)]
-    public void OutOfRangeInputGivesTheRangeError(ushort a, ushort b)
+    public void Out_of_range_input_gives_the_range_error(ushort a, ushort b)
     {
         var probe = new ProbeGeometry(0.1, 2.5, 200.0);
         var tooWarm = MeltingCurve.TemperatureK(101325.0) + Map(a, 0.01, 100.0);

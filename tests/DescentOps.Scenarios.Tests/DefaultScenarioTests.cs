@@ -6,13 +6,13 @@ namespace DescentOps.Scenarios.Tests;
 public sealed class DefaultScenarioTests
 {
     [Fact]
-    public void TheBuiltInDefaultIsTheRepositoryFile()
+    public void The_built_in_default_is_the_repository_file()
     {
         Assert.Equal(ScenarioText.RepositoryDefault, BuiltInScenarios.Text(BuiltInScenarios.DefaultName));
     }
 
     [Fact]
-    public void TheFixtureLoadsWithEveryValueInSiUnits()
+    public void The_fixture_loads_with_every_value_in_SI_units()
     {
         var scenario = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
 
@@ -33,7 +33,7 @@ public sealed class DefaultScenarioTests
     }
 
     [Fact]
-    public void CelsiusIsConvertedToKelvin()
+    public void Celsius_is_converted_to_Kelvin()
     {
         // 0 °C is 273.15 K by definition of the Celsius scale.
         var text = ScenarioText.DefaultWith("surface_temperature: 132 K", "surface_temperature: -141.15 °C");
@@ -42,7 +42,7 @@ public sealed class DefaultScenarioTests
     }
 
     [Fact]
-    public void UnitsMayBeWrittenWithoutASpace()
+    public void Units_may_be_written_without_a_space()
     {
         var text = ScenarioText.DefaultWith("head_power: 6 kW", "head_power: 6kW");
         Assert.Equal(6000.0, ScenarioLoader.LoadText(text, "nospace.yaml").Probe.HeadPowerW, 9);

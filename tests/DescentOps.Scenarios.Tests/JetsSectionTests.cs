@@ -7,7 +7,7 @@ namespace DescentOps.Scenarios.Tests;
 public class JetsSectionTests
 {
     [Fact]
-    public void TheFixturesJetsAreReadInSiUnits()
+    public void The_fixtures_jets_are_read_in_SI_units()
     {
         var scenario = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
         var jets = scenario.Probe.Jets!;
@@ -16,7 +16,7 @@ public class JetsSectionTests
     }
 
     [Fact]
-    public void DefaultsAreTheMinimumHoleAndTheRuleOfThumbEfficiencyAndADefaultBusGetsAJetsLoad()
+    public void Defaults_are_the_minimum_hole_and_the_rule_of_thumb_efficiency_and_a_default_bus_gets_a_jets_load()
     {
         var text = ScenarioText.Default
             .Replace("    hole_radius: 15 cm\n    efficiency: 0.7\n    initial_power: 0 W\n", "", StringComparison.Ordinal);
@@ -32,7 +32,7 @@ public class JetsSectionTests
     }
 
     [Fact]
-    public void AJetsLoadWithoutJetsIsRefused()
+    public void A_jets_load_without_jets_is_refused()
     {
         var text = ScenarioText.Default.Replace(
             "  jets:\n    heat: 8 kW\n    pump_power: 300 W\n    minimum_hole_radius: 13 cm\n    hole_radius: 15 cm\n    efficiency: 0.7\n    initial_power: 0 W\n", "", StringComparison.Ordinal);
@@ -41,7 +41,7 @@ public class JetsSectionTests
     }
 
     [Fact]
-    public void InitialPowerAboveTheJetsHeatIsRefusedAtItsLine()
+    public void Initial_power_above_the_jets_heat_is_refused_at_its_line()
     {
         var text = ScenarioText.Default.Replace("    initial_power: 0 W\n", "    initial_power: 9 kW\n", StringComparison.Ordinal);
         var error = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "x.yaml"));

@@ -14,7 +14,7 @@ public sealed class LinkFieldTests
     private static int RelayFault => ScenarioLoader.LoadText(ScenarioText.Default, File).Faults.ToList().FindIndex(f => f.Kind == Model.FaultKind.RelayFailure);
 
     [Fact]
-    public void WithoutTheNewFieldsTheLinkIsTodaysHealthyFibreWithNoBufferAndNoRelays()
+    public void Without_the_new_fields_the_link_is_todays_healthy_fibre_with_no_buffer_and_no_relays()
     {
         var scenario = ScenarioLoader.LoadText(ScenarioText.RepositoryDefault, "default.yaml");
         Assert.Null(scenario.Relays);
@@ -23,7 +23,7 @@ public sealed class LinkFieldTests
     }
 
     [Fact]
-    public void TheFixtureReadsItsLinkFieldsInSi()
+    public void The_fixture_reads_its_link_fields_in_SI()
     {
         var scenario = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
         var optics = scenario.Tether.OpticsOrDefault;
@@ -40,7 +40,7 @@ public sealed class LinkFieldTests
     }
 
     [Fact]
-    public void WithAnIntervalAndNoCountTheProbeCarriesOneRelayPerWholeIntervalAboveTheOcean()
+    public void With_an_interval_and_no_count_the_probe_carries_one_relay_per_whole_interval_above_the_ocean()
     {
         // Computed: a 2.5 km shell and 400 m intervals give drops at 400, 800, ..., 2400 m: six relays; 500 m intervals
         // give 500 ... 2000 m (2500 m is the ocean): four.
@@ -51,7 +51,7 @@ public sealed class LinkFieldTests
     }
 
     [Fact]
-    public void ARelayFailureMustNameARelayTheProbeCarries()
+    public void A_relay_failure_must_name_a_relay_the_probe_carries()
     {
         var beyond = ScenarioText.DefaultWith("    relay: relay-2", "    relay: relay-4");
         var error = SingleError(beyond);
@@ -69,7 +69,7 @@ public sealed class LinkFieldTests
     }
 
     [Fact]
-    public void RelayPlansAndSpoolJamsAreCheckedAcrossFields()
+    public void Relay_plans_and_spool_jams_are_checked_across_fields()
     {
         var both = ScenarioText.DefaultWith("  carried: 3\n", "  carried: 3\n  interval: 400 m\n");
         Assert.Equal("relays.interval", SingleError(both).FieldPath);

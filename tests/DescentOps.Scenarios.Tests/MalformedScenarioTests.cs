@@ -17,7 +17,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void AYamlSyntaxErrorIsLocated()
+    public void A_YAML_syntax_error_is_located()
     {
         var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: [12 cm");
         var error = SingleError(text);
@@ -27,7 +27,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void AnUnknownFieldIsNamedWithItsPath()
+    public void An_unknown_field_is_named_with_its_path()
     {
         var text = ScenarioText.DefaultWith("  mass: 210 kg", "  mass: 210 kg\n  colour: orange");
         var error = SingleError(text);
@@ -38,7 +38,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void AMissingFieldIsNamedAtItsSection()
+    public void A_missing_field_is_named_at_its_section()
     {
         var text = ScenarioText.DefaultWith("  head_power: 6 kW\n", "");
         var error = SingleError(text);
@@ -48,7 +48,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void ANegativeLengthIsOutOfRange()
+    public void A_negative_length_is_out_of_range()
     {
         var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: -12 cm");
         var error = SingleError(text);
@@ -59,7 +59,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void AUnitOfTheWrongDimensionIsRefused()
+    public void A_unit_of_the_wrong_dimension_is_refused()
     {
         var text = ScenarioText.DefaultWith("  length: 2.4 m", "  length: 2.4 kW");
         var error = SingleError(text);
@@ -68,7 +68,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void ANumberWithoutAUnitAsksForOne()
+    public void A_number_without_a_unit_asks_for_one()
     {
         var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: 12");
         var error = SingleError(text);
@@ -76,7 +76,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void ErrorsInAListNameTheEntry()
+    public void Errors_in_a_list_name_the_entry()
     {
         var text = ScenarioText.DefaultWith("    speed: 0.35 m/s", "    speed: fast");
         var error = SingleError(text);
@@ -84,7 +84,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void EveryProblemIsReportedNotOnlyTheFirst()
+    public void Every_problem_is_reported_not_only_the_first()
     {
         var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: -1 m").Replace("  length: 2.4 m", "  length: 2.4 kW", StringComparison.Ordinal);
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
@@ -92,7 +92,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void APowerDipWithoutADurationIsRefused()
+    public void A_power_dip_without_a_duration_is_refused()
     {
         var text = ScenarioText.DefaultWith("    duration: 12 h\n", "");
         var error = SingleError(text);
@@ -100,7 +100,7 @@ public sealed class MalformedScenarioTests
     }
 
     [Fact]
-    public void AMissingFileIsAScenarioErrorNotACrash()
+    public void A_missing_file_is_a_scenario_error_not_a_crash()
     {
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadFile(Path.Combine(Path.GetTempPath(), "no-such-scenario.yaml")));
         Assert.Contains("cannot read", Assert.Single(exception.Errors).Message);

@@ -6,7 +6,7 @@ namespace DescentOps.Scenarios.Tests;
 public sealed class OnboardSamplingSectionTests
 {
     [Fact]
-    public void APointWinsOverItsGroupAndTheGroupOverTheSectionInterval()
+    public void A_point_wins_over_its_group_and_the_group_over_the_section_interval()
     {
         var sampling = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml").OnboardSampling!;
         Assert.True(sampling.ExactCrossings);
@@ -16,7 +16,7 @@ public sealed class OnboardSamplingSectionTests
     }
 
     [Fact]
-    public void WithoutAnIntervalAPointIsSampledWithTheFrames()
+    public void Without_an_interval_a_point_is_sampled_with_the_frames()
     {
         var text = ScenarioText.DefaultWith("  interval: 30 s\n  crossings: exact\n", "  crossings: at_samples\n");
         var sampling = ScenarioLoader.LoadText(text, "x.yaml").OnboardSampling!;
@@ -25,7 +25,7 @@ public sealed class OnboardSamplingSectionTests
     }
 
     [Fact]
-    public void ANameGivenTwiceOrUnknownIsRefusedAtItsPlace()
+    public void A_name_given_twice_or_unknown_is_refused_at_its_place()
     {
         var twice = ScenarioText.DefaultWith("    - { name: probe.depth, interval: 1 s }", "    - { name: probe.depth, interval: 1 s }\n    - { name: probe.depth, interval: 2 s }");
         var error = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(twice, "x.yaml")).Errors.Single();

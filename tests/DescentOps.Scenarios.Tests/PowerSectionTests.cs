@@ -21,7 +21,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void TheFixturesPowerSectionLoadsInSiUnits()
+    public void The_fixtures_power_section_loads_in_SI_units()
     {
         var power = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml").Power!;
         // Unit conversions by definition: 1 kW = 1000 W, 1 kWh = 3.6e6 J, 15 °C = 288.15 K; "1 yr" is 365 days in UnitsNet.
@@ -41,7 +41,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void HeatPathSharesAboveOneAreRefusedAtTheirPlace()
+    public void Heat_path_shares_above_one_are_refused_at_their_place()
     {
         var text = ScenarioText.DefaultWith("    wall: 0.2\n", "    wall: 0.97\n");
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "heat.yaml")).Errors);
@@ -50,13 +50,13 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void WithoutTheSectionThereIsNoPowerSystem()
+    public void Without_the_section_there_is_no_power_system()
     {
         Assert.Null(ScenarioLoader.LoadText(WithoutPower(), "nopower.yaml").Power);
     }
 
     [Fact]
-    public void OmittedOptionsTakeTheirDefaults()
+    public void Omitted_options_take_their_defaults()
     {
         var text = ScenarioText.Default
             .Replace("    max_charge_power: 3 kW\n", "", StringComparison.Ordinal)
@@ -77,7 +77,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void AFissionSourceNeedsItsElectricPower()
+    public void A_fission_source_needs_its_electric_power()
     {
         var text = ScenarioText.DefaultWith("  source: radioisotope\n  thermal_power: 40 kW\n  conversion_efficiency: 0.25\n  degradation_per_year: 0.01\n  fuel_age: 1 yr\n",
             "  source: fission\n  conversion_efficiency: 0.25\n");
@@ -87,7 +87,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void AFieldOfTheOtherSourceIsRefusedWhereItStands()
+    public void A_field_of_the_other_source_is_refused_where_it_stands()
     {
         var text = ScenarioText.DefaultWith("  fuel_age: 1 yr\n", "  fuel_age: 1 yr\n  electric_power: 5 kW\n");
         var error = SingleError(text);
@@ -97,7 +97,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void AFixedLoadNeedsItsPowerAndAHeaterTakesNone()
+    public void A_fixed_load_needs_its_power_and_a_heater_takes_none()
     {
         var noPower = ScenarioText.DefaultWith("      priority: 3\n      power: 400 W\n", "      priority: 3\n");
         Assert.Equal("power.loads[3].power", SingleError(noPower).FieldPath);
@@ -109,7 +109,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void TheBusNeedsExactlyOneHeadHeater()
+    public void The_bus_needs_exactly_one_head_heater()
     {
         var text = ScenarioText.DefaultWith("      role: head_heater\n", "      role: wall_heater\n");
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
@@ -120,7 +120,7 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void AnUnknownRoleAndAnEfficiencyAboveOneAreLocated()
+    public void An_unknown_role_and_an_efficiency_above_one_are_located()
     {
         var role = SingleError(ScenarioText.DefaultWith("      role: fixed\n", "      role: kettle\n"));
         Assert.Equal("power.loads[3].role", role.FieldPath);
@@ -132,14 +132,14 @@ public sealed class PowerSectionTests
     }
 
     [Fact]
-    public void ACutInAboveTheRatedSpeedIsRefused()
+    public void A_cut_in_above_the_rated_speed_is_refused()
     {
         var error = SingleError(ScenarioText.DefaultWith("    cut_in_speed: 0.05 m/s\n", "    cut_in_speed: 0.8 m/s\n"));
         Assert.Equal("power.turbine.cut_in_speed", error.FieldPath);
     }
 
     [Fact]
-    public void ASensorFaultMayNameTheBatteryInPercent()
+    public void A_sensor_fault_may_name_the_battery_in_percent()
     {
         var text = ScenarioText.DefaultWith("    remaining_fraction: 0.4\n", "    remaining_fraction: 0.4\n  - name: soc-stuck\n    kind: sensor_stuck\n    at: 2 d\n    point: probe.battery_soc\n    value: 80 %\n");
         var fault = ScenarioLoader.LoadText(text, "soc.yaml").Faults[1];

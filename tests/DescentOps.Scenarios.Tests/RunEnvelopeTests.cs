@@ -26,7 +26,7 @@ public sealed class RunEnvelopeTests
         Assert.Single(RunEnvelope.Errors(ScenarioLoader.LoadText(text, "s.yaml")));
 
     [Fact]
-    public void TheBuiltInThickShellIsWithinEveryModelsRange()
+    public void The_built_in_thick_shell_is_within_every_models_range()
     {
         var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(Thick), Thick);
         Assert.True(scenario.Shell.ThicknessM >= 20_000);
@@ -34,7 +34,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AFortyKilometreShellIsRefusedWhereTheAbsorptionFitEndsNotAtBreakthrough()
+    public void A_forty_kilometre_shell_is_refused_where_the_absorption_fit_ends_not_at_breakthrough()
     {
         // Francois and Garrison (1982) claim their accuracy to 3.5 km of Earth depth; 40 km of ice at the demo body's
         // 1.0 m/s² press the ocean with some 37 MPa, as hard as about 3.65 km of terrestrial sea (Fofonoff and Millard
@@ -51,7 +51,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AFortyKilometreShellWithAFitThatCoversItLoads()
+    public void A_forty_kilometre_shell_with_a_fit_that_covers_it_loads()
     {
         // Ainslie and McColm (1998) cover 0-7 km and -6 to 35 °C: the same shell over freezing water is within range.
         var text = Edit(("thickness: 25 km", "thickness: 40 km"), ("length: 27 km", "length: 42 km"));
@@ -59,7 +59,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AnOceanColderThanItsFreezingPointIsRefusedAtItsLine()
+    public void An_ocean_colder_than_its_freezing_point_is_refused_at_its_line()
     {
         // TEOS-10 (GSW 3.6.16): 30 g/kg of reference seawater under some 23 MPa freezes near −3.4 °C (269.7 K).
         var text = Edit(("ocean_salinity: 30 g/kg", "ocean_salinity: 30 g/kg\n  ocean_temperature: 269 K"));
@@ -71,7 +71,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AnAbsorptionTemperatureBelowFreezingIsRefusedAtItsLine()
+    public void An_absorption_temperature_below_freezing_is_refused_at_its_line()
     {
         var text = Edit(("  absorption: ainslie_mccolm", "  absorption: ainslie_mccolm\n  ocean_temperature: 268 K"), ("ocean_salinity: 30 g/kg", "ocean_salinity: 30 g/kg\n  ocean_temperature: 271 K"));
         var error = Refusal(text);
@@ -80,7 +80,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AShellBeyondTheDescentModelsPressureIsRefusedAtItsThickness()
+    public void A_shell_beyond_the_descent_models_pressure_is_refused_at_its_thickness()
     {
         // At 1.0 m/s² a 200 km shell (the format's largest) presses its base with some 187 MPa: the probe's steady descent
         // model (latent heat trusted to 50 MPa) is left halfway down, and that is the one refusal of the field.
@@ -91,7 +91,7 @@ public sealed class RunEnvelopeTests
     }
 
     [Fact]
-    public void AVehicleDivingBeyondOneHundredMegapascalsIsRefusedAtItsProfileDepth()
+    public void A_vehicle_diving_beyond_one_hundred_megapascals_is_refused_at_its_profile_depth()
     {
         // Under 25 km of ice the ocean starts near 23 MPa; 80 km more of water at 1.0 m/s² adds some 83 MPa.
         var text = Edit(("profile_depth: 1.5 km", "profile_depth: 80 km"));

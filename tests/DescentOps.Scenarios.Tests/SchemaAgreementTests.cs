@@ -13,14 +13,14 @@ public sealed class SchemaAgreementTests
     private static string CommittedSchema => File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "shared", "scenario.schema.json"));
 
     [Fact]
-    public void TheCommittedSchemaIsTheGeneratedOne()
+    public void The_committed_schema_is_the_generated_one()
     {
         // If this fails, regenerate: dotnet run --project src/DescentOps.Cli -- schema > shared/scenario.schema.json
         Assert.Equal(ScenarioJsonSchema.Generate(), CommittedSchema);
     }
 
     [Fact]
-    public void TheLoaderReadsEveryFieldTheFormatDefines()
+    public void The_loader_reads_every_field_the_format_defines()
     {
         var read = new HashSet<string>(StringComparer.Ordinal);
         ScenarioLoader.LoadText(ScenarioText.Default, "default.yaml", read);
@@ -31,7 +31,7 @@ public sealed class SchemaAgreementTests
     }
 
     [Fact]
-    public void TheFixtureAndTheDefaultScenarioAreValidAgainstTheSchema()
+    public void The_fixture_and_the_default_scenario_are_valid_against_the_schema()
     {
         var schema = JsonSchema.FromText(CommittedSchema);
         Assert.True(schema.Evaluate(ToJson(ScenarioText.RepositoryDefault)).IsValid);
@@ -40,7 +40,7 @@ public sealed class SchemaAgreementTests
     }
 
     [Fact]
-    public void TheSchemaRejectsWhatTheLoaderRejects()
+    public void The_schema_rejects_what_the_loader_rejects()
     {
         var schema = JsonSchema.FromText(CommittedSchema);
         var unknownField = ScenarioText.DefaultWith("  mass: 210 kg", "  mass: 210 kg\n  colour: orange");

@@ -6,7 +6,7 @@ namespace DescentOps.Scenarios.Tests;
 public sealed class ShellStructureTests
 {
     [Fact]
-    public void LayersBandsAndTheFracturedZoneAreReadInSi()
+    public void Layers_bands_and_the_fractured_zone_are_read_in_SI()
     {
         // The every-field fixture holds one salty layer, one debris band and a 30 m fractured zone.
         var shell = ScenarioLoader.LoadText(ScenarioText.Default, "s.yaml").Shell;
@@ -19,7 +19,7 @@ public sealed class ShellStructureTests
     }
 
     [Fact]
-    public void AConvectingLayerIsReadAndOneThatLeavesNoRoomIsRefused()
+    public void A_convecting_layer_is_read_and_one_that_leaves_no_room_is_refused()
     {
         var convection = ScenarioLoader.LoadText(ScenarioText.Default, "s.yaml").Shell.Convection;
         Assert.Equal(new Model.ConvectionModel(1600, 255, 80), convection);
@@ -31,7 +31,7 @@ public sealed class ShellStructureTests
     }
 
     [Fact]
-    public void OverlappingLayersAreRefusedAtTheSecondOne()
+    public void Overlapping_layers_are_refused_at_the_second_one()
     {
         var text = ScenarioText.DefaultWith("      salinity: 8 g/kg", "      salinity: 8 g/kg\n    - top: 400 m\n      bottom: 500 m\n      salinity: 3 g/kg");
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "s.yaml")).Errors);
@@ -43,7 +43,7 @@ public sealed class ShellStructureTests
     [Theory]
     [InlineData("bottom: 905 m", "bottom: 890 m", "deeper than the top")]
     [InlineData("bottom: 905 m", "bottom: 2600 m", "below the shell's thickness")]
-    public void ABandWhoseBottomMakesNoSenseIsRefusedAtItsBottom(string line, string replacement, string expected)
+    public void A_band_whose_bottom_makes_no_sense_is_refused_at_its_bottom(string line, string replacement, string expected)
     {
         var text = ScenarioText.DefaultWith("      " + line, "      " + replacement);
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "s.yaml")).Errors);

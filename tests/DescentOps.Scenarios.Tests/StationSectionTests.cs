@@ -9,7 +9,7 @@ public sealed class StationSectionTests
     private static ScenarioError SingleError(string text) => MalformedScenarioTests.SingleError(text);
 
     [Fact]
-    public void TheFixtureReadsEveryStationPartInSi()
+    public void The_fixture_reads_every_station_part_in_SI()
     {
         var station = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml").Station;
         // 0.2 Gy/d = 0.2 / 86 400 Gy/s; 260 h = 936 000 s; 2 kGy = 2000 Gy (unit arithmetic).
@@ -24,14 +24,14 @@ public sealed class StationSectionTests
     }
 
     [Fact]
-    public void WithoutThePartsTheStationIsAPlainRelay()
+    public void Without_the_parts_the_station_is_a_plain_relay()
     {
         var station = ScenarioLoader.LoadText(ScenarioText.RepositoryDefault, "default.yaml").Station;
         Assert.Equal(new StationModel("Cairn", 2.0), station);
     }
 
     [Fact]
-    public void ADoseRateWithoutATimeIsRefusedWhereItStands()
+    public void A_dose_rate_without_a_time_is_refused_where_it_stands()
     {
         var text = ScenarioText.DefaultWith("    dose_rate: 0.2 Gy/d", "    dose_rate: 0.2 Gy");
         var error = SingleError(text);
@@ -41,7 +41,7 @@ public sealed class StationSectionTests
     }
 
     [Fact]
-    public void APlanetWithoutAnOrbitIsRefused()
+    public void A_planet_without_an_orbit_is_refused()
     {
         var text = ScenarioText.DefaultWith("    orbit_radius: 726000 km\n", "");
         var error = SingleError(text);
@@ -51,7 +51,7 @@ public sealed class StationSectionTests
     }
 
     [Fact]
-    public void AWeibullShapeOutsideItsRangeIsRefusedAtTheField()
+    public void A_Weibull_shape_outside_its_range_is_refused_at_the_field()
     {
         var text = ScenarioText.DefaultWith("    failure_model: lognormal", "    failure_model: weibull")
             .Replace("    failure_spread: 0.5", "    failure_spread: 0.05", StringComparison.Ordinal);
@@ -61,7 +61,7 @@ public sealed class StationSectionTests
     }
 
     [Fact]
-    public void ADwellNeedsTheRadiationThatSterilises()
+    public void A_dwell_needs_the_radiation_that_sterilises()
     {
         var fixture = ScenarioText.Default;
         var start = fixture.IndexOf("  radiation:\n", StringComparison.Ordinal);

@@ -15,7 +15,7 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void TheFixturesVehiclesAreReadInSi()
+    public void The_fixtures_vehicles_are_read_in_SI()
     {
         var scenario = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
         var original = scenario.Vehicles[0];
@@ -42,7 +42,7 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void AGliderWithoutItsTrimIsRefusedAtTheVehicle()
+    public void A_glider_without_its_trim_is_refused_at_the_vehicle()
     {
         var text = ScenarioText.DefaultWith("    glider:\n      net_buoyancy: 0.3 kg\n      glide_angle: 25 deg\n      lift_slope: 132.5\n      drag_offset: 2.15\n      drag_quadratic: 25\n      pump_efficiency: 0.5\n", "");
         var error = SingleError(text);
@@ -51,7 +51,7 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void AGlideShallowerThanTheWingCanFlyIsRefused()
+    public void A_glide_shallower_than_the_wing_can_fly_is_refused()
     {
         // Shallowest glide atan(2·√(25 · 2.15)/132.5) ≈ 6.3° (computed); 5° cannot be trimmed.
         var text = ScenarioText.DefaultWith("      glide_angle: 25 deg", "      glide_angle: 5 deg");
@@ -61,14 +61,14 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void APropellerVehicleTakesPropulsionPowerOrAHullNotBoth()
+    public void A_propeller_vehicle_takes_propulsion_power_or_a_hull_not_both()
     {
         var text = ScenarioText.DefaultWith("    speed: 0.35 m/s\n", "    speed: 0.35 m/s\n    propulsion_power: 30 W\n");
         Assert.Equal("vehicles[1].propulsion_power", SingleError(text).FieldPath);
     }
 
     [Fact]
-    public void AVehicleLossNamesAVehicleThatExists()
+    public void A_vehicle_loss_names_a_vehicle_that_exists()
     {
         var text = ScenarioText.DefaultWith("    vehicle: wisp-2\n", "    vehicle: wisp-9\n");
         var error = SingleError(text);
@@ -77,14 +77,14 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void AVehicleLossNeedsItsCause()
+    public void A_vehicle_loss_needs_its_cause()
     {
         var text = ScenarioText.DefaultWith("    cause: entrapment\n", "");
         Assert.Equal("faults[1].vehicle", SingleError(text).FieldPath);
     }
 
     [Fact]
-    public void AnOceanOutsideTheAbsorptionFitIsRefusedAtTheOceanSalinity()
+    public void An_ocean_outside_the_absorption_fit_is_refused_at_the_ocean_salinity()
     {
         // The fixture's ocean holds 12 g/kg (practical salinity about 11.9); Francois-Garrison was fitted for 30 to 35.
         var text = ScenarioText.DefaultWith("  absorption: ainslie_mccolm", "  absorption: francois_garrison");
@@ -97,14 +97,14 @@ public sealed class VehicleFormatTests
     }
 
     [Fact]
-    public void AReturnLevelBelowTheReserveIsRefused()
+    public void A_return_level_below_the_reserve_is_refused()
     {
         var text = ScenarioText.DefaultWith("      return_at: 0.4", "      return_at: 0.1");
         Assert.Equal("vehicles[1].dock.return_at", SingleError(text).FieldPath);
     }
 
     [Fact]
-    public void ABranchCannotStrikeAVehicleTheParentDoesNotHave()
+    public void A_branch_cannot_strike_a_vehicle_the_parent_does_not_have()
     {
         var parent = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
         const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: wisp-1\n    cause: battery\n";

@@ -34,7 +34,7 @@ public sealed class ProjectGraphTests
         ["DescentOps.Primitives", "DescentOps.Records", "DescentOps.Physics", "DescentOps.Rules", "DescentOps.Scenarios", "DescentOps.Journal", "DescentOps.Reports"];
 
     [Fact]
-    public void EverySourceProjectReferencesOnlyWhatItsLayerAllows()
+    public void Every_source_project_references_only_what_its_layer_allows()
     {
         var projects = SourceProjects();
         Assert.Equal(Allowed.Keys.Order(StringComparer.Ordinal), projects.Keys.Order(StringComparer.Ordinal));
@@ -46,7 +46,7 @@ public sealed class ProjectGraphTests
     }
 
     [Fact]
-    public void PhysicsRulesScenariosJournalAndReportsNeverReachAkka()
+    public void Physics_rules_scenarios_journal_and_reports_never_reach_Akka()
     {
         var projects = SourceProjects();
         foreach (var name in WithoutActors)
@@ -58,7 +58,7 @@ public sealed class ProjectGraphTests
     }
 
     [Fact]
-    public void OnlyTestProjectsReferenceTheCommandLine()
+    public void Only_test_projects_reference_the_command_line()
     {
         var root = RepositoryRoot();
         var offenders = Directory.GetFiles(root, "*.csproj", SearchOption.AllDirectories)
@@ -70,7 +70,7 @@ public sealed class ProjectGraphTests
     }
 
     [Fact]
-    public void MessagesAreSealedRecordsWithoutMutableCollections()
+    public void Messages_are_sealed_records_without_mutable_collections()
     {
         var messages = typeof(Messages.Telecommand).Assembly.GetTypes()
             .Where(t => t.Namespace == typeof(Messages.Telecommand).Namespace && t.IsClass && !t.IsNested && !t.Name.StartsWith('<'))
@@ -120,7 +120,7 @@ public sealed class ProjectGraphTests
         return seen;
     }
 
-    private static string RepositoryRoot()
+    internal static string RepositoryRoot()
     {
         for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
         {

@@ -20,7 +20,7 @@ public sealed partial class RecordVocabularyTests
                 .Select(f => (t.Name, (string)f.GetRawConstantValue()!)))];
 
     [Fact]
-    public void EveryKindIsSnakeCaseUnderItsSourceAndDefinedOnce()
+    public void Every_kind_is_snake_case_under_its_source_and_defined_once()
     {
         var kinds = Catalogued();
         Assert.True(kinds.Count > 70, $"only {kinds.Count} kinds catalogued");
@@ -35,7 +35,7 @@ public sealed partial class RecordVocabularyTests
     }
 
     [Fact]
-    public void EveryRuleEventHasItsOwnSnakeCaseKind()
+    public void Every_rule_event_has_its_own_snake_case_kind()
     {
         var kinds = Enum.GetValues<RuleEventKind>().Select(RuleHost.KindOf).ToList();
         Assert.Equal(kinds.Count, kinds.Distinct(StringComparer.Ordinal).Count());
@@ -44,7 +44,7 @@ public sealed partial class RecordVocabularyTests
     }
 
     [Fact]
-    public void EveryKindInTheGoldenLogsIsCatalogued()
+    public void Every_kind_in_the_golden_logs_is_catalogued()
     {
         var catalogued = Catalogued().Select(k => k.Kind).ToHashSet(StringComparer.Ordinal);
         var folder = Path.Combine(Path.GetDirectoryName(typeof(RecordVocabularyTests).Assembly.Location)!, "..", "..", "..", "..", "golden");

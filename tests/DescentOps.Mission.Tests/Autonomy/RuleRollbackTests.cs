@@ -21,7 +21,7 @@ public sealed class RuleRollbackTests
         ComponentContext.Detached(MissionIds.Autonomy, new RandomStream(1, MissionIds.Autonomy), frame.SampledAt);
 
     [Fact]
-    public void HandlingAFrameAgainFromTheCommittedStateRepeatsTheFirstOutcome()
+    public void Handling_a_frame_again_from_the_committed_state_repeats_the_first_outcome()
     {
         // tilt-steering.yaml: counter-steer fires when the tilt is above 2 deg for 2 samples.
         var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text("tilt-steering.yaml"), "builtin:tilt-steering.yaml");

@@ -9,7 +9,7 @@ public sealed class CrossingFinderTests
     [InlineData(2.6e-4, 999.9, 1000.0)]    // a melt probe's speed: 0.1 m at 0.26 mm/s
     [InlineData(1e-9, 0.0, 1e-6)]          // a slow drift
     [InlineData(-3e-5, 0.8, 0.3)]          // a falling charge
-    public void ALinearValueCrossesAtTheFirstTickPastTheLimit(double ratePerS, double start, double limit)
+    public void A_linear_value_crosses_at_the_first_tick_past_the_limit(double ratePerS, double start, double limit)
     {
         double ValueAt(long tick) => start + (ratePerS * tick / 1e6);
         // Computed: the root (limit - start) / rate in ticks; the first tick strictly past it is its floor + 1 (or the
@@ -23,7 +23,7 @@ public sealed class CrossingFinderTests
     }
 
     [Fact]
-    public void AMonotoneCurveCrossesWhereItsInverseSays()
+    public void A_monotone_curve_crosses_where_its_inverse_says()
     {
         // T = 100 K · (1 + t / 1 s)^(1/2) reaches 250 K at t = (2.5² − 1) s = 5.25 s, where it is exactly on the limit
         // (sqrt(6.25) = 2.5 in binary floating point): that tick is the first not below it. A limit check made there
@@ -35,7 +35,7 @@ public sealed class CrossingFinderTests
     }
 
     [Fact]
-    public void NoCrossingInsideTheBracketIsNone()
+    public void No_crossing_inside_the_bracket_is_none()
     {
         Assert.Null(CrossingFinder.FirstTickPast(t => t, 0, 1000, 5000));
         Assert.Null(CrossingFinder.FirstTickPast(_ => 3.0, 0, 1000, 2.0));
@@ -43,13 +43,13 @@ public sealed class CrossingFinderTests
     }
 
     [Fact]
-    public void AValueOnTheLimitCrossesAtTheFirstTickItLeavesIt()
+    public void A_value_on_the_limit_crosses_at_the_first_tick_it_leaves_it()
     {
         Assert.Equal(1, CrossingFinder.FirstTickPast(t => t, 0, 1000, 0.0));
     }
 
     [Fact]
-    public void TheSampleGridRoundsUpToWholeIntervalsFromTheStart()
+    public void The_sample_grid_rounds_up_to_whole_intervals_from_the_start()
     {
         var grid = new SampleGrid(1_000_000);
         Assert.Equal(0, grid.AtOrAfter(new(0)).Ticks);

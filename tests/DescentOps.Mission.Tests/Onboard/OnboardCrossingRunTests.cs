@@ -16,7 +16,7 @@ public sealed class OnboardCrossingRunTests
     private const double FrameS = 600.0;
 
     [Fact]
-    public async Task AnOnboardDepthLimitFiresAtTheInstantTheDepthIsOneThousandMetres()
+    public async Task An_onboard_depth_limit_fires_at_the_instant_the_depth_is_one_thousand_metres()
     {
         var (_, board) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("board", OneSecond));
         var (_, ground) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("ground", null));
@@ -47,7 +47,7 @@ public sealed class OnboardCrossingRunTests
     }
 
     [Fact]
-    public async Task TheSameRuleOnTheGroundActsOneFrameAndOneLinkLater()
+    public async Task The_same_rule_on_the_ground_acts_one_frame_and_one_link_later()
     {
         var (_, ground) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("ground", OneSecond));
         var (t0, _, t1, _) = Bracket(Frames(ground));
@@ -72,7 +72,7 @@ public sealed class OnboardCrossingRunTests
     }
 
     [Fact]
-    public async Task ADepthSensorBiasMovesTheCrossingByTheBiasOverTheSpeed()
+    public async Task A_depth_sensor_bias_moves_the_crossing_by_the_bias_over_the_speed()
     {
         const double biasM = 0.01;
         var bias = $"""
@@ -102,7 +102,7 @@ public sealed class OnboardCrossingRunTests
     }
 
     [Fact]
-    public async Task AtSamplesTheRuleFiresAtTheFirstSamplePastTheCrossing()
+    public async Task At_samples_the_rule_fires_at_the_first_sample_past_the_crossing()
     {
         var (_, exact) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("board", OneSecond));
         var (_, sampled) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("board", "onboard_sampling:\n  interval: 1 min\n  crossings: at_samples\n\n"));
@@ -113,7 +113,7 @@ public sealed class OnboardCrossingRunTests
     }
 
     [Fact]
-    public async Task SamplesAreNotJournaled()
+    public async Task Samples_are_not_journaled()
     {
         var (_, board) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("board", OneSecond));
         var (_, ground) = await MissionHarness.RunAsync(OnboardScenarios.DepthRule("ground", null));

@@ -18,7 +18,7 @@ public sealed class OnboardGoldenLogTests
 
     [Theory]
     [MemberData(nameof(Scenarios))]
-    public async Task SamplingAtTheFrameIntervalReproducesTheGoldenLog(string name)
+    public async Task Sampling_at_the_frame_interval_reproduces_the_golden_log(string name)
     {
         var text = BuiltInScenarios.Text(name);
         var frame = ScenarioLoader.LoadText(text, name).Probe.TelemetryIntervalS;

@@ -8,7 +8,7 @@ namespace DescentOps.Mission.Tests.Onboard;
 public sealed class OnboardWatchTests
 {
     [Fact]
-    public void LimitsAndStatesAreWatchedBySideRatesStepsAndSampleCountsAtEverySample()
+    public void Limits_and_states_are_watched_by_side_rates_steps_and_sample_counts_at_every_sample()
     {
         var rules = """
             rules: |

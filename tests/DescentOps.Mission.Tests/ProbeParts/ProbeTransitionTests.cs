@@ -23,7 +23,7 @@ public sealed class ProbeTransitionTests
         ComponentContext.Detached(MissionIds.Probe, new RandomStream(1, MissionIds.Probe), SimTime.FromSecondsSinceEpoch(seconds));
 
     [Fact]
-    public void RunStartedLogsTheShellAndPlansTheFirstStepAtTheFirstFrame()
+    public void Run_started_logs_the_shell_and_plans_the_first_step_at_the_first_frame()
     {
         var context = At(0);
         var state = Component.Handle(Component.InitialState, RunStarted.Instance, context);
@@ -37,7 +37,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void AdvanceMovesAlongTheAxisAtTheHeldVelocityAndBooksTheBusEnergy()
+    public void Advance_moves_along_the_axis_at_the_held_velocity_and_books_the_bus_energy()
     {
         // A stopped probe has no tilt rate, so the tilt stays put and the kinematics are exact.
         var state = Component.InitialState with { Regime = ProbeRegime.Stopped, VelocityMPerS = 1e-4, TiltRad = 0.1 };
@@ -51,7 +51,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void TheStepPlannerStopsAtTheEndOfTheSublimationZoneWhenThatComesBeforeTheFrame()
+    public void The_step_planner_stops_at_the_end_of_the_sublimation_zone_when_that_comes_before_the_frame()
     {
         var onset = Design.Descent.LiquidOnsetDepthM;
         var state = Component.InitialState with
@@ -68,7 +68,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void AProbeWithoutHeatStopsAndItsGapStartsToFreeze()
+    public void A_probe_without_heat_stops_and_its_gap_starts_to_freeze()
     {
         var context = At(0);
         var state = Component.InitialState with
@@ -86,7 +86,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void TheFreezeTimerHoldsAStoppedProbeAndIsRefusedInAnyOtherRegime()
+    public void The_freeze_timer_holds_a_stopped_probe_and_is_refused_in_any_other_regime()
     {
         var context = At(0);
         var frozen = ProbeRegimeMachine.Thermal(Component.InitialState with { Regime = ProbeRegime.Stopped }, new ProbeThermalDue(ProbeRegime.FrozenIn), context);
@@ -98,7 +98,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void AStuckSensorRepeatsItsValueABiasAddsAndADropoutIsMissing()
+    public void A_stuck_sensor_repeats_its_value_a_bias_adds_and_a_dropout_is_missing()
     {
         IReadOnlyList<(string Point, double Value)> truth = [("probe.depth", 100.0), ("probe.velocity", 2e-4), ("probe.tilt", 0.01)];
         ActiveSensorFault[] faults =
@@ -113,7 +113,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void BeyondTheTiltLimitTheRunEndsAsMissionLost()
+    public void Beyond_the_tilt_limit_the_run_ends_as_mission_lost()
     {
         var context = At(0);
         var limit = DefaultScenario.Probe.MaxTiltRad;
@@ -130,7 +130,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void ALinkBufferFillOnlyChangesTheFillTheNextFrameReports()
+    public void A_link_buffer_fill_only_changes_the_fill_the_next_frame_reports()
     {
         var context = At(5);
         var initial = Component.InitialState;
@@ -142,7 +142,7 @@ public sealed class ProbeTransitionTests
     }
 
     [Fact]
-    public void AFailedHeadSegmentHalvesItsShareOfTheHeadDemand()
+    public void A_failed_head_segment_halves_its_share_of_the_head_demand()
     {
         var state = Component.InitialState with { Regime = ProbeRegime.Melting, HeldAtSurface = false, SegmentLossFraction = 1.0 };
         Assert.Equal(DefaultScenario.Probe.HeadPowerW / 2, ProbeHeaters.HeadDemandW(Design, state));

@@ -20,7 +20,7 @@ public class AcousticsTests
     [InlineData(0.0, 30.0, 100.0, 20.97, 21.0, 5e-3)]
     [InlineData(0.0, 35.0, 100.0, 23.44, 23.4, 5e-3)]
     [InlineData(10.0, 35.0, 100.0, 33.63, 33.6, 5e-3)]
-    public void FrancoisGarrisonTable(double tC, double s, double fKHz, double calc, double table, double tableTolerance)
+    public void Francois_Garrison_table(double tC, double s, double fKHz, double calc, double table, double tableTolerance)
     {
         var alpha = SeawaterAbsorption.FrancoisGarrisonDbPerKm(fKHz * 1e3, ZeroCelsiusK + tC, s, 0.0, 8.0);
         // The CALC values carry 4 significant figures, so 1e-3 relative is their rounding.
@@ -29,7 +29,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void AinslieMcColmCheckValues()
+    public void Ainslie_McColm_check_values()
     {
         // AC-9, AC-10 CALC (reference note).
         Approx.Abs(1.622, SeawaterAbsorption.AinslieMcColmDbPerKm(12e3, ZeroCelsiusK + 4.0, 35.0, 0.0, 8.0), 1e-3, "A&M 12 kHz");
@@ -41,7 +41,7 @@ public class AcousticsTests
     [InlineData(-1.9, 34.0, 3000.0, 5e3)]
     [InlineData(20.0, 30.0, 1000.0, 50e3)]
     [InlineData(0.0, 35.0, 0.0, 500.0)]
-    public void AinslieMcColmStaysWithinTenPercentOfFrancoisGarrison(double tC, double s, double zM, double fHz)
+    public void Ainslie_McColm_stays_within_ten_percent_of_Francois_Garrison(double tC, double s, double zM, double fHz)
     {
         // Ainslie & McColm 1998 (JASA 103(3)) state 10 % agreement with F&G across this range (PUB(mem) in the note).
         var fg = SeawaterAbsorption.FrancoisGarrisonDbPerKm(fHz, ZeroCelsiusK + tC, s, zM, 8.0);
@@ -49,14 +49,14 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void ThorpAt10KHz()
+    public void Thorp_at_10_kHz()
     {
         // AC-11 CALC: Thorp 1967 gives 1.0819 dB/kyd at 10 kHz, i.e. 1.1832 dB/km.
         Approx.Abs(1.1832, SeawaterAbsorption.ThorpDbPerKm(10e3), 1e-4, "Thorp");
     }
 
     [Fact]
-    public void CoatesNoise()
+    public void Coates_noise()
     {
         // AC-12 CALC (reference note): 10 kHz, s = 0.5, no wind / 10 m/s wind.
         Approx.Abs(29.35, AmbientNoise.SpectralLevel(10e3, 0.5, 0.0).TotalDb, 0.01, "calm");
@@ -66,7 +66,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void OneWattSourceLevel()
+    public void One_watt_source_level()
     {
         // AC-13 CALC: the textbook 170.8 dB re 1 µPa at 1 m for 1 W omnidirectional (e.g. Urick, "Principles of
         // Underwater Sound"; from memory), here from ρc = 1.5e6 Rayl.
@@ -82,7 +82,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void SonarEquationCheckValues()
+    public void Sonar_equation_check_values()
     {
         // AC-14 and AC-15 CALC (reference note).
         var spherical = SonarEquation.Evaluate(Ac14Link(0.0), 5000.0);
@@ -93,7 +93,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void SelfNoiseFloorsQuietIce()
+    public void Self_noise_floors_quiet_ice()
     {
         var quiet = AmbientNoise.SpectralLevel(12e3, 0.0, 0.0).TotalDb;
         var link = Ac14Link(0.0) with { AmbientNoiseSpectralLevelDb = quiet, SelfNoiseSpectralLevelDb = 35.0 };
@@ -102,7 +102,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void MaximumRangeSitsAtZeroMargin()
+    public void Maximum_range_sits_at_zero_margin()
     {
         var link = Ac14Link(0.0) with { DetectionThresholdDb = 10.0 };
         var range = SonarEquation.MaximumRange(link, 100e3);
@@ -115,7 +115,7 @@ public class AcousticsTests
     }
 
     [Fact]
-    public void OutsideTheFitsTheModelsRefuse()
+    public void Outside_the_fits_the_models_refuse()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterAbsorption.FrancoisGarrisonDbPerKm(10e3, ZeroCelsiusK + 25.0, 35.0, 0.0, 8.0));
         Assert.Equal("temperatureK", e.ParamName);

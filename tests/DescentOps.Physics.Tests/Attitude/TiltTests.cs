@@ -7,7 +7,7 @@ namespace DescentOps.Physics.Tests.Attitude;
 public class TiltTests
 {
     [Fact]
-    public void SteeringRatesOfTheWorkedExample()
+    public void Steering_rates_of_the_worked_example()
     {
         // Computed (CALC), reference note §7.2 (ATT-2): R 0.1 m, P_h 5 kW, ΔP 500 W, T∞ 250 K, η_st 1, ℓ 2.5 m;
         // tolerance 1e-3 rel.
@@ -27,7 +27,7 @@ public class TiltTests
     }
 
     [Fact]
-    public void TiltRateIsClippedAndRestored()
+    public void Tilt_rate_is_clipped_and_restored()
     {
         Assert.Equal(1e-6, TiltDynamics.TiltRateRadPerS(0, 0, 1e-3, 0, double.PositiveInfinity, 1e-6));
         Assert.Equal(-1e-6, TiltDynamics.TiltRateRadPerS(0, 0, -1e-3, 0, double.PositiveInfinity, 1e-6));

@@ -22,7 +22,7 @@ public class CylinderConductionTests
     [InlineData(300, 0.29334, 105.720)]
     [InlineData(1000, 0.25096, 292.611)]
     [InlineData(1e4, 0.19593, 2198.34)]
-    public void MatchesTheTabulatedFunctions(double tau, double g, double h)
+    public void Matches_the_tabulated_functions(double tau, double g, double h)
     {
         // The 4-5 digit table entries are rounded: allow the rounding as well as 2e-4 rel.
         Approx.Rel(g, CylinderConduction.G(tau), 2e-4, "G");
@@ -33,7 +33,7 @@ public class CylinderConductionTests
     [InlineData(2e-4)]
     [InlineData(5e-4)]
     [InlineData(2e-3)]
-    public void QuadratureMeetsTheShortTimeSeries(double tau)
+    public void Quadrature_meets_the_short_time_series(double tau)
     {
         // Carslaw & Jaeger short-time expansions (reference note §4.3: G series good to 2e-5 rel below τ = 0.01,
         // H series to 4e-4 rel below 0.1); the quadrature is used in this range.
@@ -44,14 +44,14 @@ public class CylinderConductionTests
     }
 
     [Fact]
-    public void HIsTheIntegralOfG()
+    public void H_is_the_integral_of_g()
     {
         var integral = MathNet.Numerics.Integrate.OnClosedInterval(CylinderConduction.G, 0.5, 50.0, 1e-10);
         Approx.Rel(integral, CylinderConduction.H(50.0) - CylinderConduction.H(0.5), 1e-7, "∫G");
     }
 
     [Fact]
-    public void LongTimeAsymptote()
+    public void Long_time_asymptote()
     {
         // G ≈ 2/Λ − 2γ/Λ², Λ = ln(4τ) − 2γ (Carslaw & Jaeger; reference note: ~1.5 % at 1e4, better beyond).
         const double tau = 1e10;

@@ -15,7 +15,7 @@ public class DescentCheckValueTests
     // Heinen et al. (2020), Ann. Glaciol., "An efficient melting probe for glacial research" (published).
     [InlineData(273.15, 11.78)]
     [InlineData(253.15, 10.47)]
-    public void SpecificMeltVolume(double farFieldK, double expectedCm3PerWh)
+    public void Specific_melt_volume(double farFieldK, double expectedCm3PerWh)
     {
         // v·A per watt is volume per joule; ×3600 s/h ×1e6 cm³/m³.
         var v = IdealMeltRate.VelocityMPerS(1.0, 1.0, farFieldK, 273.15, 1.0);
@@ -28,7 +28,7 @@ public class DescentCheckValueTests
     [InlineData(0.1, 100.0, 1.04110)]
     [InlineData(0.25, 250.0, 0.26223)]
     [InlineData(0.25, 100.0, 0.16658)]
-    public void IdealPenetrationRate(double radiusM, double farFieldK, double expectedMPerH)
+    public void Ideal_penetration_rate(double radiusM, double farFieldK, double expectedMPerH)
     {
         Approx.Rel(expectedMPerH, IdealMeltRate.VelocityMPerS(5000.0, radiusM, farFieldK, 273.15, 1.0) * 3600, 1e-4, "v0");
         var steady = SteadyDescent.Solve(new ProbeGeometry(radiusM, 2.5, 2000.0), 5000.0, 0.0, farFieldK, NormalPressurePa, 9.80665);
@@ -42,7 +42,7 @@ public class DescentCheckValueTests
     [InlineData(3.71, 450.66, 1.4371, 88.29, 25.29, 92.25)]
     [InlineData(1.315, 159.74, 1.3711, 122.82, 35.18, 130.34)]
     [InlineData(0.113, 13.73, 1.1557, 262.91, 75.31, 295.38)]
-    public void CloseContactMeltingAtConstantPower(double g, double loadN, double vMPerH, double filmUm, double superheatK, double filmNoSuperheatUm)
+    public void Close_contact_melting_at_constant_power(double g, double loadN, double vMPerH, double filmUm, double superheatK, double filmNoSuperheatUm)
     {
         var s = SteadyDescent.Solve(Probe, 5000.0, 0.0, 250.0, NormalPressurePa, g);
         Approx.Rel(vMPerH, s.VelocityMPerS * 3600, 1e-3, "v");
@@ -62,7 +62,7 @@ public class DescentCheckValueTests
     [InlineData(100.0, 0.9128, 2784.7)]
     [InlineData(1000.0, 1.6232, 4952.0)]
     [InlineData(10000.0, 2.8864, 8806.0)]
-    public void CloseContactMeltingAtConstantSuperheat(double loadN, double vMPerH, double impliedPowerW)
+    public void Close_contact_melting_at_constant_superheat(double loadN, double vMPerH, double impliedPowerW)
     {
         var rho = IceIh.DensityKgPerM3(250.0, NormalPressurePa);
         var s = CloseContactMelting.AtConstantSuperheat(20.0, 0.1, loadN, rho, 379_999.0);
@@ -71,7 +71,7 @@ public class DescentCheckValueTests
     }
 
     [Fact]
-    public void StallLimitOfSpheresAndProbes()
+    public void Stall_limit_of_spheres_and_probes()
     {
         // Computed (CALC), reference note §4.4 (PRB-8), a = 651 W/m, T_m = 273.15 K; tolerance 1e-3 rel. The
         // stall condition is our reconstruction of Lorenz (2012), Astrobiology 12, 799 (abstract only).
@@ -89,7 +89,7 @@ public class DescentCheckValueTests
     }
 
     [Fact]
-    public void WeakProbeStallsInColdIce()
+    public void Weak_probe_stalls_in_cold_ice()
     {
         var s = SteadyDescent.Solve(Probe, 1500.0, 0.0, 100.0, NormalPressurePa, 1.315);
         Assert.True(s.Stalled);
@@ -105,7 +105,7 @@ public class DescentCheckValueTests
     // Columns: T∞, g, v (m/h), δ (µm), ΔT_f, Q_lat(2.5 m) (W), η_head, η_probe with P_s = Q_lat, Q_w (W), ṁL (W).
     [InlineData(250.0, 9.80665, 1.48625, 64.58, 18.498, 1534.1, 0.9069, 0.694, 465.73, 3978.6)]
     [InlineData(100.0, 1.315, 0.93677, 108.68, 31.133, 11452.0, 0.8998, 0.273, 501.04, 2543.2)]
-    public void WorkedExamples(double farFieldK, double g, double vMPerH, double filmUm, double superheatK, double lateralW, double headEff, double probeEff, double filmHeatW, double latentW)
+    public void Worked_examples(double farFieldK, double g, double vMPerH, double filmUm, double superheatK, double lateralW, double headEff, double probeEff, double filmHeatW, double latentW)
     {
         var s = SteadyDescent.Solve(Probe, 5000.0, 0.0, farFieldK, NormalPressurePa, g);
         Approx.Rel(vMPerH, s.VelocityMPerS * 3600, 2e-3, "v");
@@ -123,7 +123,7 @@ public class DescentCheckValueTests
     }
 
     [Fact]
-    public void WorkedExampleIntermediates()
+    public void Worked_example_intermediates()
     {
         // Same worked examples (PRB-9, computed): buoyancy-corrected load, Φ, κ_eff, τ_ℓ and H(τ_ℓ).
         var rho250 = IceIh.DensityKgPerM3(250.0, NormalPressurePa);
@@ -148,7 +148,7 @@ public class DescentCheckValueTests
     [InlineData(5000.0, 20000.0, 100.0, 1.315)]
     [InlineData(800.0, 100.0, 260.0, 0.113)]
     [InlineData(5000.0, 0.0, 273.0, 3.71)]
-    public void PowerBreakdownSumsToPowerIn(double headW, double wallW, double farFieldK, double g)
+    public void Power_breakdown_sums_to_power_in(double headW, double wallW, double farFieldK, double g)
     {
         // The head's fixed point is solved to 1e-12 in ΔT_f; the sinks must add up to 1e-9 relative.
         var s = SteadyDescent.Solve(Probe, headW, wallW, farFieldK, NormalPressurePa, g);
@@ -158,7 +158,7 @@ public class DescentCheckValueTests
     }
 
     [Fact]
-    public void TemperateIceHasNoLateralLoss()
+    public void Temperate_ice_has_no_lateral_loss()
     {
         var tm = MeltingCurve.TemperatureK(NormalPressurePa);
         var s = SteadyDescent.Solve(Probe, 5000.0, 0.0, tm, NormalPressurePa, 9.80665);
@@ -176,7 +176,7 @@ public class DescentCheckValueTests
     [InlineData(0.1, 2.5, 200.0, 5000.0, 0.0, 250.0, 101325.0, 0.0, "gravityMPerS2")]
     [InlineData(0.3, 2.5, 200.0, 5000.0, 0.0, 250.0, 101325.0, 9.8, "geometry")] // lighter than its displaced water
     [InlineData(-0.1, 2.5, 200.0, 5000.0, 0.0, 250.0, 101325.0, 9.8, "RadiusM")]
-    public void BadInputGivesTheRangeError(double r, double l, double m, double head, double wall, double farFieldK, double p, double g, string quantity)
+    public void Bad_input_gives_the_range_error(double r, double l, double m, double head, double wall, double farFieldK, double p, double g, string quantity)
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(new ProbeGeometry(r, l, m), head, wall, farFieldK, p, g));
         Assert.Equal(quantity, e.ParamName);

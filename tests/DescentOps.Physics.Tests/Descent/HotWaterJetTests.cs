@@ -7,7 +7,7 @@ namespace DescentOps.Physics.Tests.Descent;
 public class HotWaterJetTests
 {
     [Fact]
-    public void HoleRadiusMatchesTheReferenceNoteCheckValue()
+    public void Hole_radius_matches_the_reference_note_check_value()
     {
         // Reference note ice-and-descent §4.6, PRB-10 (CALC): P_j 5 kW, η 0.8, v 1 m/h, T∞ 250 K → R_h = 0.11450 m
         // (computed there with pure ice melting at 273.15 K).
@@ -15,7 +15,7 @@ public class HotWaterJetTests
     }
 
     [Fact]
-    public void SpeedAndHoleRadiusAreOneBalanceAndTradeAgainstEachOther()
+    public void Speed_and_hole_radius_are_one_balance_and_trade_against_each_other()
     {
         var v = HotWaterJet.SpeedMPerS(8e3, 0.2, 200.0, 273.0);
         Approx.Rel(0.2, HotWaterJet.HoleRadiusM(8e3, v, 200.0, 273.0), 1e-12, "round trip");
@@ -25,7 +25,7 @@ public class HotWaterJetTests
     }
 
     [Fact]
-    public void AWiderHoleFreezesBackLater()
+    public void A_wider_hole_freezes_back_later()
     {
         var narrow = HotWaterJet.At(10e3, 0.13, 0.125, 0.12, 2.4, 150.0, 273.0);
         var wide = HotWaterJet.At(10e3, 0.18, 0.125, 0.12, 2.4, 150.0, 273.0);
@@ -36,7 +36,7 @@ public class HotWaterJetTests
     }
 
     [Fact]
-    public void TheBalanceBoundsThePublishedDeepDrillingSpeed()
+    public void The_balance_bounds_the_published_deep_drilling_speed()
     {
         // Benson et al. (2014, Ann. Glaciol. 55(68), 105, abstract): a 5 MW hot-water drill cut holes of about 60 cm diameter
         // to 2500 m; the builders' laboratory reports 2 km in about 1.5 days (a web page of the University of
@@ -52,7 +52,7 @@ public class HotWaterJetTests
     }
 
     [Fact]
-    public void FreezeBackOfADrillHoleTakesDaysAsReported()
+    public void Freeze_back_of_a_drill_hole_takes_days_as_reported()
     {
         // Greenler et al. (2014, Ann. Glaciol. 55(68), 115): a ~60 cm hole around 33 cm instrument spheres froze completely
         // over "the following week or so" (the sphere size is from memory). Our Stefan model for the 13.5 cm clearance in

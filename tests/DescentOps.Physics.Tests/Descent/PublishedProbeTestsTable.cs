@@ -45,7 +45,7 @@ public class PublishedProbeTestsTable(ITestOutputHelper output)
 
     [Theory]
     [MemberData(nameof(Cases))]
-    public void ModelSpeedAgainstMeasuredSpeed(string source, double radiusM, double lengthM, double powerW, double iceK, double measuredMPerH)
+    public void Model_speed_against_measured_speed(string source, double radiusM, double lengthM, double powerW, double iceK, double measuredMPerH)
     {
         var geometry = new ProbeGeometry(radiusM, lengthM, 2000.0 * Math.PI * radiusM * radiusM * lengthM);
         var s = SteadyDescent.Solve(geometry, powerW, 0.0, iceK, 101325.0, 9.80665, null, SteadyDescent.DefaultDesignGapM, headHeatsBody: true);
@@ -59,7 +59,7 @@ public class PublishedProbeTestsTable(ITestOutputHelper output)
     [Theory]
     [InlineData(218.15)]
     [InlineData(253.15)]
-    public void HotPointInAFluidFilledHole(double iceK)
+    public void Hot_point_in_a_fluid_filled_hole(double iceK)
     {
         // Gillet et al. (1984): 43 mm, 2250 W on the head, 5-8 m/h. A hot point on a cable in a hole kept open by its
         // fluid: no wall heat, and whether the side refreezes does not matter; the head's speed does not depend on the

@@ -13,7 +13,7 @@ public class SaltAndFractureTests
     private static readonly ProbeGeometry Probe = new(0.12, 2.4, 210.0);
 
     [Fact]
-    public void SaltyIceNeedsLessSensibleHeatSoTheProbeIsFaster()
+    public void Salty_ice_needs_less_sensible_heat_so_the_probe_is_faster()
     {
         // Ice of 10 g/kg melts lower by the UNESCO (1983) salt term (Fofonoff and Millard 1983, UNESCO Tech. Pap. Mar.
         // Sci. 44, freezing point), about 0.54 K: computed below from the same formula, so this checks the wiring.
@@ -38,7 +38,7 @@ public class SaltAndFractureTests
     }
 
     [Fact]
-    public void AMeltingPointAbovePureIceOrFarBelowItIsRefusedByName()
+    public void A_melting_point_above_pure_ice_or_far_below_it_is_refused_by_name()
     {
         var pureK = MeltingCurve.TemperatureK(NormalPressurePa);
         var above = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SteadyDescent.Solve(Probe, 5000, 2000, 200, NormalPressurePa, 1.0, pureK + 0.1));
@@ -47,7 +47,7 @@ public class SaltAndFractureTests
     }
 
     [Fact]
-    public void AFracturedTopHoldsOffLiquidMeltingToItsBottom()
+    public void A_fractured_top_holds_off_liquid_melting_to_its_bottom()
     {
         // Rule of the model (ours, no published value): liquid needs a sealed pocket, and open fractures do not seal.
         var plain = new ProbeDescentModel(new IceShell(110, 3000, 1.3), Probe);

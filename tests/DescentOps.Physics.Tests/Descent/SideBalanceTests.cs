@@ -11,7 +11,7 @@ public class SideBalanceTests
     private static readonly ProbeGeometry Probe = new(0.1, 2.5, 200.0);
 
     [Fact]
-    public void WithoutWallHeatIn100KIceTheProbeFreezesInAndSaysWhere()
+    public void Without_wall_heat_in_100_K_ice_the_probe_freezes_in_and_says_where()
     {
         var s = SteadyDescent.Solve(Probe, 5000.0, 0.0, 100.0, 1e6, 1.315);
         Assert.True(s.Side!.Held);
@@ -24,7 +24,7 @@ public class SideBalanceTests
     }
 
     [Fact]
-    public void WithEnoughWallHeatTheSameProbeDoesNotFreezeIn()
+    public void With_enough_wall_heat_the_same_probe_does_not_freeze_in()
     {
         var bare = SteadyDescent.Solve(Probe, 5000.0, 0.0, 100.0, 1e6, 1.315).Side!;
         var s = SteadyDescent.Solve(Probe, 5000.0, bare.RequiredSideHeatW, 100.0, 1e6, 1.315);
@@ -36,7 +36,7 @@ public class SideBalanceTests
     }
 
     [Fact]
-    public void TheFilmNeverExceedsBoilingAndTheHeatGoesSomewhere()
+    public void The_film_never_exceeds_boiling_and_the_heat_goes_somewhere()
     {
         // The case of issue 12: a 2.5 cm probe at 6 kW in 253.15 K ice at one atmosphere had a 392 K superheat.
         var s = SteadyDescent.Solve(new ProbeGeometry(0.025, 1.2, 2000.0 * Math.PI * 0.025 * 0.025 * 1.2), 6000.0, 0.0, 253.15, 101325.0, 9.80665);
@@ -52,11 +52,11 @@ public class SideBalanceTests
     [InlineData(0.1e6, 372.755919)]
     [InlineData(1e6, 453.035632)]
     [InlineData(10e6, 584.149488)]
-    public void BoilingCurveCheckValues(double pressurePa, double expectedK) =>
+    public void Boiling_curve_check_values(double pressurePa, double expectedK) =>
         Approx.Abs(expectedK, BoilingCurve.TemperatureK(pressurePa), 1e-6, "T_s");
 
     [Fact]
-    public void AHeldProbeMeltsFreeAndALongerHoldTakesLonger()
+    public void A_held_probe_melts_free_and_a_longer_hold_takes_longer()
     {
         // 250 K ice, 0.5 mm gap, exposure ℓ/(2v) of a probe at about 1 m/h, head and wall together 9 kW.
         double Time(double heldS) => Refreeze.MeltFree(0.5e-3, 0.12, 2.4, 9000.0, 4300.0, 250.0, 273.15, heldS).TimeS;

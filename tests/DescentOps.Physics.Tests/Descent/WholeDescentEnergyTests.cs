@@ -14,7 +14,7 @@ public class WholeDescentEnergyTests
     [Theory]
     [InlineData(240.0, 101325.0, 9.81, 6000.0, 2000.0)]   // a temperate-surface glacier-like shell, no sublimation zone
     [InlineData(200.0, 101325.0, 1.3, 4000.0, 3000.0)]    // colder ice, low gravity
-    public void HeaterEnergyMeltsTheBoreholeAndPaysTheLosses(double surfaceK, double surfacePressurePa, double gravity, double headW, double wallW)
+    public void Heater_energy_melts_the_borehole_and_pays_the_losses(double surfaceK, double surfacePressurePa, double gravity, double headW, double wallW)
     {
         var geometry = new ProbeGeometry(0.12, 2.4, 210.0);
         var shell = new IceShell(surfaceK, 600.0, gravity, surfacePressurePa);

@@ -6,7 +6,7 @@ namespace DescentOps.Physics.Tests.Ice;
 public class CurveTests
 {
     [Fact]
-    public void MeltingAndSublimationPressuresMatchTheReleaseCheckValues()
+    public void Melting_and_sublimation_pressures_match_the_release_check_values()
     {
         // IAPWS R14-08(2011), "Revised Release on the Pressure along the Melting and Sublimation Curves of Ordinary
         // Water Substance", Table 3 (Wagner et al. 2011, J. Phys. Chem. Ref. Data 40, 043103): 6 printed digits.
@@ -15,7 +15,7 @@ public class CurveTests
     }
 
     [Fact]
-    public void BothCurvesPassThroughTheTriplePoint()
+    public void Both_curves_pass_through_the_triple_point()
     {
         // Identity of the correlations (computed, reference note CRV-3).
         Approx.Rel(611.657, MeltingCurve.PressurePa(273.16), 1e-9, "p_m(T_t)");
@@ -32,13 +32,13 @@ public class CurveTests
     [InlineData(50e6, 269.0595)]
     [InlineData(100e6, 264.2087)]
     [InlineData(200e6, 252.3167)]
-    public void InvertsTheMeltingCurve(double pressurePa, double expectedK)
+    public void Inverts_the_melting_curve(double pressurePa, double expectedK)
     {
         Approx.Abs(expectedK, MeltingCurve.TemperatureK(pressurePa), 1e-4, "T_m");
     }
 
     [Fact]
-    public void MeltingSlopeIsTheAnalyticDerivative()
+    public void Melting_slope_is_the_analytic_derivative()
     {
         // Computed (CALC) in the reference note (CRV-5): dT_m/dp = −0.07431 K/MPa at 273.15 K, to 1e-5 K/MPa.
         Approx.Abs(-0.07431, 1e6 / MeltingCurve.SlopePaPerK(273.15), 1e-5, "dT_m/dp");
@@ -53,13 +53,13 @@ public class CurveTests
     [InlineData(150.0, 6.0957e-6)]
     [InlineData(200.0, 0.16260)]
     [InlineData(250.0, 76.013)]
-    public void SublimationPressureAtColdTemperatures(double t, double expectedPa)
+    public void Sublimation_pressure_at_cold_temperatures(double t, double expectedPa)
     {
         Approx.Rel(expectedPa, SublimationCurve.PressurePa(t), 1e-4, "p_s");
     }
 
     [Fact]
-    public void AgreesWithTheIapwsPythonLibraryAlongBothCurves()
+    public void Agrees_with_the_IAPWS_Python_library_along_both_curves()
     {
         // Golden tables from python3-iapws (shared/reference/README.md).
         foreach (var r in GoldenTable.Read("ice-melting-curve.csv"))
@@ -74,7 +74,7 @@ public class CurveTests
     }
 
     [Fact]
-    public void RefusesPointsOffTheCurves()
+    public void Refuses_points_off_the_curves()
     {
         Assert.Contains("valid range", Assert.ThrowsAny<ArgumentOutOfRangeException>(() => MeltingCurve.PressurePa(250.0)).Message);
         Assert.ThrowsAny<ArgumentOutOfRangeException>(() => MeltingCurve.TemperatureK(300e6));

@@ -30,7 +30,7 @@ public class IceGibbsFunctionTests
 
     [Theory]
     [MemberData(nameof(Table6))]
-    public void ReproducesTheReleaseCheckTable(string quantity, double atTriplePoint, double atNormalMelting, double at100K100MPa)
+    public void Reproduces_the_release_check_table(string quantity, double atTriplePoint, double atNormalMelting, double at100K100MPa)
     {
         (double T, double p, double expected)[] states =
         [
@@ -72,7 +72,7 @@ public class IceGibbsFunctionTests
     [InlineData(70.0, 933.60)]
     [InlineData(80.0, 933.47)]
     [InlineData(90.0, 933.29)]
-    public void ZeroPressureDensityMatchesFeistelWagnerTable(double temperatureK, double expectedKgPerM3)
+    public void Zero_pressure_density_matches_Feistel_Wagner_table(double temperatureK, double expectedKgPerM3)
     {
         Approx.Abs(expectedKgPerM3, IceIh.DensityKgPerM3(temperatureK, 0.0), 0.01, "rho(p=0)");
     }
@@ -87,7 +87,7 @@ public class IceGibbsFunctionTests
     [InlineData(200.0, 926.132, 1568.35, 1.164e-4, 133.890)]
     [InlineData(250.0, 919.996, 1926.83, 1.480e-4, 46.569)]
     [InlineData(260.0, 918.612, 1999.98, 1.533e-4, 26.935)]
-    public void MatchesTheComputedTableAtNormalPressure(double t, double rho, double cp, double alpha, double sensibleKJPerKg)
+    public void Matches_the_computed_table_at_normal_pressure(double t, double rho, double cp, double alpha, double sensibleKJPerKg)
     {
         const double p = 101325.0;
         Approx.Abs(rho, IceIh.DensityKgPerM3(t, p), 0.0005, "rho");
@@ -97,7 +97,7 @@ public class IceGibbsFunctionTests
     }
 
     [Fact]
-    public void AgreesWithTheIapwsPythonLibraryOverTheWholeTable()
+    public void Agrees_with_the_IAPWS_Python_library_over_the_whole_table()
     {
         // Golden table from python3-iapws (see shared/reference/README.md): an independent implementation of the
         // same release, so agreement is expected to round-off; 1e-9 rel covers its kJ-based arithmetic.
@@ -121,7 +121,7 @@ public class IceGibbsFunctionTests
     [InlineData(200.0, 211e6, "pressurePa")]
     [InlineData(200.0, -1.0, "pressurePa")]
     [InlineData(270.0, 50e6, "pressurePa")] // above the melting curve (p_m(270 K) ≈ 37.6 MPa): liquid, not ice
-    public void RefusesStatesOutsideTheRelease(double t, double p, string quantity)
+    public void Refuses_states_outside_the_release(double t, double p, string quantity)
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => IceGibbsFunction.Evaluate(t, p));
         Assert.Equal(quantity, e.ParamName);

@@ -14,7 +14,7 @@ public class ThermalPropertyTests
     [InlineData(IceConductivityFit.PetrenkoWhitworth1999, 6.510, 2.604, 2.383)]
     [InlineData(IceConductivityFit.AnderssonInaba2005, 6.503, 2.415, 2.156)]
     [InlineData(IceConductivityFit.Yen1981, 5.558, 2.364, 2.072)]
-    public void ConductivityFits(IceConductivityFit fit, double at100K, double at250K, double at273K)
+    public void Conductivity_fits(IceConductivityFit fit, double at100K, double at250K, double at273K)
     {
         Approx.Abs(at100K, IceConductivity.ConductivityWPerMK(100.0, fit), 1e-3, "k(100 K)");
         Approx.Abs(at250K, IceConductivity.ConductivityWPerMK(250.0, fit), 1e-3, "k(250 K)");
@@ -26,7 +26,7 @@ public class ThermalPropertyTests
     [InlineData(IceConductivityFit.PetrenkoWhitworth1999)]
     [InlineData(IceConductivityFit.AnderssonInaba2005)]
     [InlineData(IceConductivityFit.Yen1981)]
-    public void KirchhoffPotentialIsTheIntegralOfConductivity(IceConductivityFit fit)
+    public void Kirchhoff_potential_is_the_integral_of_conductivity(IceConductivityFit fit)
     {
         // Closed forms checked against adaptive quadrature of k(T) itself.
         var numeric = Integrate.OnClosedInterval(t => IceConductivity.ConductivityWPerMK(t, fit), 80.0, 273.15, 1e-10);
@@ -34,7 +34,7 @@ public class ThermalPropertyTests
     }
 
     [Fact]
-    public void ConductivityRefusesTemperaturesOutsideTheFit()
+    public void Conductivity_refuses_temperatures_outside_the_fit()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => IceConductivity.ConductivityWPerMK(55.0, IceConductivityFit.Yen1981));
         Assert.Contains("[60, 273.16]", e.Message);
@@ -49,14 +49,14 @@ public class ThermalPropertyTests
     [InlineData(200.0, 2.24e-6, 2.17e-6)]
     [InlineData(250.0, 1.47e-6, 1.36e-6)]
     [InlineData(273.15, 1.24e-6, 1.12e-6)]
-    public void ThermalDiffusivity(double t, double withReciprocal, double withAnderssonInaba)
+    public void Thermal_diffusivity(double t, double withReciprocal, double withAnderssonInaba)
     {
         Approx.Abs(withReciprocal, IceIh.ThermalDiffusivityM2PerS(t, 101325.0, IceConductivityFit.PetrenkoWhitworth1999), 0.01e-6, "kappa a/T");
         Approx.Abs(withAnderssonInaba, IceIh.ThermalDiffusivityM2PerS(t, 101325.0), 0.01e-6, "kappa A-I");
     }
 
     [Fact]
-    public void LatentHeatAtTheTriplePointAndAtNormalPressure()
+    public void Latent_heat_at_the_triple_point_and_at_normal_pressure()
     {
         // Computed (CALC) in the reference note §1.6: ICE-6 L_t = 333.445 kJ/kg (tolerance 0.01 kJ/kg), ICE-7
         // L = 333.43 kJ/kg at 0.101325 MPa (tolerance 0.05 kJ/kg).
@@ -65,7 +65,7 @@ public class ThermalPropertyTests
     }
 
     [Fact]
-    public void LatentHeatSatisfiesClapeyronAtNormalPressure()
+    public void Latent_heat_satisfies_Clapeyron_at_normal_pressure()
     {
         // Clausius–Clapeyron, L = T (v_w − v_i) dp_m/dT, with liquid density 999.843 kg/m³ (IAPWS-95 at 0 °C, from
         // memory), R10-06 ice volume and the R14-08 slope: independent of the enthalpy route (reference note: 333.42 kJ/kg).
@@ -76,7 +76,7 @@ public class ThermalPropertyTests
     }
 
     [Fact]
-    public void LatentHeatFallsWithPressureAndRefusesItsUntrustedRange()
+    public void Latent_heat_falls_with_pressure_and_refuses_its_untrusted_range()
     {
         var low = FusionLatentHeat.AtPressureJPerKg(1e6);
         var high = FusionLatentHeat.AtPressureJPerKg(40e6);
@@ -100,7 +100,7 @@ public class ThermalPropertyTests
     }
 
     [Fact]
-    public void SublimationEnthalpyEqualsVapourMinusIceAtTheTriplePoint()
+    public void Sublimation_enthalpy_equals_vapour_minus_ice_at_the_triple_point()
     {
         // IAPWS-95 saturated vapour h'' = 2500.92 kJ/kg at the triple point (from memory) plus L_t from R10-06:
         // an independent route; the note finds 0.005 % difference, so 0.02 % here.

@@ -12,7 +12,7 @@ public class FibreTests
             10, 0.1, 2, 0.5, 1.0, 0.0, 0.0, 0.0, 3.0);
 
     [Fact]
-    public void LinkBudgetCheckValues()
+    public void Link_budget_check_values()
     {
         // FO-1..FO-3 CALC; transceiver figures from a vendor copy of IEEE 802.3 as listed in the note. Exact sums.
         var lx = FibreLinkBudget.Evaluate(Fo1(TransceiverClass.GigabitLx));
@@ -26,7 +26,7 @@ public class FibreTests
     }
 
     [Fact]
-    public void MarginRequirementDecidesTheVerdict()
+    public void Margin_requirement_decides_the_verdict()
     {
         var link = Fo1(TransceiverClass.GigabitLongReach) with { RequiredMarginDb = 15.0 };
         Assert.True(FibreLinkBudget.Evaluate(link).LinkUp);
@@ -38,12 +38,12 @@ public class FibreTests
     [InlineData(1310e-9, 0.40)]
     [InlineData(1625e-9, 0.40)]
     [InlineData(1529e-9, 0.40)]
-    public void G652DLimits(double wavelengthM, double expected) =>
+    public void G652D_limits(double wavelengthM, double expected) =>
         // ITU-T G.652 Table (G.652.D cabled attributes), as quoted in the note (vendor copy).
         Assert.Equal(expected, FibreAttenuation.G652DCabledMaximumDbPerKm(wavelengthM));
 
     [Fact]
-    public void MacroBendEnvelope()
+    public void Macro_bend_envelope_check_values()
     {
         var a1 = Physics.Links.MacroBendEnvelope.G657A1At1550Nm;
         // The note's fit: B = ln 30 / 5 mm = 0.6802 /mm, A = 675 dB (CALC), and FO-9: 0.1369 dB per turn at 12.5 mm.
@@ -61,7 +61,7 @@ public class FibreTests
     }
 
     [Fact]
-    public void MechanicalCheckValues()
+    public void Mechanical_check_values()
     {
         // FO-4, FO-5, FO-8 CALC (reference note); proof stress from G.652/G.657, E of silica from memory.
         Approx.Abs(8.468, FibreStrength.ProofLoadN(FibreStrength.StandardProofStressPa, 125e-6), 0.005, "FO-4");
@@ -74,7 +74,7 @@ public class FibreTests
     }
 
     [Fact]
-    public void TetherMassCheckValues()
+    public void Tether_mass_check_values()
     {
         // FO-6, FO-7 CALC with the note's assumed densities.
         var glass = TetherMass.PerMetreKgPerM([TetherLayer.Glass]);
@@ -88,7 +88,7 @@ public class FibreTests
     }
 
     [Fact]
-    public void Latency()
+    public void Fibre_latency_is_length_times_group_index_over_c()
     {
         // L·n_g/c: 10 km at n_g 1.4676 is 48.954 µs (computed here: 1e4 × 1.4676 / 299 792 458).
         Approx.Rel(1e4 * 1.4676 / 299_792_458.0, FibreLatency.OneWayDelayS(10e3, FibreLatency.GroupIndex1310Nm), 1e-15, "delay");

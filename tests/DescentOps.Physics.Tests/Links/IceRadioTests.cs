@@ -11,7 +11,7 @@ public class IceRadioTests
     private static readonly IceConductivityParameters Std = IceConductivityParameters.MacGregor2007Standard;
 
     [Fact]
-    public void ConversionFactor()
+    public void Conversion_factor()
     {
         // RF-1 CALC of the MacGregor et al. 2007 formula (their ≈ 0.914 dB/km per µS/m for ε′ = 3.2).
         Approx.Abs(0.91462, IceRadioAttenuation.DbPerMPerSPerM(3.2) * 1e3 * MicroSiemensPerM, 1e-5, "3.2");
@@ -26,7 +26,7 @@ public class IceRadioTests
     [InlineData(270.0, 0.0, 0.0, 39.51, 36.13, 0.01)]
     [InlineData(270.0, 0.0, 100.0, 119.29, 109.11, 0.02)]
     [InlineData(251.0, 1.0, 1.0, 10.23, 9.357, 1e-3)]
-    public void M07StandardCheckValues(double temperatureK, double hMicroMolar, double clMicroMolar, double sigmaMicroSPerM, double dbPerKm, double tolerance)
+    public void M07_standard_check_values(double temperatureK, double hMicroMolar, double clMicroMolar, double sigmaMicroSPerM, double dbPerKm, double tolerance)
     {
         var chemistry = new IceImpurities(hMicroMolar * MicroMolar, clMicroMolar * MicroMolar, 0.0);
         Approx.Abs(sigmaMicroSPerM, IceElectricalConductivity.SPerM(temperatureK, Std, chemistry) / MicroSiemensPerM, tolerance, "sigma");
@@ -34,7 +34,7 @@ public class IceRadioTests
     }
 
     [Fact]
-    public void OtherParameterSets()
+    public void Other_parameter_sets()
     {
         // RF-7 CALC (M07-adj) and RF-8 CALC (cold ice, nearly lossless).
         Approx.Abs(8.414, IceRadioAttenuation.DbPerM(251.0, IceConductivityParameters.MacGregor2007Adjusted, IceImpurities.None) * 1e3, 1e-3, "RF-7");
@@ -46,7 +46,7 @@ public class IceRadioTests
     }
 
     [Fact]
-    public void ShellPathLoss()
+    public void Shell_path_loss()
     {
         // RF-10 CALC: the k = a/T conductive profile T(z) = T_s (T_b/T_s)^(z/H), 100 K to 270 K over 10 km, M07-std pure.
         static double Profile(double z) => 100.0 * Math.Pow(2.7, z / 10e3);
@@ -61,7 +61,7 @@ public class IceRadioTests
     private static IceRadioLink Rf12 => new(30.0, 0.0, 0.0, 100e6, 10e3, 5.0, 10.0, 6.0, 0.0, 3.2);
 
     [Fact]
-    public void RelayLinkCheckValues()
+    public void Relay_link_check_values()
     {
         // RF-11, RF-12 CALC (reference note).
         Approx.Abs(77.50, IceRadioLinkBudget.FreeSpaceLossDb(1e3, 100e6, 3.2), 0.01, "FSPL ice");
@@ -76,7 +76,7 @@ public class IceRadioTests
     }
 
     [Property(MaxTest = 200)]
-    public void RangeFallsAsTheIceWarms(ushort a, ushort b, ushort c)
+    public void Range_falls_as_the_ice_warms(ushort a, ushort b, ushort c)
     {
         // Warmer ice conducts more for every parameter set and chemistry, so the relay spacing must shrink.
         var cold = 150.0 + (120.0 * a / ushort.MaxValue);
@@ -91,7 +91,7 @@ public class IceRadioTests
     }
 
     [Fact]
-    public void OutsideTheModelsTheyRefuse()
+    public void Outside_the_models_they_refuse()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => IceElectricalConductivity.SPerM(274.0, Std, IceImpurities.None));
         Assert.Equal("temperatureK", e.ParamName);

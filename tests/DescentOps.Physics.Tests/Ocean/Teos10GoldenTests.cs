@@ -14,7 +14,7 @@ public class Teos10GoldenTests
     private static readonly IReadOnlyList<double[]> Rows = GoldenTable.Read("seawater-density-sound-speed.csv");
 
     [Fact]
-    public void TableCoversTheVehicleOcean()
+    public void Table_covers_the_vehicle_ocean()
     {
         Assert.True(Rows.Count > 400);
         Assert.Contains(Rows, r => r[0] == 0.0);
@@ -22,7 +22,7 @@ public class Teos10GoldenTests
     }
 
     [Fact]
-    public void Eos80DensityAgreesWithTeos10()
+    public void EOS80_density_agrees_with_TEOS10()
     {
         // Millero et al. 1980 give the high-pressure EOS-80 equation a standard error near 0.01 kg/m³ for seawater (from
         // memory), and TEOS-10 was fitted to the same data within it: 0.01 kg/m³ for S_P ≥ 30. Cold brackish water under
@@ -36,7 +36,7 @@ public class Teos10GoldenTests
     }
 
     [Fact]
-    public void UnescoSoundSpeedAgreesWithTeos10()
+    public void UNESCO_sound_speed_agrees_with_TEOS10()
     {
         // At the surface both rest on the same laboratory data, within 0.15 m/s. With pressure Chen-Millero drifts from
         // the later Del Grosso-consistent data that TEOS-10 follows (Dushaw et al. 1993, JASA 93(1), several tenths of m/s
@@ -50,7 +50,7 @@ public class Teos10GoldenTests
     }
 
     [Fact]
-    public void MackenzieAgreesWithTeos10InItsSalinityRange()
+    public void Mackenzie_agrees_with_TEOS10_in_its_salinity_range()
     {
         // Mackenzie's fit is to older tables and quotes a 0.07 m/s standard error (from memory) against them; allow 1 m/s
         // against TEOS-10 with depth from the UNESCO formula at 45° latitude.

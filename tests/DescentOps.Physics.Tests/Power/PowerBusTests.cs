@@ -28,7 +28,7 @@ public class PowerBusTests
     ];
 
     [Fact]
-    public void TheSourceHalvesOverThePublishedHalfLifeOfPlutonium238()
+    public void The_source_halves_over_the_published_half_life_of_Plutonium238()
     {
         // Pu-238 half-life 87.7 years: the ENSDF evaluation as listed in the NNDC NuDat database (value from memory).
         // With no converter degradation the electric output follows the heat: half after one half-life, a quarter
@@ -43,7 +43,7 @@ public class PowerBusTests
     }
 
     [Fact]
-    public void TheBusShedsTheLeastImportantLoadThatDoesNotFit()
+    public void The_bus_sheds_the_least_important_load_that_does_not_fit()
     {
         // Computed: available = 2000 W source + 1000 W battery limit = 3000 W. In priority order (ties by name):
         // electronics 100 W (used 100), head 2500 W (2600), wall 1500 W would make 4100 > 3000, shed; the pump
@@ -74,7 +74,7 @@ public class PowerBusTests
     }
 
     [Fact]
-    public void AnHourOfDischargeIsBookedOnBothSidesOfTheBattery()
+    public void An_hour_of_discharge_is_booked_on_both_sides_of_the_battery()
     {
         var pack = Pack();
         var a = PowerBus.Allocate(2000, 0, 0.75, pack, Loads);
@@ -98,7 +98,7 @@ public class PowerBusTests
     }
 
     [Fact]
-    public void ABatteryThatRunsDryMidStepLeavesTheRestUnserved()
+    public void A_battery_that_runs_dry_mid_step_leaves_the_rest_unserved()
     {
         var pack = Pack();
         var a = PowerBus.Allocate(2000, 0, 0.1, pack, Loads);
@@ -117,7 +117,7 @@ public class PowerBusTests
     }
 
     [Fact]
-    public void SurplusChargesUpToTheLimitAndTheRestIsCurtailed()
+    public void Surplus_charges_up_to_the_limit_and_the_rest_is_curtailed()
     {
         var pack = Pack(chargeEfficiency: 0.95);
         var a = PowerBus.Allocate(5000, 0, 0.5, pack, Loads);
@@ -133,7 +133,7 @@ public class PowerBusTests
     }
 
     [Fact]
-    public void ACurrentTurbineAloneRechargesAFlatBattery()
+    public void A_current_turbine_alone_recharges_a_flat_battery()
     {
         // Computed: P = ½ · 1030 kg/m³ · π(0.4 m)²/4 · 0.35 · 0.7 · (0.5 m/s)³ = 1.9817 W; with no source and every
         // load too big for it, all of it goes to the pack, which stores 0.95 of it.
@@ -151,7 +151,7 @@ public class PowerBusTests
     private static double Map(ushort draw, double low, double high) => low + ((high - low) * draw / ushort.MaxValue);
 
     [Property(MaxTest = 500)]
-    public void DeliveredPowerNeverExceedsWhatTheSourcesAndTheBatteryCanGive(ushort source, ushort harvest, ushort soc, ushort head, ushort wall, ushort pump, ushort minutes)
+    public void Delivered_power_never_exceeds_what_the_sources_and_the_battery_can_give(ushort source, ushort harvest, ushort soc, ushort head, ushort wall, ushort pump, ushort minutes)
     {
         var pack = Pack();
         var state = Map(soc, 0, 1);

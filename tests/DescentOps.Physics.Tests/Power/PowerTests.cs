@@ -10,7 +10,7 @@ public class PowerTests
     private const double AmpHour = 3600.0;
 
     [Fact]
-    public void Plutonium238SpecificPower()
+    public void Plutonium238_specific_power()
     {
         // PW-1 CALC (reference note), 0.5 % rel; the commonly quoted ≈ 0.57 W/g (from memory) agrees.
         var q = RadioisotopeHeatSource.SpecificThermalPowerWPerKg(RadioisotopeHeatSource.Plutonium238HalfLifeS, RadioisotopeHeatSource.Plutonium238DecayEnergyJ, RadioisotopeHeatSource.Plutonium238MolarMassKgPerMol);
@@ -20,7 +20,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void DecayAndDegradation()
+    public void Decay_and_degradation()
     {
         // PW-2..PW-4 CALC (reference note).
         var halfLife = RadioisotopeHeatSource.Plutonium238HalfLifeS;
@@ -34,7 +34,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void PublishedUnitEfficiencies()
+    public void Published_unit_efficiencies()
     {
         // PW-5: a flown thermoelectric unit's published 110 W_e from 2000 W_th (space agency fact sheet, as quoted in the
         // reference note), i.e. η 5.50 % (CALC): at t = 0 the source must return exactly the beginning-of-life output.
@@ -44,7 +44,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void FissionSource()
+    public void Fission_source_check_values()
     {
         // 1 kW_e at 25 % Stirling conversion (from memory) needs 4 kW_th; the note's "3–4 kW_th per kW_e".
         var f = Physics.Power.FissionSource.AtElectricOutput(1000.0, 0.25);
@@ -59,7 +59,7 @@ public class PowerTests
     private static BatteryParameters Pack(double efficiency) => new(10 * AmpHour, 1.0, efficiency, 0.0, 273.15);
 
     [Fact]
-    public void StateOfChargeCheckValues()
+    public void State_of_charge_check_values()
     {
         // PW-11, PW-12 CALC (reference note): 10 Ah; 2 A for 2 h from full; then 2 A charging for 1 h at η_c 0.99.
         var discharged = Battery.Step(1.0, 2.0, 2 * 3600.0, 298.15, Pack(0.99));
@@ -70,7 +70,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void ColdPacks()
+    public void Cold_packs()
     {
         // The note's placeholder curve (RULE): 0.90 at 0 °C, 0.75 at −20 °C, halfway between at −10 °C.
         Approx.Abs(0.90, Battery.ColdCapacityFactor(273.15), 1e-12, "0 °C");
@@ -89,12 +89,12 @@ public class PowerTests
     [InlineData(0.5, 20.000)]
     [InlineData(2.0, 4.665)]
     [InlineData(5.0, 1.783)]
-    public void Peukert(double currentA, double expectedH) =>
+    public void Peukert_discharge_time_check_values(double currentA, double expectedH) =>
         // PW-13 CALC: H 20 h, C 10 Ah, k 1.05.
         Approx.Abs(expectedH, Battery.PeukertDischargeTimeS(10 * AmpHour, 20 * 3600.0, currentA, 1.05) / 3600.0, 1e-3, "t");
 
     [Property(MaxTest = 300)]
-    public void BatteryChargeBookkeepingBalances(ushort soc, short current, ushort hours, ushort temperature, ushort efficiency)
+    public void Battery_charge_bookkeeping_balances(ushort soc, short current, ushort hours, ushort temperature, ushort efficiency)
     {
         var p = new BatteryParameters(10 * AmpHour, 0.8, 0.9 + (0.1 * efficiency / ushort.MaxValue), 1e-7, 273.15);
         var start = soc / (double)ushort.MaxValue;
@@ -109,7 +109,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void LoadSheddingByPriority()
+    public void Load_shedding_by_priority()
     {
         var loads = new[]
         {
@@ -126,7 +126,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void LoadSheddingHoldsToTheLastBit()
+    public void Load_shedding_holds_to_the_last_bit()
     {
         // The case the property below once shrank to: 0.1 + 0.1 + 0.4 rounds to 0.6000000000000001 > 0.6, so the
         // 0.4 W load must be shed even though 0.6 − 0.1 − 0.1 − 0.4 leaves a tiny positive remainder.
@@ -136,7 +136,7 @@ public class PowerTests
     }
 
     [Property(MaxTest = 300)]
-    public void LoadSheddingNeverExceedsAvailablePower(ushort available, ushort[] powers)
+    public void Load_shedding_never_exceeds_available_power(ushort available, ushort[] powers)
     {
         var loads = (powers ?? []).Select((p, i) => new PoweredLoad(FormattableString.Invariant($"L{i}"), p % 5, p / 10.0)).ToArray();
         var a = LoadShedding.Allocate(available / 5.0, loads);
@@ -148,7 +148,7 @@ public class PowerTests
     }
 
     [Fact]
-    public void CurrentTurbinePower()
+    public void Current_turbine_power()
     {
         // ½ρAC_pηv³ computed here: 1027 kg/m³, 1 m², C_p 0.4, η 0.9, 0.5 m/s → 0.5·1027·0.4·0.9·0.125 = 23.1075 W.
         Approx.Rel(23.1075, CurrentTurbine.ElectricPowerW(0.5, 1027.0, 1.0, 0.4, 0.9, 0.1, 1.0), 1e-12, "P");

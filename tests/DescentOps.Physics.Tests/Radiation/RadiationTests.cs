@@ -8,7 +8,7 @@ public class RadiationTests
     private const double Krad = 10.0; // Gy
 
     [Fact]
-    public void SiliconToWater()
+    public void Silicon_to_water()
     {
         // RD-1 CALC: Z/A of Si over Z/A of water.
         Approx.Abs(0.8980, DoseAccumulation.SiliconPerWaterDoseRatio, 1e-4, "RD-1");
@@ -16,7 +16,7 @@ public class RadiationTests
     }
 
     [Fact]
-    public void FailureDistributions()
+    public void Failure_distributions()
     {
         // RD-2, RD-3 CALC (reference note).
         Approx.Abs(0.11750, DoseToFailure.WeibullFailureProbability(50 * Krad, 100 * Krad, 3.0), 1e-5, "W 50");
@@ -29,7 +29,7 @@ public class RadiationTests
     [InlineData(0.05)]
     [InlineData(0.5)]
     [InlineData(0.95)]
-    public void SampledDosesInvertTheDistributions(double u)
+    public void Sampled_doses_invert_the_distributions(double u)
     {
         // A unit whose draw is u fails where the CDF reaches 1 − u (Weibull, from −ln u) or Φ(z) (lognormal).
         var weibull = DoseToFailure.WeibullFailureDoseGy(u, 300 * Krad * 2, 3.0);
@@ -40,7 +40,7 @@ public class RadiationTests
     }
 
     [Fact]
-    public void MedianLife()
+    public void Median_life()
     {
         // η(ln 2)^(1/β) is where F = 1/2; at 1 krad/day a 100 krad-η, β 3 part has a median life of 88.5 days (computed:
         // 100·0.693147^(1/3) = 88.50).
@@ -50,7 +50,7 @@ public class RadiationTests
     }
 
     [Fact]
-    public void ShieldingRuleOfThumb()
+    public void Shielding_rule_of_thumb()
     {
         // RD-4 CALC from μ/ρ(water) 0.0707 and 0.0222 cm²/g at 1 and 10 MeV (NIST XCOM, from memory), ρ_i 0.92 g/cm³.
         Approx.Abs(15.37e-2, IceShielding.PhotonAttenuationLengthM(0.0707e-1, 920.0), 1e-4, "1 MeV");
@@ -62,7 +62,7 @@ public class RadiationTests
     }
 
     [Fact]
-    public void Bioburden()
+    public void Bioburden_reduction_check_values()
     {
         // Computed: 3 h at a D-value of 30 min is 6 decades; 1e5 spores leave 0.1.
         Approx.Abs(6.0, BioburdenReduction.LogReductionFromHeat(3 * 3600.0, 1800.0), 1e-12, "heat");

@@ -21,7 +21,7 @@ public class CylinderFreezeInEnthalpyTests(ITestOutputHelper output)
     [InlineData(200.0)]
     [InlineData(250.0)]
     [InlineData(270.0)]
-    public void ModelAgreesWithTheEnthalpySolver(double iceK)
+    public void Model_agrees_with_the_enthalpy_solver(double iceK)
     {
         const double gap = 1e-3, radius = 0.05, meltingK = 273.15;
         var model = Refreeze.FreezeInAroundProbe(gap, radius, 0.0, iceK, meltingK).FreezeTimeS;
@@ -33,7 +33,7 @@ public class CylinderFreezeInEnthalpyTests(ITestOutputHelper output)
     [Theory]
     [InlineData(100.0)]
     [InlineData(250.0)]
-    public void AWiderGapAroundALargerProbeAlsoAgrees(double iceK)
+    public void A_wider_gap_around_a_larger_probe_also_agrees(double iceK)
     {
         // 5 mm around 12 cm: the freeze lasts long enough for the wall's curvature to matter.
         const double gap = 5e-3, radius = 0.12, meltingK = 273.15;
@@ -44,7 +44,7 @@ public class CylinderFreezeInEnthalpyTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void TheCylinderFreezesFasterThanThePlane()
+    public void The_cylinder_freezes_faster_than_the_plane()
     {
         // A curved wall draws more heat than a flat one at the same temperature (G(τ) > 1/√(πτ)), so the cylinder's
         // freeze time is the shorter, and the more so the smaller the radius.

@@ -16,14 +16,14 @@ public class RefreezeTests
     [InlineData(1, 0.620063, 0.357835)]
     [InlineData(2, 0.800601, 0.541132)]
     [InlineData(5, 1.059687, 0.820418)]
-    public void FrontConstants(double ste, double onePhase, double coldWall)
+    public void Front_constants(double ste, double onePhase, double coldWall)
     {
         Approx.Abs(onePhase, StefanProblem.OnePhaseFrontConstant(ste), 1e-6, "case (a)");
         Approx.Abs(coldWall, StefanProblem.ColdWallFrontConstant(ste), 1e-6, "case (b)");
     }
 
     [Fact]
-    public void SmallStefanLimits()
+    public void Small_Stefan_limits()
     {
         // Expansions of the two equations for Ste → 0: λ → √(Ste/2) and λ → Ste/√π (first order).
         Approx.Rel(Math.Sqrt(1e-6 / 2), StefanProblem.OnePhaseFrontConstant(1e-6), 1e-6, "(a)");
@@ -36,7 +36,7 @@ public class RefreezeTests
     [InlineData(273.15, 0.257701, 34.63)]
     [InlineData(274.15, 0.255266, 34.30)]
     [InlineData(277.15, 0.248243, 33.36)]
-    public void NeumannTwoPhase(double liquidK, double expectedLambda, double frontAfterHourMm)
+    public void Neumann_two_phase(double liquidK, double expectedLambda, double frontAfterHourMm)
     {
         const double kS = 2.3, rhoS = 917, cS = 2000, kL = 0.5556, rhoL = 999.84, cL = 4219.9, latent = 333430, tm = 273.15;
         var kappaS = kS / (rhoS * cS);
@@ -49,7 +49,7 @@ public class RefreezeTests
     }
 
     [Fact]
-    public void PlanarFreezeInOfAThinGap()
+    public void Planar_freeze_in_of_a_thin_gap()
     {
         // Reference note §5.2 (computed): for w = 0.1 mm at 250 K it quotes "0.351 s vs 0.354 s" for the cylinder
         // model at t_e = 0 and the planar case (b), without saying which is which. The cylinder must be the faster:
@@ -71,7 +71,7 @@ public class RefreezeTests
     [InlineData(1e-3, 100.0, 3600.0, 51.66)]
     [InlineData(10e-3, 250.0, 3600.0, 5508.0)]
     [InlineData(10e-3, 100.0, 3600.0, 526.8)]
-    public void FreezeInAroundAStoppedProbe(double gapM, double iceK, double exposureS, double expectedS)
+    public void Freeze_in_around_a_stopped_probe(double gapM, double iceK, double exposureS, double expectedS)
     {
         Approx.Rel(expectedS, Refreeze.FreezeInAroundProbe(gapM, 0.1, exposureS, iceK, 273.15, stefanCorrected: false).FreezeTimeS, 1e-3, "t_f");
         Assert.True(Refreeze.FreezeInAroundProbe(gapM, 0.1, exposureS, iceK, 273.15).FreezeTimeS >= expectedS * (1 - 1e-3), "the Stefan factor only slows freezing");
@@ -81,7 +81,7 @@ public class RefreezeTests
     // Computed (CALC), reference note §5.3 (FRZ-4), worked examples A and B of PRB-9; tolerance 2e-3 rel.
     [InlineData(250.0, 9.80665, 0.3271, 12.786)]
     [InlineData(100.0, 1.315, 0.0112, 0.2997)]
-    public void CriticalRefreezingLengths(double farFieldK, double g, double onsetM, double closureM)
+    public void Critical_refreezing_lengths(double farFieldK, double g, double onsetM, double closureM)
     {
         var probe = new ProbeGeometry(0.1, 2.5, 200.0);
         var descent = SteadyDescent.Solve(probe, 5000.0, 0.0, farFieldK, 101325.0, g);
@@ -91,7 +91,7 @@ public class RefreezeTests
     }
 
     [Fact]
-    public void MeltingFreeTakesAtLeastTheAnnulusEnergyAndLessTimeWithMorePower()
+    public void Melting_free_takes_at_least_the_annulus_energy_and_less_time_with_more_power()
     {
         var weak = Refreeze.MeltFree(1e-3, 0.1, 2.5, 500.0, 3600.0, 250.0, 273.15);
         var strong = Refreeze.MeltFree(1e-3, 0.1, 2.5, 2000.0, 3600.0, 250.0, 273.15);
@@ -106,7 +106,7 @@ public class RefreezeTests
     }
 
     [Fact]
-    public void RefusesBadInput()
+    public void Refuses_bad_input()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => Refreeze.FreezeIn(1e-3, 280.0, 273.15));
         Assert.Contains("iceTemperatureK", e.Message);

@@ -15,7 +15,7 @@ public class VariablePropertyFreezingTests
     private static readonly double LatentPerVolume = LiquidWater.DensityKgPerM3 * FusionLatentHeat.AtMeltingTemperatureJPerKg(MeltingK);
 
     [Fact]
-    public void TwoKelvinBelowTheMeltingPointItIsTheNeumannFront()
+    public void Two_Kelvin_below_the_melting_point_it_is_the_Neumann_front()
     {
         // Over 2 K, k and ρc of ice change by under 1 %: the front must be case (b)'s λ√κ with the properties at the
         // middle of the range, Ste = ρ_i c ΔT/(ρ_w L) (the latent heat is that of the water consumed).
@@ -30,7 +30,7 @@ public class VariablePropertyFreezingTests
     }
 
     [Fact]
-    public void ColdIceFreezesSlowerThanOneEffectiveDiffusivitySays()
+    public void Cold_ice_freezes_slower_than_one_effective_diffusivity_says()
     {
         // At 100 K one effective diffusivity Φ/(ρΔh_s) over the range overstates how fast the warm new ice passes heat on
         // (its diffusivity is about a sixth of the cold ice's): the exact front is slower than that estimate.

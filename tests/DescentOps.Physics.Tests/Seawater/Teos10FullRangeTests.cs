@@ -16,7 +16,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     private static readonly IReadOnlyList<double[]> Rows = GoldenTable.Read("teos10-seawater-full-range.csv");
 
     [Fact]
-    public void TableCoversFreshWaterAndOneHundredMegapascals()
+    public void Table_covers_fresh_water_and_one_hundred_megapascals()
     {
         Assert.True(Rows.Count > 1500);
         Assert.Contains(Rows, r => r[0] == 0.0 && r[1] == 10000.0 && r[2] == r[9]);
@@ -25,7 +25,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void FreezingTemperatureMatchesTheLibrary()
+    public void Freezing_temperature_matches_the_library()
     {
         var worst = 0.0;
         foreach (var r in Rows)
@@ -40,7 +40,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void ConservativeAndPotentialTemperatureMatchTheLibrary()
+    public void Conservative_and_potential_temperature_match_the_library()
     {
         foreach (var r in Rows)
         {
@@ -52,7 +52,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void GibbsFunctionDensityAndSoundSpeedMatchTheLibrary()
+    public void Gibbs_function_density_and_sound_speed_match_the_library()
     {
         foreach (var r in Rows)
         {
@@ -63,7 +63,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void PolynomialDensityAndSoundSpeedMatchTheLibrary()
+    public void Polynomial_density_and_sound_speed_match_the_library()
     {
         double worstRho = 0, worstC = 0, fitRho = 0, fitC = 0;
         foreach (var r in Rows)
@@ -81,7 +81,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void PolynomialStaysCloseToTheGibbsFunctionOverTheRange()
+    public void Polynomial_stays_close_to_the_Gibbs_function_over_the_range()
     {
         // Roquet et al. (2015) fitted the 75-term polynomial to the Gibbs function; the library's own pair of values shows
         // how far apart they are over this grid (fresh water at 100 MPa near freezing is the worst corner). The bound is
@@ -95,7 +95,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void TheStandardOceanIsTheReferenceStateOfTeos10()
+    public void The_standard_ocean_is_the_reference_state_of_TEOS10()
     {
         // IOC, SCOR and IAPSO (2010), section 2.6: specific enthalpy and entropy of Standard Seawater are zero at
         // S_A = 35.16504 g/kg, t = 0 °C and p = 0 (sea pressure); hence its Conservative Temperature is 0 °C. The published
@@ -107,7 +107,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void FreshWaterFreezesAtTheNormalMeltingPointOfIce()
+    public void Fresh_water_freezes_at_the_normal_melting_point_of_ice()
     {
         // IAPWS R10-06 (2009), Table 6: ice Ih melts at 273.152519 K under 101325 Pa absolute, i.e. zero sea pressure; with
         // the pure-water part of TEOS-10 the air-free freezing point of fresh water must land there (to the table's 6 decimals).
@@ -115,7 +115,7 @@ public class Teos10FullRangeTests(ITestOutputHelper output)
     }
 
     [Fact]
-    public void ColderThanFreezingIsRefusedWithItsRange()
+    public void Colder_than_freezing_is_refused_with_its_range()
     {
         var freezing = Teos10Seawater.FreezingTemperatureK(35.16504, 24.2e6);
         var refusal = Assert.Throws<ModelRangeException>(() => Teos10Seawater.At(35.16504, 24.2e6, freezing - 0.01));

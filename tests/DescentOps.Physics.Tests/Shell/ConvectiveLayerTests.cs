@@ -11,7 +11,7 @@ public class ConvectiveLayerTests
     private static readonly IceShell Shell = new(100, 30_000, 1.3, convection: new ConvectiveLayer(20_000, 270, 500));
 
     [Fact]
-    public void TheLidAboveTheLayerIsTheConductiveProfile()
+    public void The_lid_above_the_layer_is_the_conductive_profile()
     {
         // Computed (CALC) in the physics reference, check SHL-1: plane lid, a = 651 W/m, T_s 100 K, T_b 270 K, D 20 km:
         // T(10 km) = 164.3168 K and q = 32.3303 mW/m² (tolerances 1e-3 K and 1e-3 mW/m²).
@@ -20,7 +20,7 @@ public class ConvectiveLayerTests
     }
 
     [Fact]
-    public void TheLayerIsIsothermalThenWarmsToTheBaseMeltingPoint()
+    public void The_layer_is_isothermal_then_warms_to_the_base_melting_point()
     {
         Assert.Equal(270, Shell.TemperatureK(20_000), 9);
         Assert.Equal(270, Shell.TemperatureK(25_000), 9);
@@ -32,7 +32,7 @@ public class ConvectiveLayerTests
     }
 
     [Fact]
-    public void WarmIceUnderTheLidIsCutFasterThanTheColdLidWouldBe()
+    public void Warm_ice_under_the_lid_is_cut_faster_than_the_cold_lid_would_be()
     {
         var probe = new ProbeGeometry(0.12, 2.4, 210.0);
         var conductive = new ProbeDescentModel(new IceShell(100, 30_000, 1.3), probe);
@@ -41,7 +41,7 @@ public class ConvectiveLayerTests
     }
 
     [Fact]
-    public void ALayerAsWarmAsTheBaseIsRefused()
+    public void A_layer_as_warm_as_the_base_is_refused()
     {
         var error = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => new IceShell(100, 30_000, 1.3, convection: new ConvectiveLayer(20_000, 273.0, 500)));
         Assert.Contains("convecting layer", error.Message, StringComparison.Ordinal);

@@ -11,7 +11,7 @@ public class ShellTests
     // Computed (CALC) in the reference note §3.1 (SHL-1, SHL-2), a = 651 W/m; tolerances 1e-3 K and 1e-3 mW/m².
     [InlineData(100.0, 270.0, 164.3168, 32.3303)]
     [InlineData(60.0, 273.0, 127.9844, 49.3174)]
-    public void FlatLidProfileAndFlux(double surfaceK, double baseK, double midK, double fluxMilliWPerM2)
+    public void Flat_lid_profile_and_flux(double surfaceK, double baseK, double midK, double fluxMilliWPerM2)
     {
         var lid = new PlaneConductiveLid(surfaceK, baseK, 20e3);
         Approx.Abs(midK, lid.TemperatureK(10e3), 1e-3, "T(10 km)");
@@ -24,7 +24,7 @@ public class ShellTests
     // Computed (CALC) in the reference note §3.1 (SHL-3, SHL-4), a = 651 W/m, D = 20 km.
     [InlineData(1560.8e3, 100.0, 270.0, 163.7914, 31.9161)]
     [InlineData(252.1e3, 60.0, 273.0, 124.0416, 45.4049)]
-    public void SphericalShellProfileAndFlux(double radiusM, double surfaceK, double baseK, double midK, double fluxMilliWPerM2)
+    public void Spherical_shell_profile_and_flux(double radiusM, double surfaceK, double baseK, double midK, double fluxMilliWPerM2)
     {
         var lid = new SphericalConductiveLid(surfaceK, baseK, radiusM, 20e3);
         Approx.Abs(midK, lid.TemperatureK(10e3), 1e-3, "T(mid-radius)");
@@ -32,7 +32,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void SphericalFluxConservesHeat()
+    public void Spherical_flux_conserves_heat()
     {
         // Independent of any table: q r² is constant in steady spherical conduction; check it from the profile's
         // local gradient, k dT/dr with k = a/T, at two radii.
@@ -51,7 +51,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void HydrostaticPressureOfALargeIcyMoonShell()
+    public void Hydrostatic_pressure_of_a_large_icy_moon_shell()
     {
         // Computed (CALC) in the reference note §3.2 (SHL-5): g 1.315, D 20 km, SHL-1 profile with T_b 271.3 K,
         // R10-06 density, midpoint rule, 2000 steps: p(D) = 24.438 MPa, T_m = 271.252 K; tolerances 0.01 MPa, 0.01 K.
@@ -63,7 +63,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void HydrostaticPressureOfASmallIcyMoonShell()
+    public void Hydrostatic_pressure_of_a_small_icy_moon_shell()
     {
         // Computed (CALC), reference note SHL-6: g 0.113, D 20 km, T_s 60 K, T_b 273 K → 2.1016 MPa, T_m 273.003 K.
         var lid = new PlaneConductiveLid(60.0, 273.0, 20e3);
@@ -73,7 +73,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void ShellFindsItsPressureMeltingBase()
+    public void Shell_finds_its_pressure_melting_base()
     {
         // Computed (CALC), reference note SHL-7: a 3 km terrestrial ice sheet, g 9.80665, T_s 243.15 K:
         // 27.076 MPa at the base and T_m 271.035 K there; tolerances 0.01 MPa and 0.01 K.
@@ -85,7 +85,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void SaltInTheBasalLayerLowersTheBaseTemperature()
+    public void Salt_in_the_basal_layer_lowers_the_base_temperature()
     {
         var pure = new IceShell(100.0, 20e3, 1.315);
         var salty = new IceShell(100.0, 20e3, 1.315, layers: [new IceLayer(19e3, 20e3, 35.0)]);
@@ -98,7 +98,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void DebrisAccumulatesOnTheHead()
+    public void Debris_accumulates_on_the_head()
     {
         // Computed (CALC), reference note ATT-1: φ_d 1e-6 → 1.7 mm per km; 1e-4 → 0.17 m per km (n_p 0.4).
         var shell = new IceShell(250.0, 3e3, 9.80665, debrisBands: [new DebrisBand(0, 1e3, 1e-6), new DebrisBand(1e3, 2e3, 1e-4)]);
@@ -109,7 +109,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void ShellRejectsBadLayers()
+    public void Shell_rejects_bad_layers()
     {
         Assert.Throws<ArgumentException>(() => new IceShell(100, 20e3, 1.3, layers: [new IceLayer(0, 10e3, 1), new IceLayer(5e3, 12e3, 2)]));
         Assert.ThrowsAny<ArgumentOutOfRangeException>(() => new IceShell(100, 20e3, 1.3, layers: [new IceLayer(0, 30e3, 1)]));
@@ -127,13 +127,13 @@ public class ShellTests
     // UNESCO 1983 p.30 table, 3 decimals (reference note SW-2): tolerance 5e-4 K.
     [InlineData(35.0, 500.0, -2.299, 5e-4)]
     [InlineData(5.0, 0.0, -0.274, 5e-4)]
-    public void SeawaterFreezingPointCheckValues(double salinity, double pressureDbar, double expectedC, double tol)
+    public void Seawater_freezing_point_check_values(double salinity, double pressureDbar, double expectedC, double tol)
     {
         Approx.Abs(expectedC, SeawaterFreezingPoint.TemperatureK(salinity, pressureDbar * 1e4) - 273.15, tol, "t_f");
     }
 
     [Fact]
-    public void SeawaterFreezingPointAgreesWithTeos10()
+    public void Seawater_freezing_point_agrees_with_TEOS10()
     {
         // Golden table from python3-gsw (TEOS-10, air-free): UNESCO 1983 and TEOS-10 differ by a few mK over
         // S 4–40, 0–500 dbar; 6 mK bounds the largest difference of the two formulations there.
@@ -143,7 +143,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void FreezingPointRefusesItsOutsideRange()
+    public void Freezing_point_refuses_its_outside_range()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => SeawaterFreezingPoint.TemperatureK(2.0, 0));
         Assert.Contains("[4, 40]", e.Message);
@@ -151,7 +151,7 @@ public class ShellTests
     }
 
     [Fact]
-    public void BrineVolumeOfSeaIce()
+    public void Brine_volume_of_sea_ice()
     {
         // Computed (CALC), reference note SHL-8, Frankenstein & Garner (1967): S 5 g/kg, −5 °C → 5.18 %.
         Approx.Abs(0.0518, SalineIce.BrineVolumeFraction(5.0, 268.15), 0.0001, "v_b");

@@ -12,7 +12,7 @@ public class HomeWindowsTests
     private const double PeriodS = 10 * 3600.0;
 
     [Fact]
-    public void AtTheEquatorWithNoMaskAndNoPlanetHomeIsUpHalfOfEachTurn()
+    public void At_the_equator_with_no_mask_and_no_planet_home_is_up_half_of_each_turn()
     {
         // Computed: φ = 0, δ = 0, e = 0 give cos H0 = 0, H0 = π/2, so the in-view fraction is (π/2)/π = 1/2.
         var h0 = EarthVisibility.InViewFraction(0.0, 0.0, 0.0) * Math.PI;
@@ -29,7 +29,7 @@ public class HomeWindowsTests
     }
 
     [Fact]
-    public void ThePlanetCutsItsArcOutOfTheWindow()
+    public void The_planet_cuts_its_arc_out_of_the_window()
     {
         // Invented planet and orbit. The planet covers ±asin(R/a) of hour angle about the meridian, so the window
         // [−90°, 90°] loses 2·asin(R/a)/(2π) of the turn and splits in two about hour angle 0.
@@ -49,7 +49,7 @@ public class HomeWindowsTests
     }
 
     [Fact]
-    public void AlwaysAndNeverInViewAreHandled()
+    public void Always_and_never_in_view_are_handled()
     {
         var always = new HomeWindows(PeriodS, Math.PI, 0.0, 0.0, 0.0);
         Assert.Equal(1.0, always.OpenFraction, 12);
@@ -60,7 +60,7 @@ public class HomeWindowsTests
     }
 
     [Fact]
-    public void AWindowThatSpansTheWrapOfHourAngleIsOneWindow()
+    public void A_window_that_spans_the_wrap_of_hour_angle_is_one_window()
     {
         // H0 = 120°, no planet: open from −120° to +120°, across hour angle 0 (= 2π); starting at −60° the window
         // closes after 180° of turn, half a period (computed).

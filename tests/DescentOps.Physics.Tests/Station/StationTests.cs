@@ -9,7 +9,7 @@ public class StationTests
     private const double Deg = Math.PI / 180.0;
 
     [Fact]
-    public void LightTimes()
+    public void Light_times()
     {
         // DS-1, DS-2 CALC (reference note); AU exact (IAU 2012).
         Approx.Abs(499.0048, LightTime.OneWayS(Au), 1e-4, "per AU");
@@ -19,7 +19,7 @@ public class StationTests
     }
 
     [Fact]
-    public void Geometry()
+    public void Visibility_geometry_check_values()
     {
         // DS-3..DS-6 CALC; example orbit and planet radius from memory in the note.
         Approx.Abs(11.09, EarthVisibility.MaximumEarthElongationRad(5.2 * Au) / Deg, 0.01, "DS-3");
@@ -36,7 +36,7 @@ public class StationTests
     }
 
     [Fact]
-    public void LinkEquation()
+    public void Link_equation()
     {
         // DS-7, DS-8 CALC (reference note; inputs are assumptions).
         Approx.Abs(288.75, DeepSpaceLink.FreeSpaceLossDb(5.2 * Au, 8.4e9), 0.01, "DS-7");

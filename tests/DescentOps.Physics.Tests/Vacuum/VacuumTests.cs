@@ -12,7 +12,7 @@ public class VacuumTests
     [InlineData(220.0, 3.3229e-3)]
     [InlineData(200.0, 2.1352e-4)]
     [InlineData(150.0, 9.2426e-9)]
-    public void HertzKnudsenFlux(double t, double expected)
+    public void Hertz_Knudsen_flux(double t, double expected)
     {
         Approx.Rel(expected, VacuumSublimation.MassFluxKgPerM2S(t), 1e-4, "J");
     }
@@ -24,7 +24,7 @@ public class VacuumTests
     [InlineData(100.0, 0.1, 269.65, 0.1991)]
     [InlineData(250.0, 1.0, 245.30, 0.2201)]
     [InlineData(250.0, 0.1, 270.50, 0.2166)]
-    public void HeadSurfaceTemperatureInVacuum(double farFieldK, double alpha, double surfaceK, double mPerH)
+    public void Head_surface_temperature_in_vacuum(double farFieldK, double alpha, double surfaceK, double mPerH)
     {
         var s = VacuumSublimation.SolveHead(5000.0 / (Math.PI * 0.01), farFieldK, alpha);
         Approx.Abs(surfaceK, s.SurfaceTemperatureK, 0.01, "T_s");
@@ -33,7 +33,7 @@ public class VacuumTests
     }
 
     [Fact]
-    public void EnergyPerKilogramFromColdIce()
+    public void Energy_per_kilogram_from_cold_ice()
     {
         // Reference note VAC-2 (computed): Δh_vac = 3.038 MJ/kg for T∞ 100 K, α_s 1. (Its "5.10× the melting budget"
         // remark could not be reproduced from the stated inputs — we get 5.15 against 256.401 + 333.43 kJ/kg — and is
@@ -49,13 +49,13 @@ public class VacuumTests
     [InlineData(1.428, 0.4606)]
     [InlineData(3.71, 0.1773)]
     [InlineData(9.80665, 0.0671)]
-    public void OverburdenForLiquid(double g, double expectedM)
+    public void Overburden_for_liquid(double g, double expectedM)
     {
         Approx.Abs(expectedM, LiquidOnset.MinimumLiquidDepthM(930.0, g), 1e-3, "z_liq");
     }
 
     [Fact]
-    public void MeltingNeedsASealedDeepEnoughHole()
+    public void Melting_needs_a_sealed_deep_enough_hole()
     {
         Approx.Abs(2.9, LiquidOnset.SealDepthM(2.5, 0.1), 1e-12, "z_seal = ℓ + 2·2R");
         Assert.False(LiquidOnset.MeltingPossible(2.0, 2.5, 0.1, 930.0, 1.315));
@@ -64,7 +64,7 @@ public class VacuumTests
     }
 
     [Fact]
-    public void RefusesFluxesOutsideTheRegime()
+    public void Refuses_fluxes_outside_the_regime()
     {
         var e = Assert.ThrowsAny<ArgumentOutOfRangeException>(() => VacuumSublimation.SolveHead(1e7, 100.0));
         Assert.Contains("headFluxWPerM2", e.Message);

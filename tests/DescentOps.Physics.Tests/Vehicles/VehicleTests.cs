@@ -14,7 +14,7 @@ public class VehicleTests
     // VH-* are CALC values of the reference note from the Leonard & Graver 2001 (IEEE JOE 26(4)) steady-glide
     // equations and coefficients recalled from Graver 2005; they guard the implementation, not the coefficients.
     [Fact]
-    public void GlideCheckValues()
+    public void Glide_check_values()
     {
         Approx.Abs(6.315, SteadyGlide.MinimumGlidePathAngleRad(Glider) / Deg, 1e-3, "VH-1");
         var g = SteadyGlide.AtAngleOfAttack(Glider, 2 * Deg, 0.1, 9.81);
@@ -31,7 +31,7 @@ public class VehicleTests
     }
 
     [Fact]
-    public void GlideOnAnotherBody()
+    public void Glide_on_another_body()
     {
         // Speed scales with √(m0·g): the note's √(g_body/g_Earth) rule, here at g = 1.315 m/s².
         var earth = SteadyGlide.AtAngleOfAttack(Glider, 2 * Deg, 0.1, 9.81);
@@ -44,7 +44,7 @@ public class VehicleTests
     }
 
     [Fact]
-    public void PumpAndCycle()
+    public void Pump_and_cycle()
     {
         // VH-5, VH-6 CALC.
         Approx.Abs(5.0e3, SteadyGlide.PumpStrokeEnergyJ(250e-6, 10e6, 0.5), 1e-9, "10 MPa");
@@ -53,7 +53,7 @@ public class VehicleTests
     }
 
     [Fact]
-    public void PropelledCheckValues()
+    public void Propelled_check_values()
     {
         // VH-7..VH-9 CALC at ρ 1027 kg/m³, 1 kWh battery; 1e-3 relative.
         var p = PropelledVehicleModel.AtSpeed(Auv, 1.5, 1027.0, KWh);
@@ -75,7 +75,7 @@ public class VehicleTests
     }
 
     [Property(MaxTest = 300)]
-    public void AboveTheOptimumFasterMeansShorterEnduranceAndRange(ushort a, ushort b)
+    public void Above_the_optimum_faster_means_shorter_endurance_and_range(ushort a, ushort b)
     {
         var vOpt = PropelledVehicleModel.MaximumRangeSpeedMPerS(Auv, 1027.0);
         var slow = vOpt * (1.0 + (2.0 * a / ushort.MaxValue));
@@ -90,7 +90,7 @@ public class VehicleTests
     }
 
     [Fact]
-    public void DeadReckoningCheckValues()
+    public void Dead_reckoning_check_values()
     {
         // VH-10, VH-11 CALC; g0 = 9.80665 m/s² exact.
         Approx.Abs(17.452, DeadReckoning.HeadingCrossTrackErrorM(1000.0, 1 * Deg), 1e-3, "VH-10");
