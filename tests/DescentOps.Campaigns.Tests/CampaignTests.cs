@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using System.Text.Json.Nodes;
 using DescentOps.Campaigns;
 using DescentOps.Cli.Commands;
@@ -134,7 +135,7 @@ public sealed class CampaignTests
     {
         var text = File.ReadAllText(CampaignFixture.Scenario);
         var line = text[..text.IndexOf("require: breakthrough below 20 d", StringComparison.Ordinal)].Count(c => c == '\n') + 1;
-        var bad = text.Replace("require: breakthrough below 20 d", "require: " + requirement, StringComparison.Ordinal);
+        var bad = TestScenario.Of(text, "bad.yaml").Replace("require: breakthrough below 20 d", "require: " + requirement).Text;
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(bad, "bad.yaml")).Errors);
         Assert.Equal("criteria[0].require", error.FieldPath);
         Assert.Equal("bad.yaml", error.Location.File);
@@ -161,7 +162,7 @@ public sealed class CampaignTests
     [Fact]
     public void An_unknown_criterion_measure_is_refused()
     {
-        var text = File.ReadAllText(CampaignFixture.Scenario).Replace("require: longest_stop below 2 d", "require: longest_nap below 2 d", StringComparison.Ordinal);
+        var text = TestScenario.Of(File.ReadAllText(CampaignFixture.Scenario), "bad.yaml").Replace("require: longest_stop below 2 d", "require: longest_nap below 2 d").Text;
         var error = Assert.Single(Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "bad.yaml")).Errors);
         Assert.Equal("criteria[1].require", error.FieldPath);
     }

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;
@@ -117,7 +118,7 @@ public sealed class ContingencyTests
     [Fact]
     public void A_rule_error_is_reported_at_its_place_in_the_scenario_file()
     {
-        var text = Text("stall-wall-boost.yaml").Replace("when probe.regime is FrozenIn", "when probe.regme is FrozenIn", StringComparison.Ordinal);
+        var text = TestScenario.Of(Text("stall-wall-boost.yaml"), "typo.yaml").Replace("when probe.regime is FrozenIn", "when probe.regme is FrozenIn").Text;
         var scenario = ScenarioLoader.LoadText(text, "typo.yaml");
         var exception = Assert.Throws<ScenarioException>(() => MissionAssembly.Components(scenario));
         var error = Assert.Single(exception.Errors);

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 
@@ -25,7 +26,7 @@ public sealed class DockOnProbeBusTests
         """;
 
     private static string WithPower(string faults = "") =>
-        BuiltInScenarios.Text("vehicle-flat-battery.yaml").Replace("tether:\n", Power, StringComparison.Ordinal).Replace("\nrun:", faults + "\nrun:", StringComparison.Ordinal);
+        TestScenario.BuiltIn("vehicle-flat-battery.yaml").Replace("\ntether:\n", "\n" + Power).InsertBefore("\nrun:", faults).Text;
 
     private static (double TimeS, double BatteryJ) Docked(CollectingSink sink) =>
         sink.OfKind("vehicle.charging").Where(r => r.Source.Name == "vehicle-wisp-1").Select(r => (r.Time.SecondsSinceEpoch, CollectingSink.Field(r, "battery_j"))).First();

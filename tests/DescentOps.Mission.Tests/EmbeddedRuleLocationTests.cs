@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Faults;
 using DescentOps.Scenarios;
@@ -11,7 +12,7 @@ public sealed class EmbeddedRuleLocationTests
     private const string Rule = "rule r { runs on board severity high when probe.tail_temp above 300 K then { send probe pause_descent } }";
 
     private static string WithRules(string rulesYaml) =>
-        BuiltInScenarios.Text("default.yaml").Replace("run:\n", rulesYaml + "\nrun:\n", StringComparison.Ordinal);
+        TestScenario.Default.InsertBefore("\nrun:\n", "\n" + rulesYaml).Text;
 
     [Theory]
     [InlineData("rules: |\n  autonomy E3\n  " + Rule)]

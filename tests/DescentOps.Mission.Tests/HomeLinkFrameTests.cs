@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Mission.Station;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
@@ -12,8 +13,8 @@ public sealed class HomeLinkFrameTests
     [InlineData(100_000_000)]   // about 22 h on the air at about 1.3 kbit/s, longer than any window of an 8 h turn (41 % open)
     public void A_frame_start_is_a_fixed_point(long frameBits)
     {
-        var text = BuiltInScenarios.Text("station-dies-before-breakthrough.yaml").Replace("frame_bits: 4096", $"frame_bits: {frameBits}", StringComparison.Ordinal)
-            .Replace("rotation_period: 260 h", "rotation_period: 8 h", StringComparison.Ordinal);
+        var text = TestScenario.BuiltIn("station-dies-before-breakthrough.yaml").Replace("frame_bits: 4096", $"frame_bits: {frameBits}")
+            .Replace("rotation_period: 260 h", "rotation_period: 8 h").Text;
         var link = new HomeLink(ScenarioLoader.LoadText(text, "s.yaml"));
 
         // Times spread over three turns of the body; the station asks again when the start comes, and must then send.

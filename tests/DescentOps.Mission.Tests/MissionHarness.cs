@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Cli.Commands;
 using DescentOps.Cli.Running;
 using DescentOps.Journal;
@@ -13,17 +14,8 @@ internal static class MissionHarness
 {
     public static string DefaultText => BuiltInScenarios.Text(BuiltInScenarios.DefaultName);
 
-    public static Scenario Edited(params (string Line, string Replacement)[] edits)
-    {
-        var text = DefaultText;
-        foreach (var (line, replacement) in edits)
-        {
-            Assert.Contains(line, text);
-            text = text.Replace(line, replacement, StringComparison.Ordinal);
-        }
-
-        return ScenarioLoader.LoadText(text, "edited.yaml");
-    }
+    public static Scenario Edited(params (string Line, string Replacement)[] edits) =>
+        edits.Aggregate(TestScenario.Of(DefaultText, "edited.yaml"), (text, edit) => text.Replace(edit.Line, edit.Replacement)).Load();
 
     /// <summary>A scenario's text with its rules block taken out: the same faults, met without the rules.</summary>
     public static string WithoutRules(string text)

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using System.Globalization;
 using System.Text.Json;
 using DescentOps.Mission.Probe;
@@ -148,6 +149,22 @@ public sealed class PhysicsCommandTests
         AssertRelative(integral * h / 3.0 / 333_426.5, Number(r, "stefan_number"), 1e-3);
     }
 
+    [Fact]
+    public async Task Refreeze_around_a_probe_states_its_geometry_and_a_thin_gap_freezes_as_the_planar_variable_property_front()
+    {
+        // A 0.1 mm gap around a 5 cm probe is nearly flat (gap/R = 0.002), so with no earlier exposure the cylinder's time
+        // must approach the planar front it reports: s = 2λ′√t reaching the gap, t = (w/2λ′)² (computed here).
+        var r = await JsonAsync("refreeze", "--geometry", "cylinder", "--radius", "5 cm", "--gap", "0.1 mm", "--temperature", "200 K");
+        Assert.Equal("cylinder", r.GetProperty("geometry").GetString());
+        AssertFields(r, "stefan_number", "front_constant", "variable_property_front_m_per_root_s", "freeze_time_s");
+        var front = Number(r, "variable_property_front_m_per_root_s");
+        var planarS = Math.Pow(0.1e-3 / (2.0 * front), 2);
+        AssertRelative(planarS, Number(r, "freeze_time_s"), 0.02);
+        // The planar geometry has no variable-property field: it is the constant-property Neumann case.
+        var planar = await JsonAsync("refreeze", "--gap", "0.1 mm", "--temperature", "200 K");
+        Assert.False(planar.TryGetProperty("variable_property_front_m_per_root_s", out _));
+    }
+
     // ---- crossing ----
 
     [Fact]
@@ -209,8 +226,7 @@ public sealed class PhysicsCommandTests
     [Fact]
     public async Task A_probe_that_cannot_melt_has_no_crossing_time()
     {
-        var text = MissionHarness.DefaultText.Replace("  head_power: 6 kW", "  head_power: 20 W", StringComparison.Ordinal)
-            .Replace("  wall_power: 10 kW", "  wall_power: 0 W", StringComparison.Ordinal);
+        var text = TestScenario.Of(MissionHarness.DefaultText, "weak.yaml").Set("probe.head_power", "20 W").Set("probe.wall_power", "0 W").Text;
         var path = Path.Combine(ToolProcess.NewTempDirectory(), "weak.yaml");
         await File.WriteAllTextAsync(path, text);
         var c = await JsonAsync("crossing", path);

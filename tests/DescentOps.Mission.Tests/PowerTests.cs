@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
@@ -19,11 +20,7 @@ public sealed class PowerTests
 
     private static string Text => BuiltInScenarios.Text(ScenarioName);
 
-    private static string Edit(string text, string line, string replacement)
-    {
-        Assert.Contains(line, text);
-        return text.Replace(line, replacement, StringComparison.Ordinal);
-    }
+    private static string Edit(string text, string line, string replacement) => TestScenario.Of(text, ScenarioName).Replace(line, replacement).Text;
 
     private static Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(string text, string name) =>
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
@@ -22,16 +23,8 @@ public sealed class StationTests
 
     private static string Text(string name) => BuiltInScenarios.Text(name);
 
-    private static string Edit(string text, params (string Line, string Replacement)[] edits)
-    {
-        foreach (var (line, replacement) in edits)
-        {
-            Assert.Contains(line, text);
-            text = text.Replace(line, replacement, StringComparison.Ordinal);
-        }
-
-        return text;
-    }
+    private static string Edit(string text, params (string Line, string Replacement)[] edits) =>
+        edits.Aggregate(TestScenario.Of(text, ScenarioName), (t, edit) => t.Replace(edit.Line, edit.Replacement)).Text;
 
     private static Task<(MissionSummary Summary, CollectingSink Sink)> RunAsync(string text) =>
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, "station-test.yaml"));

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Physics.Acoustics;
@@ -20,12 +21,7 @@ public sealed class VehicleScenarioTests
     private static Task<(Running.MissionSummary Summary, CollectingSink Sink)> RunAsync(string text, string name = "vehicle.yaml") =>
         MissionHarness.RunAsync(ScenarioLoader.LoadText(text, name));
 
-    private static string Edit(string name, string line, string replacement)
-    {
-        var text = BuiltInScenarios.Text(name);
-        Assert.Contains(line, text);
-        return text.Replace(line, replacement, StringComparison.Ordinal);
-    }
+    private static string Edit(string name, string line, string replacement) => TestScenario.BuiltIn(name).Replace(line, replacement).Text;
 
     private static string Text(JournalRecord record, string field) => record.Fields.Single(f => f.Name == field).Text!;
 

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 
@@ -18,8 +19,8 @@ public class JetsSectionTests
     [Fact]
     public void Defaults_are_the_minimum_hole_and_the_rule_of_thumb_efficiency_and_a_default_bus_gets_a_jets_load()
     {
-        var text = ScenarioText.Default
-            .Replace("    hole_radius: 15 cm\n    efficiency: 0.7\n    initial_power: 0 W\n", "", StringComparison.Ordinal);
+        string text = TestScenario.Of(ScenarioText.Default, "every-field.yaml")
+            .Replace("    hole_radius: 15 cm\n    efficiency: 0.7\n    initial_power: 0 W\n", "");
         var start = text.IndexOf("  loads:\n", StringComparison.Ordinal);
         var end = text.IndexOf("  turbine:\n", StringComparison.Ordinal);
         text = text[..start] + text[end..];
@@ -43,7 +44,7 @@ public class JetsSectionTests
     [Fact]
     public void Initial_power_above_the_jets_heat_is_refused_at_its_line()
     {
-        var text = ScenarioText.Default.Replace("    initial_power: 0 W\n", "    initial_power: 9 kW\n", StringComparison.Ordinal);
+        var text = ScenarioText.DefaultWith("    initial_power: 0 W\n", "    initial_power: 9 kW\n");
         var error = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, "x.yaml"));
         var e = Assert.Single(error.Errors);
         Assert.Equal("probe.jets.initial_power", e.FieldPath);

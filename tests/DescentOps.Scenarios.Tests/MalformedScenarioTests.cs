@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Scenarios.Tests;
@@ -86,7 +87,7 @@ public sealed class MalformedScenarioTests
     [Fact]
     public void Every_problem_is_reported_not_only_the_first()
     {
-        var text = ScenarioText.DefaultWith("  radius: 12 cm", "  radius: -1 m").Replace("  length: 2.4 m", "  length: 2.4 kW", StringComparison.Ordinal);
+        var text = TestScenario.Of(ScenarioText.Default, "every-field.yaml").Replace("  radius: 12 cm", "  radius: -1 m").Replace("  length: 2.4 m", "  length: 2.4 kW").Text;
         var exception = Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(text, File));
         Assert.Equal(["probe.radius", "probe.length"], exception.Errors.Select(e => e.FieldPath));
     }

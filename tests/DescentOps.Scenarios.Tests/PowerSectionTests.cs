@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 
@@ -58,11 +59,11 @@ public sealed class PowerSectionTests
     [Fact]
     public void Omitted_options_take_their_defaults()
     {
-        var text = ScenarioText.Default
-            .Replace("    max_charge_power: 3 kW\n", "", StringComparison.Ordinal)
-            .Replace("    initial_charge: 0.9\n", "", StringComparison.Ordinal)
-            .Replace("    temperature: 15 °C\n", "", StringComparison.Ordinal)
-            .Replace("    water_density: 1030 kg/m^3\n", "", StringComparison.Ordinal);
+        string text = TestScenario.Of(ScenarioText.Default, "every-field.yaml")
+            .Replace("    max_charge_power: 3 kW\n", "")
+            .Replace("    initial_charge: 0.9\n", "")
+            .Replace("    temperature: 15 °C\n", "")
+            .Replace("    water_density: 1030 kg/m^3\n", "");
         var start = text.IndexOf("  loads:\n", StringComparison.Ordinal);
         var end = text.IndexOf("  turbine:\n", StringComparison.Ordinal);
         text = text[..start] + text[end..];

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Scenarios.Tests;
@@ -10,17 +11,8 @@ public sealed class RunEnvelopeTests
 {
     private const string Thick = "thick-shell-deep-ocean.yaml";
 
-    private static string Edit(params (string Line, string Replacement)[] edits)
-    {
-        var text = BuiltInScenarios.Text(Thick);
-        foreach (var (line, replacement) in edits)
-        {
-            Assert.Contains(line, text, StringComparison.Ordinal);
-            text = text.Replace(line, replacement, StringComparison.Ordinal);
-        }
-
-        return text;
-    }
+    private static string Edit(params (string Line, string Replacement)[] edits) =>
+        edits.Aggregate(TestScenario.BuiltIn(Thick), (text, edit) => text.Replace(edit.Line, edit.Replacement)).Text;
 
     private static ScenarioError Refusal(string text) =>
         Assert.Single(RunEnvelope.Errors(ScenarioLoader.LoadText(text, "s.yaml")));

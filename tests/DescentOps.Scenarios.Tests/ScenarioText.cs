@@ -10,13 +10,9 @@ internal static class ScenarioText
 
     public static string RepositoryDefault => File.ReadAllText(Path.Combine(AppContext.BaseDirectory, "scenarios", "default.yaml"));
 
-    /// <summary>The default scenario with one exact line replaced; fails loudly if the line is not there.</summary>
-    public static string DefaultWith(string line, string replacement)
-    {
-        var text = Default;
-        Assert.Contains(line, text);
-        return text.Replace(line, replacement, StringComparison.Ordinal);
-    }
+    /// <summary>The default scenario with one exact text replaced; fails loudly unless it occurs exactly once.</summary>
+    public static string DefaultWith(string line, string replacement) =>
+        DescentOps.Tests.Shared.TestScenario.Of(Default, "every-field.yaml").Replace(line, replacement).Text;
 
     /// <summary>1-based line number of the first line containing <paramref name="fragment"/>.</summary>
     public static int LineOf(string text, string fragment) =>

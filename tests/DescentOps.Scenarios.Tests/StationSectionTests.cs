@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 
@@ -53,8 +54,8 @@ public sealed class StationSectionTests
     [Fact]
     public void A_Weibull_shape_outside_its_range_is_refused_at_the_field()
     {
-        var text = ScenarioText.DefaultWith("    failure_model: lognormal", "    failure_model: weibull")
-            .Replace("    failure_spread: 0.5", "    failure_spread: 0.05", StringComparison.Ordinal);
+        var text = TestScenario.Of(ScenarioText.Default, "every-field.yaml").Replace("    failure_model: lognormal", "    failure_model: weibull")
+            .Replace("    failure_spread: 0.5\n", "    failure_spread: 0.05\n").Text;
         var error = SingleError(text);
         Assert.Equal("station.radiation.failure_spread", error.FieldPath);
         Assert.Equal(ScenarioText.LineOf(text, "failure_spread: 0.05"), error.Location.Line);

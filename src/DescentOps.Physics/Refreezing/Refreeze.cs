@@ -57,10 +57,12 @@ public static class Refreeze
         // limit the exact planar freezing front s = 2λ′√t with the ice's properties at each temperature
         // (VariablePropertyFreezing), whose frozen layer cools below T_m as it grows; with constant properties c is
         // (ρ_i/ρ_w) Ste/(λ√π) of the Neumann case (b), → 1 as Ste → 0 (checked against an enthalpy solver, 100-270 K).
-        var stefanFactor = stefanCorrected ? StefanFactor(ice, iceTemperatureK, meltingTemperatureK) : 1.0;
+        var latentPerVolume = LiquidWater.DensityKgPerM3 * ice.LatentJPerKg;
+        var front = VariablePropertyFreezing.FrontConstantMPerRootS(iceTemperatureK, meltingTemperatureK, latentPerVolume);
+        var stefanFactor = stefanCorrected ? ice.PotentialWPerM / (Math.Sqrt(Math.PI * ice.DiffusivityM2PerS) * latentPerVolume * front) : 1.0;
         var target = CylinderConduction.H(tauExposure) + (stefanFactor * LiquidWater.DensityKgPerM3 * ice.LatentJPerKg * gapM / (ice.PotentialWPerM * radiusM / ice.DiffusivityM2PerS));
         var tauEnd = SolveTau(target, tauExposure);
-        return new RefreezeSolution(ice.StefanNumber, lambda, (tauEnd - tauExposure) * r2OverKappa);
+        return new RefreezeSolution(ice.StefanNumber, lambda, (tauEnd - tauExposure) * r2OverKappa) { VariablePropertyFrontMPerRootS = front };
     }
 
     /// <summary>
@@ -116,14 +118,6 @@ public static class Refreeze
         while (Surplus(upper) < 0) upper *= 2.0;
         var time = Brent.FindRoot(Surplus, 0.0, upper, 1e-9 * upper, 500);
         return new MeltFreeSolution(powerW * time, time) { HoldOpenPowerW = steadyLossW, CoolingJ = coolingJ };
-    }
-
-    /// <summary>c = Φ/(√(πκ_eff) ρ_w L λ′): the exact planar front λ′ (m/√s) in the cylinder model's units.</summary>
-    private static double StefanFactor(IceState ice, double iceTemperatureK, double meltingTemperatureK)
-    {
-        var latentPerVolume = LiquidWater.DensityKgPerM3 * ice.LatentJPerKg;
-        var front = VariablePropertyFreezing.FrontConstantMPerRootS(iceTemperatureK, meltingTemperatureK, latentPerVolume);
-        return ice.PotentialWPerM / (Math.Sqrt(Math.PI * ice.DiffusivityM2PerS) * latentPerVolume * front);
     }
 
     private static double SolveDecreasingG(double targetG, double tauLower)

@@ -18,13 +18,14 @@ namespace DescentOps.Physics.Refreezing;
 /// Why it matters: the diffusivity of ice rises about sixfold from 270 K to 100 K, and one effective diffusivity
 /// Φ/(ρΔh_s) for the whole range, as the constant-property solution needs, moves heat out of the freshly frozen (warm)
 /// layer too easily: at 100 K it freezes a gap about a quarter too fast. The result is cached per (T∞, T_m, ρ_w L):
-/// runs ask for the same few pairs again and again.
+/// runs ask for the same few pairs again and again. It holds at most 4,096 entries and starts afresh when full.
 /// </remarks>
 public static class VariablePropertyFreezing
 {
     private const string Model = "the variable-property freezing front";
     private const int Steps = 800;
     private const int TablePoints = 257;
+    private const int CacheCapacity = 4096;
 
     private static readonly ConcurrentDictionary<(double IceK, double MeltingK, double LatentPerVolume), double> Cache = new();
 
@@ -38,7 +39,13 @@ public static class VariablePropertyFreezing
         ValidRange.Require(iceTemperatureK, IceConductivity.MinimumTemperatureK(IceConductivityFit.PetrenkoWhitworth1999), meltingTemperatureK, nameof(iceTemperatureK), "K", Model);
         ValidRange.RequirePositive(latentJPerM3, nameof(latentJPerM3), "J/m³", Model);
         if (iceTemperatureK >= meltingTemperatureK) return 0.0;
-        return Cache.GetOrAdd((iceTemperatureK, meltingTemperatureK, latentJPerM3), key => Solve(key.IceK, key.MeltingK, key.LatentPerVolume));
+        var key = (iceTemperatureK, meltingTemperatureK, latentJPerM3);
+        if (Cache.TryGetValue(key, out var known)) return known;
+
+        // Bounded: a sweep over many temperatures must not grow the cache without end. Emptying it only costs solving
+        // again; the value is a pure function of the key, so results do not depend on what the cache holds.
+        if (Cache.Count >= CacheCapacity) Cache.Clear();
+        return Cache.GetOrAdd(key, k => Solve(k.IceK, k.MeltingK, k.LatentPerVolume));
     }
 
     private static double Solve(double iceK, double meltingK, double latentJPerM3)

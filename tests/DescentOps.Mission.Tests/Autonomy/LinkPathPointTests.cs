@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Records.Kinds;
 using DescentOps.Scenarios;
@@ -37,8 +38,7 @@ public sealed class LinkPathPointTests
     [Fact]
     public async Task An_on_board_rule_sees_the_frames_move_to_the_relays_at_the_first_frame_after_the_fibre_shears()
     {
-        var text = BuiltInScenarios.Text("tether-break-relays.yaml");
-        var scenario = ScenarioLoader.LoadText(text.Replace("\nrun:\n", "\n" + Watch.Replace("\nrun:", "") + "\nrun:\n", StringComparison.Ordinal), "watch.yaml");
+        var scenario = TestScenario.BuiltIn("tether-break-relays.yaml").Named("watch.yaml").InsertBefore("\nrun:\n", "\n" + Watch.Replace("\nrun:", "", StringComparison.Ordinal)).Load();
         var (_, sink) = await MissionHarness.RunAsync(scenario);
 
         var broken = Assert.Single(sink.OfKind(TetherRecords.Broken)).Time;

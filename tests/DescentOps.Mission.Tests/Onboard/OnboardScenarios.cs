@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 
@@ -36,10 +37,10 @@ internal static class OnboardScenarios
             }
         }
 
-        var text = MissionHarness.DefaultText
-            .Replace("until: 400 d", "until: 60 d", StringComparison.Ordinal)
-            .Replace("faults:\n", (sampling ?? "") + rules + "faults:\n", StringComparison.Ordinal)
-            .Replace(Fault, extraFaults.Length == 0 ? Fault : Fault + "\n" + extraFaults.TrimEnd(), StringComparison.Ordinal);
-        return ScenarioLoader.LoadText(text, "onboard.yaml");
+        return TestScenario.Of(MissionHarness.DefaultText, "onboard.yaml")
+            .Set("run.until", "60 d")
+            .InsertBefore("\nfaults:\n", "\n" + ((sampling ?? "") + rules).TrimEnd('\n'))
+            .Replace(Fault, extraFaults.Length == 0 ? Fault : Fault + "\n" + extraFaults.TrimEnd())
+            .Load();
     }
 }

@@ -1,3 +1,4 @@
+using DescentOps.Tests.Shared;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Onboard;
 using DescentOps.Scenarios.Loading;
@@ -42,7 +43,7 @@ public sealed class OnboardWatchTests
               }
 
             """;
-        var text = MissionHarness.DefaultText.Replace("faults:\n", rules + "faults:\n", StringComparison.Ordinal);
+        var text = TestScenario.Of(MissionHarness.DefaultText, "w.yaml").InsertBefore("\nfaults:\n", "\n" + rules.TrimEnd('\n')).Text;
         var watch = OnboardWatch.From(MissionRules.Compile(ScenarioLoader.LoadText(text, "w.yaml")));
         Assert.Equal(["probe.depth", "probe.energy_used", "probe.ice_temperature", "probe.regime", "probe.tilt"], watch.Points);
         Assert.Equal([1000.0], watch.Boundaries["probe.depth"].ToArray());

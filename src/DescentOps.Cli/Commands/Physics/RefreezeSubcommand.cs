@@ -39,11 +39,17 @@ internal static class RefreezeSubcommand
             var s = chosen == RefreezeGeometry.Cylinder
                 ? Refreeze.FreezeInAroundProbe(gap.Value(p), radius.Optional(p) ?? throw new UsageException("--radius is required with --geometry cylinder."), exposure.Value(p), temperature.Value(p), melting.Value(p))
                 : Refreeze.FreezeIn(gap.Value(p), temperature.Value(p), melting.Value(p));
-            return new PhysicsReport("refreezing gap")
+            var report = new PhysicsReport("refreezing gap")
                 .Text("geometry", "geometry", chosen == RefreezeGeometry.Cylinder ? "cylinder" : "planar")
                 .Number("stefan_number", "Stefan number", s.StefanNumber, "")
-                .Number("front_constant", "front constant λ", s.FrontConstant, "")
-                .Number("freeze_time_s", "time to freeze the gap shut", s.FreezeTimeS, "s");
+                .Number("front_constant", chosen == RefreezeGeometry.Cylinder ? "Neumann front constant λ (constant properties, for comparison)" : "front constant λ", s.FrontConstant, "");
+            if (s.VariablePropertyFrontMPerRootS is { } front)
+            {
+                // The cylinder's time takes its planar limit from the front with the ice's properties at each temperature.
+                report = report.Number("variable_property_front_m_per_root_s", "planar front s = 2λ′√t with temperature-dependent ice, λ′", front, "m/√s");
+            }
+
+            return report.Number("freeze_time_s", "time to freeze the gap shut", s.FreezeTimeS, "s");
         }, map));
         return command;
     }
