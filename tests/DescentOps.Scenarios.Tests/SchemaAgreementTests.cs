@@ -24,6 +24,7 @@ public sealed class SchemaAgreementTests
     {
         var read = new HashSet<string>(StringComparer.Ordinal);
         ScenarioLoader.LoadText(ScenarioText.Default, "default.yaml", read);
+        ScenarioLoader.LoadText(EveryFieldInALander(), "every-field-lander.yaml", read);
 
         var defined = Paths(ScenarioFormat.Root, "").ToHashSet(StringComparer.Ordinal);
         Assert.Empty(defined.Except(read));
@@ -49,6 +50,30 @@ public sealed class SchemaAgreementTests
         Assert.False(schema.Evaluate(ToJson(noUnit)).IsValid);
         Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(unknownField, "x.yaml"));
         Assert.Throws<ScenarioException>(() => ScenarioLoader.LoadText(noUnit, "x.yaml"));
+    }
+
+    /// <summary>The every-field fixture with its lander's own sections moved into a one-lander landers list.</summary>
+    private static string EveryFieldInALander()
+    {
+        var stream = new YamlStream();
+        stream.Load(new StringReader(ScenarioText.Default));
+        var root = (YamlMappingNode)stream.Documents[0].RootNode;
+        var lander = new YamlMappingNode { { "name", "tarn" }, { "site", "Tarn Flats" }, { "latitude", "12 deg" }, { "longitude", "20 deg" } };
+        foreach (var name in LanderFormat.OwnSections.Concat(LanderFormat.DefaultableSections))
+        {
+            // The fixture has no rules block; the loader reads a lander's as text, so any text is read.
+            var (key, value) = root.Children.SingleOrDefault(kv => ((YamlScalarNode)kv.Key).Value == name);
+            lander.Add(key ?? new YamlScalarNode(name), value ?? new YamlScalarNode("rule placeholder {}"));
+            if (key is not null) root.Children.Remove(key);
+        }
+
+        var station = (YamlMappingNode)lander.Children.Single(kv => ((YamlScalarNode)kv.Key).Value == "station").Value;
+        var link = (YamlMappingNode)station.Children.Single(kv => ((YamlScalarNode)kv.Key).Value == "link").Value;
+        link.Children.Remove(link.Children.Single(kv => ((YamlScalarNode)kv.Key).Value == "latitude").Key);
+        root.Add("landers", new YamlSequenceNode(lander));
+        var writer = new StringWriter();
+        stream.Save(writer, assignAnchors: false);
+        return writer.ToString();
     }
 
     private static IEnumerable<string> Paths(SectionField section, string prefix)

@@ -76,6 +76,9 @@ public static class CheckCommand
 
                 // Time-tagged telecommands are checked as a rule's send is.
                 foreach (var error in MissionTimeline.Errors(scenario)) errors.Add(new Finding("", "", error.ToString()));
+
+                // Procedures: their commands and conditions as a rule's, their gotos against their steps.
+                foreach (var error in Mission.Procedures.MissionProcedures.Errors(scenario)) errors.Add(new Finding("", "", error.ToString()));
             }
 
             if (json) WriteJson(path, errors, warnings, rules);

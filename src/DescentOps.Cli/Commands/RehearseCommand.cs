@@ -63,6 +63,12 @@ public static class RehearseCommand
         }
 
         // A rehearsal refuses what run and check refuse (a logged run's scenario already passed).
+        if (scenario.Landers.Count > 0)
+        {
+            // The rehearsal desk commands one station and shows one probe; several landers would need a desk per lander.
+            throw new UsageException($"SCENARIO: '{scenario.Name}' has {scenario.Landers.Count} landers; rehearse takes a scenario of one lander (without a 'landers' list).");
+        }
+
         if (from is null && Mission.Running.MissionPreflight.Errors(scenario) is { Count: > 0 } refusals) throw new Scenarios.Loading.ScenarioException(refusals);
         var seed = from?.Manifest.Seed ?? scenario.Run.Seed;
         var path = output is null ? RehearsalLaunch.DefaultLogPath(scenario, seed) : Path.GetFullPath(output);

@@ -65,7 +65,7 @@ public static class MissionCatalogue
             // Each vehicle is its own actuator, so that rules recalling different vehicles never exclude each other.
             .. scenario.Vehicles.Select(v => new CommandSpec(MissionIds.Vehicle(v.Name), Vehicles.VehicleComponent.RecallCommand, [])),
         ];
-        return new TelemetryCatalogue(points, commands);
+        return new TelemetryCatalogue(points, commands) { Procedures = new HashSet<string>(scenario.Procedures.Select(p => p.Name), StringComparer.Ordinal) };
     }
 
     /// <summary>The jets' heat (0 W: off) and the hole radius they cut.</summary>

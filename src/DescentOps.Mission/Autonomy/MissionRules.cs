@@ -33,6 +33,9 @@ public static class MissionRules
 
     public static CompiledRuleSet Compile(Scenario scenario)
     {
+        // With landers, every lander's rules are compiled now, so a bad rule of any lander stops the run before it starts;
+        // the scenario's own rules are its first lander's.
+        foreach (var lander in scenario.Landers.Skip(1)) _ = Compile(lander.View);
         if (scenario.Rules.IsEmpty) return Empty;
         var result = Check(scenario);
         if (result.RuleSet is { } rules) return rules;

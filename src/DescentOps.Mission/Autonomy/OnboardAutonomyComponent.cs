@@ -16,15 +16,18 @@ namespace DescentOps.Mission.Autonomy;
 public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
 {
     private readonly RuleHost _rules;
+    private readonly LanderIds _ids;
     private readonly IReadOnlyList<TimedTelecommand> _timed;
     private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
 
     /// <param name="rules">The mission's rules; the on-board ones run here.</param>
     /// <param name="timed">The mission's time-tagged telecommands; the probe's store releases those it holds at their times.</param>
     /// <param name="uplinks">Rule sets the ground may uplink; an upload names one by its index.</param>
-    public OnboardAutonomyComponent(CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null)
-        : base(MissionIds.Autonomy, FailurePolicy.RestartFromLastState)
+    /// <param name="ids">The ids of the lander it serves (its probe); a single lander's by default.</param>
+    public OnboardAutonomyComponent(CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).Autonomy, FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         _rules = new RuleHost(rules, Placement.Board);
         _timed = timed ?? [];
         _uplinks = uplinks ?? [];
@@ -47,7 +50,7 @@ public sealed class OnboardAutonomyComponent : SimComponent<AutonomyState>
         };
         foreach (var command in commands)
         {
-            context.Schedule(RuleHost.Executor(command.Command), SimDuration.Zero, command, MissionPriority.Command);
+            context.Schedule(_ids.Of(RuleHost.Executor(command.Command)), SimDuration.Zero, command, MissionPriority.Command);
         }
 
         var wake = _rules.Rearm(message is RulesWake ? null : state.PendingWake, context, RulesWake.Instance);

@@ -16,11 +16,13 @@ namespace DescentOps.Mission.Faults;
 public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
 {
     private readonly IReadOnlyList<FaultModel> _faults;
+    private readonly LanderIds _ids;
     private readonly IReadOnlyList<ConditionTrigger> _conditions;
 
-    public FaultInjectorComponent(Scenario scenario)
-        : base(MissionIds.FaultInjector, FailurePolicy.AbortRun)
+    public FaultInjectorComponent(Scenario scenario, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).FaultInjector, FailurePolicy.AbortRun)
     {
+        _ids = ids ?? LanderIds.Single;
         _faults = scenario.Faults;
         _conditions = [.. FaultConditions.Compile(scenario).OrderBy(c => c.Key).Select(c => new ConditionTrigger(c.Key, c.Value))];
     }
@@ -54,7 +56,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
                             context.ScheduleSelf(SimDuration.FromSeconds(time.AtS), new FaultDue(i, false), MissionPriority.Fault);
                             break;
                         case FaultStart.AtDepth depth:
-                            context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(i, depth.DepthM), MissionPriority.Fault);
+                            context.Schedule(_ids.Probe, SimDuration.Zero, new ArmDepthTrigger(i, depth.DepthM), MissionPriority.Fault);
                             break;
                         case FaultStart.AtRandom random:
                             ScheduleRandom(i, random, context);
@@ -136,7 +138,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     {
         var ended = FaultAt(state, index);
         context.Record(FaultRecords.Cleared, Severity.Notice, RecordField.Of("fault", ended.Name));
-        context.Schedule(TargetOf(ended), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
+        context.Schedule(_ids.Of(TargetOf(ended)), SimDuration.Zero, new FaultCleared(ended), MissionPriority.Fault);
         return state with { Cleared = state.Cleared + 1, Active = state.Active.Remove(index) };
     }
 
@@ -153,7 +155,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
 
         if (fault.Start is FaultStart.AtDepth { DepthM: var depth })
         {
-            context.Schedule(MissionIds.Probe, SimDuration.Zero, new ArmDepthTrigger(index, depth), MissionPriority.Fault);
+            context.Schedule(_ids.Probe, SimDuration.Zero, new ArmDepthTrigger(index, depth), MissionPriority.Fault);
             return state;
         }
 
@@ -184,11 +186,11 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         context.Record("fault.injected", Severity.Alarm,
             RecordField.Of("fault", fault.Name),
             RecordField.Of("kind", fault.Kind.ToString()),
-            RecordField.Of("target", TargetOf(fault).Name),
+            RecordField.Of("target", _ids.Of(TargetOf(fault)).Name),
             RecordField.Of("point", fault.Effect is FaultEffect.SensorFault sensor ? sensor.Point : ""),
             RecordField.Of("relay", fault.Effect is FaultEffect.RelayFailure relay ? $"relay-{relay.RelayNumber}" : ""),
             RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
-        context.Schedule(TargetOf(fault), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
+        context.Schedule(_ids.Of(TargetOf(fault)), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
         if (fault.DurationS is { } duration)
         {
             context.ScheduleSelf(SimDuration.FromSeconds(duration), new FaultDue(index, true), MissionPriority.Fault);

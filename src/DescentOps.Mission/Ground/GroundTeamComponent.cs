@@ -2,6 +2,7 @@ using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Messages;
+using DescentOps.Mission.Procedures;
 using DescentOps.Mission.Station;
 using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
@@ -19,21 +20,27 @@ namespace DescentOps.Mission.Ground;
 public sealed class GroundTeamComponent : SimComponent<GroundState>
 {
     private readonly RuleHost _rules;
+    private readonly LanderIds _ids;
     private readonly SimDuration _uplink;
     private readonly IReadOnlyList<TimedTelecommand> _timed;
     private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
+    private readonly ProcedureDesk _procedures;
 
     /// <param name="scenario">The mission: its distance home sets the uplink.</param>
     /// <param name="rules">The mission's rules; the ground ones run here.</param>
     /// <param name="timed">The mission's time-tagged telecommands; the ground sends those it holds at their times.</param>
     /// <param name="uplinks">Rule sets the ground uplinks at the scenario's times (<see cref="Scenario.RuleUplinks"/>).</param>
-    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null)
-        : base(MissionIds.Ground, FailurePolicy.RestartFromLastState)
+    /// <param name="ids">The ids of the lander whose frames it reads and whose station it commands; a single lander's by default.</param>
+    /// <param name="procedures">The team's procedures, started by its rules or at their times.</param>
+    public GroundTeamComponent(Scenario scenario, CompiledRuleSet rules, IReadOnlyList<TimedTelecommand>? timed = null, IReadOnlyList<CompiledRuleSet>? uplinks = null, LanderIds? ids = null, IReadOnlyList<CompiledProcedure>? procedures = null)
+        : base((ids ?? LanderIds.Single).Ground, FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         _rules = new RuleHost(rules, Placement.Ground);
         _uplink = SimDuration.FromSeconds(scenario.Body.DistanceToGroundM / StationComponent.SpeedOfLightMPerS);
         _timed = timed ?? [];
         _uplinks = uplinks ?? [];
+        _procedures = new ProcedureDesk(procedures ?? []);
         UplinkTimesS = [.. scenario.RuleUplinks.Select(u => u.AtS)];
         UplinkOrigins = [.. scenario.RuleUplinks.Select(u => u.FieldPath)];
     }
@@ -47,6 +54,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     public override GroundState Handle(GroundState state, object message, ComponentContext context)
     {
         _rules.RestoreTo(state.RulesVersion);
+        _procedures.RestoreTo(state.ProceduresVersion);
         switch (message)
         {
             case RunStarted:
@@ -56,7 +64,16 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 }
 
                 for (var k = 0; k < _uplinks.Count; k++) context.ScheduleSelf(SimDuration.FromSeconds(UplinkTimesS[k]), new RuleUplinkDue(k), MissionPriority.Command);
+                for (var p = 0; p < _procedures.Procedures.Count; p++)
+                {
+                    if (_procedures.Procedures[p].StartAtS is { } startS) context.ScheduleSelf(SimDuration.FromSeconds(startS), new ProcedureDue(p), MissionPriority.Command);
+                }
+
                 return state;
+            case ProcedureDue due:
+                return Procedures(state, _procedures.Start(due.Index, _procedures.Procedures[due.Index].FieldPath + ".start_at", context.Now), context);
+            case ProcedureWake:
+                return Procedures(state with { ProcedureWake = null }, _procedures.OnWake(context.Now), context);
             case TimedTelecommandDue due:
                 Send(_timed[due.Index], context);
                 return state;
@@ -64,9 +81,14 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 return UplinkRules(state, due.Index, context);
             case TelemetryFrame frame:
                 var next = Receive(state, frame, context);
-                return next with { PendingWake = Uplink(_rules.OnFrame(frame, context), state.PendingWake, context), RulesVersion = _rules.Version };
+                // The procedures see the frame before the rules can start one, so a step starts watching at the next frame.
+                next = Procedures(next, _procedures.OnFrame([.. FrameSamples.Of(frame)], context.Now), context);
+                var frameWake = Uplink(ref next, _rules.OnFrame(frame, context), state.PendingWake, context);
+                return next with { PendingWake = frameWake, RulesVersion = _rules.Version };
             case RulesWake:
-                return state with { PendingWake = Uplink(_rules.OnWake(context), null, context), RulesVersion = _rules.Version };
+                var woken = state;
+                var ruleWake = Uplink(ref woken, _rules.OnWake(context), null, context);
+                return woken with { PendingWake = ruleWake, RulesVersion = _rules.Version };
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
@@ -79,7 +101,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("command", timed.Command.ToString()),
             RecordField.Of("origin", timed.Origin),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(MissionIds.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
+        context.Schedule(_ids.Station, _uplink, new Telecommand(timed.Command, timed.Origin, "ground", context.Now), MissionPriority.Command);
     }
 
     /// <summary>
@@ -95,7 +117,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("ground_rules", groundRules),
             RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
-        context.Schedule(MissionIds.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
+        context.Schedule(_ids.Station, _uplink, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
         return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
     }
 
@@ -124,13 +146,40 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         };
     }
 
-    private Engine.Scheduling.EventHandle? Uplink(IReadOnlyList<Telecommand> commands, Engine.Scheduling.EventHandle? pendingWake, ComponentContext context)
+    /// <summary>Sends the rules' commands up, except procedure starts, which the ground takes itself (into <paramref name="state"/>).</summary>
+    private Engine.Scheduling.EventHandle? Uplink(ref GroundState state, IReadOnlyList<Telecommand> commands, Engine.Scheduling.EventHandle? pendingWake, ComponentContext context)
     {
         foreach (var command in commands)
         {
-            context.Schedule(MissionIds.Station, _uplink, command, MissionPriority.Command);
+            if (StartProcedureAction.ProcedureOf(command.Command) is { } procedure)
+            {
+                state = Procedures(state, _procedures.Start(_procedures.IndexOf(procedure), command.Origin, context.Now), context);
+                continue;
+            }
+
+            context.Schedule(_ids.Station, _uplink, command, MissionPriority.Command);
         }
 
         return _rules.Rearm(pendingWake, context, RulesWake.Instance);
+    }
+
+    /// <summary>Journals what the procedures did, sends their steps' commands up and keeps one timer for the next step that runs out of time.</summary>
+    private GroundState Procedures(GroundState state, IReadOnlyList<ProcedureOutput> outputs, ComponentContext context)
+    {
+        if (outputs.Count == 0 && state.ProceduresVersion == _procedures.Version) return state;
+        foreach (var command in ProcedureJournal.Write(outputs, context))
+        {
+            context.Schedule(_ids.Station, _uplink, command, MissionPriority.Command);
+        }
+
+        var wake = state.ProcedureWake;
+        var due = _procedures.NextDeadline;
+        if (outputs.Count > 0 || wake is null)
+        {
+            if (wake is { } pending) context.Cancel(pending);
+            wake = due is { } at && at > context.Now ? context.ScheduleSelf(at - context.Now, ProcedureWake.Instance, MissionPriority.Command) : null;
+        }
+
+        return state with { ProceduresVersion = _procedures.Version, ProcedureWake = wake };
     }
 }

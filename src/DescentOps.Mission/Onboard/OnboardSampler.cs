@@ -62,7 +62,7 @@ public static class OnboardSampler
 
         if (readings.Count > 0)
         {
-            context.Schedule(MissionIds.Autonomy, SimDuration.Zero, new OnboardSamples(now, readings), MissionPriority.Telemetry);
+            context.Schedule(design.Ids.Autonomy, SimDuration.Zero, new OnboardSamples(now, readings), MissionPriority.Telemetry);
         }
 
         return Rearm(design, plan, state with { Onboard = sampler with { Sent = sent } }, context);

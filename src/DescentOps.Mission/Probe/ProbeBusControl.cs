@@ -43,11 +43,11 @@ public static class ProbeBusControl
                 RecordField.Of("cause", isOff ?? wasOff ?? ""));
         }
 
-        return Redock(state with { Bus = bus with { Allocation = allocation } }, context);
+        return Redock(design, state with { Bus = bus with { Allocation = allocation } }, context);
     }
 
     /// <summary>Tells each docked vehicle when what the bus gives its charger changes: its request while the load runs, else nothing.</summary>
-    private static ProbeState Redock(ProbeState state, ComponentContext context)
+    private static ProbeState Redock(ProbeDesign design, ProbeState state, ComponentContext context)
     {
         var granted = state.DockGrantedW;
         foreach (var (vehicle, demandW) in state.DockDemandsW)
@@ -59,7 +59,7 @@ public static class ProbeBusControl
                 RecordField.Of("request_w", demandW),
                 RecordField.Of("granted_w", powerW),
                 RecordField.Of("available_w", state.Bus!.Allocation.AvailablePowerW));
-            context.Schedule(MissionIds.Vehicle(vehicle), SimDuration.Zero, new DockPower(powerW), MissionPriority.Command);
+            context.Schedule(design.Ids.Vehicle(vehicle), SimDuration.Zero, new DockPower(powerW), MissionPriority.Command);
             granted = granted.SetItem(vehicle, powerW);
         }
 

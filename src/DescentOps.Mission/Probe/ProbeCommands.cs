@@ -31,7 +31,7 @@ public static class ProbeCommands
             ("probe", "enter_safe_mode") => state with { Paused = true, WallSetpointW = probe.MaxWallPowerW },
             (MissionCatalogue.Bus, "shed_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Add(Load()) } },
             (MissionCatalogue.Bus, "restore_load") when state.Bus is { } bus => state with { Bus = bus with { SwitchedOff = bus.SwitchedOff.Remove(Load()) } },
-            ("probe", "drop_relay") => LetRelayGo(state, command, context),
+            ("probe", "drop_relay") => LetRelayGo(design, state, command, context),
             (MissionCatalogue.Jets, "set_power") when probe.Jets is { } jets => state with { JetSetpointW = Math.Min(Power(), jets.MaxHeatW), MeltFreeRefusedAtWallW = null },
             (MissionCatalogue.Jets, "set_hole_radius") when probe.Jets is { } jets => state with
             {
@@ -53,9 +53,9 @@ public static class ProbeCommands
     }
 
     /// <summary>A relay leaves the probe at its head depth; the link takes it from there.</summary>
-    private static ProbeState LetRelayGo(ProbeState state, Telecommand command, ComponentContext context)
+    private static ProbeState LetRelayGo(ProbeDesign design, ProbeState state, Telecommand command, ComponentContext context)
     {
-        context.Schedule(MissionIds.Tether, SimDuration.Zero, new DropRelay(state.DepthM, command.Origin), MissionPriority.Command);
+        context.Schedule(design.Ids.Tether, SimDuration.Zero, new DropRelay(state.DepthM, command.Origin), MissionPriority.Command);
         return state;
     }
 }

@@ -23,10 +23,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     private readonly ProbeDesign _design;
 
     /// <summary>A probe; given the mission's rules it samples for the on-board ones (<see cref="Onboard.OnboardSamplingPlan"/>), otherwise they see the frames.</summary>
-    public ProbeComponent(Scenario scenario, Rules.Compiled.CompiledRuleSet? rules = null)
-        : base(MissionIds.Probe, FailurePolicy.AbortRun)
+    public ProbeComponent(Scenario scenario, Rules.Compiled.CompiledRuleSet? rules = null, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).Probe, FailurePolicy.AbortRun)
     {
-        _design = new ProbeDesign(scenario) { Onboard = Onboard.OnboardSamplingPlan.For(scenario, rules) };
+        _design = new ProbeDesign(scenario) { Onboard = Onboard.OnboardSamplingPlan.For(scenario, rules), Ids = ids ?? LanderIds.Single };
     }
 
     /// <summary>The descent model this probe runs on (exposed for the physics benchmark and tests).</summary>
@@ -123,12 +123,12 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
 
             case Telecommand command when command.Command.Target == MissionIds.Autonomy:
                 // A rule set uplinked from the ground: the probe's autonomy loads it.
-                context.Schedule(MissionIds.Autonomy, SimDuration.Zero, command, MissionPriority.Command);
+                context.Schedule(_design.Ids.Autonomy, SimDuration.Zero, command, MissionPriority.Command);
                 return state;
 
             case Telecommand command when command.Command.Target.Name.StartsWith("vehicle-", StringComparison.Ordinal):
                 // Commands for a vehicle arrive over the fibre and go on through the probe's acoustic modem.
-                context.Schedule(command.Command.Target, SimDuration.Zero, command, MissionPriority.Command);
+                context.Schedule(_design.Ids.Of(command.Command.Target), SimDuration.Zero, command, MissionPriority.Command);
                 return state;
 
             case Telecommand command:
@@ -158,7 +158,7 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
     {
         foreach (var trigger in state.DepthTriggers.Where(t => state.DepthM >= t.DepthM))
         {
-            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new DepthTriggerReached(trigger.FaultIndex, state.DepthM), MissionPriority.Fault);
+            context.Schedule(_design.Ids.FaultInjector, SimDuration.Zero, new DepthTriggerReached(trigger.FaultIndex, state.DepthM), MissionPriority.Fault);
         }
 
         state = state with { DepthTriggers = state.DepthTriggers.RemoveAll(t => state.DepthM >= t.DepthM) };

@@ -36,4 +36,7 @@ public sealed class ProbeDesign
 
     /// <summary>How the probe samples for its on-board rules apart from its frames; null: they see the frames.</summary>
     public Onboard.OnboardSamplingPlan? Onboard { get; init; }
+
+    /// <summary>The ids of the lander this probe belongs to, and so of the components it sends to.</summary>
+    public LanderIds Ids { get; init; } = LanderIds.Single;
 }

@@ -19,7 +19,7 @@ public static class ProbeMilestones
             RecordField.Of("vehicles", vehicles.Count));
         foreach (var vehicle in vehicles)
         {
-            context.Schedule(MissionIds.Vehicle(vehicle.Name), SimDuration.Zero, new ReleaseVehicle(state.DepthM, design.Descent.Shell.BasePressurePa, design.Descent.Shell.BaseTemperatureK), MissionPriority.Command);
+            context.Schedule(design.Ids.Vehicle(vehicle.Name), SimDuration.Zero, new ReleaseVehicle(state.DepthM, design.Descent.Shell.BasePressurePa, design.Descent.Shell.BaseTemperatureK), MissionPriority.Command);
         }
 
         if (vehicles.Count == 0)

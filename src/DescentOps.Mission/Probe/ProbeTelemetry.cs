@@ -18,13 +18,13 @@ public static class ProbeTelemetry
         var reported = ProbeSensors.Reported(truth, state.SensorFaults, context.Random);
         var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive, [("probe.link_path", state.LinkPath)]);
         context.Record(ProbeRecords.Telemetry, Severity.Debug, [.. Fields(design, state, frame, truth)]);
-        context.Schedule(MissionIds.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        context.Schedule(design.Ids.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         // With on-board sampling the rules read the sensors themselves (Onboard.OnboardSampler), not the frames.
-        if (design.Onboard is null) context.Schedule(MissionIds.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
+        if (design.Onboard is null) context.Schedule(design.Ids.Autonomy, SimDuration.Zero, frame, MissionPriority.Telemetry);
         if (design.WatchedByFaults)
         {
             // A fault's trigger also reads true state no sensor reports (ProbeSensors.TrueStateOnly).
-            context.Schedule(MissionIds.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = [.. truth, .. ProbeSensors.TrueStateOnly(state)] }), MissionPriority.Telemetry);
+            context.Schedule(design.Ids.FaultInjector, SimDuration.Zero, new TrueStateFrame(frame with { Readings = [.. truth, .. ProbeSensors.TrueStateOnly(state)] }), MissionPriority.Telemetry);
         }
 
         return state with { FramesSent = frame.Sequence, NextFrameAt = context.Now + design.FrameInterval };

@@ -19,17 +19,24 @@ public static class MissionAssembly
     /// <summary>The components of a run with its rules already compiled.</summary>
     public static IReadOnlyList<ISimComponent> Components(Scenario scenario, Rules.Compiled.CompiledRuleSet rules)
     {
+        if (scenario.Landers.Count == 0) return Lander(scenario, rules, LanderIds.Single);
+        return [.. scenario.Landers.SelectMany(l => Lander(l.View, MissionRules.Compile(l.View), LanderIds.For(l.Name)))];
+    }
+
+    /// <summary>The components of one lander: alone, with the fixed ids; one of several, with its own.</summary>
+    private static IReadOnlyList<ISimComponent> Lander(Scenario scenario, Rules.Compiled.CompiledRuleSet rules, LanderIds ids)
+    {
         var timed = MissionTimeline.CompileTelecommands(scenario);
         var uplinks = MissionTimeline.CompileUplinks(scenario);
         return
         [
-            new ProbeComponent(scenario, rules),
-            new TetherComponent(scenario),
-            new StationComponent(scenario),
-            new GroundTeamComponent(scenario, rules, timed, uplinks),
-            new OnboardAutonomyComponent(rules, timed, uplinks),
-            new FaultInjectorComponent(scenario),
-            .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario)),
+            new ProbeComponent(scenario, rules, ids),
+            new TetherComponent(scenario, ids),
+            new StationComponent(scenario, ids),
+            new GroundTeamComponent(scenario, rules, timed, uplinks, ids, Procedures.MissionProcedures.Compile(scenario)),
+            new OnboardAutonomyComponent(rules, timed, uplinks, ids),
+            new FaultInjectorComponent(scenario, ids),
+            .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario, ids)),
         ];
     }
 }

@@ -23,6 +23,7 @@ public static class MissionPreflight
     public static IReadOnlyList<ScenarioError> Errors(Scenario scenario)
     {
         ArgumentNullException.ThrowIfNull(scenario);
+        if (scenario.Landers.Count > 0) return PerLander(scenario, Errors);
         var errors = new List<ScenarioError>(RunEnvelope.Errors(scenario));
         if (errors.Count > 0) return errors;
         try
@@ -43,7 +44,7 @@ public static class MissionPreflight
         {
             // The first telemetry interval of the run itself, without rules (their errors are the rule checker's).
             var sink = NullJournalSink.Instance;
-            var start = scenario with { Rules = RulesSource.None, Telecommands = [], RuleUplinks = [] };
+            var start = scenario with { Rules = RulesSource.None, Telecommands = [], RuleUplinks = [], Procedures = [] };
             var summary = MissionRunner.RunAsync(start, scenario.Run.Seed, scenario.Probe.TelemetryIntervalS, sink, KernelChoice.Sequential).GetAwaiter().GetResult();
             if (summary.Outcome.Kind is RunOutcomeKind.ComponentFailed or RunOutcomeKind.KernelFault)
             {
@@ -65,6 +66,7 @@ public static class MissionPreflight
     public static IReadOnlyList<ScenarioError> Warnings(Scenario scenario)
     {
         ArgumentNullException.ThrowIfNull(scenario);
+        if (scenario.Landers.Count > 0) return PerLander(scenario, Warnings);
         var c = CultureInfo.InvariantCulture;
         var warnings = new List<ScenarioError>();
         void Warn(string path, string message) => warnings.Add(new ScenarioError(scenario.LocationOf(path), path, message));
@@ -106,6 +108,13 @@ public static class MissionPreflight
 
         return warnings;
     }
+
+    /// <summary>Each lander's view checked alone (its components are its own), its paths put back under the lander.</summary>
+    private static ScenarioError[] PerLander(Scenario scenario, Func<Scenario, IReadOnlyList<ScenarioError>> check) =>
+    [
+        .. scenario.Landers.SelectMany((lander, i) => check(lander.View).Select(e =>
+            Scenarios.Format.LanderFormat.OwnSections.Contains(e.FieldPath.Split('.', '[')[0]) ? e with { FieldPath = $"landers[{i}].{e.FieldPath}" } : e)),
+    ];
 
     /// <summary>A model's refusal, at the field that most likely set the value it refused.</summary>
     private static ScenarioError Located(Scenario scenario, ArgumentException exception) =>

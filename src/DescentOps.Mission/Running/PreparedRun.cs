@@ -36,7 +36,7 @@ public sealed class PreparedRun
     {
         var rulePoints = Rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
-        var summary = new MissionSummarySink(journal, new FaultMeasures(rulePoints, detectedBy));
+        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy));
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
         return summary;
     }

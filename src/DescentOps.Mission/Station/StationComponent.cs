@@ -26,6 +26,7 @@ public sealed class StationComponent : SimComponent<StationState>
     private const double MaxTimerS = 1e10;
 
     private readonly StationModel _station;
+    private readonly LanderIds _ids;
     private readonly SimDuration _delayHome;
     private readonly SimDuration _forwarding;
     private readonly StationDose? _dose;
@@ -34,9 +35,10 @@ public sealed class StationComponent : SimComponent<StationState>
     /// <summary>Whether frames and commands go through the queues: only when windows or upsets (discharges or faults) can hold them up.</summary>
     private readonly bool _queued;
 
-    public StationComponent(Scenario scenario)
-        : base(MissionIds.Station, FailurePolicy.RestartFromLastState)
+    public StationComponent(Scenario scenario, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).Station, FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         _station = scenario.Station;
         _link = new HomeLink(scenario);
         OneWayLightTimeS = _link.OneWayLightTimeS;
@@ -72,14 +74,14 @@ public sealed class StationComponent : SimComponent<StationState>
             case TelemetryFrame frame when _queued:
                 return Pump(Enqueue(state, frame, context), context);
             case TelemetryFrame frame:
-                context.Schedule(MissionIds.Ground, _delayHome, frame, MissionPriority.Telemetry);
+                context.Schedule(_ids.Ground, _delayHome, frame, MissionPriority.Telemetry);
                 return state with { FramesForwarded = state.FramesForwarded + 1 };
             case Telecommand command when state.Failed:
                 return LoseCommand(state, command, "station failed", context);
             case Telecommand command when _queued && !CanPassNow(state, context):
                 return Pump(Enqueue(state, command, context), context);
             case Telecommand command:
-                context.Schedule(MissionIds.Tether, _forwarding, command, MissionPriority.Command);
+                context.Schedule(_ids.Tether, _forwarding, command, MissionPriority.Command);
                 return state;
             case LinkService:
                 return Pump(Serve(state with { PendingService = null }, context), context);
@@ -265,7 +267,7 @@ public sealed class StationComponent : SimComponent<StationState>
                 RecordField.Of("command", waiting.Command.Command.ToString()),
                 RecordField.Of("origin", waiting.Command.Origin),
                 RecordField.Of("held_s", (context.Now - waiting.ArrivedAt).TotalSeconds));
-            context.Schedule(MissionIds.Tether, _forwarding, waiting.Command, MissionPriority.Command);
+            context.Schedule(_ids.Tether, _forwarding, waiting.Command, MissionPriority.Command);
         }
 
         state = state with { Commands = commands, CommandsQueued = 0 };
@@ -274,7 +276,7 @@ public sealed class StationComponent : SimComponent<StationState>
         if (context.Now < head.ReadyAt || _link.NextFrameStartS(nowS) > nowS) return state;
 
         var onAir = SimDuration.FromSeconds(_link.FrameTimeS);
-        context.Schedule(MissionIds.Ground, onAir + SimDuration.FromSeconds(OneWayLightTimeS), head.Frame, MissionPriority.Telemetry);
+        context.Schedule(_ids.Ground, onAir + SimDuration.FromSeconds(OneWayLightTimeS), head.Frame, MissionPriority.Telemetry);
         return state with
         {
             Frames = state.Frames.Dequeue(),
@@ -371,7 +373,7 @@ public sealed class StationComponent : SimComponent<StationState>
             RecordField.Of("log_reduction", logReduction),
             RecordField.Of("station_dose_gy_si", stationDoseGy),
             RecordField.Of("station_dose_share_of_median", stationDoseGy / _dose.MedianFailureDoseGy));
-        context.Schedule(MissionIds.Probe, SimDuration.Zero, new DescentCleared(dwell.DurationS, logReduction), MissionPriority.Command);
+        context.Schedule(_ids.Probe, SimDuration.Zero, new DescentCleared(dwell.DurationS, logReduction), MissionPriority.Command);
     }
 
     /// <summary>

@@ -22,14 +22,16 @@ public sealed class TetherComponent : SimComponent<TetherState>
 {
     private const int MilestonesPerSpool = 10;
     private readonly TetherModel _tether;
+    private readonly LanderIds _ids;
     private readonly TetherOptics _optics;
     private readonly RelayPlanModel? _plan;
     private readonly RelayRadio? _radio;
     private readonly IReadOnlyList<double> _plannedDropsM;
 
-    public TetherComponent(Scenario scenario)
-        : base(MissionIds.Tether, FailurePolicy.RestartFromLastState)
+    public TetherComponent(Scenario scenario, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).Tether, FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         ArgumentNullException.ThrowIfNull(scenario);
         _tether = scenario.Tether;
         _optics = new TetherOptics(scenario.Tether);
@@ -160,7 +162,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     }
 
     /// <summary>A relay whose battery is flat stops; whatever it held is gone.</summary>
-    private static TetherState BatteryFlat(TetherState state, int number, ComponentContext context)
+    private TetherState BatteryFlat(TetherState state, int number, ComponentContext context)
     {
         var relay = state.Relays.Single(r => r.Number == number);
         foreach (var frame in relay.Hold.Items)
@@ -195,9 +197,9 @@ public sealed class TetherComponent : SimComponent<TetherState>
         if (state.FibreUp)
         {
             var fibreDelay = FibreDelay(state);
-            foreach (var held in state.ProbeHold.Items) context.Schedule(MissionIds.Station, fibreDelay, held, MissionPriority.Telemetry);
+            foreach (var held in state.ProbeHold.Items) context.Schedule(_ids.Station, fibreDelay, held, MissionPriority.Telemetry);
             var carried = state.FramesCarried + state.ProbeHold.Count + (incoming is null ? 0 : 1);
-            if (incoming is not null) context.Schedule(MissionIds.Station, fibreDelay, incoming, MissionPriority.Telemetry);
+            if (incoming is not null) context.Schedule(_ids.Station, fibreDelay, incoming, MissionPriority.Telemetry);
             state = state with { ProbeHold = state.ProbeHold.Cleared(), FramesCarried = carried };
             return state.Relays.Any(r => r.Hold.Count > 0) ? SettleRelays(state, context) : state;
         }
@@ -242,7 +244,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         var settled = StoreAndForward.Settle(chain.Holds, chain.HopCloses);
         foreach (var (frame, from) in settled.Delivered)
         {
-            context.Schedule(MissionIds.Station, RelayDelay(chain, from), frame, MissionPriority.Telemetry);
+            context.Schedule(_ids.Station, RelayDelay(chain, from), frame, MissionPriority.Telemetry);
         }
 
         var relays = state.Relays;
@@ -274,7 +276,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     {
         if (state.FibreUp)
         {
-            context.Schedule(MissionIds.Probe, FibreDelay(state), command, MissionPriority.Command);
+            context.Schedule(_ids.Probe, FibreDelay(state), command, MissionPriority.Command);
             return state;
         }
 
@@ -283,7 +285,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
             var chain = Chain(state);
             if (chain.HopCloses.All(c => c))
             {
-                context.Schedule(MissionIds.Probe, RelayDelay(chain, 0), command, MissionPriority.Command);
+                context.Schedule(_ids.Probe, RelayDelay(chain, 0), command, MissionPriority.Command);
                 return state;
             }
         }
@@ -298,25 +300,25 @@ public sealed class TetherComponent : SimComponent<TetherState>
         return state;
     }
 
-    private static TetherState FlushCommands(TetherState state, SimDuration delay, ComponentContext context)
+    private TetherState FlushCommands(TetherState state, SimDuration delay, ComponentContext context)
     {
-        foreach (var command in state.CommandHold.Items) context.Schedule(MissionIds.Probe, delay, command, MissionPriority.Command);
+        foreach (var command in state.CommandHold.Items) context.Schedule(_ids.Probe, delay, command, MissionPriority.Command);
         return state with { CommandHold = state.CommandHold.Cleared() };
     }
 
     /// <summary>The probe reports its buffer's fill in its next frame; it is told only when the fill changes.</summary>
-    private static TetherState Report(TetherState state, ComponentContext context)
+    private TetherState Report(TetherState state, ComponentContext context)
     {
         var path = LinkPaths.Of(state);
         if (path != state.ReportedPath)
         {
-            context.Schedule(MissionIds.Probe, SimDuration.Zero, new LinkPathChanged(path), MissionPriority.Telemetry);
+            context.Schedule(_ids.Probe, SimDuration.Zero, new LinkPathChanged(path), MissionPriority.Telemetry);
             state = state with { ReportedPath = path };
         }
 
         var fill = state.ProbeHold.Fill;
         if (fill == state.ReportedFill) return state;
-        context.Schedule(MissionIds.Probe, SimDuration.Zero, new LinkBufferFill(fill), MissionPriority.Telemetry);
+        context.Schedule(_ids.Probe, SimDuration.Zero, new LinkBufferFill(fill), MissionPriority.Telemetry);
         return state with { ReportedFill = fill };
     }
 
@@ -343,7 +345,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
     private SimDuration RelayDelay(ChainNow chain, int from) =>
         SimDuration.FromSeconds(_radio!.PropagationS(chain.Depths[from]) + ((chain.Depths.Count - Math.Max(from, 1)) * _plan!.ForwardingDelayS));
 
-    private static TetherState LostFrame(TetherState state, TelemetryFrame frame, string where, string cause, ComponentContext context)
+    private TetherState LostFrame(TetherState state, TelemetryFrame frame, string where, string cause, ComponentContext context)
     {
         var episode = state.LossEpisode.After(frame.Sequence);
         context.Record(DataRecords.Lost, episode.Severity,
@@ -357,7 +359,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
         return state with { LossEpisode = episode };
     }
 
-    private static TetherState Break(TetherState state, string cause, ComponentContext context)
+    private TetherState Break(TetherState state, string cause, ComponentContext context)
     {
         if (state.Broken) return state;
         context.Record(TetherRecords.Broken, Severity.Alarm, WithLedger(state,

@@ -27,6 +27,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     public const string RecallCommand = "recall_vehicle";
 
     private readonly VehicleModel _vehicle;
+    private readonly LanderIds _ids;
     private readonly AcousticsModel? _acoustics;
     private readonly Scenario _scenario;
     private readonly double _gravityMPerS2;
@@ -34,9 +35,10 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     /// <summary>With a power system on the probe the dock's charger draws on the probe's bus, which may shed it.</summary>
     private readonly bool _dockOnProbeBus;
 
-    public VehicleComponent(VehicleModel vehicle, Scenario scenario)
-        : base(MissionIds.Vehicle(vehicle.Name), FailurePolicy.RestartFromLastState)
+    public VehicleComponent(VehicleModel vehicle, Scenario scenario, LanderIds? ids = null)
+        : base((ids ?? LanderIds.Single).Vehicle(vehicle.Name), FailurePolicy.RestartFromLastState)
     {
+        _ids = ids ?? LanderIds.Single;
         ArgumentNullException.ThrowIfNull(scenario);
         _vehicle = vehicle;
         _acoustics = scenario.Acoustics;
@@ -295,7 +297,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
                 RecordField.Of("battery_j", state.BatteryJ),
                 RecordField.Of("charging_power_w", dock.ChargingPowerW),
                 RecordField.Of("fed_by", "probe bus"));
-            context.Schedule(MissionIds.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, dock.ChargingPowerW), MissionPriority.Command);
+            context.Schedule(_ids.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, dock.ChargingPowerW), MissionPriority.Command);
             return state with { Phase = VehiclePhase.Charging, PendingTimer = null, DockChargeW = 0.0, DockChargeSince = context.Now };
         }
 
@@ -338,7 +340,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
     {
         if (_dockOnProbeBus && state.Phase == VehiclePhase.Charging)
         {
-            context.Schedule(MissionIds.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, 0.0), MissionPriority.Command);
+            context.Schedule(_ids.Probe, SimDuration.Zero, new DockLoad(_vehicle.Name, 0.0), MissionPriority.Command);
         }
     }
 
@@ -374,7 +376,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             RecordField.Of("profiles", state.ProfilesCompleted),
             RecordField.Of("battery_j", state.BatteryJ));
         RecordEnergy(state, context);
-        context.Schedule(MissionIds.Probe, SimDuration.Zero,
+        context.Schedule(_ids.Probe, SimDuration.Zero,
             new VehicleFinished(_vehicle.Name, reason, state.ProfilesCompleted, state.BatteryJ), MissionPriority.Command);
         return Stop(state, context);
     }
@@ -401,7 +403,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         }
 
         RecordEnergy(state, context);
-        context.Schedule(MissionIds.Probe, SimDuration.Zero,
+        context.Schedule(_ids.Probe, SimDuration.Zero,
             new VehicleFinished(_vehicle.Name, reason, state.ProfilesCompleted, Math.Max(0.0, state.BatteryJ), Lost: true), MissionPriority.Command);
         return Stop(state, context);
     }

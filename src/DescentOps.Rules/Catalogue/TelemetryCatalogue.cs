@@ -25,7 +25,10 @@ public sealed class TelemetryCatalogue
     public bool ReadsTrueState { get; private init; }
 
     /// <summary>The same points and commands, read as a fault trigger reads them: true state allowed.</summary>
-    public TelemetryCatalogue ForFaultTriggers() => new(_points.Values, _commands.Values) { ReadsTrueState = true };
+    public TelemetryCatalogue ForFaultTriggers() => new(_points.Values, _commands.Values) { ReadsTrueState = true, Procedures = Procedures };
+
+    /// <summary>The procedures a ground rule may start (by name).</summary>
+    public IReadOnlySet<string> Procedures { get; init; } = new HashSet<string>(StringComparer.Ordinal);
 
     public TelemetryPointSpec? FindPoint(string name) => _points.GetValueOrDefault(name);
 

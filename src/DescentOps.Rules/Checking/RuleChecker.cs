@@ -110,6 +110,15 @@ public sealed class RuleChecker
 
         var condition = rule.Condition is null ? null : CheckCondition(rule.Condition);
         var actions = CheckActions(rule.Actions);
+        if (rule.Placement == Placement.Board)
+        {
+            // The ground team runs procedures; flight software has no one to run them.
+            foreach (var start in rule.Actions.Concat(rule.Escalations.SelectMany(e => e.Actions)).OfType<StartSyntax>())
+            {
+                Error(DiagnosticCode.PlacementNotAllowed, start.Location, $"rule '{rule.Name.Text}' runs on board and cannot start procedure '{start.Procedure.Text}': procedures are run by the ground team; start it from a ground rule");
+            }
+        }
+
         var escalations = new List<CompiledEscalation>();
         foreach (var escalation in rule.Escalations)
         {
@@ -373,6 +382,7 @@ public sealed class RuleChecker
                 WaitSyntax wait => TryDuration(wait.Duration, "a wait", allowZero: false) is { } duration ? new WaitAction(duration) : null,
                 EnableSyntax enable => KnownRule(enable.Rule) ? new EnableAction(enable.Rule.Text) : null,
                 DisableSyntax disable => KnownRule(disable.Rule) ? new DisableAction(disable.Rule.Text) : null,
+                StartSyntax start => KnownProcedure(start.Procedure) ? new StartProcedureAction(start.Procedure.Text) : null,
                 _ => null,
             };
             if (step is null)
@@ -386,6 +396,14 @@ public sealed class RuleChecker
         }
 
         return failed ? null : compiled;
+    }
+
+    private bool KnownProcedure(NameSyntax name)
+    {
+        if (_catalogue.Procedures.Contains(name.Text)) return true;
+        var known = _catalogue.Procedures.Count == 0 ? "the mission has no procedures" : $"the mission's procedures are {string.Join(", ", _catalogue.Procedures.Order(StringComparer.Ordinal))}";
+        Error(DiagnosticCode.UnknownProcedure, name.Location, $"unknown procedure '{name.Text}'; {known}");
+        return false;
     }
 
     private bool KnownRule(NameSyntax name)

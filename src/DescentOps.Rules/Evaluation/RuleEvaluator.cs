@@ -414,6 +414,11 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
                 case DisableAction disable:
                     SetEnabled(_rulesByName[disable.Rule], false, runtime, now, pending);
                     break;
+
+                case StartProcedureAction procedure:
+                    // No actuator: starting a procedure is the ground's own act, reported among the firing's commands.
+                    commands.Add(procedure.Command);
+                    break;
             }
         }
 

@@ -19,7 +19,7 @@ public sealed class RuleParser
     private static readonly HashSet<string> Keywords = new(StringComparer.Ordinal)
     {
         "rule", "runs", "on", "board", "ground", "severity", "priority", "cooldown", "starts", "disabled", "enabled",
-        "when", "then", "escalate", "after", "send", "wait", "enable", "disable", "exclusive", "autonomy",
+        "when", "then", "escalate", "after", "send", "wait", "enable", "disable", "start", "exclusive", "autonomy",
         "and", "or", "not", "above", "below", "inside", "outside", "to", "is", "rate", "of", "over", "step",
         "for", "samples",
     };
@@ -277,9 +277,14 @@ public sealed class RuleParser
                 Next();
                 actions.Add(new DisableSyntax(ExpectName("rule name"), step.Location));
             }
+            else if (step.IsWord("start"))
+            {
+                Next();
+                actions.Add(new StartSyntax(ExpectName("procedure name"), step.Location));
+            }
             else
             {
-                throw Fail(DiagnosticCode.UnexpectedToken, step.Location, $"expected an action (send, wait, enable, disable) or '}}', found {step.Describe()}");
+                throw Fail(DiagnosticCode.UnexpectedToken, step.Location, $"expected an action (send, wait, enable, disable, start) or '}}', found {step.Describe()}");
             }
         }
 

@@ -30,6 +30,7 @@ public enum DiagnosticCode
     ActuatorConflict,
     PlacementNotAllowed,
     TrueStateOnly,
+    UnknownProcedure,
 
     // Meaning (checker), warnings: the rule set runs, but a rule can never act.
     ContradictoryBounds,

@@ -80,7 +80,8 @@ public static class ScenarioFormat
         new TextField("send", "The command as a rule's send writes it, without 'send': 'probe.wall set_power(power = 3 kW)'."),
     ]);
 
-    public static SectionField Root { get; } = new(
+    /// <summary>The whole format; <see cref="LanderFormat.Attach"/> adds the landers list, built from the same probe, tether and station sections.</summary>
+    public static SectionField Root { get; } = LanderFormat.Attach(new(
         "",
         "A DescentOps scenario: the icy body, its ice shell, the probe, tether, station and vehicles, the faults to inject and the run settings.",
         [
@@ -204,7 +205,7 @@ public static class ScenarioFormat
                 new SectionField("link", "When the station sees home (omit: always) and how fast it can send.",
                 [
                     new QuantityField("rotation_period", "Time for home to come round the station's sky once (the body's rotation relative to the home direction).", Duration, 60, 1000 * Day),
-                    new QuantityField("latitude", "The station's latitude.", Angle, -Math.PI / 2, Math.PI / 2),
+                    new QuantityField("latitude", "The station's latitude (required without landers; a lander's station takes its site's).", Angle, -Math.PI / 2, Math.PI / 2, Required: false),
                     new QuantityField("home_declination", "Declination of home in the body's equatorial frame (default 0).", Angle, -Math.PI / 2, Math.PI / 2, Required: false),
                     new QuantityField("elevation_mask", "Lowest elevation at which the link closes (default 0).", Angle, 0, Math.PI / 2, Required: false),
                     new QuantityField("start_hour_angle", "Home's hour angle at the start of the run: 0 on the meridian, negative still rising (default 0).", Angle, -2 * Math.PI, 2 * Math.PI, Required: false),
@@ -320,9 +321,11 @@ public static class ScenarioFormat
                 new TextField("value", "For sensor_stuck (optional: the reading at the fault's start otherwise), sensor_bias (the offset) and sensor_noise (the noise's standard deviation): a quantity in the point's unit, e.g. '0.5 m/h'.", Required: false),
                 new TextField("relay", "For relay_failure: the relay that fails, by name ('relay-2') or number ('2'); relays are numbered from the surface in the order they are dropped.", Required: false),
                 CampaignFields.DetectedBy,
+                LanderFormat.FaultLander,
             ]), MinItems: 0, MaxItems: 1000, Required: false),
             new TextField("rules", "Recovery rules in the DescentOps rule language (a YAML block: 'rules: |' then indented lines).", Required: false),
             new ListField("telecommands", "Telecommands tagged with times: sent by the ground at its time (reaching the probe one uplink later) or stored on board and executed at its time.", Telecommand, 0, 1000, Required: false),
+            ProceduresFormat.Section,
             CampaignFields.Uncertain,
             CampaignFields.Criteria,
             new SectionField("run", "Run settings; the command line may override them.",
@@ -330,5 +333,5 @@ public static class ScenarioFormat
                 new IntegerField("seed", "Seed of the run's random streams.", long.MinValue, long.MaxValue),
                 new QuantityField("until", "Simulated time limit of the run.", Duration, 0, 1000 * Year, MinExclusive: true),
             ]),
-        ]);
+        ]));
 }

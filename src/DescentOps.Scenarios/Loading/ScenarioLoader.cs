@@ -75,10 +75,25 @@ public static class ScenarioLoader
     public static Scenario LoadText(string text, string sourceName, ISet<string>? readPaths = null)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations);
+        var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations, out var rootNode);
+        if (root.List("landers").Count > 0) return LanderLoader.Load(rootNode, root, locations, text, sourceName, errors, readPaths);
+        LanderLoader.CheckSingle(root, sourceName, errors);
         var scenario = DescentOps.Scenarios.Campaign.CampaignSections.Read(WithTimedParts(Build(root, sourceName, text, errors), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) }, root, text, errors);
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
+    }
+
+    /// <summary>
+    /// One lander's view: <paramref name="node"/> is a top level made of the file's own nodes (so every location is the
+    /// file's), bound and checked as a single-lander scenario; null when it has errors.
+    /// </summary>
+    internal static Scenario? LoadView(YamlNode node, string text, string sourceName, List<ScenarioError> errors, ISet<string> readPaths)
+    {
+        var binder = new YamlBinder(sourceName, errors, readPaths);
+        if (binder.BindSection(node, ScenarioFormat.Root, "") is not { } root || errors.Count > 0) return null;
+        var scenario = WithTimedParts(Build(root, sourceName, text, errors), root) with { FieldLocations = binder.Locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
+        CheckConsistency(scenario, root, errors);
+        return scenario;
     }
 
     private static Scenario Build(BoundSection root, string sourceName, string text, List<ScenarioError> errors)
@@ -274,7 +289,7 @@ public static class ScenarioLoader
                 radiation.Number("failure_spread")),
             link is null ? null : new StationLinkModel(
                 link.Quantity("rotation_period"),
-                link.Quantity("latitude"),
+                link.OptionalQuantity("latitude") ?? 0.0,
                 link.OptionalQuantity("home_declination") ?? 0.0,
                 link.OptionalQuantity("elevation_mask") ?? 0.0,
                 link.OptionalQuantity("start_hour_angle") ?? 0.0,
@@ -365,7 +380,7 @@ public static class ScenarioLoader
     public static ScenarioChange LoadChange(string text, string sourceName)
     {
         var errors = new List<ScenarioError>();
-        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out var locations);
+        var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out var locations, out _);
         var added = root.List("add_faults");
         var faults = added.Select((f, i) => FaultReader.Read(f, $"add_faults[{i}]", errors)).OfType<FaultModel>().ToList();
         if (errors.Count > 0) throw new ScenarioException(errors);
@@ -391,10 +406,11 @@ public static class ScenarioLoader
     private static Scenario WithTimedParts(Scenario scenario, BoundSection root) => scenario with
     {
         Telecommands = Telecommands(root.List("telecommands"), "telecommands"),
+        Procedures = ProceduresReader.Read(root),
     };
 
     /// <summary>Parses YAML and validates it against a format tree; syntax and field errors are thrown, located.</summary>
-    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths, out IReadOnlyDictionary<string, SourceLocation> locations)
+    private static BoundSection Bind(string text, string sourceName, SectionField spec, List<ScenarioError> errors, ISet<string>? readPaths, out IReadOnlyDictionary<string, SourceLocation> locations, out YamlNode rootNode)
     {
         var stream = new YamlStream();
         var parser = new Parser(new StringReader(text));
@@ -422,7 +438,8 @@ public static class ScenarioLoader
         }
 
         var binder = new YamlBinder(sourceName, errors, readPaths);
-        var root = binder.BindSection(stream.Documents[0].RootNode, spec, "");
+        rootNode = stream.Documents[0].RootNode;
+        var root = binder.BindSection(rootNode, spec, "");
         locations = binder.Locations;
         if (errors.Count > 0 || root is null)
         {

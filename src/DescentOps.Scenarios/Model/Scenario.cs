@@ -40,6 +40,16 @@ public sealed record Scenario(
     /// <summary>Rule sets uplinked during the run (a branch's <c>uplink_rules:</c>), in time order; empty for a scenario as written.</summary>
     public IReadOnlyList<RuleUplinkModel> RuleUplinks { get; init; } = [];
 
+    /// <summary>The ground team's operating procedures (the <c>procedures</c> section), in the order written.</summary>
+    public IReadOnlyList<ProcedureModel> Procedures { get; init; } = [];
+
+    /// <summary>
+    /// The landers of a scenario with a <c>landers</c> list, in file order; empty for the single-lander format. With
+    /// landers, <see cref="Probe"/>, <see cref="Tether"/>, <see cref="Station"/>, <see cref="Vehicles"/> and the other
+    /// per-lander parts are the first lander's, and <see cref="Faults"/> holds every lander's faults in file order.
+    /// </summary>
+    public IReadOnlyList<LanderModel> Landers { get; init; } = [];
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {
