@@ -1,8 +1,8 @@
-using DescentOps.Tests.Shared;
 using System.Text.Json.Nodes;
 using DescentOps.Campaigns;
 using DescentOps.Cli.Commands;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 using Xunit;
 
 namespace DescentOps.Campaigns.Tests;

@@ -6,6 +6,7 @@ using DescentOps.Cli;
 using DescentOps.Cli.Commands;
 using DescentOps.Engine.Randomness;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 using Microsoft.Data.Sqlite;
 
 namespace DescentOps.Cluster.Tests;
@@ -26,50 +27,8 @@ internal static class ClusterFixture
         return new CampaignPlan(scenario, [CampaignVariant.Baseline], seed, scenario.Run.UntilS, toolVersion, RandomStream.AlgorithmName);
     }
 
-    public static string TempDir()
-    {
-        var dir = Path.Combine(Root.Value, Guid.NewGuid().ToString("N"));
-        Directory.CreateDirectory(dir);
-        return dir;
-    }
-
-    /// <summary>
-    /// One folder per test process: other checkouts on the machine may run these tests at the same time, so a run
-    /// removes only the folders of earlier runs whose process is gone, never the whole tree.
-    /// </summary>
-    private static readonly Lazy<string> Root = new(() =>
-    {
-        var parent = Path.Combine(Path.GetTempPath(), "descentops-cluster-tests");
-        Directory.CreateDirectory(parent);
-        foreach (var stale in Directory.GetDirectories(parent))
-        {
-            if (int.TryParse(Path.GetFileName(stale), out var pid) && !Alive(pid))
-            {
-                try
-                {
-                    Directory.Delete(stale, recursive: true);
-                }
-                catch (IOException)
-                {
-                }
-            }
-        }
-
-        return Path.Combine(parent, Environment.ProcessId.ToString(System.Globalization.CultureInfo.InvariantCulture));
-    });
-
-    private static bool Alive(int pid)
-    {
-        try
-        {
-            using var process = System.Diagnostics.Process.GetProcessById(pid);
-            return !process.HasExited;
-        }
-        catch (ArgumentException)
-        {
-            return false;
-        }
-    }
+    /// <summary>A fresh folder that goes when the test process ends.</summary>
+    public static string TempDir() => TestFolders.New();
 
     /// <summary>A loopback port free a moment ago (the node binds it right after).</summary>
     public static int FreePort()
@@ -79,29 +38,8 @@ internal static class ClusterFixture
         return ((IPEndPoint)listener.LocalEndpoint).Port;
     }
 
-    private static readonly SemaphoreSlim Turn = new(1, 1);
-
-    /// <summary>The command line in this process with its output captured; the console is process-wide, so calls take turns.</summary>
-    public static async Task<(int ExitCode, string Stdout, string Stderr)> CliAsync(params string[] args)
-    {
-        await Turn.WaitAsync();
-        var (oldOut, oldError) = (Console.Out, Console.Error);
-        using var stdout = new StringWriter();
-        using var stderr = new StringWriter();
-        try
-        {
-            Console.SetOut(stdout);
-            Console.SetError(stderr);
-            var exit = await CliApp.RunAsync(args);
-            return (exit, stdout.ToString(), stderr.ToString());
-        }
-        finally
-        {
-            Console.SetOut(oldOut);
-            Console.SetError(oldError);
-            Turn.Release();
-        }
-    }
+    /// <summary>The command line in this process with its output captured.</summary>
+    public static Task<(int ExitCode, string Stdout, string Stderr)> CliAsync(params string[] args) => InProcessCli.RunAsync(args);
 
     /// <summary>A worker in this process, as <c>descentops worker --join</c> runs one; stopped by disposing.</summary>
     public sealed class Worker : IAsyncDisposable

@@ -1,10 +1,10 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;
 using DescentOps.Mission.Station;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

@@ -1,8 +1,8 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Faults;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

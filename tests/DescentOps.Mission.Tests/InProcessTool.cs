@@ -1,4 +1,5 @@
 using DescentOps.Cli;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 
@@ -10,28 +11,6 @@ namespace DescentOps.Mission.Tests;
 /// </summary>
 internal static class InProcessTool
 {
-    private static readonly SemaphoreSlim Turn = new(1, 1);
-
-    public static async Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string workingDirectory, params string[] arguments)
-    {
-        await Turn.WaitAsync();
-        var (oldOut, oldError, oldDirectory) = (Console.Out, Console.Error, Environment.CurrentDirectory);
-        using var stdout = new StringWriter();
-        using var stderr = new StringWriter();
-        try
-        {
-            Console.SetOut(stdout);
-            Console.SetError(stderr);
-            Environment.CurrentDirectory = workingDirectory;
-            var exit = await CliApp.RunAsync(arguments);
-            return (exit, stdout.ToString(), stderr.ToString());
-        }
-        finally
-        {
-            Console.SetOut(oldOut);
-            Console.SetError(oldError);
-            Environment.CurrentDirectory = oldDirectory;
-            Turn.Release();
-        }
-    }
+    public static Task<(int ExitCode, string Stdout, string Stderr)> RunAsync(string workingDirectory, params string[] arguments) =>
+        InProcessCli.RunInAsync(workingDirectory, arguments);
 }

@@ -1,4 +1,3 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Cli.Commands;
 using DescentOps.Cli.Running;
 using DescentOps.Journal;
@@ -6,6 +5,7 @@ using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

@@ -1,10 +1,10 @@
-using DescentOps.Tests.Shared;
 using System.Globalization;
 using System.Text.Json;
 using DescentOps.Mission.Probe;
 using DescentOps.Physics.Descent;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 using MathNet.Numerics;
 
 namespace DescentOps.Mission.Tests;

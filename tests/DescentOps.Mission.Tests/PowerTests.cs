@@ -1,11 +1,11 @@
-using DescentOps.Tests.Shared;
-using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Running;
 using DescentOps.Physics.Power;
+using DescentOps.Records;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

@@ -1,13 +1,13 @@
-using DescentOps.Tests.Shared;
-using DescentOps.Records;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Running;
 using DescentOps.Mission.Station;
 using DescentOps.Physics.Radiation;
+using DescentOps.Records;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

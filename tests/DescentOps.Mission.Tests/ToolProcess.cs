@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 
@@ -26,68 +27,6 @@ internal static class ToolProcess
         return (process.ExitCode, await stdout, await stderr);
     }
 
-    /// <summary>
-    /// This test run's own folder under the temporary directory; deleted when the test process exits. A test process
-    /// that is killed (a timeout, Ctrl-C) cannot delete its folder, so each new run first removes the folders of runs
-    /// whose process is gone.
-    /// </summary>
-    private static readonly Lazy<string> RunFolder = new(() =>
-    {
-        var parent = Path.Combine(Path.GetTempPath(), "descentops-tests");
-        SweepAbandoned(parent);
-        var path = Path.Combine(parent, $"run-{Environment.ProcessId}-{Path.GetRandomFileName()}");
-        Directory.CreateDirectory(path);
-        AppDomain.CurrentDomain.ProcessExit += (_, _) =>
-        {
-            try
-            {
-                Directory.Delete(path, recursive: true);
-            }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-            {
-                // Best effort: a file still open at exit is left for the system's temporary-file cleanup.
-            }
-        };
-        return path;
-    });
-
-    /// <summary>Deletes <c>run-PID-*</c> folders whose process no longer exists (best effort).</summary>
-    private static void SweepAbandoned(string parent)
-    {
-        if (!Directory.Exists(parent)) return;
-        foreach (var folder in Directory.EnumerateDirectories(parent, "run-*"))
-        {
-            var parts = Path.GetFileName(folder).Split('-');
-            if (parts.Length < 3 || !int.TryParse(parts[1], out var pid) || ProcessIsAlive(pid)) continue;
-            try
-            {
-                Directory.Delete(folder, recursive: true);
-            }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
-            {
-                // Another sweeper got there first, or the folder is not ours to delete.
-            }
-        }
-    }
-
-    private static bool ProcessIsAlive(int pid)
-    {
-        try
-        {
-            using var process = Process.GetProcessById(pid);
-            return !process.HasExited;
-        }
-        catch (ArgumentException)
-        {
-            return false;
-        }
-    }
-
     /// <summary>A fresh folder inside this run's folder, which goes when the test process ends.</summary>
-    public static string NewTempDirectory()
-    {
-        var path = Path.Combine(RunFolder.Value, Path.GetRandomFileName());
-        Directory.CreateDirectory(path);
-        return path;
-    }
+    public static string NewTempDirectory() => TestFolders.New();
 }

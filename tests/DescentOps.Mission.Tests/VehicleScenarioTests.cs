@@ -1,10 +1,10 @@
-using DescentOps.Tests.Shared;
-using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Physics.Acoustics;
 using DescentOps.Physics.Ocean;
+using DescentOps.Records;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 

@@ -1,5 +1,5 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Scenarios.Tests;
 

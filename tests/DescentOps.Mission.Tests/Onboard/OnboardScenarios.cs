@@ -1,6 +1,6 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Onboard;
 

@@ -1,7 +1,7 @@
-using DescentOps.Tests.Shared;
 using DescentOps.Mission.Autonomy;
 using DescentOps.Mission.Onboard;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Onboard;
 
