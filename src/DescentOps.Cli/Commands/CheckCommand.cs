@@ -24,10 +24,11 @@ public static class CheckCommand
         var scenarioOption = new Option<string?>("--scenario", "-S") { Description = "For a rule-set file: the scenario (file or built-in name) whose telemetry points and commands the rules may use (default: the built-in default).", HelpName = "SCENARIO" };
         var jsonOption = CommonOptions.Json();
         var traceOption = new Option<string?>("--trace") { Description = "Run the rules on a recorded telemetry trace (a CSV with t_s and point columns; the export's telemetry.csv is one) and print what they did as CSV.", HelpName = "TRACE.csv" };
+        var coverageOption = new Option<string?>("--coverage") { Description = "For a scenario: which of its rules acted and which branches of its procedures a run's or a branch's log took.", HelpName = "LOG.jsonl" };
         var expectOption = new Option<string?>("--expect") { Description = "With --trace: compare what the rules did with these rows (a CSV as --trace prints it); exit 8 when they differ.", HelpName = "EXPECTED.csv" };
         var command = new Command("check", "Check recovery rules: syntax, unknown points or commands, unit mismatches, out-of-range thresholds, conflicts, rules that can never fire.")
         {
-            fileArgument, scenarioOption, jsonOption, traceOption, expectOption,
+            fileArgument, scenarioOption, jsonOption, traceOption, expectOption, coverageOption,
         };
         command.SetAction(parse =>
         {
@@ -39,6 +40,12 @@ public static class CheckCommand
             if (expect is not null && trace is null) throw new UsageException("--expect compares the rows of a trace: give --trace too");
             if (trace is not null && !isRuleSet) throw new UsageException("--trace runs a rule-set file (.dorules) on a trace");
             if (trace is not null) return RunTrace(path, ScenarioSource.Load(parse.GetValue(scenarioOption)), trace, expect);
+            if (parse.GetValue(coverageOption) is { } log)
+            {
+                if (isRuleSet) throw new UsageException("--coverage reads a run's log against its scenario: give the scenario, not a rule-set file");
+                return Coverage(ScenarioSource.Load(path), log);
+            }
+
             var errors = new List<Finding>();
             var warnings = new List<Finding>();
             var rules = 0;
@@ -104,12 +111,15 @@ public static class CheckCommand
         }
 
         var problems = new List<string>();
+        // The scenario's procedures run on the trace too, started by the rules' 'start'.
+        var procedures = Mission.Procedures.MissionProcedures.Compile(scenario);
+        var verdicts = new List<(string Procedure, string Step, Mission.Procedures.StepVerdict Verdict)>();
         IReadOnlyList<IReadOnlyList<string>> rows;
         List<IReadOnlyList<string>>? expected = null;
         try
         {
             var table = Files.CsvTable.Open(tracePath);
-            rows = TraceReplay.Run(rules, catalogue, table.Header, table.Rows(), problems);
+            rows = TraceReplay.Run(rules, procedures, catalogue, table.Header, table.Rows(), problems, verdicts);
             if (expectPath is not null)
             {
                 var expectedTable = Files.CsvTable.Open(expectPath);
@@ -133,31 +143,69 @@ public static class CheckCommand
             return (int)ExitCode.InvalidInput;
         }
 
+        var silent = rules.Rules.Select(r => r.Name).Where(n => rows.All(r => r[1] != n)).ToList();
+        var coverage = silent.Count == 0 ? "every rule acted" : $"never acted: {string.Join(", ", silent)}";
+        var branches = Mission.Procedures.ProcedureCoverage.Of(procedures, verdicts);
         if (expected is null)
         {
             Console.Out.Write(Reports.Export.CsvText.Row([.. TraceReplay.Header]));
             foreach (var row in rows) Console.Out.Write(Reports.Export.CsvText.Row([.. row.Select(c => Reports.Export.CsvText.Cell(c))]));
+            // Coverage goes to the error stream, so the rows on standard output stay a CSV file of expected rows.
+            Console.Error.WriteLine($"coverage: {rules.Rules.Count - silent.Count} of {rules.Rules.Count} rules acted; {coverage}");
+            foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(branches)) Console.Error.WriteLine($"coverage: {line}");
             return (int)ExitCode.Ok;
         }
 
         static string Key(IReadOnlyList<string> row) => string.Join("\u001f", row);
         var actualKeys = rows.Select(Key).ToList();
         var expectedKeys = expected.Select(Key).ToList();
-        var silent = rules.Rules.Select(r => r.Name).Where(n => rows.All(r => r[1] != n)).ToList();
-        var coverage = silent.Count == 0 ? "every rule acted" : $"never acted: {string.Join(", ", silent)}";
         if (actualKeys.SequenceEqual(expectedKeys, StringComparer.Ordinal))
         {
             Console.Out.WriteLine($"{tracePath}: {rows.Count} rows as expected; {coverage}");
+            foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(branches)) Console.Out.WriteLine($"  {line}");
             return (int)ExitCode.Ok;
         }
 
         var missing = expectedKeys.Except(actualKeys, StringComparer.Ordinal).ToList();
         var unexpected = actualKeys.Except(expectedKeys, StringComparer.Ordinal).ToList();
         Console.Out.WriteLine($"{tracePath}: the rules did not do what {expectPath} expects ({rows.Count} rows, {expected.Count} expected); {coverage}");
+        foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(branches)) Console.Out.WriteLine($"  {line}");
         foreach (var row in missing.Take(20)) Console.Out.WriteLine($"  expected, not done: {row.Replace("\u001f", ",", StringComparison.Ordinal)}");
         foreach (var row in unexpected.Take(20)) Console.Out.WriteLine($"  done, not expected: {row.Replace("\u001f", ",", StringComparison.Ordinal)}");
         if (missing.Count == 0 && unexpected.Count == 0) Console.Out.WriteLine("  the same rows in another order");
         return (int)ExitCode.RunsDiffer;
+    }
+
+    /// <summary><c>check SCENARIO --coverage LOG</c>: the rules that acted and the procedure branches taken in a run's log.</summary>
+    private static int Coverage(Scenario scenario, string logPath)
+    {
+        if (!File.Exists(logPath)) throw new FileNotFoundException($"no such file: {logPath}", logPath);
+        var rules = MissionRules.Compile(scenario);
+        var procedures = Mission.Procedures.MissionProcedures.Compile(scenario);
+        var acted = new HashSet<string>(StringComparer.Ordinal);
+        var verdicts = new List<(string Procedure, string Step, Mission.Procedures.StepVerdict Verdict)>();
+        using (var reader = Journal.JournalReader.Open(logPath))
+        {
+            foreach (var e in reader.ReadAll().OfType<Journal.EventEntry>())
+            {
+                string Text(string name) => e.Data.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault() ?? "";
+                Mission.Procedures.StepVerdict? verdict = e.Kind switch
+                {
+                    Records.Kinds.ProcedureRecords.StepPassed => Mission.Procedures.StepVerdict.Passed,
+                    Records.Kinds.ProcedureRecords.StepFailed => Mission.Procedures.StepVerdict.Failed,
+                    Records.Kinds.ProcedureRecords.StepLate => Mission.Procedures.StepVerdict.Late,
+                    _ => null,
+                };
+                if (verdict is { } v) verdicts.Add((Text("procedure"), Text("step"), v));
+                else if (e.Kind is Records.Kinds.RuleRecords.Fired or Records.Kinds.RuleRecords.Escalated or Records.Kinds.RuleRecords.Continued) acted.Add(Text("rule"));
+            }
+        }
+
+        var names = rules.Rules.Select(r => r.Name).ToList();
+        var silent = names.Where(n => !acted.Contains(n)).ToList();
+        Console.Out.WriteLine($"{logPath}: {names.Count - silent.Count} of {names.Count} rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}");
+        foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(Mission.Procedures.ProcedureCoverage.Of(procedures, verdicts))) Console.Out.WriteLine($"  {line}");
+        return (int)ExitCode.Ok;
     }
 
     private static void Collect(RuleCheckResult result, Func<SourceLocation, string> where, List<Finding> errors, List<Finding> warnings)

@@ -50,6 +50,8 @@ public static class MissionCatalogue
             new DiscretePointSpec("probe.link_path", Tether.LinkPaths.All),
             // No sensor measures the sideways drift: true state, for fault triggers only.
             new NumericPointSpec("probe.lateral_drift", PhysicalDimension.Length, -scenario.Shell.ThicknessM, scenario.Shell.ThicknessM) { TrueStateOnly = true },
+            // Each bus load's state, as the power controller reports it (only with a power system).
+            .. power is null ? [] : Probe.ProbeLoadStates.Points(power),
         ];
         CommandSpec[] commands =
         [

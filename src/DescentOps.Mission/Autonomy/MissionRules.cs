@@ -19,15 +19,17 @@ public static class MissionRules
     {
         var result = RuleChecker.CheckSource(new RuleSource(scenario.SourceName, scenario.Rules.Text), MissionCatalogue.For(scenario));
         if (scenario.OnboardSampling is null || result.RuleSet is not { } set) return result;
-        // The on-board sampler reads the probe's sensors, not the link's report; the link path comes with the frames.
-        const string LinkPath = "probe.link_path";
-        if (!set.Rules.Any(r => r.Placement == Rules.Syntax.Placement.Board && r.Condition.Points.Contains(LinkPath, StringComparer.Ordinal))) return result;
+        // The on-board sampler reads the probe's sensors, not the link's or the power controller's reports, which come with the frames.
+        var frameOnly = set.Rules.Where(r => r.Placement == Rules.Syntax.Placement.Board)
+            .SelectMany(r => r.Condition.Points)
+            .FirstOrDefault(p => p == "probe.link_path" || Probe.ProbeLoadStates.IsLoadPoint(p));
+        if (frameOnly is null) return result;
         var text = scenario.Rules.Text;
-        var at = text.IndexOf(LinkPath, StringComparison.Ordinal);
+        var at = text.IndexOf(frameOnly, StringComparison.Ordinal);
         var line = text[..Math.Max(at, 0)].Count(c => c == '\n') + 1;
         var column = at - (text.LastIndexOf('\n', Math.Max(at - 1, 0)) + 1) + 1;
         var error = new RuleDiagnostic(new Rules.Text.SourceLocation(scenario.SourceName, line, column), DiagnosticSeverity.Error, DiagnosticCode.UnknownPoint,
-            $"on-board rules cannot read '{LinkPath}' with onboard_sampling: the on-board sampler reads the probe's sensors, and the link path comes with the frames");
+            $"on-board rules cannot read '{frameOnly}' with onboard_sampling: the on-board sampler reads the probe's sensors, and {(frameOnly == "probe.link_path" ? "the link path comes" : "a load's state comes")} with the frames");
         return result with { Errors = [.. result.Errors, error], RuleSet = null };
     }
 

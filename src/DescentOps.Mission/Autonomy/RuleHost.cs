@@ -76,10 +76,13 @@ public sealed class RuleHost
         if (load is not null)
         {
             // The new set starts afresh, as a newly loaded table would: no history, persistence, waits or held actuators.
+            // Its clock starts where the old one stood, in the samples' time: on the ground frames arrive a downlink
+            // after they were sampled, so a clock moved to the ground's own time would refuse the frames still on their way.
+            var clock = _evaluator.Scheduler.Clock;
             _evaluator.Dispose();
             _own = Own(load);
             _evaluator = NewEvaluator();
-            _evaluator.AdvanceTo(time);
+            _evaluator.AdvanceTo(clock < time ? clock : time);
             return;
         }
 

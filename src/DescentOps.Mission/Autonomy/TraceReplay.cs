@@ -31,7 +31,7 @@ public static class TraceReplay
         ["regime"] = "probe.regime",
     };
 
-    /// <summary>The header of the rows <see cref="Run"/> returns, as a CSV file of expected rows has it.</summary>
+    /// <summary>The header of the rows the rule-only Run returns, as a CSV file of expected rows has it.</summary>
     public static IReadOnlyList<string> Header { get; } = ["t_s", "rule", "kind", "commands"];
 
     /// <summary>
@@ -71,13 +71,26 @@ public static class TraceReplay
     /// time (shortest round-trip seconds), rule, kind and the commands sent. Rows must not go back in time.
     /// </summary>
     public static IReadOnlyList<IReadOnlyList<string>> Run(
-        CompiledRuleSet rules, TelemetryCatalogue catalogue, IReadOnlyList<string> header, IEnumerable<(int Line, IReadOnlyList<string> Cells)> rows, List<string> problems)
+        CompiledRuleSet rules, TelemetryCatalogue catalogue, IReadOnlyList<string> header, IEnumerable<(int Line, IReadOnlyList<string> Cells)> rows, List<string> problems) =>
+        Run(rules, [], catalogue, header, rows, problems, []);
+
+    /// <summary>
+    /// As <see cref="Run(CompiledRuleSet, TelemetryCatalogue, IReadOnlyList{string}, IEnumerable{ValueTuple{int, IReadOnlyList{string}}}, List{string})"/>,
+    /// with the scenario's procedures run as the ground runs them (each row a frame reaching the ground at its time): a
+    /// rule's start starts one, and each step that starts, ends or finishes the procedure is a row
+    /// (<c>procedure NAME</c>, <c>step STEP passed</c>, its command). The step verdicts go to <paramref name="verdicts"/>.
+    /// </summary>
+    public static IReadOnlyList<IReadOnlyList<string>> Run(
+        CompiledRuleSet rules, IReadOnlyList<Procedures.CompiledProcedure> procedures, TelemetryCatalogue catalogue, IReadOnlyList<string> header,
+        IEnumerable<(int Line, IReadOnlyList<string> Cells)> rows, List<string> problems, List<(string Procedure, string Step, Procedures.StepVerdict Verdict)> verdicts)
     {
         var points = Columns(header, catalogue, problems);
         var output = new List<IReadOnlyList<string>>();
         if (problems.Count > 0) return output;
         var time = header.ToList().IndexOf("t_s");
         var evaluator = new RuleEvaluator(rules, new RuleScheduler());
+        var desk = new Procedures.ProcedureDesk(procedures);
+        var starts = new List<(string Procedure, string By)>();
         evaluator.Outputs.Subscribe(o =>
         {
             var row = o switch
@@ -88,7 +101,34 @@ public static class TraceReplay
                 _ => null,
             };
             if (row is not null) output.Add(row);
+            var commands = o switch { RuleFiring f => f.Commands, RuleEscalation e => e.Commands, RuleContinuation c => c.Commands, _ => [] };
+            foreach (var command in commands)
+            {
+                if (StartProcedureAction.ProcedureOf(command) is { } procedure) starts.Add((procedure, o.Rule));
+            }
         });
+
+        void Take(IReadOnlyList<Procedures.ProcedureOutput> outputs)
+        {
+            foreach (var o in outputs)
+            {
+                var row = o switch
+                {
+                    Procedures.StepStarted s => Row(s.Time, $"procedure {s.Procedure}", $"step {s.Step} started", s.Send is { } c ? [c] : []),
+                    Procedures.StepEnded e => Row(e.Time, $"procedure {e.Procedure}", $"step {e.Step} {Procedures.ProcedureRunner.Word(e.Verdict)}", []),
+                    Procedures.ProcedureFinished f => Row(f.Time, $"procedure {f.Procedure}", f.Outcome == Procedures.ProcedureOutcome.Done ? "done" : "aborted", []),
+                    _ => null,
+                };
+                if (row is not null) output.Add(row);
+                if (o is Procedures.StepEnded ended) verdicts.Add((ended.Procedure, ended.Step, ended.Verdict));
+            }
+        }
+
+        void StartAll(SimTime at)
+        {
+            foreach (var (procedure, by) in starts) Take(desk.Start(desk.IndexOf(procedure), by, at));
+            starts.Clear();
+        }
 
         var last = SimTime.Epoch;
         foreach (var (line, cells) in rows)
@@ -113,6 +153,8 @@ public static class TraceReplay
             }
 
             last = at;
+            // Steps whose time ran out before this row are late first, at their deadline.
+            while (desk.NextDeadline is { } deadline && deadline < at) Take(desk.OnWake(deadline));
             var samples = new List<TelemetrySample>();
             for (var i = 0; i < cells.Count; i++)
             {
@@ -132,10 +174,14 @@ public static class TraceReplay
                 }
             }
 
+            // As on the ground: the procedures see the row before the rules can start one.
+            Take(desk.OnFrame(samples, at));
             evaluator.Submit(samples);
+            StartAll(at);
         }
 
         evaluator.AdvanceTo(last);
+        StartAll(last);
         evaluator.Dispose();
         return output;
     }

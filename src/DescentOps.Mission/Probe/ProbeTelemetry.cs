@@ -16,7 +16,7 @@ public static class ProbeTelemetry
     {
         var truth = ProbeSensors.TrueReadings(design, state);
         var reported = ProbeSensors.Reported(truth, state.SensorFaults, context.Random);
-        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive, [("probe.link_path", state.LinkPath)]);
+        var frame = new TelemetryFrame(state.FramesSent + 1, context.Now, state.Regime.ToString(), reported, state.DepthM, state.VehiclesActive, [("probe.link_path", state.LinkPath), .. ProbeLoadStates.Readings(design, state)]);
         context.Record(ProbeRecords.Telemetry, Severity.Debug, [.. Fields(design, state, frame, truth)]);
         context.Schedule(design.Ids.Tether, SimDuration.Zero, frame, MissionPriority.Telemetry);
         // With on-board sampling the rules read the sensors themselves (Onboard.OnboardSampler), not the frames.

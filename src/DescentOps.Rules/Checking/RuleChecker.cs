@@ -245,6 +245,16 @@ public sealed class RuleChecker
             case HoldsForSamplesSyntax forSamples:
                 return CheckCondition(forSamples.Operand) is { } counted ? new HoldsForSamplesCondition(counted, forSamples.Count) : null;
 
+            case TimeSinceSyntax since:
+            {
+                var happened = CheckCondition(since.Event);
+                var duration = TryDuration(since.Duration, "a time since an event", allowZero: true);
+                return happened is null || duration is null ? null : new TimeSinceCondition(happened, since.Comparison, duration.Value);
+            }
+
+            case LatchedSyntax latched:
+                return CheckCondition(latched.Operand) is { } latch ? new LatchedCondition(latch) : null;
+
             default:
                 return null;
         }

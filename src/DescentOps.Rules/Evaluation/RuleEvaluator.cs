@@ -212,6 +212,8 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
         NotCondition not => Leaves(not.Operand),
         HoldsForDurationCondition duration => Leaves(duration.Operand),
         HoldsForSamplesCondition samples => Leaves(samples.Operand),
+        TimeSinceCondition since => Leaves(since.Event),
+        LatchedCondition latched => Leaves(latched.Operand),
         _ => [condition],
     };
 

@@ -21,7 +21,7 @@ public sealed class RuleParser
         "rule", "runs", "on", "board", "ground", "severity", "priority", "cooldown", "starts", "disabled", "enabled",
         "when", "then", "escalate", "after", "send", "wait", "enable", "disable", "start", "exclusive", "autonomy",
         "and", "or", "not", "above", "below", "inside", "outside", "to", "is", "rate", "of", "over", "step",
-        "for", "samples",
+        "for", "samples", "time", "since", "latched",
     };
 
     private static readonly HashSet<string> TopLevelKeywords = new(StringComparer.Ordinal) { "rule", "exclusive", "autonomy" };
@@ -469,6 +469,28 @@ public sealed class RuleParser
             return new RateCheckSyntax(point, window, ParseThreshold(point), start.Location);
         }
 
+        if (start.IsWord("time"))
+        {
+            Next();
+            ExpectWord("since");
+            var happened = ParseBracketed(depth, "the event after 'time since'");
+            var keyword = Current;
+            var comparison = keyword.IsWord("above") ? Comparison.Above : keyword.IsWord("below") ? Comparison.Below : (Comparison?)null;
+            if (comparison is null)
+            {
+                throw Fail(DiagnosticCode.UnexpectedToken, keyword.Location, $"expected 'above' or 'below' and a duration after 'time since (...)', found {keyword.Describe()}");
+            }
+
+            Next();
+            return new TimeSinceSyntax(happened, comparison.Value, ExpectQuantity("a duration"), keyword.Location, start.Location);
+        }
+
+        if (start.IsWord("latched"))
+        {
+            Next();
+            return new LatchedSyntax(ParseBracketed(depth, "the condition after 'latched'"), start.Location);
+        }
+
         if (start.IsWord("step"))
         {
             Next();
@@ -477,7 +499,7 @@ public sealed class RuleParser
             return new StepCheckSyntax(point, ParseThreshold(point), start.Location);
         }
 
-        var name = ExpectName("telemetry point, 'rate of', 'step of', 'not' or '('");
+        var name = ExpectName("telemetry point, 'rate of', 'step of', 'time since', 'latched', 'not' or '('");
         if (Current.IsWord("is"))
         {
             Next();
@@ -492,6 +514,20 @@ public sealed class RuleParser
         }
 
         return new LimitCheckSyntax(name, ParseThreshold(name), start.Location);
+    }
+
+    /// <summary>"( CONDITION )": the brackets are required, so what the event or latch covers is always written out.</summary>
+    private ConditionSyntax ParseBracketed(int depth, string what)
+    {
+        if (Current.Kind != TokenKind.LeftParen)
+        {
+            throw Fail(DiagnosticCode.UnexpectedToken, Current.Location, $"expected '(' to open {what}, found {Current.Describe()}");
+        }
+
+        Next();
+        var inner = ParseCondition(depth + 1);
+        Expect(TokenKind.RightParen, "')' to close the group");
+        return inner;
     }
 
     private ThresholdSyntax ParseThreshold(NameSyntax point)

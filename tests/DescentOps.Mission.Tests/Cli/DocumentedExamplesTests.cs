@@ -27,19 +27,25 @@ public sealed partial class DocumentedExamplesTests
         FencedBlock().Matches(File.ReadAllText(Path.Combine(RepositoryRoot(), document)).Replace("\r\n", "\n", StringComparison.Ordinal))
             .Select(m => (m.Groups["lang"].Value, m.Groups["body"].Value));
 
-    /// <summary>Rule sets: the `dorules` blocks, and the literal `rules: |` blocks inside YAML examples.</summary>
-    private static List<string> RuleSets(string document)
+    /// <summary>
+    /// Rule sets: the `dorules` blocks, and the literal `rules: |` blocks inside YAML examples, each with the built-in
+    /// scenario whose catalogue it is written for: the default, or the one a YAML example names on its first line
+    /// (<c># scenario: NAME.yaml</c>).
+    /// </summary>
+    private static List<(string Rules, string? Scenario)> RuleSets(string document)
     {
-        var sets = new List<string>();
+        var sets = new List<(string, string?)>();
         foreach (var (lang, body) in Blocks(document))
         {
             if (lang == "dorules")
             {
-                sets.Add(body);
+                sets.Add((body, null));
                 continue;
             }
 
             if (lang != "yaml") continue;
+            const string ScenarioMark = "# scenario: ";
+            var scenario = body.StartsWith(ScenarioMark, StringComparison.Ordinal) ? body[ScenarioMark.Length..body.IndexOf('\n', StringComparison.Ordinal)].Trim() : null;
             var lines = body.Split('\n');
             for (var i = 0; i < lines.Length; i++)
             {
@@ -47,7 +53,7 @@ public sealed partial class DocumentedExamplesTests
                 if (trimmed != "rules: |") continue;
                 var indent = lines[i].Length - trimmed.Length;
                 var block = lines.Skip(i + 1).TakeWhile(l => l.Length == 0 || l.Length - l.TrimStart().Length > indent).ToArray();
-                sets.Add(string.Join('\n', block));
+                sets.Add((string.Join('\n', block), scenario));
             }
         }
 
@@ -72,8 +78,9 @@ public sealed partial class DocumentedExamplesTests
         for (var i = 0; i < sets.Count; i++)
         {
             var file = Path.Combine(folder, $"example-{i + 1}.dorules");
-            await File.WriteAllTextAsync(file, sets[i]);
-            await AssertChecksClean(folder, file);
+            await File.WriteAllTextAsync(file, sets[i].Rules);
+            if (sets[i].Scenario is { } scenario) await AssertChecksClean(folder, file, "--scenario", scenario);
+            else await AssertChecksClean(folder, file);
         }
     }
 

@@ -30,6 +30,8 @@ internal abstract class ConditionMonitor
         NotCondition not => new NotMonitor(Build(not.Operand)),
         HoldsForDurationCondition duration => new HoldsForDurationMonitor(Build(duration.Operand), duration.Duration),
         HoldsForSamplesCondition samples => new HoldsForSamplesMonitor(Build(samples.Operand), samples.Count, samples.Points),
+        TimeSinceCondition since => new TimeSinceMonitor(Build(since.Event), since.Comparison, since.Duration),
+        LatchedCondition latched => new LatchedMonitor(Build(latched.Operand)),
         _ => throw new ArgumentOutOfRangeException(nameof(condition), condition, "no monitor for this condition"),
     };
 
