@@ -27,6 +27,9 @@ public sealed class FaultMeasures
     private const double UprightRad = Math.PI / 180;
 
     private readonly List<Open> _faults = [];
+
+    /// <summary>The rule that started each running procedure: its steps' commands act for that rule.</summary>
+    private readonly Dictionary<string, string> _procedureStartedBy = new(StringComparer.Ordinal);
     private readonly IReadOnlyDictionary<string, IReadOnlyList<string>> _rulePoints;
     private readonly IReadOnlyDictionary<string, IReadOnlyList<string>> _detectedBy;
     private double _lastSpeedMPerS;
@@ -56,6 +59,19 @@ public sealed class FaultMeasures
         _ => [],
     };
 
+    /// <summary>
+    /// The rule a command acts for: its origin, or, for a procedure's step ("procedure NAME, step STEP"), the rule that
+    /// started the procedure, so a procedure a detecting rule started is that rule's action.
+    /// </summary>
+    private string ActingRule(string origin)
+    {
+        const string Prefix = "procedure ";
+        if (!origin.StartsWith(Prefix, StringComparison.Ordinal)) return origin;
+        var comma = origin.IndexOf(',', StringComparison.Ordinal);
+        var procedure = comma < 0 ? origin[Prefix.Length..] : origin[Prefix.Length..comma];
+        return _procedureStartedBy.GetValueOrDefault(procedure, origin);
+    }
+
     public void Observe(JournalRecord record)
     {
         var t = record.Time.SecondsSinceEpoch;
@@ -74,8 +90,11 @@ public sealed class FaultMeasures
                 var firing = Text(record, "rule");
                 foreach (var f in _faults) if (f.DetectedS is null && t >= f.StartS && f.Rules.Contains(firing)) f.DetectedS = t;
                 break;
+            case ProcedureRecords.Started:
+                _procedureStartedBy[Text(record, "procedure")] = Text(record, "by");
+                break;
             case CommandRecords.Executed:
-                var origin = Text(record, "origin");
+                var origin = ActingRule(Text(record, "origin"));
                 foreach (var f in _faults) if (f.ActionS is null && t >= f.StartS && f.Rules.Contains(origin)) f.ActionS = t;
                 break;
             case ProbeRecords.Telemetry:

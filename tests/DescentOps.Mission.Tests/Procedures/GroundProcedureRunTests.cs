@@ -21,10 +21,19 @@ public sealed class GroundProcedureRunTests
     private const double FibreSpeedMPerS = 2.04e8;
     private const double FrameIntervalS = 600;
 
-    private static async Task<CollectingSink> RunAsync()
+    private static async Task<CollectingSink> RunAsync() => (await RunWithSummaryAsync()).Sink;
+
+    private static async Task<(Running.MissionSummary Summary, CollectingSink Sink)> RunWithSummaryAsync() =>
+        await MissionHarness.RunAsync(TestScenario.BuiltIn(Name).Set("run.until", "2 d").Load());
+
+    [Fact]
+    public async Task The_procedures_first_command_is_the_first_action_on_the_fault_its_rule_detected()
     {
-        var scenario = TestScenario.BuiltIn(Name).Set("run.until", "2 d").Load();
-        return (await MissionHarness.RunAsync(scenario)).Sink;
+        var (summary, sink) = await RunWithSummaryAsync();
+        var measure = Assert.Single(summary.Faults);
+        var executed = Assert.Single(sink.OfKind(CommandRecords.Executed), r => CollectingSink.TextField(r, "origin") == "procedure free-frozen-probe, step boost-wall");
+        // The fault starts at 1 d (86,400 s); the rule that detects the freeze started the procedure, whose boost is its action.
+        Assert.Equal(executed.Time.SecondsSinceEpoch - 86_400, measure.FirstActionAfterS!.Value, 6);
     }
 
     /// <summary>The fibre leg at the depth the probe reported at <paramref name="at"/> (it pays out what it descends).</summary>
