@@ -69,7 +69,7 @@ public static class FaultEntry
             var change = ScenarioLoader.LoadChange(text, "fault");
             change.ApplyTo(scenario);
             var fault = change.AddFaults.Single();
-            if (!startsNow && fault.AtS is { } at && at < nowS)
+            if (!startsNow && fault.Start is FaultStart.AtTime { AtS: var at } && at < nowS)
             {
                 error = string.Create(CultureInfo.InvariantCulture, $"at: {at:R} s is before the simulated time now ({nowS:F0} s)");
                 return null;

@@ -239,10 +239,14 @@ public sealed class RehearsalSession
     {
         ["name"] = f.Name,
         ["kind"] = FaultCatalogue.Word(f.Kind),
-        ["starts"] = f.AtS is { } at ? string.Create(CultureInfo.InvariantCulture, $"at {at / 86400:0.###} d")
-            : f.AtDepthM is { } d ? string.Create(CultureInfo.InvariantCulture, $"at {d:0.#} m")
-            : f.When is { } when ? "when " + when
-            : string.Create(CultureInfo.InvariantCulture, $"at random, every {f.MeanIntervalS / 86400:0.###} d on average"),
+        ["starts"] = f.Start switch
+        {
+            FaultStart.AtTime time => string.Create(CultureInfo.InvariantCulture, $"at {time.AtS / 86400:0.###} d"),
+            FaultStart.AtDepth depth => string.Create(CultureInfo.InvariantCulture, $"at {depth.DepthM:0.#} m"),
+            FaultStart.OnCondition condition => "when " + condition.When,
+            FaultStart.AtRandom random => string.Create(CultureInfo.InvariantCulture, $"at random, every {random.MeanIntervalS / 86400:0.###} d on average"),
+            _ => throw new System.Diagnostics.UnreachableException($"Fault start {f.Start.GetType().Name} has no wording."),
+        },
         ["duration_s"] = f.DurationS,
     };
 

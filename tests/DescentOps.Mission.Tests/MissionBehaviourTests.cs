@@ -1,3 +1,4 @@
+using DescentOps.Scenarios.Model;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Probe;
 using DescentOps.Mission.Station;
@@ -60,10 +61,12 @@ public sealed class MissionBehaviourTests
         // v(z), so the dipped probe stays behind by the time the nominal one took over that distance,
         // D·(1 − v_dip/v), to first order (v barely changes over the metres lost).
         var dip = dipped.Faults[0];
+        var dipAtS = Assert.IsType<FaultStart.AtTime>(dip.Start).AtS;
+        var remaining = Assert.IsType<FaultEffect.PowerDip>(dip.Effect).RemainingFraction;
         var model = new ProbeComponent(dipped).Descent;
-        var depthAtDip = CollectingSink.Field(dippedSink.OfKind("probe.telemetry").Last(r => r.Time.SecondsSinceEpoch <= dip.AtS), "depth_m");
+        var depthAtDip = CollectingSink.Field(dippedSink.OfKind("probe.telemetry").Last(r => r.Time.SecondsSinceEpoch <= dipAtS), "depth_m");
         var v = model.Rate(depthAtDip, dipped.Probe.HeadPowerW, dipped.Probe.WallPowerW).VelocityMPerS;
-        var vDip = model.Rate(depthAtDip, dipped.Probe.HeadPowerW * dip.RemainingFraction, dipped.Probe.WallPowerW * dip.RemainingFraction).VelocityMPerS;
+        var vDip = model.Rate(depthAtDip, dipped.Probe.HeadPowerW * remaining, dipped.Probe.WallPowerW * remaining).VelocityMPerS;
         var expectedDelay = dip.DurationS!.Value * (1 - (vDip / v));
         Assert.Single(dippedSink.OfKind("fault.injected"));
 
@@ -84,7 +87,7 @@ public sealed class MissionBehaviourTests
         // Computed: the freeze-in instant is the stop plus the Stefan freeze time the probe reported, to the tick.
         Assert.Equal(refreezing.Time.SecondsSinceEpoch + CollectingSink.Field(refreezing, "freeze_time_s"), frozen.Time.SecondsSinceEpoch, 1e-5);
         var meltingFree = sink.OfKind("probe.melting_free").Single();
-        Assert.Equal(scenario.Faults[0].AtS!.Value + scenario.Faults[0].DurationS!.Value, meltingFree.Time.SecondsSinceEpoch, 1e-6);
+        Assert.Equal(Assert.IsType<FaultStart.AtTime>(scenario.Faults[0].Start).AtS + scenario.Faults[0].DurationS!.Value, meltingFree.Time.SecondsSinceEpoch, 1e-6);
         var resumed = sink.OfKind("probe.regime").Single(r => r.Fields.Any(f => f.Name == "from" && f.Text == "MeltingFree"));
         Assert.Equal(meltingFree.Time.SecondsSinceEpoch + CollectingSink.Field(meltingFree, "time_s"), resumed.Time.SecondsSinceEpoch, 1e-5);
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);

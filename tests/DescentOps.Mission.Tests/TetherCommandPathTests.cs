@@ -42,7 +42,7 @@ public sealed class TetherCommandPathTests
         (double AtS, ComponentId To, object Message)[] script =
         [
             (600, MissionIds.Tether, new TelemetryFrame(1, SimTime.FromSecondsSinceEpoch(600), "Melting", [], 50.0, 0)),
-            (1000, MissionIds.Tether, new FaultStarted(new FaultModel("cut", FaultKind.TetherBreak, 1000, null, null, 0))),
+            (1000, MissionIds.Tether, new FaultStarted(new FaultModel("cut", new FaultStart.AtTime(1000), new FaultEffect.TetherBreak(), null))),
             (1200, MissionIds.Tether, new TelemetryFrame(2, SimTime.FromSecondsSinceEpoch(1200), "Melting", [], 200.0, 0)),
             (1300, MissionIds.Tether, Command),
             (1500, MissionIds.Tether, new DropRelay(100.0, "test")),

@@ -40,11 +40,11 @@ public sealed class TetherLedgerPropertyTests
             var breakAtS = random.NextDouble() * Frames * FrameS * 0.8;
             var faults = new List<(double AtS, object Message)>
             {
-                (breakAtS, new FaultStarted(Fault("cut", random.Next(2) == 0 ? FaultKind.TetherBreak : FaultKind.SpoolJam, null))),
+                (breakAtS, new FaultStarted(Fault("cut", random.Next(2) == 0 ? new FaultEffect.TetherBreak() : new FaultEffect.SpoolJam()))),
             };
             for (var k = random.Next(4); k > 0; k--)
             {
-                var fault = Fault($"quiet-{k}", FaultKind.RelayFailure, 1 + random.Next(Math.Max(carried, 1)));
+                var fault = Fault($"quiet-{k}", new FaultEffect.RelayFailure(1 + random.Next(Math.Max(carried, 1))));
                 var start = random.NextDouble() * Frames * FrameS;
                 faults.Add((start, new FaultStarted(fault)));
                 faults.Add((start + (random.NextDouble() * 86400 * 3), new FaultCleared(fault)));
@@ -59,7 +59,7 @@ public sealed class TetherLedgerPropertyTests
             var sink = new CollectingSink();
             var station = new StationStandIn();
             var endS = (Frames + 10) * FrameS;
-            faults.Add((endS, new FaultStarted(Fault("ledger-check", FaultKind.RelayFailure, 1))));
+            faults.Add((endS, new FaultStarted(Fault("ledger-check", new FaultEffect.RelayFailure(1)))));
             var setup = new KernelSetup([new TetherComponent(scenario), new ProbeStandIn(speed, faults), station], n, SimTime.FromSecondsSinceEpoch(endS + 1), sink);
             SequentialKernel.Run(setup);
 
@@ -74,7 +74,7 @@ public sealed class TetherLedgerPropertyTests
         }
     }
 
-    private static FaultModel Fault(string name, FaultKind kind, int? relay) => new(name, kind, 0.0, null, null, 0.0, RelayNumber: relay);
+    private static FaultModel Fault(string name, FaultEffect effect) => new(name, new FaultStart.AtTime(0.0), effect, null);
 
     /// <summary>Descends at a constant speed, sends a frame every 10 minutes, and delivers the scripted messages to the link.</summary>
     private sealed class ProbeStandIn(double speedMPerS, IReadOnlyList<(double AtS, object Message)> script) : SimComponent<int>(MissionIds.Probe)

@@ -1,3 +1,4 @@
+using DescentOps.Scenarios.Model;
 using DescentOps.Records;
 using DescentOps.Scenarios.Loading;
 
@@ -42,9 +43,9 @@ public sealed class TetherLinkRunTests
     public void The_buffer_fill_is_a_point_a_sensor_fault_may_name()
     {
         var scenario = MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 0.5\n    at: 2 d\nrun:\n"));
-        Assert.Equal(0.5, scenario.Faults.Single(f => f.Name == "fill-stuck").ValueSi);
+        Assert.Equal(new FaultEffect.SensorStuck("probe.buffer_fill", 0.5), scenario.Faults.Single(f => f.Name == "fill-stuck").Effect);
         var percent = MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 50 %\n    at: 2 d\nrun:\n"));
-        Assert.Equal(0.5, percent.Faults.Single(f => f.Name == "fill-stuck").ValueSi!.Value, 12);
+        Assert.Equal(0.5, Assert.IsType<FaultEffect.SensorStuck>(percent.Faults.Single(f => f.Name == "fill-stuck").Effect).ValueSi!.Value, 12);
         var wrong = Assert.Throws<ScenarioException>(() => MissionHarness.Edited(("run:\n", "  - name: fill-stuck\n    kind: sensor_stuck\n    point: probe.buffer_fill\n    value: 3 m\n    at: 2 d\nrun:\n")));
         Assert.Contains("ratio", Assert.Single(wrong.Errors).Message);
     }

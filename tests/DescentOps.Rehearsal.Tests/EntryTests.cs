@@ -45,7 +45,7 @@ public sealed class EntryTests
             var fault = FaultEntry.Parse(json.ToJsonString(), withVehicle, 500, [], out var error);
             Assert.True(fault is not null, $"{word}: {error}");
             Assert.Equal(kind, fault.Kind);
-            Assert.Equal(500, fault.AtS);
+            Assert.Equal(new FaultStart.AtTime(500), fault.Start);
         }
     }
 

@@ -27,7 +27,7 @@ public sealed class DefaultScenarioTests
         Assert.Equal(1.5 * 3.6e6, scenario.Vehicles[0].BatteryEnergyJ, 3);
         Assert.Equal(0.012, scenario.Shell.OceanSalinityKgPerKg, 12);
         Assert.Equal(400 * 86400.0, scenario.Run.UntilS, 6);
-        Assert.Equal(30 * 86400.0, scenario.Faults[0].AtS!.Value, 6);
+        Assert.Equal(30 * 86400.0, Assert.IsType<FaultStart.AtTime>(scenario.Faults[0].Start).AtS, 6);
         Assert.Equal(FaultKind.PowerDip, scenario.Faults[0].Kind);
         Assert.Equal("every-field.yaml", scenario.SourceName);
     }

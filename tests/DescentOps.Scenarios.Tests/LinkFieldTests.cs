@@ -36,7 +36,7 @@ public sealed class LinkFieldTests
         Assert.Equal(2 * 3.6e6, relays.BatteryEnergyJ, 6); // 2 kWh
         Assert.Equal(0.5, relays.ForwardingDelayS);
         var fault = scenario.Faults.Single(f => f.Kind == FaultKind.RelayFailure);
-        Assert.Equal(2, fault.RelayNumber);
+        Assert.Equal(new FaultEffect.RelayFailure(2), fault.Effect);
     }
 
     [Fact]
@@ -65,7 +65,7 @@ public sealed class LinkFieldTests
         var missing = ScenarioText.DefaultWith("    relay: relay-2\n", "");
         Assert.Equal($"faults[{RelayFault}].relay", SingleError(missing).FieldPath);
 
-        Assert.Equal(2, ScenarioLoader.LoadText(ScenarioText.DefaultWith("    relay: relay-2", "    relay: 2"), File).Faults[RelayFault].RelayNumber);
+        Assert.Equal(new FaultEffect.RelayFailure(2), ScenarioLoader.LoadText(ScenarioText.DefaultWith("    relay: relay-2", "    relay: 2"), File).Faults[RelayFault].Effect);
     }
 
     [Fact]

@@ -145,6 +145,6 @@ public sealed class PowerSectionTests
         var text = ScenarioText.DefaultWith("    remaining_fraction: 0.4\n", "    remaining_fraction: 0.4\n  - name: soc-stuck\n    kind: sensor_stuck\n    at: 2 d\n    point: probe.battery_soc\n    value: 80 %\n");
         var fault = ScenarioLoader.LoadText(text, "soc.yaml").Faults[1];
         // 80 % = 0.8 by definition of the percent.
-        Assert.Equal(0.8, fault.ValueSi!.Value, 12);
+        Assert.Equal(0.8, Assert.IsType<FaultEffect.SensorStuck>(fault.Effect).ValueSi!.Value, 12);
     }
 }

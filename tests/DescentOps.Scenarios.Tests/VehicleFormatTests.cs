@@ -37,7 +37,8 @@ public sealed class VehicleFormatTests
         Assert.Equal(12e3, scenario.Acoustics!.FrequencyHz, 9);
         Assert.Equal(AbsorptionFormula.AinslieMcColm, scenario.Acoustics.Formula);
         var fault = scenario.Faults.Single(f => f.Kind == FaultKind.VehicleLoss);
-        Assert.Equal(("wisp-2", VehicleLossCause.Entrapment), (fault.Vehicle, fault.Cause));
+        var loss = Assert.IsType<FaultEffect.VehicleLoss>(fault.Effect);
+        Assert.Equal(("wisp-2", VehicleLossCause.Entrapment), (loss.Vehicle, loss.Cause));
     }
 
     [Fact]
@@ -108,7 +109,7 @@ public sealed class VehicleFormatTests
         var parent = ScenarioLoader.LoadText(ScenarioText.Default, "every-field.yaml");
         const string known = "add_faults:\n  - name: flat\n    kind: vehicle_loss\n    at: 160 d\n    vehicle: wisp-1\n    cause: battery\n";
         Assert.Contains(parent.Vehicles, v => v.Name == "wisp-1");
-        Assert.Equal("wisp-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Vehicle);
+        Assert.Equal("wisp-1", ScenarioLoader.LoadChange(known, "change.yaml").ApplyTo(parent).Faults[^1].Effect is FaultEffect.VehicleLoss { Vehicle: var v } ? v : null);
 
         var unknown = ScenarioLoader.LoadChange(known.Replace("wisp-1", "wisp-7", StringComparison.Ordinal), "change.yaml");
         var exception = Assert.Throws<ScenarioException>(() => unknown.ApplyTo(parent));

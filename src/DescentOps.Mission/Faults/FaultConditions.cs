@@ -38,12 +38,12 @@ public static class FaultConditions
         for (var i = 0; i < scenario.Faults.Count; i++)
         {
             var fault = scenario.Faults[i];
-            if (fault.When is not { } condition) continue;
+            if (fault.Start is not FaultStart.OnCondition { When: var condition } start) continue;
             // Braces would close the wrapper's condition and open rule text of the author's own (a second rule, actions).
             var brace = condition.IndexOfAny(['{', '}']);
             if (brace >= 0)
             {
-                errors.Add(new ScenarioError(Locate(scenario, fault, ConditionLine, ConditionPrefix.Length + brace + 1), $"faults[{i}].when", $"a condition holds no '{condition[brace]}': a trigger is one condition, not rule text"));
+                errors.Add(new ScenarioError(Locate(scenario, start.WhenAt, ConditionLine, ConditionPrefix.Length + brace + 1), $"faults[{i}].when", $"a condition holds no '{condition[brace]}': a trigger is one condition, not rule text"));
                 continue;
             }
 
@@ -55,7 +55,7 @@ public static class FaultConditions
             }
 
             errors.AddRange(result.Errors.Select(e => new ScenarioError(
-                Locate(scenario, fault, e.Location.Line, e.Location.Column), $"faults[{i}].when", $"{e.Code}: {e.Message}")));
+                Locate(scenario, start.WhenAt, e.Location.Line, e.Location.Column), $"faults[{i}].when", $"{e.Code}: {e.Message}")));
         }
 
         compiled = sets;
@@ -70,9 +70,8 @@ public static class FaultConditions
     /// Maps a place in the wrapper to the scenario file: on the condition's line, the column moves by where the value
     /// starts (one more for a quoted value); anything else (an unclosed brace the condition opened) is the value's start.
     /// </summary>
-    private static SourceLocation Locate(Scenario scenario, FaultModel fault, int line, int column)
+    private static SourceLocation Locate(Scenario scenario, SourceLocation at, int line, int column)
     {
-        var at = fault.WhenAt ?? new SourceLocation(scenario.SourceName, 1, 1);
         if (line != ConditionLine || column <= ConditionPrefix.Length) return at;
         var lines = scenario.SourceText.Split('\n');
         var text = at.Line - 1 < lines.Length ? lines[at.Line - 1] : "";

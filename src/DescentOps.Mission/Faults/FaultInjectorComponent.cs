@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Mission.Messages;
@@ -27,20 +28,19 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     }
 
     /// <summary>True when some fault waits for a condition, so the probe must send its true state here.</summary>
-    public static bool WatchesTrueState(Scenario scenario) => scenario.Faults.Any(f => f.When is not null);
+    public static bool WatchesTrueState(Scenario scenario) => scenario.Faults.Any(f => f.Start is FaultStart.OnCondition);
 
     public override FaultInjectorState InitialState => new(0, 0);
 
     /// <summary>The component a fault acts on; a vehicle loss strikes the vehicle it names.</summary>
-    public static ComponentId TargetOf(FaultModel fault) => fault.Kind switch
+    public static ComponentId TargetOf(FaultModel fault) => fault.Effect switch
     {
-        FaultKind.PowerDip => MissionIds.Probe,
-        FaultKind.TetherBreak or FaultKind.SpoolJam or FaultKind.RelayFailure => MissionIds.Tether,
-        FaultKind.StationFailure or FaultKind.StationUpset => MissionIds.Station,
-        FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise => MissionIds.Probe,
-        FaultKind.HeaterSegmentFailure or FaultKind.TiltKick or FaultKind.CloggedNozzle => MissionIds.Probe,
-        FaultKind.VehicleLoss => MissionIds.Vehicle(fault.Vehicle ?? throw new ArgumentException("A vehicle_loss names its vehicle.", nameof(fault))),
-        _ => throw new ArgumentOutOfRangeException(nameof(fault), fault.Kind, null),
+        FaultEffect.PowerDip or FaultEffect.HeaterSegmentFailure or FaultEffect.CloggedNozzle or FaultEffect.TiltKick => MissionIds.Probe,
+        FaultEffect.SensorFault => MissionIds.Probe,
+        FaultEffect.TetherBreak or FaultEffect.SpoolJam or FaultEffect.RelayFailure => MissionIds.Tether,
+        FaultEffect.StationFailure or FaultEffect.StationUpset => MissionIds.Station,
+        FaultEffect.VehicleLoss loss => MissionIds.Vehicle(loss.Vehicle),
+        _ => throw new UnreachableException($"Fault effect {fault.Effect.GetType().Name} has no target."),
     };
 
     public override FaultInjectorState Handle(FaultInjectorState state, object message, ComponentContext context)
@@ -50,18 +50,19 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             case RunStarted:
                 for (var i = 0; i < _faults.Count; i++)
                 {
-                    var fault = _faults[i];
-                    if (fault.AtS is { } at)
+                    switch (_faults[i].Start)
                     {
-                        context.ScheduleSelf(SimDuration.FromSeconds(at), new FaultDue(i, false), MissionPriority.Fault);
-                    }
-                    else if (fault.AtDepthM is { } depth)
-                    {
-                        context.Schedule(_ids.Probe, SimDuration.Zero, new ArmDepthTrigger(i, depth), MissionPriority.Fault);
-                    }
-                    else if (fault.IsRandom)
-                    {
-                        ScheduleRandom(i, context);
+                        case FaultStart.AtTime time:
+                            context.ScheduleSelf(SimDuration.FromSeconds(time.AtS), new FaultDue(i, false), MissionPriority.Fault);
+                            break;
+                        case FaultStart.AtDepth depth:
+                            context.Schedule(_ids.Probe, SimDuration.Zero, new ArmDepthTrigger(i, depth.DepthM), MissionPriority.Fault);
+                            break;
+                        case FaultStart.AtRandom random:
+                            ScheduleRandom(i, random, context);
+                            break;
+                        case FaultStart.OnCondition:
+                            break; // watched through the true-state frames (_conditions)
                     }
                 }
 
@@ -92,13 +93,13 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     /// order, so a fault added at the end of the list (a branch) leaves the earlier faults' draws alone. Occurrence k+1
     /// begins an exponential interval after occurrence k ended, and never in the same instant.
     /// </summary>
-    private void ScheduleRandom(int index, ComponentContext context)
+    private void ScheduleRandom(int index, FaultStart.AtRandom random, ComponentContext context)
     {
         var fault = _faults[index];
-        var rate = 1.0 / fault.MeanIntervalS!.Value;
-        var start = SimDuration.FromSeconds(fault.NotBeforeS) + SimDuration.FromSeconds(context.Random.NextExponential(rate));
+        var rate = 1.0 / random.MeanIntervalS;
+        var start = SimDuration.FromSeconds(random.NotBeforeS) + SimDuration.FromSeconds(context.Random.NextExponential(rate));
         var starts = new List<SimDuration> { start };
-        for (var k = 1; k < fault.Occurrences; k++)
+        for (var k = 1; k < random.Occurrences; k++)
         {
             var end = start + SimDuration.FromSeconds(fault.DurationS!.Value);
             var gap = SimDuration.FromSeconds(context.Random.NextExponential(rate));
@@ -109,7 +110,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
         foreach (var at in starts) context.ScheduleSelf(at, new FaultDue(index, false), MissionPriority.Fault);
         context.Record(FaultRecords.Drawn, Severity.Info,
             RecordField.Of("fault", fault.Name),
-            RecordField.Of("mean_interval_s", fault.MeanIntervalS.Value),
+            RecordField.Of("mean_interval_s", random.MeanIntervalS),
             RecordField.Of("starts_s", string.Join(" ", starts.Select(t => t.TotalSeconds.ToString("R", System.Globalization.CultureInfo.InvariantCulture)))));
     }
 
@@ -121,7 +122,7 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             if (step(condition) is not { } firing) continue;
             context.Record(FaultRecords.Triggered, Severity.Warning,
                 RecordField.Of("fault", _faults[condition.FaultIndex].Name),
-                RecordField.Of("condition", _faults[condition.FaultIndex].When ?? ""),
+                RecordField.Of("condition", _faults[condition.FaultIndex].Start is FaultStart.OnCondition on ? on.When : ""),
                 RecordField.Of("evidence", string.Join("; ", firing.Evidence.Select(e => string.Create(System.Globalization.CultureInfo.InvariantCulture, $"{e.Point}={e.Value}@{e.Time.SecondsSinceEpoch:R}s")))));
             state = Inject(state, condition.FaultIndex, context);
         }
@@ -146,13 +147,13 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
     {
         var index = _faults.Count + state.Added.Count;
         state = state with { Added = state.Added.Add(fault) };
-        if (fault.AtS is { } at && at > context.Now.SecondsSinceEpoch)
+        if (fault.Start is FaultStart.AtTime { AtS: var at } && at > context.Now.SecondsSinceEpoch)
         {
             context.ScheduleSelf(SimTime.FromSecondsSinceEpoch(at) - context.Now, new FaultDue(index, false), MissionPriority.Fault);
             return state;
         }
 
-        if (fault.AtDepthM is { } depth)
+        if (fault.Start is FaultStart.AtDepth { DepthM: var depth })
         {
             context.Schedule(_ids.Probe, SimDuration.Zero, new ArmDepthTrigger(index, depth), MissionPriority.Fault);
             return state;
@@ -186,8 +187,8 @@ public sealed class FaultInjectorComponent : SimComponent<FaultInjectorState>
             RecordField.Of("fault", fault.Name),
             RecordField.Of("kind", fault.Kind.ToString()),
             RecordField.Of("target", _ids.Of(TargetOf(fault)).Name),
-            RecordField.Of("point", fault.Point ?? ""),
-            RecordField.Of("relay", fault.RelayNumber is { } relay ? $"relay-{relay}" : ""),
+            RecordField.Of("point", fault.Effect is FaultEffect.SensorFault sensor ? sensor.Point : ""),
+            RecordField.Of("relay", fault.Effect is FaultEffect.RelayFailure relay ? $"relay-{relay.RelayNumber}" : ""),
             RecordField.Of("duration_s", fault.DurationS ?? double.PositiveInfinity));
         context.Schedule(_ids.Of(TargetOf(fault)), SimDuration.Zero, new FaultStarted(fault), MissionPriority.Fault);
         if (fault.DurationS is { } duration)

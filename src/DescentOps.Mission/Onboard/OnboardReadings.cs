@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using DescentOps.Mission.Probe;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios.Model;
@@ -29,21 +30,22 @@ public static class OnboardReadings
         ActiveSensorFault? last = null;
         foreach (var fault in state.SensorFaults)
         {
-            if (fault.Fault.Point == point) last = fault;
+            if (fault.Effect.Point == point) last = fault;
         }
 
         return last;
     }
 
     /// <summary>The reported value without noise; null when the sensor has dropped out.</summary>
-    public static double? Reported(ActiveSensorFault? fault, double truth) => fault?.Fault.Kind switch
+    public static double? Reported(ActiveSensorFault? fault, double truth) => fault?.Effect switch
     {
         null => truth,
-        FaultKind.SensorStuck => fault.StuckAtSi!.Value,
-        FaultKind.SensorBias => truth + fault.Fault.ValueSi!.Value,
-        FaultKind.SensorDropout => null,
-        _ => truth,
+        FaultEffect.SensorStuck => fault.StuckAtSi!.Value,
+        FaultEffect.SensorBias bias => truth + bias.OffsetSi,
+        FaultEffect.SensorDropout => null,
+        FaultEffect.SensorNoise => truth, // the noise is drawn by the caller (IsNoisy)
+        _ => throw new UnreachableException($"Sensor fault {fault.Effect.GetType().Name} has no reading."),
     };
 
-    public static bool IsNoisy(ActiveSensorFault? fault) => fault?.Fault.Kind == FaultKind.SensorNoise;
+    public static bool IsNoisy(ActiveSensorFault? fault) => fault?.Effect is FaultEffect.SensorNoise;
 }

@@ -77,10 +77,10 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case ProbeThermalDue due:
                 return Settle(ProbeRegimeMachine.Thermal(Advance(state with { PendingThermal = null }, context), due, context), context);
 
-            case FaultStarted { Fault.Kind: FaultKind.PowerDip } dip:
-                return Settle(WithDips(Advance(state, context), state.ActiveDips.SetItem(dip.Fault.Name, dip.Fault.RemainingFraction)), context);
+            case FaultStarted { Fault.Effect: FaultEffect.PowerDip dip } started:
+                return Settle(WithDips(Advance(state, context), state.ActiveDips.SetItem(started.Fault.Name, dip.RemainingFraction)), context);
 
-            case FaultCleared { Fault.Kind: FaultKind.PowerDip } cleared:
+            case FaultCleared { Fault.Effect: FaultEffect.PowerDip } cleared:
                 return Settle(WithDips(Advance(state, context), state.ActiveDips.Remove(cleared.Fault.Name)), context);
 
             case DescentCleared cleared:
@@ -102,23 +102,23 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
                 var demands = dock.PowerW > 0 ? state.DockDemandsW.SetItem(dock.Vehicle, dock.PowerW) : state.DockDemandsW.Remove(dock.Vehicle);
                 return Settle(Advance(state, context) with { DockDemandsW = demands }, context);
 
-            case FaultStarted { Fault.Kind: FaultKind.HeaterSegmentFailure } segment:
-                return Settle(Advance(state, context) with { SegmentLossFraction = 1 - segment.Fault.RemainingFraction }, context);
+            case FaultStarted { Fault.Effect: FaultEffect.HeaterSegmentFailure segment }:
+                return Settle(Advance(state, context) with { SegmentLossFraction = 1 - segment.RemainingFraction }, context);
 
-            case FaultCleared { Fault.Kind: FaultKind.HeaterSegmentFailure }:
+            case FaultCleared { Fault.Effect: FaultEffect.HeaterSegmentFailure }:
                 return Settle(Advance(state, context) with { SegmentLossFraction = 0.0 }, context);
 
-            case FaultStarted { Fault.Kind: FaultKind.CloggedNozzle } clog:
-                return Settle(ProbeJets.Clog(d, Advance(state, context), clog.Fault.RemainingFraction, clog.Fault.Name, context), context);
+            case FaultStarted { Fault.Effect: FaultEffect.CloggedNozzle clog } clogged:
+                return Settle(ProbeJets.Clog(d, Advance(state, context), clog.RemainingFraction, clogged.Fault.Name, context), context);
 
-            case FaultCleared { Fault.Kind: FaultKind.CloggedNozzle } cleared:
+            case FaultCleared { Fault.Effect: FaultEffect.CloggedNozzle } cleared:
                 return Settle(ProbeJets.Clog(d, Advance(state, context), 1.0, cleared.Fault.Name, context), context);
 
-            case FaultStarted { Fault.Kind: FaultKind.TiltKick } kick:
+            case FaultStarted { Fault.Effect: FaultEffect.TiltKick kick }:
                 var kicked = Advance(state, context);
-                return Replan(ProbeAttitude.CheckTilt(d, kicked with { TiltRad = kicked.TiltRad + kick.Fault.AngleRad!.Value }, context), context);
+                return Replan(ProbeAttitude.CheckTilt(d, kicked with { TiltRad = kicked.TiltRad + kick.AngleRad }, context), context);
 
-            case FaultCleared { Fault.Kind: FaultKind.TiltKick }:
+            case FaultCleared { Fault.Effect: FaultEffect.TiltKick }:
                 return state;
 
             case Telecommand command when command.Command.Target == MissionIds.Autonomy:
@@ -137,11 +137,11 @@ public sealed class ProbeComponent : SimComponent<ProbeState>
             case ArmDepthTrigger arm:
                 return Replan(state with { DepthTriggers = state.DepthTriggers.Add(new ArmedDepthTrigger(arm.FaultIndex, arm.DepthM)) }, context);
 
-            case FaultStarted { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise } sensor:
-                return ProbeSensors.StartFault(d, Advance(state, context), sensor.Fault, context);
+            case FaultStarted { Fault.Effect: FaultEffect.SensorFault sensor } started:
+                return ProbeSensors.StartFault(d, Advance(state, context), started.Fault.Name, sensor, context);
 
-            case FaultCleared { Fault.Kind: FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise } sensor:
-                return ProbeSensors.EndFault(state, sensor.Fault, context);
+            case FaultCleared { Fault.Effect: FaultEffect.SensorFault sensor } cleared:
+                return ProbeSensors.EndFault(state, cleared.Fault.Name, sensor, context);
 
             default:
                 throw new InvalidOperationException($"The probe cannot handle {message.GetType().Name}.");

@@ -1,3 +1,4 @@
+using System.Diagnostics;
 using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Engine.Randomness;
@@ -44,23 +45,25 @@ public static class ProbeSensors
         var reported = new List<(string Point, double Value)>(truth.Count);
         foreach (var (point, value) in truth)
         {
-            var fault = faults.LastOrDefault(f => f.Fault.Point == point);
-            switch (fault?.Fault.Kind)
+            var fault = faults.LastOrDefault(f => f.Effect.Point == point);
+            switch (fault?.Effect)
             {
                 case null:
                     reported.Add((point, value));
                     break;
-                case FaultKind.SensorStuck:
+                case FaultEffect.SensorStuck:
                     reported.Add((point, fault.StuckAtSi!.Value));
                     break;
-                case FaultKind.SensorBias:
-                    reported.Add((point, value + fault.Fault.ValueSi!.Value));
+                case FaultEffect.SensorBias bias:
+                    reported.Add((point, value + bias.OffsetSi));
                     break;
-                case FaultKind.SensorNoise:
-                    reported.Add((point, value + random.NextNormal(0.0, fault.Fault.ValueSi!.Value)));
+                case FaultEffect.SensorNoise noise:
+                    reported.Add((point, value + random.NextNormal(0.0, noise.SigmaSi)));
                     break;
-                case FaultKind.SensorDropout:
+                case FaultEffect.SensorDropout:
                     break;
+                default:
+                    throw new UnreachableException($"Sensor fault {fault.Effect.GetType().Name} has no reading.");
             }
         }
 
@@ -68,21 +71,21 @@ public static class ProbeSensors
     }
 
     /// <summary>A sensor fault begins: a stuck sensor repeats its given value, or the true value at this instant.</summary>
-    public static ProbeState StartFault(ProbeDesign design, ProbeState state, FaultModel fault, ComponentContext context)
+    public static ProbeState StartFault(ProbeDesign design, ProbeState state, string name, FaultEffect.SensorFault fault, ComponentContext context)
     {
         var truth = TrueReadings(design, state).First(r => r.Point == fault.Point).Value;
-        var stuckAt = fault.Kind == FaultKind.SensorStuck ? fault.ValueSi ?? truth : (double?)null;
+        var stuckAt = fault is FaultEffect.SensorStuck stuck ? stuck.ValueSi ?? truth : (double?)null;
         context.Record(ProbeRecords.SensorFault, Severity.Warning,
-            RecordField.Of("fault", fault.Name),
-            RecordField.Of("point", fault.Point ?? ""),
+            RecordField.Of("fault", name),
+            RecordField.Of("point", fault.Point),
             RecordField.Of("mode", fault.Kind.ToString()),
             RecordField.Of("true_value", truth));
-        return state with { SensorFaults = state.SensorFaults.Add(new ActiveSensorFault(fault, stuckAt)) };
+        return state with { SensorFaults = state.SensorFaults.Add(new ActiveSensorFault(name, fault, stuckAt)) };
     }
 
-    public static ProbeState EndFault(ProbeState state, FaultModel fault, ComponentContext context)
+    public static ProbeState EndFault(ProbeState state, string name, FaultEffect.SensorFault fault, ComponentContext context)
     {
-        context.Record(ProbeRecords.SensorRestored, Severity.Notice, RecordField.Of("fault", fault.Name), RecordField.Of("point", fault.Point ?? ""));
-        return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Fault.Name == fault.Name) };
+        context.Record(ProbeRecords.SensorRestored, Severity.Notice, RecordField.Of("fault", name), RecordField.Of("point", fault.Point));
+        return state with { SensorFaults = state.SensorFaults.RemoveAll(f => f.Name == name) };
     }
 }

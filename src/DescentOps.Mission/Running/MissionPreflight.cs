@@ -90,17 +90,17 @@ public static class MissionPreflight
         for (var i = 0; i < scenario.Faults.Count; i++)
         {
             var fault = scenario.Faults[i];
-            if (fault.AtS is { } at && at >= scenario.Run.UntilS)
+            if (fault.Start is FaultStart.AtTime { AtS: var at } && at >= scenario.Run.UntilS)
             {
                 Warn($"faults[{i}].at", string.Create(c, $"fault '{fault.Name}' starts at {at / 86400:G4} d, at or after the run's time limit ({scenario.Run.UntilS / 86400:G4} d): it never happens"));
             }
 
-            if (fault.IsRandom && fault.NotBeforeS >= scenario.Run.UntilS)
+            if (fault.Start is FaultStart.AtRandom { NotBeforeS: var notBefore } && notBefore >= scenario.Run.UntilS)
             {
-                Warn($"faults[{i}].not_before", string.Create(c, $"fault '{fault.Name}' cannot start before {fault.NotBeforeS / 86400:G4} d, at or after the run's time limit: it never happens"));
+                Warn($"faults[{i}].not_before", string.Create(c, $"fault '{fault.Name}' cannot start before {notBefore / 86400:G4} d, at or after the run's time limit: it never happens"));
             }
 
-            if (fault.AtDepthM is { } depth && depth >= scenario.Shell.ThicknessM)
+            if (fault.Start is FaultStart.AtDepth { DepthM: var depth } && depth >= scenario.Shell.ThicknessM)
             {
                 Warn($"faults[{i}].at_depth", string.Create(c, $"fault '{fault.Name}' starts at {depth:G4} m, at or below the shell's {scenario.Shell.ThicknessM:G4} m: it never happens"));
             }

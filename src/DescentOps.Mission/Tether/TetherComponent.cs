@@ -61,10 +61,10 @@ public sealed class TetherComponent : SimComponent<TetherState>
         Telecommand command => Report(CarryDown(state, command, context), context),
         DropRelay drop => Report(Route(Drop(state, drop.DepthM, drop.Origin, context), null, context), context),
         RelayBatteryDue due => Report(Route(BatteryFlat(state, due.Number, context), null, context), context),
-        FaultStarted { Fault.Kind: FaultKind.TetherBreak } fault => Report(Route(Break(state, $"fault '{fault.Fault.Name}'", context), null, context), context),
-        FaultStarted { Fault.Kind: FaultKind.SpoolJam } fault => Report(Route(Break(state, $"spool jam (fault '{fault.Fault.Name}')", context), null, context), context),
-        FaultStarted { Fault.Kind: FaultKind.RelayFailure } fault => Report(Route(RelayFault(state, fault.Fault, true, context), null, context), context),
-        FaultCleared { Fault.Kind: FaultKind.RelayFailure } fault => Report(Route(RelayFault(state, fault.Fault, false, context), null, context), context),
+        FaultStarted { Fault.Effect: FaultEffect.TetherBreak } fault => Report(Route(Break(state, $"fault '{fault.Fault.Name}'", context), null, context), context),
+        FaultStarted { Fault.Effect: FaultEffect.SpoolJam } fault => Report(Route(Break(state, $"spool jam (fault '{fault.Fault.Name}')", context), null, context), context),
+        FaultStarted { Fault.Effect: FaultEffect.RelayFailure relay } fault => Report(Route(RelayFault(state, fault.Fault.Name, relay.RelayNumber, true, context), null, context), context),
+        FaultCleared { Fault.Effect: FaultEffect.RelayFailure relay } fault => Report(Route(RelayFault(state, fault.Fault.Name, relay.RelayNumber, false, context), null, context), context),
         _ => throw new InvalidOperationException($"The tether cannot handle {message.GetType().Name}."),
     };
 
@@ -179,12 +179,11 @@ public sealed class TetherComponent : SimComponent<TetherState>
         return next;
     }
 
-    private TetherState RelayFault(TetherState state, FaultModel fault, bool starts, ComponentContext context)
+    private static TetherState RelayFault(TetherState state, string fault, int number, bool starts, ComponentContext context)
     {
-        var number = fault.RelayNumber!.Value;
         context.Record(starts ? RelayRecords.Failed : RelayRecords.Recovered, starts ? Severity.Alarm : Severity.Notice, WithLedger(state,
             RecordField.Of("relay", $"relay-{number}"),
-            RecordField.Of("fault", fault.Name),
+            RecordField.Of("fault", fault),
             RecordField.Of("dropped", state.Relays.Any(r => r.Number == number))));
         return state with { FailedRelays = starts ? state.FailedRelays.Add(number) : state.FailedRelays.Remove(number) };
     }

@@ -69,10 +69,10 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
                 return OnDockPower(state, power, context);
             case VehicleMessageDue:
                 return MessageDue(state with { PendingTick = null }, context);
-            case FaultStarted { Fault.Kind: FaultKind.VehicleLoss } fault:
-                return FaultBegins(state, fault.Fault, context);
-            case FaultCleared { Fault.Kind: FaultKind.VehicleLoss } fault:
-                return FaultEnds(state, fault.Fault, context);
+            case FaultStarted { Fault.Effect: FaultEffect.VehicleLoss loss } fault:
+                return FaultBegins(state, fault.Fault, loss, context);
+            case FaultCleared { Fault.Effect: FaultEffect.VehicleLoss loss } fault:
+                return FaultEnds(state, fault.Fault, loss, context);
             case Telecommand { Command.Command: RecallCommand } command:
                 return Recall(state, command, context);
             default:
@@ -512,7 +512,7 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
 
     // ---- faults and commands ---------------------------------------------------------------------------------------
 
-    private VehicleState FaultBegins(VehicleState state, FaultModel fault, ComponentContext context)
+    private VehicleState FaultBegins(VehicleState state, FaultModel fault, FaultEffect.VehicleLoss loss, ComponentContext context)
     {
         if (state.Finished || !state.Released)
         {
@@ -520,12 +520,12 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
             return state;
         }
 
-        switch (fault.Cause)
+        switch (loss.Cause)
         {
             case VehicleLossCause.Battery:
                 var wasHeld = state.Leg is { Held: true };
                 state = Interrupt(state, context);
-                var left = state.BatteryJ * fault.RemainingFraction;
+                var left = state.BatteryJ * loss.RemainingFraction;
                 context.Record(VehicleRecords.BatteryFailed, Severity.Alarm, RecordField.Of("fault", fault.Name), RecordField.Of("battery_before_j", state.BatteryJ), RecordField.Of("battery_j", left));
                 state = state with { BatteryJ = left, EnergyUsedJ = state.EnergyUsedJ + (state.BatteryJ - left) };
                 if (left <= 0) return Lost(state, "flat battery", context);
@@ -544,10 +544,10 @@ public sealed class VehicleComponent : SimComponent<VehicleState>
         }
     }
 
-    private VehicleState FaultEnds(VehicleState state, FaultModel fault, ComponentContext context)
+    private VehicleState FaultEnds(VehicleState state, FaultModel fault, FaultEffect.VehicleLoss loss, ComponentContext context)
     {
         if (state.Finished || !state.Released) return state;
-        switch (fault.Cause)
+        switch (loss.Cause)
         {
             case VehicleLossCause.Entrapment when state.Leg is { Held: true }:
                 state = Interrupt(state, context);

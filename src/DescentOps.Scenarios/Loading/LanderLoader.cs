@@ -86,7 +86,8 @@ internal static partial class LanderLoader
             var scenario = ScenarioLoader.LoadView(view, text, sourceName, viewErrors, viewRead);
             errors.AddRange(viewErrors.Select(e => e with { FieldPath = Translate(e.FieldPath, i, own, faultIndices) }));
             foreach (var path in viewRead) readPaths?.Add(Translate(path, -1, own, []));
-            if (scenario is null) continue;
+            // A view with errors fails the whole load below; a fault it refused was not built, so its faults are not counted.
+            if (scenario is null || viewErrors.Count > 0) continue;
             var lander = landers[i];
             var (latitude, longitude) = (lander.Quantity("latitude"), lander.Quantity("longitude"));
             var station = scenario.Station.Link is { } link

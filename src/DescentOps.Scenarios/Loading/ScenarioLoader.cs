@@ -78,7 +78,7 @@ public static class ScenarioLoader
         var root = Bind(text, sourceName, ScenarioFormat.Root, errors, readPaths, out var locations, out var rootNode);
         if (root.List("landers").Count > 0) return LanderLoader.Load(rootNode, root, locations, text, sourceName, errors, readPaths);
         LanderLoader.CheckSingle(root, sourceName, errors);
-        var scenario = DescentOps.Scenarios.Campaign.CampaignSections.Read(WithTimedParts(Build(root, sourceName, text), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) }, root, text, errors);
+        var scenario = DescentOps.Scenarios.Campaign.CampaignSections.Read(WithTimedParts(Build(root, sourceName, text, errors), root) with { FieldLocations = locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) }, root, text, errors);
         CheckConsistency(scenario, root, errors);
         return errors.Count > 0 ? throw new ScenarioException(errors) : scenario;
     }
@@ -91,12 +91,12 @@ public static class ScenarioLoader
     {
         var binder = new YamlBinder(sourceName, errors, readPaths);
         if (binder.BindSection(node, ScenarioFormat.Root, "") is not { } root || errors.Count > 0) return null;
-        var scenario = WithTimedParts(Build(root, sourceName, text), root) with { FieldLocations = binder.Locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
+        var scenario = WithTimedParts(Build(root, sourceName, text, errors), root) with { FieldLocations = binder.Locations, OnboardSampling = OnboardSamplingReader.Read(root.OptionalSection("onboard_sampling"), errors) };
         CheckConsistency(scenario, root, errors);
         return scenario;
     }
 
-    private static Scenario Build(BoundSection root, string sourceName, string text)
+    private static Scenario Build(BoundSection root, string sourceName, string text, List<ScenarioError> errors)
     {
         var body = root.Section("body");
         var shell = root.Section("shell");
@@ -137,7 +137,7 @@ public static class ScenarioLoader
             new TetherModel(tether.Quantity("length"), tether.Quantity("signal_speed"), Optics(tether), (int)(tether.OptionalInteger("buffer_frames") ?? 0)),
             BuildStation(station),
             [.. root.List("vehicles").Select(BuildVehicle)],
-            [.. root.List("faults").Select(BuildFault)],
+            [.. root.List("faults").Select((f, i) => FaultReader.Read(f, $"faults[{i}]", errors)).OfType<FaultModel>()],
             Rules(root, text),
             new RunModel(run.Integer("seed"), run.Quantity("until")),
             sourceName,
@@ -382,8 +382,7 @@ public static class ScenarioLoader
         var errors = new List<ScenarioError>();
         var root = Bind(text, sourceName, ChangeFormat.Root, errors, null, out var locations, out _);
         var added = root.List("add_faults");
-        var faults = added.Select(BuildFault).ToList();
-        for (var i = 0; i < faults.Count; i++) CheckFault(faults[i], added[i], $"add_faults[{i}]", errors);
+        var faults = added.Select((f, i) => FaultReader.Read(f, $"add_faults[{i}]", errors)).OfType<FaultModel>().ToList();
         if (errors.Count > 0) throw new ScenarioException(errors);
         var rules = root.OptionalText("rules") is null ? null : Rules(root, text);
         return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules)
@@ -451,51 +450,6 @@ public static class ScenarioLoader
         return root;
     }
 
-    internal static FaultModel BuildFault(BoundSection f) => new(
-        f.Text("name"),
-        ParseFaultKind(f.Text("kind")),
-        f.OptionalQuantity("at"),
-        f.OptionalQuantity("at_depth"),
-        f.OptionalQuantity("duration"),
-        f.OptionalNumber("remaining_fraction") ?? 0.0,
-        f.OptionalText("point"),
-        SensorValue(f),
-        f.OptionalQuantity("angle"),
-        f.OptionalText("vehicle"),
-        f.OptionalText("cause") switch
-        {
-            "battery" => VehicleLossCause.Battery,
-            "entrapment" => VehicleLossCause.Entrapment,
-            "out_of_range" => VehicleLossCause.OutOfRange,
-            _ => null,
-        },
-        f.OptionalText("when"),
-        f.OptionalText("when") is null ? null : f.LocationOf("when"),
-        f.OptionalQuantity("mean_interval"),
-        f.OptionalQuantity("not_before") ?? 0.0,
-        (int)(f.OptionalInteger("occurrences") ?? 1),
-        RelayNumber(f))
-    {
-        DetectedBy = DescentOps.Scenarios.Campaign.CampaignSections.RuleNames(f.OptionalText("detected_by")),
-    };
-
-    /// <summary>"relay-2" or "2" is relay number 2; 0 marks a name that does not parse (reported by <see cref="CheckFault"/>).</summary>
-    private static int? RelayNumber(BoundSection fault)
-    {
-        if (fault.OptionalText("relay") is not { } text) return null;
-        var digits = text.StartsWith("relay-", StringComparison.Ordinal) ? text["relay-".Length..] : text;
-        return int.TryParse(digits, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var n) && n >= 1 ? n : 0;
-    }
-
-    /// <summary>A sensor fault's value in SI, in the unit dimension of its point; NaN marks a value that does not parse.</summary>
-    private static double? SensorValue(BoundSection fault)
-    {
-        if (fault.OptionalText("value") is not { } text) return null;
-        var kind = fault.OptionalText("point") is { } point ? ProbeTelemetryPoints.KindOf(point) : null;
-        if (kind is null) return double.NaN;
-        return QuantityParser.TryParseSi(kind.Value, text, out var si, out _) ? si : double.NaN;
-    }
-
     /// <summary>The rules block with its place in the file: a block scalar's text starts on the line after 'rules: |'.</summary>
     private static RulesSource Rules(BoundSection root, string text)
     {
@@ -536,14 +490,13 @@ public static class ScenarioLoader
         }
 
         var faults = root.List("faults");
-        for (var i = 0; i < scenario.Faults.Count; i++)
+        for (var i = 0; i < faults.Count; i++)
         {
-            CheckFault(scenario.Faults[i], faults[i], $"faults[{i}]", errors);
-            if (scenario.Faults[i].Vehicle is { } name && scenario.Vehicles.All(v => v.Name != name))
+            if (faults[i].OptionalText("vehicle") is { } name && scenario.Vehicles.All(v => v.Name != name))
             {
                 errors.Add(new ScenarioError(faults[i].LocationOf("vehicle"), $"faults[{i}].vehicle", $"there is no vehicle named '{name}'"));
             }
-            if (scenario.Faults[i].RelayNumber is > 0 and var n && n > (scenario.Relays?.Carried ?? 0))
+            if (FaultReader.RelayNumber(faults[i]) is > 0 and var n && n > (scenario.Relays?.Carried ?? 0))
             {
                 errors.Add(new ScenarioError(faults[i].LocationOf("relay"), $"faults[{i}].relay", $"the probe carries {scenario.Relays?.Carried ?? 0} relays, so there is no relay {n}"));
             }
@@ -577,9 +530,9 @@ public static class ScenarioLoader
     private static void CheckJets(Scenario scenario, BoundSection root, List<ScenarioError> errors)
     {
         var faults = root.List("faults");
-        for (var i = 0; i < scenario.Faults.Count; i++)
+        for (var i = 0; i < faults.Count; i++)
         {
-            if (scenario.Faults[i].Kind == FaultKind.CloggedNozzle && scenario.Probe.Jets is null)
+            if (FaultReader.KindOf(faults[i]) == FaultKind.CloggedNozzle && scenario.Probe.Jets is null)
             {
                 errors.Add(new ScenarioError(faults[i].LocationOf("kind"), $"faults[{i}].kind", "a clogged_nozzle needs a probe with jets (probe.jets)"));
             }
@@ -781,126 +734,6 @@ public static class ScenarioLoader
             errors.Add(new ScenarioError(section.Section("dwell").Location, "station.dwell", "a surface dwell sterilises by dose: give station.radiation with its dose_rate"));
         }
     }
-
-    /// <summary>The cross-field rules of one fault, shared by scenarios and branch change files.</summary>
-    internal static void CheckFault(FaultModel fault, BoundSection section, string path, List<ScenarioError> errors)
-    {
-        if (fault.Kind == FaultKind.PowerDip && fault.DurationS is null)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a power_dip needs a duration"));
-        }
-
-        if (fault.Kind is FaultKind.TetherBreak or FaultKind.SpoolJam && fault.DurationS is not null)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.duration", $"a broken fibre does not heal: a {KindWord(fault.Kind)} takes no duration"));
-        }
-
-        if ((fault.Kind == FaultKind.RelayFailure) != (fault.RelayNumber is not null))
-        {
-            errors.Add(new ScenarioError(section.LocationOf("relay"), $"{path}.relay", fault.Kind == FaultKind.RelayFailure ? "a relay_failure names its relay" : $"'relay' belongs to a relay_failure, not to a {KindWord(fault.Kind)}"));
-        }
-        else if (fault.RelayNumber == 0)
-        {
-            errors.Add(new ScenarioError(section.LocationOf("relay"), $"{path}.relay", $"'{section.OptionalText("relay")}' is not a relay: write its name ('relay-2') or its number ('2')"));
-        }
-
-        if (fault.Kind == FaultKind.StationUpset && fault.DurationS is null)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.duration", "a station_upset needs its recovery time as the duration"));
-        }
-
-        var triggers = (fault.AtS is null ? 0 : 1) + (fault.AtDepthM is null ? 0 : 1) + (fault.When is null ? 0 : 1) + (fault.IsRandom ? 1 : 0);
-        if (triggers != 1)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.at", "give exactly one trigger: 'at' (a time), 'at_depth' (a depth), 'when' (a condition) or 'mean_interval' (at random)"));
-        }
-
-        if (!fault.IsRandom && (section.OptionalQuantity("not_before") is not null || section.OptionalInteger("occurrences") is not null))
-        {
-            errors.Add(new ScenarioError(section.LocationOf(section.OptionalQuantity("not_before") is not null ? "not_before" : "occurrences"), $"{path}.mean_interval", "'not_before' and 'occurrences' belong to a random trigger ('mean_interval')"));
-        }
-
-        if (fault.Occurrences > 1 && fault.DurationS is null)
-        {
-            errors.Add(new ScenarioError(section.LocationOf("occurrences"), $"{path}.occurrences", "a fault that stays happens once: give a duration for more than one occurrence"));
-        }
-
-        var isSensor = fault.Kind is FaultKind.SensorStuck or FaultKind.SensorBias or FaultKind.SensorDropout or FaultKind.SensorNoise;
-        if (isSensor && fault.Point is null)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.point", $"a {KindWord(fault.Kind)} fault names the telemetry point that lies"));
-        }
-
-        if (!isSensor && (fault.Point is not null || section.OptionalText("value") is not null))
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.point", $"'point' and 'value' belong to sensor faults, not to a {KindWord(fault.Kind)}"));
-        }
-
-        if ((fault.Kind == FaultKind.TiltKick) != (fault.AngleRad is not null))
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.angle", fault.Kind == FaultKind.TiltKick ? "a tilt_kick needs its angle" : "'angle' belongs to a tilt_kick"));
-        }
-
-        if ((fault.Kind == FaultKind.VehicleLoss) != (fault.Vehicle is not null && fault.Cause is not null))
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.vehicle", fault.Kind == FaultKind.VehicleLoss
-                ? "a vehicle_loss names its vehicle and its cause (battery, entrapment or out_of_range)"
-                : "'vehicle' and 'cause' belong to a vehicle_loss"));
-        }
-
-        if (fault.Kind == FaultKind.SensorBias && fault.ValueSi is null)
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_bias needs the offset as a value"));
-        }
-
-        if (fault.Kind == FaultKind.SensorNoise && (fault.ValueSi is null || fault.ValueSi <= 0))
-        {
-            errors.Add(new ScenarioError(section.Location, $"{path}.value", "a sensor_noise needs a positive standard deviation as its value"));
-        }
-
-        if (fault.ValueSi is { } v && double.IsNaN(v) && fault.Point is { } point)
-        {
-            var kind = ProbeTelemetryPoints.KindOf(point)!.Value;
-            errors.Add(new ScenarioError(section.LocationOf("value"), $"{path}.value", $"'{section.OptionalText("value")}' is not a {kind.ToString().ToLowerInvariant()} (units: {kind.ExampleUnits()}), as point {point} needs"));
-        }
-    }
-
-    private static FaultKind ParseFaultKind(string word) => word switch
-    {
-        "power_dip" => FaultKind.PowerDip,
-        "tether_break" => FaultKind.TetherBreak,
-        "station_failure" => FaultKind.StationFailure,
-        "sensor_stuck" => FaultKind.SensorStuck,
-        "sensor_bias" => FaultKind.SensorBias,
-        "sensor_dropout" => FaultKind.SensorDropout,
-        "sensor_noise" => FaultKind.SensorNoise,
-        "heater_segment_failure" => FaultKind.HeaterSegmentFailure,
-        "tilt_kick" => FaultKind.TiltKick,
-        "station_upset" => FaultKind.StationUpset,
-        "vehicle_loss" => FaultKind.VehicleLoss,
-        "relay_failure" => FaultKind.RelayFailure,
-        "spool_jam" => FaultKind.SpoolJam,
-        "clogged_nozzle" => FaultKind.CloggedNozzle,
-        _ => throw new InvalidOperationException($"Fault kind '{word}' passed validation but has no model."),
-    };
-
-    private static string KindWord(FaultKind kind) => kind switch
-    {
-        FaultKind.PowerDip => "power_dip",
-        FaultKind.TetherBreak => "tether_break",
-        FaultKind.StationFailure => "station_failure",
-        FaultKind.SensorStuck => "sensor_stuck",
-        FaultKind.SensorBias => "sensor_bias",
-        FaultKind.SensorDropout => "sensor_dropout",
-        FaultKind.SensorNoise => "sensor_noise",
-        FaultKind.HeaterSegmentFailure => "heater_segment_failure",
-        FaultKind.StationUpset => "station_upset",
-        FaultKind.VehicleLoss => "vehicle_loss",
-        FaultKind.RelayFailure => "relay_failure",
-        FaultKind.SpoolJam => "spool_jam",
-        FaultKind.CloggedNozzle => "clogged_nozzle",
-        _ => "tilt_kick",
-    };
 
     private static string Trim(string message)
     {

@@ -38,10 +38,10 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
             throw Refused($"remove_faults[{missing.Index}].name", $"the parent scenario has no fault named {missing.Name}");
         }
 
-        var stranger = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => a.Fault.Vehicle is { } v && parent.Vehicles.All(p => p.Name != v));
+        var stranger = AddFaults.Select((f, i) => (Fault: f, Index: i)).FirstOrDefault(a => a.Fault.Effect is FaultEffect.VehicleLoss { Vehicle: var v } && parent.Vehicles.All(p => p.Name != v));
         if (stranger.Fault is not null)
         {
-            throw Refused($"add_faults[{stranger.Index}].vehicle", $"fault '{stranger.Fault.Name}' names vehicle '{stranger.Fault.Vehicle}', which the parent scenario does not have");
+            throw Refused($"add_faults[{stranger.Index}].vehicle", $"fault '{stranger.Fault.Name}' names vehicle '{((FaultEffect.VehicleLoss)stranger.Fault.Effect).Vehicle}', which the parent scenario does not have");
         }
 
         var kept = parent.Faults.Where(f => !RemoveFaults.Contains(f.Name)).ToList();
@@ -92,7 +92,7 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
             }
 
             var view = parent.Landers[names.IndexOf(targets[i])].View;
-            if (fault.Vehicle is { } v && view.Vehicles.All(p => p.Name != v))
+            if (fault.Effect is FaultEffect.VehicleLoss { Vehicle: var v } && view.Vehicles.All(p => p.Name != v))
             {
                 throw Refused($"add_faults[{i}].vehicle", $"fault '{fault.Name}' names vehicle '{v}', which lander '{targets[i]}' does not have");
             }

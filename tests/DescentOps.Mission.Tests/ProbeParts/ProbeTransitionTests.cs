@@ -103,9 +103,9 @@ public sealed class ProbeTransitionTests
         IReadOnlyList<(string Point, double Value)> truth = [("probe.depth", 100.0), ("probe.velocity", 2e-4), ("probe.tilt", 0.01)];
         ActiveSensorFault[] faults =
         [
-            new(new FaultModel("stuck", FaultKind.SensorStuck, 0, null, null, 1, Point: "probe.depth"), 42.0),
-            new(new FaultModel("bias", FaultKind.SensorBias, 0, null, null, 1, Point: "probe.velocity", ValueSi: 1e-4), null),
-            new(new FaultModel("gone", FaultKind.SensorDropout, 0, null, null, 1, Point: "probe.tilt"), null),
+            new("stuck", new FaultEffect.SensorStuck("probe.depth", null), 42.0),
+            new("bias", new FaultEffect.SensorBias("probe.velocity", 1e-4), null),
+            new("gone", new FaultEffect.SensorDropout("probe.tilt"), null),
         ];
         var reported = ProbeSensors.Reported(truth, faults, new RandomStream(1, MissionIds.Probe));
 
