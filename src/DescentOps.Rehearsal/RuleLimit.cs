@@ -27,35 +27,15 @@ public sealed record RuleLimit(string Rule, string Placement, string Point, Thre
     /// <summary>Every limit check in a rule set, rule by rule, in the order written, each with its point's SI unit from the catalogue.</summary>
     public static IReadOnlyList<RuleLimit> Of(CompiledRuleSet rules, TelemetryCatalogue catalogue)
     {
-        var limits = new List<RuleLimit>();
-        foreach (var rule in rules.Rules) Collect(rule.Name, rule.Placement.ToString().ToLowerInvariant(), rule.Condition, limits);
-        return [.. limits.Select(l => catalogue.FindPoint(l.Point) is NumericPointSpec spec ? l with { SiUnit = UnitTable.SiSymbol(spec.Dimension) } : l)];
+        return [.. rules.Rules.SelectMany(rule => ConditionLeaf.Of(rule.Condition)
+            .Where(leaf => !leaf.UnderTimeSinceOrLatch)
+            .Select(leaf => leaf.Check)
+            .OfType<LimitCondition>()
+            .Select(limit => new RuleLimit(rule.Name, rule.Placement.ToString().ToLowerInvariant(), limit.Point, limit.Threshold, SiUnitOf(limit.Point, catalogue))))];
     }
 
-    private static void Collect(string rule, string placement, CompiledCondition condition, List<RuleLimit> into)
-    {
-        switch (condition)
-        {
-            case LimitCondition limit:
-                into.Add(new RuleLimit(rule, placement, limit.Point, limit.Threshold));
-                break;
-            case AllOfCondition all:
-                foreach (var operand in all.Operands) Collect(rule, placement, operand, into);
-                break;
-            case AnyOfCondition any:
-                foreach (var operand in any.Operands) Collect(rule, placement, operand, into);
-                break;
-            case NotCondition not:
-                Collect(rule, placement, not.Operand, into);
-                break;
-            case HoldsForDurationCondition held:
-                Collect(rule, placement, held.Operand, into);
-                break;
-            case HoldsForSamplesCondition samples:
-                Collect(rule, placement, samples.Operand, into);
-                break;
-        }
-    }
+    private static string SiUnitOf(string point, TelemetryCatalogue catalogue) =>
+        catalogue.FindPoint(point) is NumericPointSpec spec ? UnitTable.SiSymbol(spec.Dimension) : "";
 
     private string Number(double si) => si.ToString("G6", CultureInfo.InvariantCulture) + (SiUnit.Length > 0 ? " " + SiUnit : "");
 }

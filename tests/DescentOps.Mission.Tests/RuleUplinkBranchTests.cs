@@ -52,22 +52,15 @@ public sealed class RuleUplinkBranchTests
     [Fact]
     public async Task A_branch_with_an_uplink_at_T_equals_its_parent_before_T()
     {
-        var folder = ToolProcess.NewTempDirectory();
-        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "run", "stall-wall-boost.yaml", "--log", "parent.jsonl")).ExitCode);
-        await File.WriteAllTextAsync(Path.Combine(folder, "change.yaml"), Change);
-
-        var (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, "branch", "parent.jsonl", "--at", "40 d", "--with", "change.yaml", "--log", "branch.jsonl");
+        var folder = await BranchFolder.WithParentAsync();
+        var (exit, stdout, stderr) = await folder.BranchAsync(Change, "40 d");
         Assert.True(exit == 0, stdout + stderr);
 
-        var parentPath = Path.Combine(folder, "parent.jsonl");
-        var branchPath = Path.Combine(folder, "branch.jsonl");
-        var divergence = Assert.IsType<JournalDivergence>(JournalDiff.Compare(parentPath, branchPath).FirstEventDivergence);
         // The two logs part at the uplink itself, day 40, and not a line before.
-        Assert.Equal(AtS, divergence.TimeB);
-        Assert.Contains(RuleRecords.SetUplinked, divergence.LineB);
+        Assert.Contains(RuleRecords.SetUplinked, folder.PartingAt(AtS).LineB);
 
-        var branch = Events(branchPath);
-        var parent = Events(parentPath);
+        var branch = Events(folder.File("branch.jsonl"));
+        var parent = Events(folder.ParentLog);
         Assert.Equal(parent.TakeWhile(e => e.TimeSeconds < AtS).Select(e => (e.Kind, e.TimeSeconds)), branch.TakeWhile(e => e.TimeSeconds < AtS).Select(e => (e.Kind, e.TimeSeconds)));
 
         // On board, the set is loaded one uplink later: light time, the station's 2 s, the fibre paid out by then
@@ -88,7 +81,7 @@ public sealed class RuleUplinkBranchTests
         var sent = Assert.Single(branch, e => e.Kind == CommandRecords.Sent);
         Assert.Equal(41 * 86400.0, sent.TimeSeconds);
 
-        Assert.Equal(0, (await InProcessTool.RunAsync(folder, "replay", "branch.jsonl")).ExitCode);
+        Assert.Equal(0, (await folder.ToolAsync("replay", "branch.jsonl")).ExitCode);
     }
 
     [Fact]

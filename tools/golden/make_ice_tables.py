@@ -8,36 +8,22 @@ Run with Debian's interpreter (the packages python3-iapws and python3-gsw instal
 
 Each CSV starts with '#' comment lines naming the generator, library and version and this command.
 """
-import csv
 import sys
 import warnings
-from pathlib import Path
 
 import gsw
 import iapws
 from iapws._iapws import _Ice, _Melting_Pressure, _Sublimation_Pressure
 
-COMMAND = "/usr/bin/python3 tools/golden/make_ice_tables.py shared/reference"
+from golden_csv import provenance, target_folder, write
+
+GENERATOR = "tools/golden/make_ice_tables.py"
 TRIPLE_T_K = 273.16
 IH_III_T_K = 251.165
 
 
 def header(what, library, version):
-    return [
-        f"# {what}",
-        f"# generator: tools/golden/make_ice_tables.py; library: {library} {version} (Debian package)",
-        f"# command: {COMMAND}",
-    ]
-
-
-def write(path, comments, columns, rows):
-    with open(path, "w", newline="", encoding="ascii") as handle:
-        for line in comments:
-            handle.write(line + "\n")
-        writer = csv.writer(handle, lineterminator="\n")
-        writer.writerow(columns)
-        for row in rows:
-            writer.writerow([repr(float(v)) for v in row])
+    return [f"# {what}", *provenance(GENERATOR, f"{library} {version} (Debian package)")]
 
 
 def ice_rows():
@@ -84,8 +70,7 @@ def freezing_rows():
 
 
 def main():
-    out = Path(sys.argv[1] if len(sys.argv) > 1 else "shared/reference")
-    out.mkdir(parents=True, exist_ok=True)
+    out = target_folder(sys.argv)
     write(out / "ice-ih-properties.csv",
           header("Ice Ih from the IAPWS R10-06 Gibbs function; rows only where the library accepts the state as stable ice Ih",
                  "iapws", iapws.__version__),

@@ -11,13 +11,13 @@ temperature and sea pressure. Absolute Salinity is taken as S_A = S_P * 35.16504
 reference-composition ratio, with no regional anomaly. States colder than the TEOS-10 freezing
 point of air-free water are left out: they are not ocean states.
 """
-import csv
 import sys
-from pathlib import Path
 
 import gsw
 
-COMMAND = "/usr/bin/python3 tools/golden/make_seawater_tables.py shared/reference"
+from golden_csv import provenance, target_folder, write
+
+GENERATOR = "tools/golden/make_seawater_tables.py"
 SALINITIES = (0.0, 5.0, 10.0, 20.0, 30.0, 34.0, 35.0, 36.0, 40.0)
 TEMPERATURES_C = (-2.0, -1.5, -1.0, 0.0, 1.0, 2.0, 4.0, 6.0, 8.0, 10.0)
 PRESSURES_DBAR = (0.0, 500.0, 1000.0, 2000.0, 3000.0, 4000.0)
@@ -40,19 +40,13 @@ def rows():
 
 
 def main():
-    target = Path(sys.argv[1] if len(sys.argv) > 1 else "shared/reference")
-    target.mkdir(parents=True, exist_ok=True)
-    path = target / "seawater-density-sound-speed.csv"
-    with open(path, "w", newline="", encoding="ascii") as handle:
-        handle.write("# TEOS-10 in-situ density (gsw.rho_t_exact), sound speed (gsw.sound_speed_t_exact) and air-free freezing\n")
-        handle.write("# temperature (gsw.t_freezing) at S_A = S_P*35.16504/35; t is ITS-90; states below freezing omitted\n")
-        handle.write(f"# generator: tools/golden/make_seawater_tables.py; library: gsw {gsw.__version__} (Debian package python3-gsw)\n")
-        handle.write(f"# command: {COMMAND}\n")
-        writer = csv.writer(handle, lineterminator="\n")
-        writer.writerow(["practical_salinity", "absolute_salinity_g_per_kg", "temperature_its90_degC", "sea_pressure_dbar",
-                         "density_kg_per_m3", "sound_speed_m_per_s", "freezing_temperature_degC"])
-        for row in rows():
-            writer.writerow([repr(float(v)) for v in row])
+    write(target_folder(sys.argv) / "seawater-density-sound-speed.csv",
+          ["# TEOS-10 in-situ density (gsw.rho_t_exact), sound speed (gsw.sound_speed_t_exact) and air-free freezing",
+           "# temperature (gsw.t_freezing) at S_A = S_P*35.16504/35; t is ITS-90; states below freezing omitted",
+           *provenance(GENERATOR, f"gsw {gsw.__version__} (Debian package python3-gsw)")],
+          ["practical_salinity", "absolute_salinity_g_per_kg", "temperature_its90_degC", "sea_pressure_dbar",
+           "density_kg_per_m3", "sound_speed_m_per_s", "freezing_temperature_degC"],
+          rows())
 
 
 if __name__ == "__main__":

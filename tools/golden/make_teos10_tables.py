@@ -14,13 +14,13 @@ at that Conservative Temperature (gsw.rho, gsw.sound_speed), and the air-free fr
 and as Conservative Temperature (gsw.t_freezing, gsw.CT_freezing with saturation fraction 0).
 The first temperature of every (S_A, p) pair is the freezing point itself.
 """
-import csv
 import sys
-from pathlib import Path
 
 import gsw
 
-COMMAND = "/usr/bin/python3 tools/golden/make_teos10_tables.py shared/reference"
+from golden_csv import provenance, target_folder, write
+
+GENERATOR = "tools/golden/make_teos10_tables.py"
 SALINITIES = (0.0, 0.5, 5.0, 10.0, 20.0, 30.0, 34.0, 35.16504, 38.0, 42.0)
 PRESSURES_DBAR = (0.0, 10.0, 500.0, 1000.0, 2000.0, 2420.0, 3000.0, 4000.0, 5000.0, 6000.0, 7000.0, 8000.0, 9000.0, 10000.0)
 TEMPERATURES_C = (-10.0, -8.0, -6.0, -4.0, -2.0, -1.0, 0.0, 1.0, 2.0, 4.0, 10.0, 20.0, 30.0, 40.0)
@@ -43,22 +43,16 @@ def rows():
 
 
 def main():
-    target = Path(sys.argv[1] if len(sys.argv) > 1 else "shared/reference")
-    target.mkdir(parents=True, exist_ok=True)
-    path = target / "teos10-seawater-full-range.csv"
-    with open(path, "w", newline="", encoding="ascii") as handle:
-        handle.write("# TEOS-10 seawater, S_A 0-42 g/kg, 0-10000 dbar, freezing point to 40 degC (t is ITS-90, p is sea pressure)\n")
-        handle.write("# exact: gsw.CT_from_t, gsw.pt0_from_t, gsw.rho_t_exact, gsw.sound_speed_t_exact; 75-term: gsw.rho, gsw.sound_speed at CT;\n")
-        handle.write("# freezing: gsw.t_freezing and gsw.CT_freezing, air-free (saturation fraction 0)\n")
-        handle.write(f"# generator: tools/golden/make_teos10_tables.py; library: gsw {gsw.__version__} (Debian package python3-gsw)\n")
-        handle.write(f"# command: {COMMAND}\n")
-        writer = csv.writer(handle, lineterminator="\n")
-        writer.writerow(["absolute_salinity_g_per_kg", "sea_pressure_dbar", "temperature_degC", "conservative_temperature_degC",
-                         "potential_temperature_degC", "density_exact_kg_per_m3", "sound_speed_exact_m_per_s",
-                         "density_75term_kg_per_m3", "sound_speed_75term_m_per_s", "freezing_temperature_degC",
-                         "freezing_conservative_temperature_degC"])
-        for row in rows():
-            writer.writerow([repr(float(v)) for v in row])
+    write(target_folder(sys.argv) / "teos10-seawater-full-range.csv",
+          ["# TEOS-10 seawater, S_A 0-42 g/kg, 0-10000 dbar, freezing point to 40 degC (t is ITS-90, p is sea pressure)",
+           "# exact: gsw.CT_from_t, gsw.pt0_from_t, gsw.rho_t_exact, gsw.sound_speed_t_exact; 75-term: gsw.rho, gsw.sound_speed at CT;",
+           "# freezing: gsw.t_freezing and gsw.CT_freezing, air-free (saturation fraction 0)",
+           *provenance(GENERATOR, f"gsw {gsw.__version__} (Debian package python3-gsw)")],
+          ["absolute_salinity_g_per_kg", "sea_pressure_dbar", "temperature_degC", "conservative_temperature_degC",
+           "potential_temperature_degC", "density_exact_kg_per_m3", "sound_speed_exact_m_per_s",
+           "density_75term_kg_per_m3", "sound_speed_75term_m_per_s", "freezing_temperature_degC",
+           "freezing_conservative_temperature_degC"],
+          rows())
 
 
 if __name__ == "__main__":

@@ -45,9 +45,13 @@ public sealed class RandomStream
     /// <summary>The SplitMix64 finaliser (Steele, Lea and Flood 2014), a standard seed scrambler.</summary>
     private static ulong SplitMix64(ulong x)
     {
-        x += 0x9E3779B97F4A7C15UL;
-        x = (x ^ (x >> 30)) * 0xBF58476D1CE4E5B9UL;
-        x = (x ^ (x >> 27)) * 0x94D049BB133111EBUL;
-        return x ^ (x >> 31);
+        // Arithmetic modulo 2^64 by design.
+        unchecked
+        {
+            x += 0x9E3779B97F4A7C15UL;
+            x = (x ^ (x >> 30)) * 0xBF58476D1CE4E5B9UL;
+            x = (x ^ (x >> 27)) * 0x94D049BB133111EBUL;
+            return x ^ (x >> 31);
+        }
     }
 }

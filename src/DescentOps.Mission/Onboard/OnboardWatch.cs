@@ -31,50 +31,28 @@ public sealed class OnboardWatch
     {
         var limits = new SortedDictionary<string, SortedSet<double>>(StringComparer.Ordinal);
         var every = new SortedSet<string>(StringComparer.Ordinal);
-        foreach (var rule in rules.Rules.Where(r => r.Placement == Placement.Board))
+        foreach (var leaf in rules.Rules.Where(r => r.Placement == Placement.Board).SelectMany(r => ConditionLeaf.Of(r.Condition)))
         {
-            Collect(rule.Condition, false, limits, every);
+            // A check under a time-since or a latch decides with its history: every sample of its points, no limits to cross.
+            if (leaf.Check is LimitCondition limit && !leaf.UnderTimeSinceOrLatch)
+            {
+                var set = Of(limits, limit.Point);
+                if (double.IsFinite(limit.Threshold.LowerSi)) set.Add(limit.Threshold.LowerSi);
+                if (double.IsFinite(limit.Threshold.UpperSi)) set.Add(limit.Threshold.UpperSi);
+                if (leaf.CountedInSamples) every.Add(limit.Point);
+                continue;
+            }
+
+            foreach (var point in leaf.Check.Points)
+            {
+                Of(limits, point);
+                if (leaf.CountedInSamples || leaf.UnderTimeSinceOrLatch || leaf.Check is not StateCondition) every.Add(point);
+            }
         }
 
         return new OnboardWatch(
             limits.ToImmutableSortedDictionary(p => p.Key, p => p.Value.ToImmutableArray(), StringComparer.Ordinal),
             every.ToImmutableSortedSet(StringComparer.Ordinal));
-    }
-
-    private static void Collect(CompiledCondition condition, bool counted, SortedDictionary<string, SortedSet<double>> limits, SortedSet<string> every)
-    {
-        switch (condition)
-        {
-            case AllOfCondition all:
-                foreach (var operand in all.Operands) Collect(operand, counted, limits, every);
-                break;
-            case AnyOfCondition any:
-                foreach (var operand in any.Operands) Collect(operand, counted, limits, every);
-                break;
-            case NotCondition not:
-                Collect(not.Operand, counted, limits, every);
-                break;
-            case HoldsForDurationCondition duration:
-                Collect(duration.Operand, counted, limits, every);
-                break;
-            case HoldsForSamplesCondition samples:
-                Collect(samples.Operand, true, limits, every);
-                break;
-            case LimitCondition limit:
-                var set = Of(limits, limit.Point);
-                if (double.IsFinite(limit.Threshold.LowerSi)) set.Add(limit.Threshold.LowerSi);
-                if (double.IsFinite(limit.Threshold.UpperSi)) set.Add(limit.Threshold.UpperSi);
-                if (counted) every.Add(limit.Point);
-                break;
-            default:
-                foreach (var point in condition.Points)
-                {
-                    Of(limits, point);
-                    if (counted || condition is not StateCondition) every.Add(point);
-                }
-
-                break;
-        }
     }
 
     private static SortedSet<double> Of(SortedDictionary<string, SortedSet<double>> limits, string point)

@@ -30,8 +30,9 @@ public readonly record struct ComponentId : IComparable<ComponentId>
             var hash = offsetBasis;
             foreach (var unit in Name)
             {
-                hash = (hash ^ (byte)unit) * prime;
-                hash = (hash ^ (byte)(unit >> 8)) * prime;
+                // A hash wraps by design (arithmetic modulo 2^64).
+                hash = unchecked((hash ^ (byte)unit) * prime);
+                hash = unchecked((hash ^ (byte)(unit >> 8)) * prime);
             }
 
             return hash;

@@ -205,17 +205,7 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
     private static IEnumerable<RuleRuntime> EvaluationOrder(IEnumerable<RuleRuntime> rules) =>
         rules.OrderByDescending(r => r.Rule.Priority).ThenBy(r => r.Index);
 
-    private static IEnumerable<CompiledCondition> Leaves(CompiledCondition condition) => condition switch
-    {
-        AllOfCondition all => all.Operands.SelectMany(Leaves),
-        AnyOfCondition any => any.Operands.SelectMany(Leaves),
-        NotCondition not => Leaves(not.Operand),
-        HoldsForDurationCondition duration => Leaves(duration.Operand),
-        HoldsForSamplesCondition samples => Leaves(samples.Operand),
-        TimeSinceCondition since => Leaves(since.Event),
-        LatchedCondition latched => Leaves(latched.Operand),
-        _ => [condition],
-    };
+    private static IEnumerable<CompiledCondition> Leaves(CompiledCondition condition) => ConditionLeaf.Of(condition).Select(leaf => leaf.Check);
 
     private void Evaluate(RuleRuntime runtime, EvaluationContext context)
     {
