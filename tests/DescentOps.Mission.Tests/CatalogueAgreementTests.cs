@@ -3,6 +3,7 @@ using DescentOps.Mission.Messages;
 using DescentOps.Rules.Catalogue;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Model;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 
@@ -32,13 +33,7 @@ public sealed class CatalogueAgreementTests
     public void The_readme_documents_every_point_rules_and_triggers_may_read_and_which_are_true_state(string scenarioName)
     {
         var catalogue = MissionCatalogue.For(DescentOps.Scenarios.Loading.ScenarioLoader.LoadText(BuiltInScenarios.Text(scenarioName), scenarioName));
-        string? root = null;
-        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null && root is null; dir = dir.Parent)
-        {
-            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) root = dir.FullName;
-        }
-
-        var rows = File.ReadAllLines(Path.Combine(root!, "README.md"))
+        var rows = File.ReadAllLines(Path.Combine(RepositoryRoot.Path, "README.md"))
             .Where(l => l.StartsWith("| `probe.", StringComparison.Ordinal))
             .Select(l => l.Split('|', StringSplitOptions.TrimEntries))
             .ToDictionary(c => c[1].Trim('`'), c => c[4]);

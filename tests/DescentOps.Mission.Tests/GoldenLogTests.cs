@@ -5,6 +5,7 @@ using DescentOps.Journal;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests;
 
@@ -78,16 +79,5 @@ public sealed class GoldenLogTests
 
     private static string At(string[] lines, int i) => i < lines.Length ? lines[i] : "(end of log)";
 
-    private static string GoldenFolder
-    {
-        get
-        {
-            for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-            {
-                if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return Path.Combine(dir.FullName, "tests", "golden");
-            }
-
-            throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
-        }
-    }
+    private static string GoldenFolder => Path.Combine(RepositoryRoot.Path, "tests", "golden");
 }

@@ -38,6 +38,10 @@ public sealed class FirefoxTests : IDisposable
         await firefox.WaitForAsync(team, "document.querySelector('canvas')", wait, "the team's plots");
         var before = double.Parse((await firefox.EvaluateAsync(team, Available + ".dataset.value"))!.GetValue<string>(), CultureInfo.InvariantCulture);
 
+        // The supervisor's form fills its fault kinds from the server after the page loads: wait for them, as a person
+        // would (Playwright's select does the same wait in the Chromium test).
+        await firefox.WaitForAsync(supervisor, "document.querySelector(\"#fault-kind option[value='power_dip']\")", wait, "the supervisor's fault kinds");
+
         // The supervisor's form, as a person fills it: the kind (which builds its fields), 30 % remaining, inject.
         await firefox.EvaluateAsync(supervisor, """
             (() => {

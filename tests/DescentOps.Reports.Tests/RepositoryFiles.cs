@@ -1,20 +1,10 @@
+using DescentOps.Tests.Shared;
 namespace DescentOps.Reports.Tests;
 
 /// <summary>Files of the repository the tests run from (the folder holding DescentOps.sln).</summary>
 internal static class RepositoryFiles
 {
-    public static string Root
-    {
-        get
-        {
-            for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-            {
-                if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return dir.FullName;
-            }
-
-            throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
-        }
-    }
+    public static string Root => RepositoryRoot.Path;
 
     public static string Readme => File.ReadAllText(Path.Combine(Root, "README.md"));
 

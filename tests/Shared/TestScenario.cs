@@ -66,16 +66,6 @@ internal sealed class TestScenario
         return new TestScenario(Name, string.Join('\n', lines));
     }
 
-    /// <summary>The scalar at a dotted key path, as written in the source (trailing comment removed).</summary>
-    public string Get(string path)
-    {
-        var lines = Text.Split('\n');
-        var (index, keyEnd) = Locate(lines, path);
-        var rest = lines[index][keyEnd..];
-        var hash = rest.IndexOf(" #", StringComparison.Ordinal);
-        return (hash >= 0 ? rest[..hash] : rest).Trim();
-    }
-
     /// <summary>
     /// Adds a top-level section (YAML text starting with its key at column 0) just before the <c>run:</c> section, or at
     /// the end when there is none. A section the scenario already has is refused.

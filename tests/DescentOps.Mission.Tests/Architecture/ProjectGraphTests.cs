@@ -1,5 +1,6 @@
 using System.Reflection;
 using System.Xml.Linq;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Architecture;
 
@@ -60,7 +61,7 @@ public sealed class ProjectGraphTests
     [Fact]
     public void Only_test_projects_reference_the_command_line()
     {
-        var root = RepositoryRoot();
+        var root = RepositoryRoot.Path;
         var offenders = Directory.GetFiles(root, "*.csproj", SearchOption.AllDirectories)
             .Where(p => !p.Contains("/obj/", StringComparison.Ordinal) && !Path.GetFileName(p).EndsWith(".Tests.csproj", StringComparison.Ordinal))
             .Where(p => References(p).Projects.Contains("DescentOps.Cli"))
@@ -95,7 +96,7 @@ public sealed class ProjectGraphTests
     private sealed record ProjectReferences(IReadOnlyList<string> Projects, IReadOnlyList<string> Packages);
 
     private static Dictionary<string, ProjectReferences> SourceProjects() =>
-        Directory.GetDirectories(Path.Combine(RepositoryRoot(), "src"))
+        Directory.GetDirectories(Path.Combine(RepositoryRoot.Path, "src"))
             .Select(d => Path.Combine(d, Path.GetFileName(d) + ".csproj"))
             .Where(File.Exists)
             .ToDictionary(p => Path.GetFileNameWithoutExtension(p), References, StringComparer.Ordinal);
@@ -120,13 +121,4 @@ public sealed class ProjectGraphTests
         return seen;
     }
 
-    internal static string RepositoryRoot()
-    {
-        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-        {
-            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return dir.FullName;
-        }
-
-        throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
-    }
 }

@@ -1,4 +1,5 @@
 using System.Text.RegularExpressions;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Architecture;
 
@@ -13,7 +14,7 @@ public sealed partial class TestNameStyleTests
     public void Every_test_in_every_test_project_is_named_as_a_sentence()
     {
         var offenders = new List<string>();
-        var tests = Path.Combine(ProjectGraphTests.RepositoryRoot(), "tests");
+        var tests = Path.Combine(RepositoryRoot.Path, "tests");
         foreach (var file in Directory.EnumerateFiles(tests, "*.cs", SearchOption.AllDirectories))
         {
             var relative = Path.GetRelativePath(tests, file);

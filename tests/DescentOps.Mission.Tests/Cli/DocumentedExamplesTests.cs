@@ -1,4 +1,5 @@
 using System.Text.RegularExpressions;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Cli;
 
@@ -13,18 +14,9 @@ public sealed partial class DocumentedExamplesTests
     [GeneratedRegex(@"^```(?<lang>\w*)\n(?<body>.*?)^```", RegexOptions.Multiline | RegexOptions.Singleline)]
     private static partial Regex FencedBlock();
 
-    private static string RepositoryRoot()
-    {
-        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-        {
-            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return dir.FullName;
-        }
-
-        throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
-    }
 
     private static IEnumerable<(string Lang, string Body)> Blocks(string document) =>
-        FencedBlock().Matches(File.ReadAllText(Path.Combine(RepositoryRoot(), document)).Replace("\r\n", "\n", StringComparison.Ordinal))
+        FencedBlock().Matches(RepositoryRoot.Text(document))
             .Select(m => (m.Groups["lang"].Value, m.Groups["body"].Value));
 
     /// <summary>

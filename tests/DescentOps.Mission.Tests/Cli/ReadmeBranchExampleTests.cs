@@ -1,6 +1,7 @@
 using System.Text.RegularExpressions;
 using DescentOps.Journal;
 using DescentOps.Records.Kinds;
+using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Cli;
 
@@ -14,16 +15,7 @@ public sealed partial class ReadmeBranchExampleTests
     [GeneratedRegex(@"^```yaml\n(?<body># scenario: power-dip-load-shedding\.yaml\n.*?)^```", RegexOptions.Multiline | RegexOptions.Singleline)]
     private static partial Regex ChangeBlock();
 
-    private static string ReadmeChange()
-    {
-        for (var dir = new DirectoryInfo(AppContext.BaseDirectory); dir is not null; dir = dir.Parent)
-        {
-            var readme = Path.Combine(dir.FullName, "README.md");
-            if (File.Exists(Path.Combine(dir.FullName, "DescentOps.sln"))) return ChangeBlock().Match(File.ReadAllText(readme).Replace("\r\n", "\n", StringComparison.Ordinal)).Groups["body"].Value;
-        }
-
-        throw new InvalidOperationException("DescentOps.sln not found above the test binaries.");
-    }
+    private static string ReadmeChange() => ChangeBlock().Match(RepositoryRoot.Text("README.md")).Groups["body"].Value;
 
     private static List<EventEntry> Events(string path)
     {
