@@ -15,7 +15,10 @@ namespace DescentOps.Mission.Ground;
 /// <summary>
 /// The ground team's view of the mission: it knows only what the frames tell it, late by the tether, the station
 /// and the light time; it notices when frame numbers jump; its rules' commands go back up the same way, a light
-/// time to the station and then down the fibre, and can arrive too late.
+/// time to the station and then down the fibre, and can arrive too late. Its rules run on the frames' sampling time
+/// and are moved on only by what reaches the ground: a rule's timer that ends at a sampling instant completes with
+/// the first frame sampled then or later, never by the ground's own clock, which runs a downlink ahead of the frames
+/// still on their way (waking the rules at it would refuse those frames and fire before the ground could know).
 /// </summary>
 public sealed class GroundTeamComponent : SimComponent<GroundState>
 {
@@ -49,7 +52,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 
     private IReadOnlyList<string> UplinkOrigins { get; }
 
-    public override GroundState InitialState => new(0, 0, 0, 0.0, null);
+    public override GroundState InitialState => new(0, 0, 0, 0.0);
 
     public override GroundState Handle(GroundState state, object message, ComponentContext context)
     {
@@ -83,12 +86,8 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 var next = Receive(state, frame, context);
                 // The procedures see the frame before the rules can start one, so a step starts watching at the next frame.
                 next = Procedures(next, _procedures.OnFrame([.. FrameSamples.Of(frame)], context.Now), context);
-                var frameWake = Uplink(ref next, _rules.OnFrame(frame, context), state.PendingWake, context);
-                return next with { PendingWake = frameWake, RulesVersion = _rules.Version };
-            case RulesWake:
-                var woken = state;
-                var ruleWake = Uplink(ref woken, _rules.OnWake(context), null, context);
-                return woken with { PendingWake = ruleWake, RulesVersion = _rules.Version };
+                Uplink(ref next, _rules.OnFrame(frame, context), context);
+                return next with { RulesVersion = _rules.Version };
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
@@ -118,7 +117,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
         Uplink(context, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
-        return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
+        return state with { RulesVersion = _rules.Version };
     }
 
     private static GroundState Receive(GroundState state, TelemetryFrame frame, ComponentContext context)
@@ -147,7 +146,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     }
 
     /// <summary>Sends the rules' commands up, except procedure starts, which the ground takes itself (into <paramref name="state"/>).</summary>
-    private Engine.Scheduling.EventHandle? Uplink(ref GroundState state, IReadOnlyList<Telecommand> commands, Engine.Scheduling.EventHandle? pendingWake, ComponentContext context)
+    private void Uplink(ref GroundState state, IReadOnlyList<Telecommand> commands, ComponentContext context)
     {
         foreach (var command in commands)
         {
@@ -159,8 +158,6 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 
             Uplink(context, command, MissionPriority.Command);
         }
-
-        return _rules.Rearm(pendingWake, context, RulesWake.Instance);
     }
 
     /// <summary>Journals what the procedures did, sends their steps' commands up and keeps one timer for the next step that runs out of time.</summary>
