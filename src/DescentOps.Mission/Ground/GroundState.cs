@@ -1,4 +1,5 @@
 using DescentOps.Engine.Scheduling;
+using DescentOps.Primitives.Time;
 
 namespace DescentOps.Mission.Ground;
 
@@ -10,4 +11,13 @@ public sealed record GroundState(long FramesReceived, long LastFrame, long Frame
 
     /// <summary>The timer of the next procedure step that runs out of time.</summary>
     public EventHandle? ProcedureWake { get; init; }
+
+    /// <summary>What the ground knows of its station; null unless a ground rule or procedure reads it.</summary>
+    public StationWatch? Station { get; init; }
+
+    /// <summary>The timer of the present silence's end (<see cref="StationWatch.SilenceEnds"/>).</summary>
+    public EventHandle? StationSilence { get; init; }
+
+    /// <summary>The latest sampling time of the frames received: the stamp of what the ground learns between frames.</summary>
+    public SimTime LatestSampledAt { get; init; }
 }

@@ -6,6 +6,7 @@ using DescentOps.Mission.Procedures;
 using DescentOps.Mission.Station;
 using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
+using DescentOps.Rules.Evaluation;
 using DescentOps.Rules.Syntax;
 using DescentOps.Scenarios.Model;
 using DescentOps.Records.Kinds;
@@ -29,6 +30,9 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
     private readonly ProcedureDesk _procedures;
 
+    /// <summary>How the ground hears its station; null unless a ground rule or procedure reads the station's points.</summary>
+    private readonly StationHearing? _station;
+
     /// <param name="scenario">The mission: its distance home sets the uplink.</param>
     /// <param name="rules">The mission's rules; the ground ones run here.</param>
     /// <param name="timed">The mission's time-tagged telecommands; the ground sends those it holds at their times.</param>
@@ -44,6 +48,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         _timed = timed ?? [];
         _uplinks = uplinks ?? [];
         _procedures = new ProcedureDesk(procedures ?? []);
+        _station = StationHearing.IsRead(rules, _uplinks, _procedures.Procedures) ? new StationHearing(scenario) : null;
         UplinkTimesS = [.. scenario.RuleUplinks.Select(u => u.AtS)];
         UplinkOrigins = [.. scenario.RuleUplinks.Select(u => u.FieldPath)];
     }
@@ -72,7 +77,13 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                     if (_procedures.Procedures[p].StartAtS is { } startS) context.ScheduleSelf(SimDuration.FromSeconds(startS), new ProcedureDue(p), MissionPriority.Command);
                 }
 
-                return state;
+                return _station is null ? state : state with { Station = _station.Start(context) };
+            case StationCarrier carrier:
+                return HearStation(state, _station!.OnCarrier(state.Station!, carrier.On, context), carrier.On ? "carrier heard" : "carrier lost", context);
+            case StationViewEdge edge:
+                return HearStation(state, _station!.OnEdge(state.Station!, edge, context), edge.InView ? "home rose" : "home set", context);
+            case StationSilenceOver:
+                return HearStation(state with { StationSilence = null }, state.Station!.SilenceOver(context.Now), "silence past the timeout", context);
             case ProcedureDue due:
                 return Procedures(state, _procedures.Start(due.Index, _procedures.Procedures[due.Index].FieldPath + ".start_at", context.Now), context);
             case ProcedureWake:
@@ -84,13 +95,29 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 return UplinkRules(state, due.Index, context);
             case TelemetryFrame frame:
                 var next = Receive(state, frame, context);
+                // With the station's points read, they go with every frame, stamped with its sampling time.
+                IReadOnlyList<TelemetrySample> samples = next.Station is { } watch ? [.. FrameSamples.Of(frame), .. StationHearing.Samples(watch, frame.SampledAt)] : [.. FrameSamples.Of(frame)];
                 // The procedures see the frame before the rules can start one, so a step starts watching at the next frame.
-                next = Procedures(next, _procedures.OnFrame([.. FrameSamples.Of(frame)], context.Now), context);
-                Uplink(ref next, _rules.OnFrame(frame, context), context);
+                next = Procedures(next, _procedures.OnFrame(samples, context.Now), context);
+                Uplink(ref next, _rules.OnSamples(samples, context), context);
                 return next with { RulesVersion = _rules.Version };
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
+    }
+
+    /// <summary>
+    /// What the ground knows of its station moved on: the silence timer follows it, and a change goes to the
+    /// procedures and the rules stamped with the latest frame's sampling time.
+    /// </summary>
+    private GroundState HearStation(GroundState state, StationWatch watch, string cause, ComponentContext context)
+    {
+        var changed = StationHearing.Settle(state.Station!, watch, state.StationSilence, state.LatestSampledAt, cause, context, out var timer);
+        var next = state with { Station = watch, StationSilence = timer };
+        if (changed is null) return next;
+        next = Procedures(next, _procedures.OnFrame(changed, context.Now), context);
+        Uplink(ref next, _rules.OnSamples(changed, context), context);
+        return next with { RulesVersion = _rules.Version };
     }
 
     /// <summary>A time-tagged telecommand leaves the ground now and goes the way every ground command goes.</summary>
@@ -142,6 +169,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             LastFrame = Math.Max(state.LastFrame, frame.Sequence),
             FramesMissing = state.FramesMissing + missing,
             LastLatencyS = latency,
+            LatestSampledAt = SimTime.Max(state.LatestSampledAt, frame.SampledAt),
         };
     }
 

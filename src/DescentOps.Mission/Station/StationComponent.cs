@@ -19,10 +19,13 @@ public sealed class StationComponent : SimComponent<StationState>
     /// <summary>Speed of light in vacuum, m/s (exact by the SI definition of the metre).</summary>
     public const double SpeedOfLightMPerS = Physics.PhysicalConstants.SpeedOfLightMPerS;
 
-    public StationComponent(Scenario scenario, LanderIds? ids = null)
+    /// <param name="scenario">The mission.</param>
+    /// <param name="ids">The lander's ids; a single lander's by default.</param>
+    /// <param name="reportsCarrier">Whether the ground hears of the carrier's changes (<see cref="StationBeacon"/>).</param>
+    public StationComponent(Scenario scenario, LanderIds? ids = null, bool reportsCarrier = false)
         : base((ids ?? LanderIds.Single).Station, FailurePolicy.RestartFromLastState)
     {
-        Design = new StationDesign(scenario, ids ?? LanderIds.Single);
+        Design = new StationDesign(scenario, ids ?? LanderIds.Single, reportsCarrier);
     }
 
     public StationDesign Design { get; }
@@ -37,6 +40,13 @@ public sealed class StationComponent : SimComponent<StationState>
     public override StationState InitialState => new(false, 0, 0, null, null, [], 0, [], 0, null, SimTime.Epoch, null, 0, 0);
 
     public override StationState Handle(StationState state, object message, ComponentContext context)
+    {
+        var after = HandleMessage(state, message, context);
+        StationBeacon.Report(Design, state, after, context);
+        return after;
+    }
+
+    private StationState HandleMessage(StationState state, object message, ComponentContext context)
     {
         var d = Design;
         switch (message)

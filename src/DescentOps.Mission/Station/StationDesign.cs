@@ -13,8 +13,9 @@ public sealed class StationDesign
     /// <summary>Events further off than this (about 300 years) never happen within a run and are not scheduled.</summary>
     public const double MaxTimerS = 1e10;
 
-    public StationDesign(Scenario scenario, LanderIds ids)
+    public StationDesign(Scenario scenario, LanderIds ids, bool reportsCarrier = false)
     {
+        ReportsCarrier = reportsCarrier;
         ArgumentNullException.ThrowIfNull(scenario);
         Ids = ids;
         Station = scenario.Station;
@@ -59,6 +60,9 @@ public sealed class StationDesign
 
     /// <summary>Whether frames and commands go through the queues: only when windows or upsets (discharges or faults) can hold them up.</summary>
     public bool Queued { get; }
+
+    /// <summary>Whether the ground is told of the carrier's changes (only when its rules or procedures read the station's points).</summary>
+    public bool ReportsCarrier { get; }
 
     /// <summary>What the scenario's charging part says, or queue when only upset faults reset the station.</summary>
     public bool QueueWhileRecovering => Station.Charging?.QueueWhileRecovering ?? true;

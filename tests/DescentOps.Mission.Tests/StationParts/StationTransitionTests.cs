@@ -264,6 +264,33 @@ public sealed class StationTransitionTests
     }
 
     [Fact]
+    public void The_ground_hears_the_carrier_go_and_come_back_a_light_time_later_only_when_it_listens()
+    {
+        var listened = new StationComponent(TestScenario.Default.Load(), reportsCarrier: true);
+        var context = At(1000);
+        var dead = StationLife.FailByFault(listened.Design, listened.InitialState, "cut", context);
+        StationBeacon.Report(listened.Design, listened.InitialState, dead, context);
+        var lost = context.Scheduled.Single(e => e.Payload is StationCarrier);
+        Assert.Equal((MissionIds.Ground, new StationCarrier(false)), (lost.Target, lost.Payload));
+        Assert.Equal(SimTime.FromSecondsSinceEpoch(1000) + SimDuration.FromSeconds(1.08e12 / 299_792_458.0), lost.Key.Time);
+
+        // A reset silences the carrier as death does; its end brings it back.
+        var upset = At(2000);
+        var resetting = StationLife.Upset(listened.Design, listened.InitialState, 60, "discharge", upset);
+        StationBeacon.Report(listened.Design, listened.InitialState, resetting, upset);
+        Assert.Contains(upset.Scheduled, e => e.Payload is StationCarrier { On: false });
+        var over = At(2060);
+        var back = StationLife.RecoverFromUpset(listened.Design, resetting, new StationUpsetOver(resetting.RecoveringUntil!.Value), over);
+        StationBeacon.Report(listened.Design, resetting, back, over);
+        Assert.Contains(over.Scheduled, e => e.Payload is StationCarrier { On: true });
+
+        // Nobody listening (the default), nothing is sent.
+        var quiet = At(1000);
+        StationBeacon.Report(Plain.Design, Plain.InitialState, StationLife.FailByFault(Plain.Design, Plain.InitialState, "cut", quiet), quiet);
+        Assert.DoesNotContain(quiet.Scheduled, e => e.Payload is StationCarrier);
+    }
+
+    [Fact]
     public void An_instant_read_back_from_a_tick_stays_on_that_tick_and_any_other_goes_up_to_the_next()
     {
         Assert.Equal(new SimTime(1_000_000), StationTransmitter.CeilingTick(1.0));
