@@ -75,6 +75,8 @@ public static class CampaignReport
             }
         }
 
+        if (summary["variants"]!.AsArray().Any(v => v!["landers"] is not null)) LanderSection(summary, Line);
+
         Line("<h2>Breakthrough times</h2>");
         Line(Ecdf("Breakthrough time (share of runs that broke through by then)", "days", variants.Select(v => (v, runs.Where(r => r.Variant == v && r.BreakthroughTimeS is not null).Select(r => r.BreakthroughTimeS!.Value / 86400).ToList(), runs.Count(r => r.Variant == v))).ToList()));
 
@@ -123,6 +125,87 @@ public static class CampaignReport
         Line("</body>");
         Line("</html>");
         return html.ToString();
+    }
+
+    /// <summary>Per lander and variant: each rate with its Wilson interval, median breakthrough and final depth with order-statistic intervals; a plot of the success rates.</summary>
+    private static void LanderSection(JsonObject summary, Action<string> line)
+    {
+        var c = CultureInfo.InvariantCulture;
+        line("<h2>Per lander</h2>");
+        line("<p>Each lander's own figures. A lander succeeds when the run completes and it meets every criterion judged on it (those naming it and those asked of every or any lander). Stalled: its probe froze in at least once. Station dead: its station had failed and not recovered when the run ended. Intervals: 95 %, Wilson 1927 for rates, order statistics for medians.</p>");
+        static string Share(JsonNode lander, string stem)
+        {
+            var ci = lander[stem + "_ci95"]!.AsArray();
+            return string.Create(CultureInfo.InvariantCulture, $"{Rate(lander[stem + "_rate"])} ({ci[0]!.GetValue<double>():P1} to {ci[1]!.GetValue<double>():P1})");
+        }
+
+        static string Median(JsonNode? estimate, JsonArray ci, double scale, string unit, string format)
+        {
+            string Show(JsonNode? x) => x is null ? "?" : (x.GetValue<double>() / scale).ToString(format, CultureInfo.InvariantCulture);
+            return estimate is null ? "not reached" : $"{Show(estimate)} {unit} ({Show(ci[0])} to {Show(ci[1])})";
+        }
+
+        foreach (var v in summary["variants"]!.AsArray())
+        {
+            if (v!["landers"] is not JsonArray landers) continue;
+            line($"<h3>{E(v["name"]!.GetValue<string>())}</h3>");
+            line("<table><thead><tr><th>lander</th><th>runs</th><th>success</th><th>reached the ocean</th><th>stalled</th><th>station dead</th><th>median breakthrough</th><th>median final depth</th></tr></thead><tbody>");
+            foreach (var lander in landers)
+            {
+                var median = lander!["breakthrough_quantiles"]!.AsArray().First(q => q!["p"]!.GetValue<double>() == 0.5)!;
+                line(string.Create(c, $"<tr><td>{E(lander["name"]!.GetValue<string>())}</td><td class=\"n\">{lander["runs"]}</td><td class=\"n\">{Share(lander, "success")}</td><td class=\"n\">{Share(lander, "reached_ocean")}</td><td class=\"n\">{Share(lander, "stalled")}</td><td class=\"n\">{Share(lander, "station_dead")}</td><td class=\"n\">{Median(median["t_s"], median["ci95"]!.AsArray(), 86400, "d", "F2")}</td><td class=\"n\">{Median(lander["final_depth_median_m"], lander["final_depth_median_ci95"]!.AsArray(), 1, "m", "F1")}</td></tr>"));
+            }
+
+            line("</tbody></table>");
+            var criteria = landers.SelectMany(l => l!["criteria_passed"]!.AsObject().Select(p => p.Key)).Distinct().ToList();
+            if (criteria.Count > 0)
+            {
+                line($"<table><thead><tr><th>lander</th>{string.Concat(criteria.Select(x => $"<th>{E(x)}</th>"))}</tr></thead><tbody>");
+                foreach (var lander in landers)
+                {
+                    var passed = lander!["criteria_passed"]!.AsObject();
+                    line($"<tr><td>{E(lander["name"]!.GetValue<string>())}</td>{string.Concat(criteria.Select(x => $"<td class=\"n\">{(passed[x] is { } k ? $"{k} of {lander["runs"]}" : "not judged")}</td>"))}</tr>");
+                }
+
+                line("</tbody></table>");
+            }
+        }
+
+        line(LanderPlot(summary));
+    }
+
+    private static string LanderPlot(JsonObject summary)
+    {
+        var variants = summary["variants"]!.AsArray().Where(v => v!["landers"] is JsonArray).ToList();
+        var names = variants.SelectMany(v => v!["landers"]!.AsArray().Select(l => l!["name"]!.GetValue<string>())).Distinct().ToList();
+        return Svg("Success per lander with its 95 % interval", "lander", "share of runs in which the lander succeeded", plot =>
+        {
+            for (var i = 0; i < variants.Count; i++)
+            {
+                var colour = Colours[i % Colours.Length];
+                var offset = variants.Count == 1 ? 0 : -0.2 + (0.4 * i / (variants.Count - 1));
+                var xs = new List<double>();
+                var ys = new List<double>();
+                foreach (var lander in variants[i]!["landers"]!.AsArray())
+                {
+                    var x = names.IndexOf(lander!["name"]!.GetValue<string>()) + offset;
+                    var ci = lander["success_ci95"]!.AsArray();
+                    var bar = plot.Add.Line(x, ci[0]!.GetValue<double>(), x, ci[1]!.GetValue<double>());
+                    bar.Color = colour;
+                    bar.LineWidth = 3;
+                    xs.Add(x);
+                    ys.Add(lander["success_rate"]?.GetValue<double>() ?? 0);
+                }
+
+                var dots = plot.Add.ScatterPoints(xs.ToArray(), ys.ToArray(), colour);
+                dots.MarkerSize = 10;
+                dots.LegendText = variants[i]!["name"]!.GetValue<string>();
+            }
+
+            plot.Axes.Bottom.SetTicks([.. Enumerable.Range(0, names.Count).Select(i => (double)i)], [.. names]);
+            plot.Axes.SetLimits(-0.5, names.Count - 0.5, 0, 1.05);
+            plot.ShowLegend(Alignment.LowerRight);
+        });
     }
 
     private static string SuccessPlot(JsonObject summary)

@@ -7,13 +7,16 @@ namespace DescentOps.Campaigns;
 
 /// <summary>
 /// <c>campaign.sqlite</c>: the campaign's settings and one committed transaction per run across the tables <c>runs</c>,
-/// <c>inputs</c>, <c>criteria</c>, <c>fault_measures</c> and <c>rule_firings</c>. A run is keyed by (variant, run_index):
+/// <c>inputs</c>, <c>criteria</c>, <c>fault_measures</c> and <c>rule_firings</c>, and for scenarios with landers <c>landers</c>
+/// (each lander's figures) and <c>lander_criteria</c> (the criteria judged on each lander). A run is keyed by (variant, run_index):
 /// a result already stored is never stored again, so a resumed or repeated run cannot be counted twice. Thread-safe:
 /// workers hand results in from any thread.
+/// Layouts: 1 had no lander tables; 2 adds <c>landers</c> and <c>lander_criteria</c>. A layout-1 store is brought to
+/// layout 2 when opened (the tables are added, empty: runs stored before have no lander rows).
 /// </summary>
 public sealed class CampaignStore : IDisposable
 {
-    public const int LayoutVersion = 1;
+    public const int LayoutVersion = 2;
 
     private readonly SqliteConnection _connection;
     private readonly Lock _gate = new();
@@ -29,7 +32,12 @@ public sealed class CampaignStore : IDisposable
         var version = Convert.ToInt64(store.Scalar("PRAGMA user_version"), CultureInfo.InvariantCulture);
         if (version == 0)
         {
-            store.Execute(Schema);
+            store.Execute(Schema + LanderTables);
+            store.Execute($"PRAGMA user_version = {LayoutVersion}");
+        }
+        else if (version == 1)
+        {
+            store.Execute(LanderTables);
             store.Execute($"PRAGMA user_version = {LayoutVersion}");
         }
         else if (version != LayoutVersion)
@@ -60,6 +68,19 @@ public sealed class CampaignStore : IDisposable
           PRIMARY KEY (variant, run_index, ordinal));
         CREATE TABLE rule_firings (variant TEXT NOT NULL, run_index INTEGER NOT NULL, rule TEXT NOT NULL, firings INTEGER NOT NULL,
           PRIMARY KEY (variant, run_index, rule));
+        """;
+
+    /// <summary>Layout 2: each lander's figures per run (booleans as 0 and 1, as in <c>runs</c>) and the criteria judged on it.</summary>
+    private const string LanderTables = """
+        CREATE TABLE landers (
+          variant TEXT NOT NULL, run_index INTEGER NOT NULL, ordinal INTEGER NOT NULL, lander TEXT NOT NULL, success INTEGER NOT NULL,
+          breakthrough_t_s REAL, final_depth_m REAL NOT NULL, energy_used_j REAL NOT NULL,
+          frames_sent INTEGER NOT NULL, frames_received INTEGER NOT NULL, frames_lost INTEGER NOT NULL, frames_held_max INTEGER NOT NULL,
+          time_stopped_s REAL NOT NULL, longest_stop_s REAL NOT NULL, time_frozen_s REAL NOT NULL, time_blind_s REAL NOT NULL,
+          vehicles_lost INTEGER NOT NULL, faults_unrecovered INTEGER NOT NULL, stalled INTEGER NOT NULL, station_dead INTEGER NOT NULL,
+          PRIMARY KEY (variant, run_index, lander));
+        CREATE TABLE lander_criteria (variant TEXT NOT NULL, run_index INTEGER NOT NULL, lander TEXT NOT NULL, criterion TEXT NOT NULL, requirement TEXT NOT NULL, value REAL, passed INTEGER NOT NULL,
+          PRIMARY KEY (variant, run_index, lander, criterion));
         """;
 
     /// <summary>The campaign's settings; empty for a new database.</summary>
@@ -148,6 +169,20 @@ public sealed class CampaignStore : IDisposable
                 Insert(transaction, "INSERT OR REPLACE INTO rule_firings VALUES ($v,$i,$r,$n)", ("$v", run.Variant), ("$i", run.Index), ("$r", rule), ("$n", firings));
             }
 
+            for (var k = 0; k < run.Landers.Count; k++)
+            {
+                var l = run.Landers[k];
+                Insert(transaction, "INSERT INTO landers VALUES ($v,$i,$k,$l,$ok,$bt,$depth,$energy,$sent,$received,$lost,$held,$stopped,$longest,$frozen,$blind,$vlost,$unrecovered,$stalled,$dead)",
+                    ("$v", run.Variant), ("$i", run.Index), ("$k", k), ("$l", l.Lander), ("$ok", l.Success ? 1 : 0), ("$bt", l.BreakthroughTimeS), ("$depth", l.FinalDepthM),
+                    ("$energy", l.EnergyUsedJ), ("$sent", l.FramesSent), ("$received", l.FramesReceivedOnGround), ("$lost", l.FramesLost), ("$held", l.FramesHeldMax),
+                    ("$stopped", l.TimeStoppedS), ("$longest", l.LongestStopS), ("$frozen", l.TimeFrozenS), ("$blind", l.TimeBlindS), ("$vlost", l.VehiclesLost),
+                    ("$unrecovered", l.FaultsUnrecovered), ("$stalled", l.Stalled ? 1 : 0), ("$dead", l.StationDead ? 1 : 0));
+                foreach (var c in l.Criteria)
+                {
+                    Insert(transaction, "INSERT INTO lander_criteria VALUES ($v,$i,$l,$c,$r,$x,$ok)", ("$v", run.Variant), ("$i", run.Index), ("$l", l.Lander), ("$c", c.Name), ("$r", c.Requirement), ("$x", c.Value), ("$ok", c.Passed ? 1 : 0));
+                }
+            }
+
             transaction.Commit();
             return true;
         }
@@ -158,7 +193,7 @@ public sealed class CampaignStore : IDisposable
     {
         lock (_gate)
         {
-            foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings" })
+            foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings", "landers", "lander_criteria" })
             {
                 Execute($"DELETE FROM {table} WHERE run_index >= {index.ToString(CultureInfo.InvariantCulture)}");
             }
@@ -175,6 +210,14 @@ public sealed class CampaignStore : IDisposable
             var faults = Group("SELECT variant, run_index, fault, kind, start_s, detected_after_s, first_action_after_s, recovered_after_s, recovery FROM fault_measures ORDER BY variant, run_index, ordinal",
                 r => new FaultMeasure(r.GetString(2), r.GetString(3), r.GetDouble(4), N(r, 5), N(r, 6), N(r, 7), r.GetString(8)));
             var firings = Group("SELECT variant, run_index, rule, firings FROM rule_firings ORDER BY variant, run_index, rowid", r => (r.GetString(2), r.GetInt32(3)));
+            var landerCriteria = Group("SELECT variant, run_index, lander, criterion, requirement, value, passed FROM lander_criteria ORDER BY variant, run_index, rowid",
+                r => (Lander: r.GetString(2), Result: new CriterionResult(r.GetString(3), r.GetString(4), N(r, 5), r.GetInt64(6) != 0)));
+            var landers = Group("SELECT * FROM landers ORDER BY variant, run_index, ordinal", r => new LanderSummary(
+                r.GetString(3), N(r, 5), r.GetDouble(6), r.GetDouble(7), r.GetInt64(8), r.GetInt64(9), r.GetInt64(10), r.GetInt64(11), r.GetDouble(12), r.GetDouble(13),
+                r.GetDouble(14), r.GetDouble(15), r.GetInt32(16), r.GetInt32(17), r.GetInt64(18) != 0, r.GetInt64(19) != 0)
+            {
+                Success = r.GetInt64(4) != 0,
+            });
             using var command = _connection.CreateCommand();
             command.CommandText = "SELECT * FROM runs ORDER BY variant, run_index";
             using var reader = command.ExecuteReader();
@@ -185,7 +228,10 @@ public sealed class CampaignStore : IDisposable
                 runs.Add(new RunRecord(key.Item1, key.Item2, reader.GetInt64(2), reader.GetString(3), reader.GetString(4), reader.GetInt64(5) != 0, N(reader, 6), reader.GetDouble(7),
                     reader.GetDouble(8), reader.GetDouble(9), reader.GetInt64(10), reader.GetInt64(11), reader.GetDouble(12), reader.GetDouble(13), reader.GetDouble(14), reader.GetDouble(15),
                     reader.GetInt32(16), reader.GetInt32(17), reader.GetString(18),
-                    inputs.GetValueOrDefault(key) ?? [], criteria.GetValueOrDefault(key) ?? [], faults.GetValueOrDefault(key) ?? [], firings.GetValueOrDefault(key) ?? []));
+                    inputs.GetValueOrDefault(key) ?? [], criteria.GetValueOrDefault(key) ?? [], faults.GetValueOrDefault(key) ?? [], firings.GetValueOrDefault(key) ?? [])
+                {
+                    Landers = [.. (landers.GetValueOrDefault(key) ?? []).Select(l => l with { Criteria = [.. (landerCriteria.GetValueOrDefault(key) ?? []).Where(c => c.Lander == l.Lander).Select(c => c.Result)] })],
+                });
             }
 
             return runs;

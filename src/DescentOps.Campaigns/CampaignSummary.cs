@@ -88,7 +88,7 @@ public static class CampaignSummary
             };
         }
 
-        return new JsonObject
+        var node = new JsonObject
         {
             ["name"] = name,
             ["runs"] = n,
@@ -102,6 +102,62 @@ public static class CampaignSummary
             ["rules_fired_in_runs"] = firedIn,
             ["rules_never_fired"] = new JsonArray([.. rules.Where(r => firedIn[r]!.GetValue<int>() == 0).Select(r => (JsonNode?)r)]),
         };
+        // Only scenarios with landers have the key, so a single-lander campaign's summary is what it always was.
+        if (runs.Any(r => r.Landers.Count > 0)) node["landers"] = Landers(runs);
+        return node;
+    }
+
+    /// <summary>
+    /// Per lander, in the scenario's order: its success (the run completed and the lander met every criterion judged on
+    /// it), reaching the ocean, a probe that froze in, a station dead at the end, each with its Wilson interval; its
+    /// breakthrough quantiles with their intervals; its criteria passed.
+    /// </summary>
+    private static JsonArray Landers(List<RunRecord> runs)
+    {
+        var names = runs.SelectMany(r => r.Landers).Select(l => l.Lander).Distinct().ToList();
+        var nodes = new JsonArray();
+        foreach (var name in names)
+        {
+            var own = runs.SelectMany(r => r.Landers.Where(l => l.Lander == name)).ToList();
+            var n = own.Count;
+            var node = new JsonObject { ["name"] = name, ["runs"] = n };
+            foreach (var (key, pick) in new (string, Func<Mission.Running.LanderSummary, bool>)[]
+            {
+                ("successes", l => l.Success), ("reached_ocean", l => l.ReachedOcean), ("stalled", l => l.Stalled), ("station_dead", l => l.StationDead),
+            })
+            {
+                var count = own.Count(pick);
+                var (low, high) = WilsonInterval.Compute95(count, n);
+                var stem = key == "successes" ? "success" : key;
+                node[key] = count;
+                node[stem + "_rate"] = n > 0 ? count / (double)n : null;
+                node[stem + "_ci95"] = new JsonArray(low, high);
+            }
+
+            var quantiles = new JsonArray();
+            var breakthrough = own.Select(l => l.BreakthroughTimeS ?? double.PositiveInfinity).ToList();
+            foreach (var p in Quantiles)
+            {
+                var (estimate, qLow, qHigh) = QuantileInterval.Compute(breakthrough, p);
+                quantiles.Add(new JsonObject { ["p"] = p, ["t_s"] = estimate, ["ci95"] = new JsonArray(qLow, qHigh) });
+            }
+
+            node["breakthrough_quantiles"] = quantiles;
+            var depths = own.Select(l => l.FinalDepthM).ToList();
+            var (depth, depthLow, depthHigh) = QuantileInterval.Compute(depths, 0.5);
+            node["final_depth_median_m"] = depth;
+            node["final_depth_median_ci95"] = new JsonArray(depthLow, depthHigh);
+            var criteria = new JsonObject();
+            foreach (var criterion in own.SelectMany(l => l.Criteria).Select(c => c.Name).Distinct())
+            {
+                criteria[criterion] = own.Count(l => l.Criteria.Any(c => c.Name == criterion && c.Passed));
+            }
+
+            node["criteria_passed"] = criteria;
+            nodes.Add(node);
+        }
+
+        return nodes;
     }
 
     private static JsonObject Pair(string first, List<RunRecord> firstRuns, string second, List<RunRecord> secondRuns)

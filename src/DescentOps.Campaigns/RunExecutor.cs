@@ -53,7 +53,10 @@ public static class RunExecutor
             summary.Inputs,
             summary.Criteria,
             summary.Faults,
-            [.. summary.RuleNames.Distinct().Select(r => (r, summary.RuleFirings.GetValueOrDefault(r)))]);
+            [.. summary.RuleNames.Distinct().Select(r => (r, summary.RuleFirings.GetValueOrDefault(r)))])
+        {
+            Landers = summary.Landers,
+        };
     }
 
     /// <summary>The chain value at the end of a journal file's last line.</summary>

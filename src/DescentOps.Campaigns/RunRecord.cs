@@ -5,7 +5,8 @@ namespace DescentOps.Campaigns;
 /// <summary>
 /// What a campaign keeps of one run: the outcome, the summary figures, the drawn inputs, each criterion, each fault's
 /// measures, each rule's firings, and the summary line's chain value (which a regenerated log must end with).
-/// Keyed by (variant, index): a result that arrives twice is the same result.
+/// Keyed by (variant, index): a result that arrives twice is the same result. A scenario with landers adds each lander's
+/// own figures and verdicts (<see cref="Landers"/>).
 /// </summary>
 public sealed record RunRecord(
     string Variant,
@@ -30,4 +31,8 @@ public sealed record RunRecord(
     IReadOnlyList<DrawnInput> Inputs,
     IReadOnlyList<CriterionResult> Criteria,
     IReadOnlyList<FaultMeasure> Faults,
-    IReadOnlyList<(string Rule, int Firings)> RuleFirings);
+    IReadOnlyList<(string Rule, int Firings)> RuleFirings)
+{
+    /// <summary>Each lander's figures and criteria, in the scenario's order; empty for a scenario without landers.</summary>
+    public IReadOnlyList<LanderSummary> Landers { get; init; } = [];
+}

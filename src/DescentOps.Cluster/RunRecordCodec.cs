@@ -7,7 +7,8 @@ namespace DescentOps.Cluster;
 /// <summary>
 /// A run's record as it crosses the network: System.Text.Json, whose numbers are written in the shortest form that reads
 /// back to the same double, so a record computed on a worker is stored bit for bit as if computed locally. A record
-/// larger than <see cref="MaxChars"/> or one that does not read back is refused, not stored.
+/// larger than <see cref="MaxChars"/> or one that does not read back is refused, not stored. Each lander's figures
+/// (<see cref="RunRecord.Landers"/>) travel in the same text.
 /// </summary>
 public static class RunRecordCodec
 {
@@ -38,7 +39,8 @@ public static class RunRecordCodec
         }
 
         if (record is null || record.Variant is null || record.Outcome is null || record.Reason is null || record.SummaryChain is null
-            || record.Inputs is null || record.Criteria is null || record.Faults is null || record.RuleFirings is null)
+            || record.Inputs is null || record.Criteria is null || record.Faults is null || record.RuleFirings is null
+            || record.Landers is null || record.Landers.Any(l => l is null || l.Lander is null || l.Criteria is null))
         {
             throw new InvalidDataException("a run record with missing fields");
         }

@@ -34,6 +34,27 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
+    public async Task A_clustered_three_lander_campaign_gives_the_local_campaigns_per_lander_results()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", DescentOps.Campaigns.Tests.LanderCampaignScenario.File(), "--runs", "6", "--seed", "5" };
+        var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+
+        var port = ClusterFixture.FreePort();
+        await using var worker = new ClusterFixture.Worker(port, slots: 2);
+        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        Assert.True(clusterExit == 0, stdout + clusterErr);
+        Assert.Equal(6, worker.Counters.RunsDone); // every run crossed the wire
+
+        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        var dump = ClusterFixture.Dump(local);
+        Assert.Equal(dump, ClusterFixture.Dump(clustered));
+        Assert.Equal(18, dump.Split('\n').SkipWhile(l => l != "landers").Skip(1).TakeWhile(l => l != "lander_criteria").Count()); // 6 runs x 3 landers
+    }
+
+    [Fact]
     public async Task A_precision_stop_ends_a_clustered_campaign_where_it_ends_a_local_one()
     {
         var local = ClusterFixture.TempDir();

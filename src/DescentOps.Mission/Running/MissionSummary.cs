@@ -52,6 +52,9 @@ public sealed record MissionSummary(
     /// <summary>The scenario's criteria judged on this run.</summary>
     public IReadOnlyList<CriterionResult> Criteria { get; init; } = [];
 
+    /// <summary>Each lander's own figures, in the scenario's order; empty for a scenario without a landers list.</summary>
+    public IReadOnlyList<LanderSummary> Landers { get; init; } = [];
+
     /// <summary>A run succeeds when it completes and meets every criterion.</summary>
     public bool Success => Outcome.Kind == RunOutcomeKind.Completed && Criteria.All(c => c.Passed);
 

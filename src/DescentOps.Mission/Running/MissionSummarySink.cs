@@ -11,108 +11,77 @@ namespace DescentOps.Mission.Running;
 public sealed class MissionSummarySink : IJournalSink
 {
     private readonly IJournalSink _next;
-    private double? _breakthroughS;
-    private double _depthM;
-    private double _energyJ;
-    private int _faults;
-    private long _framesSent;
-    private long _framesReceived;
-    private long _framesLost;
-    private int _profiles;
     private readonly FaultMeasures _faultMeasures;
-    private readonly RunFigures _figures = new();
-    private readonly GroundBlindness _blind = new();
+    private readonly SummaryTally _mission = new();
+    private readonly List<(string Lander, SummaryTally Tally)> _landers;
 
     public MissionSummarySink(IJournalSink next)
         : this(next, new FaultMeasures())
     {
     }
 
-    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures)
+    /// <param name="next">Where every record goes on.</param>
+    /// <param name="faultMeasures">The fault measures, which know what each rule reads.</param>
+    /// <param name="landers">The scenario's landers in file order (none for a scenario without a landers list): each gets its own figures.</param>
+    public MissionSummarySink(IJournalSink next, FaultMeasures faultMeasures, IReadOnlyList<string>? landers = null)
     {
         _next = next;
         _faultMeasures = faultMeasures;
+        _landers = [.. (landers ?? []).Select(l => (l, new SummaryTally()))];
     }
 
     public void Write(JournalRecord record)
     {
         _next.Write(record);
         _faultMeasures.Observe(record);
-        _figures.Observe(record);
-        switch (record.Kind)
+        _mission.Observe(record);
+        if (_landers.Count > 0 && LanderOf(record) is { } lander)
         {
-            case ProbeRecords.Telemetry:
-                _framesSent++;
-                _blind.FrameSent(record.Time.SecondsSinceEpoch);
-                _depthM = Field(record, "depth_m");
-                _energyJ = Field(record, "energy_used_j");
-                break;
-            case ProbeRecords.Breakthrough:
-                _breakthroughS = record.Time.SecondsSinceEpoch;
-                _depthM = Field(record, "depth_m");
-                _energyJ = Field(record, "energy_used_j");
-                break;
-            case ProbeRecords.MissionComplete:
-                _energyJ = Field(record, "energy_used_j");
-                break;
-            case GroundRecords.Telemetry:
-                _framesReceived++;
-                _blind.FrameReceived(record.Time.SecondsSinceEpoch, Field(record, "latency_s"));
-                break;
-            case DataRecords.Lost when Text(record, "kind") == "telemetry":
-            case StationRecords.FrameLost:
-                _framesLost++;
-                break;
-            case StationRecords.DataLost when Text(record, "data") == "telemetry":
-                _framesLost += record.Fields.First(f => f.Name == "count").Integer;
-                break;
-            case FaultRecords.Injected:
-                _faults++;
-                break;
-            case VehicleRecords.Profile:
-                _profiles++;
-                break;
+            foreach (var (name, tally) in _landers)
+            {
+                if (name == lander) tally.Observe(record);
+            }
         }
     }
 
     public MissionSummary Summarize(RunResult result)
     {
-        _figures.Finish(result.FinalTime.SecondsSinceEpoch);
+        var endS = result.FinalTime.SecondsSinceEpoch;
+        _mission.Figures.Finish(endS);
+        foreach (var (_, tally) in _landers) tally.Figures.Finish(endS);
         return new MissionSummary(
             result.Outcome,
-            result.FinalTime.SecondsSinceEpoch,
-            _breakthroughS,
-            _depthM,
-            _energyJ,
-            _faults,
-            _framesSent,
-            _framesReceived,
-            _framesLost,
-            _profiles,
+            endS,
+            _mission.BreakthroughS,
+            _mission.DepthM,
+            _mission.EnergyJ,
+            _mission.FaultsInjected,
+            _mission.FramesSent,
+            _mission.FramesReceived,
+            _mission.FramesLost,
+            _mission.VehicleProfiles,
             result.EventsDelivered,
             result.RecordsWritten,
             result.ComponentFailures,
             _faultMeasures.Measures())
         {
-            TimeStoppedS = _figures.TimeStoppedS,
-            LongestStopS = _figures.LongestStopS,
-            TimeFrozenS = _figures.TimeFrozenS,
-            TimeBlindS = _blind.TotalS(),
-            FramesHeldMax = _figures.FramesHeldMax,
-            VehiclesLost = _figures.VehiclesLost,
-            RuleFirings = new Dictionary<string, int>(_figures.RuleFirings, StringComparer.Ordinal),
+            TimeStoppedS = _mission.Figures.TimeStoppedS,
+            LongestStopS = _mission.Figures.LongestStopS,
+            TimeFrozenS = _mission.Figures.TimeFrozenS,
+            TimeBlindS = _mission.Blind.TotalS(),
+            FramesHeldMax = _mission.Figures.FramesHeldMax,
+            VehiclesLost = _mission.Figures.VehiclesLost,
+            RuleFirings = new Dictionary<string, int>(_mission.Figures.RuleFirings, StringComparer.Ordinal),
+            Landers = [.. _landers.Select(l => Lander(l.Lander, l.Tally))],
         };
     }
 
-    private static string? Text(JournalRecord record, string name) => record.Fields.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault();
+    /// <summary>A lander's figures; its unrecovered faults and its criteria are added when the run is complete (<see cref="PreparedRun.Complete"/>).</summary>
+    private static LanderSummary Lander(string name, SummaryTally t) => new(
+        name, t.BreakthroughS, t.DepthM, t.EnergyJ, t.FramesSent, t.FramesReceived, t.FramesLost, t.Figures.FramesHeldMax,
+        t.Figures.TimeStoppedS, t.Figures.LongestStopS, t.Figures.TimeFrozenS, t.Blind.TotalS(), t.Figures.VehiclesLost, 0, t.FrozeIn, t.StationDead);
 
-    private static double Field(JournalRecord record, string name)
-    {
-        foreach (var field in record.Fields)
-        {
-            if (field.Name == name) return field.Number;
-        }
-
-        throw new InvalidOperationException($"Record {record.Kind} has no field '{name}'.");
-    }
+    /// <summary>The lander a record is about: its component's, or for the shared link's records the lander they name.</summary>
+    private static string? LanderOf(JournalRecord record) =>
+        LanderIds.LanderOf(record.Source) ?? (record.Fields.Count > 0 && record.Fields[0].Name == LanderTagSink.Field ? record.Fields[0].Text : null);
 }

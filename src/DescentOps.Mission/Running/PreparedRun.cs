@@ -36,7 +36,7 @@ public sealed class PreparedRun
     {
         var rulePoints = Rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
-        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy));
+        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)]);
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
         return summary;
     }
@@ -44,7 +44,28 @@ public sealed class PreparedRun
     /// <summary>The summary with what the sink cannot know: the drawn inputs, the rule set, and the criteria judged.</summary>
     public MissionSummary Complete(MissionSummary summary)
     {
-        var figures = summary with { Inputs = Inputs, RuleNames = [.. Rules.Rules.Select(r => r.Name)] };
-        return figures with { Criteria = CriterionResult.Judge(Scenario.Criteria, figures) };
+        var figures = summary with
+        {
+            Inputs = Inputs,
+            RuleNames = [.. Rules.Rules.Select(r => r.Name)],
+            Landers = [.. summary.Landers.Select(l => l with { FaultsUnrecovered = Unrecovered(summary, l.Lander) })],
+        };
+        var completed = summary.Outcome.Kind == Engine.Running.RunOutcomeKind.Completed;
+        return figures with
+        {
+            Criteria = CriterionResult.Judge(Scenario.Criteria, figures),
+            Landers = [.. figures.Landers.Select(l =>
+            {
+                var criteria = CriterionResult.JudgeLander(Scenario.Criteria, l);
+                return l with { Criteria = criteria, Success = completed && criteria.All(c => c.Passed) };
+            })],
+        };
+    }
+
+    /// <summary>Faults of a lander with a recovery measure that did not recover (as the run's <c>faults_unrecovered</c>).</summary>
+    private int Unrecovered(MissionSummary summary, string lander)
+    {
+        var own = Scenario.Landers.First(l => l.Name == lander).View.Faults.Select(f => f.Name).ToHashSet(StringComparer.Ordinal);
+        return summary.Faults.Count(f => own.Contains(f.Fault) && f.HasRecoveryMeasure && f.RecoveredAfterS is null);
     }
 }

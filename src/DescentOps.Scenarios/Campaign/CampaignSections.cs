@@ -41,11 +41,43 @@ public static class CampaignSections
                 errors.Add(new ScenarioError(list[i].LocationOf("name"), $"criteria[{i}].name", $"criterion '{name}' is given twice"));
             }
 
-            if (ParseCriterion(name, requirement, out var error) is { } criterion) criteria.Add(criterion);
+            var scope = Scope(scenario, list[i], $"criteria[{i}]", errors);
+            if (ParseCriterion(name, requirement, out var error) is { } criterion) criteria.Add(criterion with { Scope = scope.Scope, Lander = scope.Lander });
             else errors.Add(new ScenarioError(list[i].LocationOf("require"), $"criteria[{i}].require", error));
         }
 
         return scenario with { Uncertain = inputs, Criteria = criteria };
+    }
+
+    /// <summary>A criterion's <c>lander</c> or <c>landers</c>: allowed only with landers, one of the two, a lander the scenario has.</summary>
+    private static (CriterionScope Scope, string? Lander) Scope(Scenario scenario, BoundSection item, string at, List<ScenarioError> errors)
+    {
+        var lander = item.OptionalText("lander");
+        var landers = item.OptionalText("landers");
+        if (scenario.Landers.Count == 0)
+        {
+            if (lander is not null) errors.Add(new ScenarioError(item.LocationOf("lander"), at + ".lander", "this scenario has no landers list: its criteria judge the whole run"));
+            if (landers is not null) errors.Add(new ScenarioError(item.LocationOf("landers"), at + ".landers", "this scenario has no landers list: its criteria judge the whole run"));
+            return (CriterionScope.Run, null);
+        }
+
+        if (lander is not null && landers is not null)
+        {
+            errors.Add(new ScenarioError(item.LocationOf("landers"), at + ".landers", "give 'lander' (one lander) or 'landers' (every or any), not both"));
+            return (CriterionScope.EveryLander, null);
+        }
+
+        if (lander is not null)
+        {
+            if (scenario.Landers.All(l => l.Name != lander))
+            {
+                errors.Add(new ScenarioError(item.LocationOf("lander"), at + ".lander", $"no lander is named '{lander}' (the landers: {string.Join(", ", scenario.Landers.Select(l => l.Name))})"));
+            }
+
+            return (CriterionScope.Lander, lander);
+        }
+
+        return (landers == "any" ? CriterionScope.AnyLander : CriterionScope.EveryLander, null);
     }
 
     /// <summary>A comma-separated list of rule names (empty when absent).</summary>

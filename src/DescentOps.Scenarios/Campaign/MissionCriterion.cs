@@ -6,6 +6,15 @@ namespace DescentOps.Scenarios.Campaign;
 /// </summary>
 public sealed record MissionCriterion(string Name, string Requirement, string Measure, string Comparison, double LowSi, double HighSi)
 {
+    /// <summary>Whose figures it judges: the run's (a scenario without landers), one lander's, every lander's or any lander's.</summary>
+    public CriterionScope Scope { get; init; } = CriterionScope.Run;
+
+    /// <summary>The lander it names when <see cref="Scope"/> is <see cref="CriterionScope.Lander"/>.</summary>
+    public string? Lander { get; init; }
+
+    /// <summary>Whether this criterion is judged on the figures of <paramref name="lander"/>.</summary>
+    public bool Concerns(string lander) => Scope is CriterionScope.EveryLander or CriterionScope.AnyLander || (Scope == CriterionScope.Lander && Lander == lander);
+
     /// <summary>Whether a measured value meets the criterion; a value that does not exist (no breakthrough) never does.</summary>
     public bool IsMetBy(double? value) => value is { } v && Comparison switch
     {

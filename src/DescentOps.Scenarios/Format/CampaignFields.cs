@@ -32,6 +32,8 @@ public static class CampaignFields
         [
             new TextField("name", "Criterion identifier (lowercase letters, digits, '-').", IsIdentifier: true),
             new TextField("require", "A run measure compared in the rule language's words: 'breakthrough below 150 d', 'frames_lost below 1', 'longest_stop below 12 h', 'vehicles_lost below 1', 'time_blind below 2 d', 'final_depth inside 2 km to 3 km'."),
+            new TextField("lander", "Scenarios with landers: the lander whose figures the criterion judges (its name).", Required: false),
+            new ChoiceField("landers", "Scenarios with landers: 'every' (each lander must meet it; the default when neither this nor 'lander' is given) or 'any' (at least one lander must).", ["every", "any"], Required: false),
         ]),
         0,
         100,
