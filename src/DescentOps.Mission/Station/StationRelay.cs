@@ -1,6 +1,5 @@
 using DescentOps.Engine.Components;
 using DescentOps.Mission.Messages;
-using DescentOps.Primitives.Time;
 using DescentOps.Records;
 using DescentOps.Records.Kinds;
 

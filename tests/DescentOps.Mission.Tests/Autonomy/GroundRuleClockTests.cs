@@ -11,6 +11,7 @@ namespace DescentOps.Mission.Tests.Autonomy;
 /// </summary>
 public sealed class GroundRuleClockTests
 {
+    /// <param name="condition">The rule's condition: a timer of two hours, longer than the downlink.</param>
     /// <param name="endAfterS">
     /// When the condition first holds on a frame sampled after the first frame past 0.5 m: "for 2 h" holds on the
     /// frame sampled exactly 7200 s later; "time since ... above 2 h" is strict (LANGUAGE.md: a tick past 2 h), so on the

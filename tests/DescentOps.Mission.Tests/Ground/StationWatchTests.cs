@@ -18,7 +18,7 @@ public sealed class StationWatchTests
 
         Assert.Same(silent, silent.SilenceOver(At(650)));
         var dead = silent.SilenceOver(At(700));
-        Assert.Equal((false, (SimTime?)null), (dead.Alive, dead.SilenceEnds));
+        Assert.Equal((false, null), (dead.Alive, dead.SilenceEnds));
     }
 
     [Fact]
@@ -26,7 +26,7 @@ public sealed class StationWatchTests
     {
         var silent = StationWatch.Start(true).Carrier(false, At(100), Timeout);
         var back = silent.Carrier(true, At(400), Timeout);
-        Assert.Equal((true, (SimTime?)null), (back.Alive, back.SilenceEnds));
+        Assert.Equal((true, null), (back.Alive, back.SilenceEnds));
 
         var revived = silent.SilenceOver(At(700)).Carrier(true, At(5000), Timeout);
         Assert.True(revived.Alive);
@@ -37,7 +37,7 @@ public sealed class StationWatchTests
     {
         var silent = StationWatch.Start(true).Carrier(false, At(100), Timeout);
         var set = silent.View(false, At(300), Timeout);
-        Assert.Equal((true, false, (SimTime?)null), (set.Alive, set.InView, set.SilenceEnds));
+        Assert.Equal((true, false, null), (set.Alive, set.InView, set.SilenceEnds));
         // A lost carrier out of view tells nothing: the station may be fine behind the horizon.
         Assert.Null(StationWatch.Start(false).Carrier(false, At(300), Timeout).SilenceEnds);
 

@@ -4,7 +4,6 @@ using DescentOps.Mission.Messages;
 using DescentOps.Mission.Station;
 using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
-using DescentOps.Scenarios;
 using DescentOps.Scenarios.Model;
 using DescentOps.Tests.Shared;
 
@@ -113,7 +112,7 @@ public sealed class StationTransitionTests
         var context = At(turn.SecondsSinceEpoch);
         var after = StationTransmitter.Pump(Windowed.Design, StationTransmitter.Serve(Windowed.Design, state with { PendingService = null }, context), context);
 
-        Assert.Equal((1, 1L, (SimTime?)null), (after.FramesQueued, after.FramesForwarded, after.WaitingSince));
+        Assert.Equal((1, 1L, null), (after.FramesQueued, after.FramesForwarded, after.WaitingSince));
         Assert.Equal(("station.link_resumed", turn.SecondsSinceEpoch - closedS), (context.Records[0].Kind, Number(context.Records[0], "waited_s")));
         // The frame reaches home after its time on the air plus the light time; the next turn comes when it is off the air.
         Assert.Equal(MissionIds.Ground, context.Scheduled[0].Target);
@@ -152,7 +151,7 @@ public sealed class StationTransitionTests
         var pending = At(0).ScheduleSelf(SimDuration.FromSeconds(5), LinkService.Instance);
         var state = StationLife.Upset(Charged.Design, Charged.InitialState with { PendingService = pending }, 3600, "discharge", context);
 
-        Assert.Equal((1L, SimTime.FromSecondsSinceEpoch(4600), (Engine.Scheduling.EventHandle?)null), (state.Upsets, state.RecoveringUntil!.Value, state.PendingService));
+        Assert.Equal((1L, SimTime.FromSecondsSinceEpoch(4600), null), (state.Upsets, state.RecoveringUntil!.Value, state.PendingService));
         Assert.Equal([pending], context.Cancelled);
         Assert.Equal(new StationUpsetOver(SimTime.FromSecondsSinceEpoch(4600)), context.Scheduled.Single().Payload);
         Assert.Equal("lost", Field(context.Records.Single(), "arrivals"));
