@@ -13,6 +13,9 @@ internal sealed class ConditionChecker
     private readonly DiagnosticList _diagnostics;
     private readonly QuantityChecker _quantities;
 
+    /// <summary>Where the rule whose condition is being checked runs (null outside a rule).</summary>
+    private Placement? _placement;
+
     public ConditionChecker(TelemetryCatalogue catalogue, DiagnosticList diagnostics, QuantityChecker quantities)
     {
         _catalogue = catalogue;
@@ -20,7 +23,21 @@ internal sealed class ConditionChecker
         _quantities = quantities;
     }
 
-    internal CompiledCondition? Check(ConditionSyntax condition)
+    /// <summary>The condition of a rule that runs at <paramref name="placement"/> (null: not a rule's, e.g. a fault's 'when').</summary>
+    internal CompiledCondition? Check(ConditionSyntax condition, Placement? placement)
+    {
+        _placement = placement;
+        try
+        {
+            return Check(condition);
+        }
+        finally
+        {
+            _placement = null;
+        }
+    }
+
+    private CompiledCondition? Check(ConditionSyntax condition)
     {
         switch (condition)
         {
@@ -162,6 +179,12 @@ internal sealed class ConditionChecker
 
     private bool Readable(TelemetryPointSpec spec, NameSyntax point)
     {
+        if (spec.GroundOnly && (_placement != Placement.Ground || _catalogue.ReadsTrueState))
+        {
+            _diagnostics.Error(DiagnosticCode.GroundOnly, point.Location, $"'{spec.Name}' is what the ground knows of the station: only ground rules and procedures may read it, not a rule on board or a fault's 'when'");
+            return false;
+        }
+
         if (!spec.TrueStateOnly || _catalogue.ReadsTrueState) return true;
         _diagnostics.Error(DiagnosticCode.TrueStateOnly, point.Location, $"'{spec.Name}' is true state that no sensor reports: only a fault's 'when' may read it, not a rule");
         return false;

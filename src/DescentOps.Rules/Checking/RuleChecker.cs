@@ -111,7 +111,7 @@ public sealed class RuleChecker
             cooldown = checkedCooldown;
         }
 
-        var condition = rule.Condition is null ? null : _conditions.Check(rule.Condition);
+        var condition = rule.Condition is null ? null : _conditions.Check(rule.Condition, rule.Placement);
         var actions = _actions.Check(rule.Actions);
         if (rule.Placement == Placement.Board)
         {

@@ -51,7 +51,10 @@ internal static class StationReader
                 charging.Quantity("recovery_time"),
                 (charging.OptionalText("during_recovery") ?? "queue") == "queue"),
             station.OptionalInteger("frame_queue_capacity"),
-            station.OptionalInteger("command_queue_capacity"));
+            station.OptionalInteger("command_queue_capacity"))
+        {
+            SilenceTimeoutS = station.OptionalQuantity("silence_timeout") ?? StationModel.DefaultSilenceTimeoutS,
+        };
     }
 
     /// <summary>The station's parts that depend on each other, or whose range depends on a choice.</summary>
