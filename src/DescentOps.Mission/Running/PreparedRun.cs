@@ -36,9 +36,21 @@ public sealed class PreparedRun
     {
         var rulePoints = Rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
-        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)]);
+        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)])
+        {
+            CoveredRules = [.. Rules.Rules.Select(r => r.Name)],
+            CoveredProcedures = CoveredProcedures(Scenario),
+        };
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
         return summary;
+    }
+
+    /// <summary>The procedures of the scenario, or of every lander (each name once, the first lander's first).</summary>
+    public static IReadOnlyList<Procedures.CompiledProcedure> CoveredProcedures(Scenario scenario)
+    {
+        if (scenario.Landers.Count == 0) return Procedures.MissionProcedures.Compile(scenario);
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        return [.. scenario.Landers.SelectMany(l => Procedures.MissionProcedures.Compile(l.View)).Where(p => seen.Add(p.Name))];
     }
 
     /// <summary>The summary with what the sink cannot know: the drawn inputs, the rule set, and the criteria judged.</summary>
