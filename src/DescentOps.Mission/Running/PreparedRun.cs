@@ -38,7 +38,7 @@ public sealed class PreparedRun
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
         var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)])
         {
-            CoveredRules = [.. Rules.Rules.Select(r => r.Name)],
+            CoveredRules = Scenario.Landers.Count == 0 ? [.. Rules.Rules.Select(r => r.Name)] : [.. Scenario.Landers.SelectMany(l => Autonomy.MissionRules.Compile(l.View).Rules.Select(r => r.Name)).Distinct()],
             CoveredProcedures = CoveredProcedures(Scenario),
         };
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
