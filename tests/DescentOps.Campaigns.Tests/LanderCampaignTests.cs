@@ -85,6 +85,27 @@ public sealed class LanderCampaignTests
     }
 
     [Fact]
+    public void A_variants_fault_for_one_lander_acts_in_a_campaign_with_drawn_inputs()
+    {
+        var scenario = ScenarioLoader.LoadText(LanderCampaignScenario.Text, "three-landers-campaign.yaml");
+        const string change = """
+            add_faults:
+              - name: cairn-dies
+                lander: tarn
+                kind: station_failure
+                at: 2 d
+            """;
+        var variant = new CampaignVariant("cairn-dies", change);
+        var plan = new CampaignPlan(scenario, [CampaignVariant.Baseline, variant], 5, scenario.Run.UntilS, "test-build", Engine.Randomness.RandomStream.AlgorithmName);
+        var baseline = RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, 0));
+        var changed = RunExecutor.Execute(plan, plan.Spec("cairn-dies", 0));
+        Assert.Equal(baseline.Inputs, changed.Inputs); // the same draws
+        Assert.False(baseline.Landers.Single(l => l.Lander == "tarn").StationDead);
+        Assert.True(changed.Landers.Single(l => l.Lander == "tarn").StationDead); // the added fault reached the lander's own components
+        Assert.Contains(changed.Faults, f => f.Fault == "cairn-dies");
+    }
+
+    [Fact]
     public async Task A_single_lander_campaign_has_no_lander_rows_or_keys()
     {
         var dir = CampaignFixture.TempDir();
