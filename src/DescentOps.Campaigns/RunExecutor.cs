@@ -1,4 +1,3 @@
-using DescentOps.Engine.Running;
 using DescentOps.Journal;
 using DescentOps.Mission.Running;
 

@@ -1,5 +1,4 @@
 using Akka.Actor;
-using Akka.Hosting;
 using Microsoft.Extensions.DependencyInjection;
 using Microsoft.Extensions.Hosting;
 

@@ -1,6 +1,5 @@
 using Akka;
 using Akka.Actor;
-using Akka.Hosting;
 using Microsoft.Extensions.DependencyInjection;
 
 namespace DescentOps.Cluster;

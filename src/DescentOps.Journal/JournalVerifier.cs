@@ -1,3 +1,5 @@
+using System.Buffers;
+
 namespace DescentOps.Journal;
 
 /// <summary>
@@ -14,6 +16,8 @@ namespace DescentOps.Journal;
 /// </remarks>
 public static class JournalVerifier
 {
+    private static readonly SearchValues<byte> LowerHexDigits = SearchValues.Create("0123456789abcdef"u8);
+
     public static VerificationReport Verify(string path)
     {
         ArgumentException.ThrowIfNullOrEmpty(path);
@@ -119,7 +123,7 @@ public static class JournalVerifier
         }
 
         chainHex = line.Slice(bodyLength + JournalFormat.ChainSeparator.Length, JournalFormat.ChainHexLength);
-        if (chainHex.IndexOfAnyExcept("0123456789abcdef"u8) >= 0)
+        if (chainHex.IndexOfAnyExcept(LowerHexDigits) >= 0)
         {
             return false;
         }

@@ -142,13 +142,22 @@ internal sealed class Utf8LineBuilder
                 continue;
             }
 
-            chars = chars[AppendSpecial(chars)..];
+            var used = AppendSpecial(chars);
+            if (used == 0)
+            {
+                throw new ArgumentException($"The text contains a lone surrogate (U+{(int)chars[0]:X4}); it has no UTF-8 form.", nameof(text));
+            }
+
+            chars = chars[used..];
         }
 
         Append((byte)'"');
     }
 
-    /// <summary>Appends the first character (or surrogate pair) of <paramref name="chars"/>; returns how many it used.</summary>
+    /// <summary>
+    /// Appends the first character (or surrogate pair) of <paramref name="chars"/>; returns how many it used, or 0 for a
+    /// lone surrogate (nothing appended).
+    /// </summary>
     private int AppendSpecial(ReadOnlySpan<char> chars)
     {
         var c = chars[0];
@@ -173,7 +182,7 @@ internal sealed class Utf8LineBuilder
 
         if (Rune.DecodeFromUtf16(chars, out var rune, out var used) != OperationStatus.Done)
         {
-            throw new ArgumentException($"The text contains a lone surrogate (U+{(int)c:X4}); it has no UTF-8 form.", "text");
+            return 0;
         }
 
         Length += rune.EncodeToUtf8(Reserve(rune.Utf8SequenceLength));

@@ -168,7 +168,7 @@ public sealed class RehearsalServer : IAsyncDisposable
         return EmbeddedAssets.Read(name) is { } bytes ? Results.Bytes(bytes, EmbeddedAssets.ContentType(name)) : Results.NotFound();
     }
 
-    private async Task<IResult> InputAsync(HttpContext context, Func<JsonObject, InputResult> offer, bool bodyRequired = true)
+    private static async Task<IResult> InputAsync(HttpContext context, Func<JsonObject, InputResult> offer, bool bodyRequired = true)
     {
         JsonObject body;
         try

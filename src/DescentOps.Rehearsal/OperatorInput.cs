@@ -8,16 +8,9 @@ public sealed record OperatorInput(long Number, OperatorInputKind Kind, string B
 {
     public string KindWord => Kind.ToString().ToLowerInvariant();
 
-    public static bool TryParseKind(string word, out OperatorInputKind kind)
-    {
-        foreach (var candidate in Enum.GetValues<OperatorInputKind>())
-        {
-            if (candidate.ToString().ToLowerInvariant() != word) continue;
-            kind = candidate;
-            return true;
-        }
+    /// <summary>The kinds by their word (the lower-case name, matched exactly).</summary>
+    private static readonly Dictionary<string, OperatorInputKind> KindsByWord =
+        Enum.GetValues<OperatorInputKind>().ToDictionary(k => k.ToString().ToLowerInvariant(), StringComparer.Ordinal);
 
-        kind = default;
-        return false;
-    }
+    public static bool TryParseKind(string word, out OperatorInputKind kind) => KindsByWord.TryGetValue(word, out kind);
 }

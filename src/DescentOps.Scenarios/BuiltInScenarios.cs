@@ -1,4 +1,3 @@
-using System.Reflection;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 

@@ -1,6 +1,4 @@
 using System.Text.Json.Nodes;
-using DescentOps.Campaigns;
-using DescentOps.Cli.Commands;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Tests.Shared;
 using Xunit;

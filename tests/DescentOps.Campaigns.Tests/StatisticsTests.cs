@@ -1,5 +1,4 @@
 using System.Numerics;
-using DescentOps.Campaigns;
 using DescentOps.Campaigns.Statistics;
 using Xunit;
 

@@ -1,4 +1,3 @@
-using DescentOps.Cluster;
 using Xunit;
 
 namespace DescentOps.Cluster.Tests;

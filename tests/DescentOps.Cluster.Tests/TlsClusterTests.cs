@@ -37,7 +37,7 @@ public sealed class TlsClusterTests
         await node.Completion.WaitAsync(ClusterFixture.Guard);
         Assert.Equal(2, worker.Counters.RunsDone);
         Assert.Equal(
-            [.. new[] { 0, 1 }.Select(i => RunRecordCodec.Encode(RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, i))))],
+            [.. Enumerable.Range(0, 2).Select(i => RunRecordCodec.Encode(RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, i))))],
             stored.OrderBy(r => r.Index).Select(RunRecordCodec.Encode).ToList());
     }
 

@@ -1,5 +1,4 @@
 using DescentOps.Campaigns;
-using DescentOps.Cluster;
 using Xunit;
 
 namespace DescentOps.Cluster.Tests;

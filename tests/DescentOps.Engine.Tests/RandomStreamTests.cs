@@ -1,4 +1,3 @@
-using DescentOps.Engine.Components;
 using DescentOps.Engine.Randomness;
 using DescentOps.Engine.Running;
 using DescentOps.Engine.Tests.Models;

@@ -90,7 +90,7 @@ public sealed class SupervisionTests(ActorSystemFixture actors) : IClassFixture<
         ISimComponent[] model =
         [
             new OutOfRange(Counter),
-            new Script(new ComponentId("script"), [(SimDuration.FromSeconds(1), Counter, (object)"go"), (SimDuration.FromSeconds(2), Counter, "go")]),
+            new Script(new ComponentId("script"), [(SimDuration.FromSeconds(1), Counter, "go"), (SimDuration.FromSeconds(2), Counter, "go")]),
         ];
         var (result, journal) = await KernelRunner.RunAsync(kind, actors, model, SimTime.MaxValue);
 

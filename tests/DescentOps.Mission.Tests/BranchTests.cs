@@ -1,6 +1,5 @@
 using System.Security.Cryptography;
 using DescentOps.Cli.Running;
-using DescentOps.Journal.Comparison;
 
 namespace DescentOps.Mission.Tests;
 

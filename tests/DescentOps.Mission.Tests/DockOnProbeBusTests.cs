@@ -1,4 +1,3 @@
-using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Tests.Shared;
 

@@ -1,5 +1,4 @@
 using DescentOps.Mission.Station;
-using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Tests.Shared;
 

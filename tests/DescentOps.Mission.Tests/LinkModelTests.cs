@@ -123,7 +123,7 @@ public sealed class LinkModelTests
             for (var i = 0; i < nodes; i++)
             {
                 var capacity = random.Next(5);
-                var hold = FrameHold<int>.Empty(capacity);
+                var hold = new FrameHold<int>(capacity);
                 var count = random.Next(capacity + 1);
                 for (var k = 0; k < count; k++) hold = hold.Offer(next++)!;
                 holds.Add(hold);
@@ -163,11 +163,11 @@ public sealed class LinkModelTests
     [Fact]
     public void A_full_hold_refuses_and_says_so()
     {
-        var hold = FrameHold<int>.Empty(2).Offer(1)!.Offer(2)!;
+        var hold = new FrameHold<int>(2).Offer(1)!.Offer(2)!;
         Assert.Null(hold.Offer(3));
         Assert.Equal(1.0, hold.Fill);
         Assert.Equal([1, 2], hold.Items.ToArray());
-        Assert.Equal(0.0, FrameHold<int>.Empty(0).Fill);
+        Assert.Equal(0.0, new FrameHold<int>(0).Fill);
         Assert.Equal(ImmutableQueue<int>.Empty, hold.Cleared().Items);
     }
 }

@@ -3,7 +3,6 @@ using DescentOps.Cli.Running;
 using DescentOps.Journal;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
-using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 using DescentOps.Tests.Shared;
 

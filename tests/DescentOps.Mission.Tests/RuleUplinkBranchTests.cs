@@ -1,7 +1,5 @@
 using DescentOps.Journal;
-using DescentOps.Journal.Comparison;
 using DescentOps.Primitives.Time;
-using DescentOps.Records;
 using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Tests;

@@ -1,5 +1,4 @@
 using DescentOps.Engine.Components;
-using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Tether;

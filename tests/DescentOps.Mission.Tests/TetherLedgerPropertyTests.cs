@@ -1,9 +1,7 @@
 using DescentOps.Engine.Components;
-using DescentOps.Records;
 using DescentOps.Engine.Running;
 using DescentOps.Mission.Messages;
 using DescentOps.Mission.Tether;
-using DescentOps.Primitives.Identity;
 using DescentOps.Primitives.Time;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Model;

@@ -1,5 +1,4 @@
 using DescentOps.Scenarios.Model;
-using DescentOps.Records;
 using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Mission.Tests;
@@ -7,8 +6,6 @@ namespace DescentOps.Mission.Tests;
 /// <summary>The fibre's budget decides, frame by frame, whether the link carries; held frames go when it closes.</summary>
 public sealed class TetherLinkRunTests
 {
-    private static string Text(JournalRecord record, string name) => record.Fields.Single(f => f.Name == name).Text!;
-
     [Fact]
     public async Task A_fibre_whose_budget_closes_only_once_the_pack_loss_shrinks_holds_the_first_frames_and_then_sends_them_all()
     {

@@ -1,5 +1,4 @@
 using DescentOps.Primitives.Time;
-using DescentOps.Records;
 using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Tests;

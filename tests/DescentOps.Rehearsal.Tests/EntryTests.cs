@@ -1,6 +1,5 @@
 using System.Text.Json.Nodes;
 using DescentOps.Mission.Autonomy;
-using DescentOps.Rehearsal;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Model;
 

@@ -1,4 +1,3 @@
-using DescentOps.Rehearsal;
 
 namespace DescentOps.Rehearsal.Tests;
 

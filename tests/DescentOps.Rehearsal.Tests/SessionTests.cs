@@ -3,7 +3,6 @@ using DescentOps.Cli.Running;
 using DescentOps.Journal;
 using DescentOps.Journal.Comparison;
 using DescentOps.Mission.Running;
-using DescentOps.Rehearsal;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 

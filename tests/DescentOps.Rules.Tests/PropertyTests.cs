@@ -33,7 +33,7 @@ public static class RuleArbitraries
     public static Arbitrary<TelemetryScript> Script()
     {
         var value = Gen.Frequency(
-            (8, Gen.Choose(0, 12_000).Select(v => (double)v / 10.0)),
+            (8, Gen.Choose(0, 12_000).Select(v => v / 10.0)),
             (1, Gen.Elements(double.NaN, double.PositiveInfinity, double.NegativeInfinity, -5.0)));
         // Time steps of 0–600 s, and a few negative ones to exercise late samples.
         var sample = Gen.Choose(0, 6).Zip(Gen.Choose(-5, 600)).Zip(value, (pt, v) => (pt.Item1, pt.Item2, v));

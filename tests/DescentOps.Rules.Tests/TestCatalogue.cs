@@ -4,7 +4,6 @@ using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Compiled;
 using DescentOps.Rules.Text;
-using DescentOps.Rules.Units;
 
 namespace DescentOps.Rules.Tests;
 

@@ -2,7 +2,6 @@ using System.Globalization;
 using System.Text.RegularExpressions;
 using DescentOps.Primitives.Units;
 using DescentOps.Scenarios.Format;
-using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Scenarios.Tests;
 

@@ -159,7 +159,4 @@ public static class ClusterCampaign
             node.DisposeAsync().AsTask().GetAwaiter().GetResult();
         }
     }
-
-    private static CampaignPlan PlanOf(string settingsJson) =>
-        CampaignCommand.PlanOf(JsonSerializer.Deserialize<Dictionary<string, string>>(settingsJson) ?? throw new InvalidDataException("empty campaign settings"));
 }

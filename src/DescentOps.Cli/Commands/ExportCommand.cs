@@ -2,7 +2,6 @@ using System.CommandLine;
 using DescentOps.Cli.Files;
 using DescentOps.Cli.Running;
 using DescentOps.Cli.Terminal;
-using DescentOps.Reports;
 using DescentOps.Reports.Export;
 
 namespace DescentOps.Cli.Commands;

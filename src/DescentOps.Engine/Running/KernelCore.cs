@@ -23,7 +23,7 @@ internal sealed class KernelCore
     private readonly List<EventResult> _results = [];
     private readonly Dictionary<ComponentId, int> _groupIndex = [];
     private long _roundsDone;
-    private long _kernelSequence;
+    private readonly long _kernelSequence;
     private long _inputSequence;
     private int _failures;
     private long _recordsWritten;

@@ -21,4 +21,9 @@ public readonly record struct EventKey(SimTime Time, EventPriority Priority, Com
     }
 
     public EventHandle Handle => new(Sender, SenderSequence);
+
+    public static bool operator <(EventKey left, EventKey right) => left.CompareTo(right) < 0;
+    public static bool operator <=(EventKey left, EventKey right) => left.CompareTo(right) <= 0;
+    public static bool operator >(EventKey left, EventKey right) => left.CompareTo(right) > 0;
+    public static bool operator >=(EventKey left, EventKey right) => left.CompareTo(right) >= 0;
 }

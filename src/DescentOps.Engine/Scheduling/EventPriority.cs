@@ -11,4 +11,9 @@ public readonly record struct EventPriority(byte Value) : IComparable<EventPrior
     public static EventPriority Last => new(255);
 
     public int CompareTo(EventPriority other) => Value.CompareTo(other.Value);
+
+    public static bool operator <(EventPriority left, EventPriority right) => left.CompareTo(right) < 0;
+    public static bool operator <=(EventPriority left, EventPriority right) => left.CompareTo(right) <= 0;
+    public static bool operator >(EventPriority left, EventPriority right) => left.CompareTo(right) > 0;
+    public static bool operator >=(EventPriority left, EventPriority right) => left.CompareTo(right) >= 0;
 }

@@ -1,6 +1,5 @@
 using DescentOps.Primitives.Units;
 using DescentOps.Rules.Catalogue;
-using DescentOps.Rules.Units;
 using DescentOps.Scenarios.Model;
 
 namespace DescentOps.Mission.Autonomy;

@@ -132,7 +132,7 @@ public sealed class RuleHost
     /// <summary>When the rules next need waking, if ever.</summary>
     public SimTime? NextDueTime => _evaluator.Scheduler.NextDueTime;
 
-    private IReadOnlyList<Telecommand> Drain(ComponentContext context)
+    private List<Telecommand> Drain(ComponentContext context)
     {
         var commands = new List<Telecommand>();
         var where = Placement.ToString().ToLowerInvariant();

@@ -11,6 +11,8 @@ namespace DescentOps.Mission.Faults;
 /// frame and at the end of a persistence period between frames. It reports its firing once, with the evidence.
 /// The evaluator is stateful and cannot be rolled back, so the injector that holds it aborts the run on failure.
 /// </summary>
+[System.Diagnostics.CodeAnalysis.SuppressMessage("Design", "CA1001:Types that own disposable fields should be disposable",
+    Justification = "The evaluator holds only in-memory subscriptions; the trigger lives as long as its run and components have no end-of-run hook to dispose it in.")]
 public sealed class ConditionTrigger
 {
     private readonly RuleEvaluator _evaluator;

@@ -18,7 +18,7 @@ namespace DescentOps.Mission.LinkHome;
 public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
 {
     private readonly LinkScheduler _scheduler;
-    private readonly IReadOnlyDictionary<string, LanderIds> _ids;
+    private readonly Dictionary<string, LanderIds> _ids;
     private readonly SimDuration _lightTime;
 
     public LinkHomeComponent(Scenario scenario)
@@ -58,7 +58,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
             }
             case StationDown down:
             {
-                var (next, frames, commands) = _scheduler.StationDown(state, down.Lander);
+                var (next, frames, commands) = LinkScheduler.StationDown(state, down.Lander);
                 context.Record(LinkRecords.StationDown, Severity.Warning, [RecordField.Of("lander", down.Lander), .. Ledger(next, down.Lander)]);
                 if (frames.Count > 0) RecordLost(next, down.Lander, frames[0].Sequence, frames.Count, "station failed", context);
                 foreach (var command in commands) RecordCommandLost(down.Lander, command, "station failed", context);
@@ -66,7 +66,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
             }
             case StationUp up:
                 context.Record(LinkRecords.StationUp, Severity.Notice, RecordField.Of("lander", up.Lander));
-                return Serve(_scheduler.StationUp(state, up.Lander), context);
+                return Serve(LinkScheduler.StationUp(state, up.Lander), context);
             case LinkHomeDue:
                 return Serve(state with { Pending = null }, context);
             default:

@@ -65,7 +65,7 @@ public sealed class LinkScheduler
     }
 
     /// <summary>A station dies: what it held is lost (returned), and its channel and windows are free for the others.</summary>
-    public (LinkHomeState State, IReadOnlyList<TelemetryFrame> Frames, IReadOnlyList<Telecommand> Commands) StationDown(LinkHomeState state, string lander)
+    public static (LinkHomeState State, IReadOnlyList<TelemetryFrame> Frames, IReadOnlyList<Telecommand> Commands) StationDown(LinkHomeState state, string lander)
     {
         var i = state.Index(lander);
         var q = state.Landers[i];
@@ -84,7 +84,7 @@ public sealed class LinkScheduler
         return (state with { Landers = state.Landers.SetItem(i, down) }, frames, commands);
     }
 
-    public LinkHomeState StationUp(LinkHomeState state, string lander)
+    public static LinkHomeState StationUp(LinkHomeState state, string lander)
     {
         var i = state.Index(lander);
         return state with { Landers = state.Landers.SetItem(i, state.Landers[i] with { Alive = true }) };

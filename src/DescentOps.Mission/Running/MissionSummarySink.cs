@@ -1,6 +1,5 @@
 using DescentOps.Records;
 using DescentOps.Engine.Running;
-using DescentOps.Records.Kinds;
 
 namespace DescentOps.Mission.Running;
 

@@ -8,7 +8,11 @@ namespace DescentOps.Mission.Tether;
 /// </summary>
 public sealed record FrameHold<T>(ImmutableQueue<T> Items, int Count, int Capacity)
 {
-    public static FrameHold<T> Empty(int capacity) => new(ImmutableQueue<T>.Empty, 0, capacity);
+    /// <summary>An empty hold of <paramref name="capacity"/> items.</summary>
+    public FrameHold(int capacity)
+        : this(ImmutableQueue<T>.Empty, 0, capacity)
+    {
+    }
 
     public bool IsFull => Count >= Capacity;
 
@@ -20,5 +24,5 @@ public sealed record FrameHold<T>(ImmutableQueue<T> Items, int Count, int Capaci
     /// <summary>The hold with <paramref name="item"/> at its tail, or null when it is full.</summary>
     public FrameHold<T>? Offer(T item) => IsFull ? null : this with { Items = Items.Enqueue(item), Count = Count + 1 };
 
-    public FrameHold<T> Cleared() => Empty(Capacity);
+    public FrameHold<T> Cleared() => new(Capacity);
 }

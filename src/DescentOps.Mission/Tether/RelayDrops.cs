@@ -33,7 +33,7 @@ public static class RelayDrops
             return state;
         }
 
-        var relay = new RelayState(state.Relays.Count + 1, depthM, context.Now, false, FrameHold<TelemetryFrame>.Empty(plan.BufferFrames));
+        var relay = new RelayState(state.Relays.Count + 1, depthM, context.Now, false, new FrameHold<TelemetryFrame>(plan.BufferFrames));
         var lifeS = plan.BatteryEnergyJ / plan.PowerDrawW;
         context.Record(RelayRecords.Dropped, Severity.Notice,
             RecordField.Of("relay", relay.Name),

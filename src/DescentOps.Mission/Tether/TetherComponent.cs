@@ -25,7 +25,7 @@ public sealed class TetherComponent : SimComponent<TetherState>
 
     public override TetherState InitialState => new(
         0.0, false, null, 0, 0, 0, true,
-        FrameHold<TelemetryFrame>.Empty(Design.Tether.BufferFrames), FrameHold<Telecommand>.Empty(Design.Tether.BufferFrames),
+        new FrameHold<TelemetryFrame>(Design.Tether.BufferFrames), new FrameHold<Telecommand>(Design.Tether.BufferFrames),
         [], 0, [], null, 0, 0, 0.0, 0.0);
 
     public override TetherState Handle(TetherState state, object message, ComponentContext context)

@@ -13,9 +13,9 @@ namespace DescentOps.Physics.Shell;
 public sealed class IceShell
 {
     private const string Model = "the ice shell";
-    private readonly double[] pressureProfilePa;
-    private readonly IceLayer[] layers;
-    private readonly DebrisBand[] debrisBands;
+    private readonly double[] _pressureProfilePa;
+    private readonly IceLayer[] _layers;
+    private readonly DebrisBand[] _debrisBands;
 
     public IceShell(
         double surfaceTemperatureK,
@@ -33,10 +33,10 @@ public sealed class IceShell
         GravityMPerS2 = ValidRange.RequirePositive(gravityMPerS2, nameof(gravityMPerS2), "m/s²", Model);
         SurfacePressurePa = surfacePressurePa;
         FracturedToDepthM = ValidRange.Require(fracturedToDepthM, 0.0, thicknessM, nameof(fracturedToDepthM), "m", Model);
-        this.layers = CheckIntervals(layers ?? [], l => (l.TopDepthM, l.BottomDepthM), nameof(layers));
-        foreach (var l in this.layers) ValidRange.Require(l.SalinityGPerKg, 0.0, 40.0, nameof(IceLayer.SalinityGPerKg), "g/kg", Model);
-        this.debrisBands = CheckIntervals(debrisBands ?? [], b => (b.TopDepthM, b.BottomDepthM), nameof(debrisBands));
-        foreach (var b in this.debrisBands) ValidRange.Require(b.DebrisVolumeFraction, 0.0, 0.99, nameof(DebrisBand.DebrisVolumeFraction), "", Model);
+        _layers = CheckIntervals(layers ?? [], l => (l.TopDepthM, l.BottomDepthM), nameof(layers));
+        foreach (var l in _layers) ValidRange.Require(l.SalinityGPerKg, 0.0, 40.0, nameof(IceLayer.SalinityGPerKg), "g/kg", Model);
+        _debrisBands = CheckIntervals(debrisBands ?? [], b => (b.TopDepthM, b.BottomDepthM), nameof(debrisBands));
+        foreach (var b in _debrisBands) ValidRange.Require(b.DebrisVolumeFraction, 0.0, 0.99, nameof(DebrisBand.DebrisVolumeFraction), "", Model);
 
         var baseSalinity = SalinityGPerKg(thicknessM);
         var meanDensityGuess = 920.0;
@@ -60,7 +60,7 @@ public sealed class IceShell
         }
 
         Profile = new ShellProfile(surfaceTemperatureK, baseK, thicknessM, conductivityCoefficientWPerM, Convection);
-        pressureProfilePa = profile;
+        _pressureProfilePa = profile;
     }
 
     private static ConvectiveLayer CheckConvection(ConvectiveLayer layer, double surfaceTemperatureK, double thicknessM)
@@ -92,14 +92,14 @@ public sealed class IceShell
     /// <summary>Pressure-melting temperature at the base, with the base layer's salt.</summary>
     public double BaseTemperatureK => Profile.BaseTemperatureK;
 
-    public double BasePressurePa => pressureProfilePa[^1];
+    public double BasePressurePa => _pressureProfilePa[^1];
 
     /// <summary>Heat flux conducted up through the lid to the surface.</summary>
     public double HeatFluxWPerM2 => Profile.Lid.HeatFluxWPerM2;
 
-    public IReadOnlyList<IceLayer> Layers => layers;
+    public IReadOnlyList<IceLayer> Layers => _layers;
 
-    public IReadOnlyList<DebrisBand> DebrisBands => debrisBands;
+    public IReadOnlyList<DebrisBand> DebrisBands => _debrisBands;
 
     public double TemperatureK(double depthM) => Profile.TemperatureK(depthM);
 
@@ -107,17 +107,17 @@ public sealed class IceShell
     public double PressurePa(double depthM)
     {
         ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
-        var x = depthM / ThicknessM * (pressureProfilePa.Length - 1);
-        var i = Math.Min((int)x, pressureProfilePa.Length - 2);
+        var x = depthM / ThicknessM * (_pressureProfilePa.Length - 1);
+        var i = Math.Min((int)x, _pressureProfilePa.Length - 2);
         var f = x - i;
-        return (pressureProfilePa[i] * (1 - f)) + (pressureProfilePa[i + 1] * f);
+        return (_pressureProfilePa[i] * (1 - f)) + (_pressureProfilePa[i + 1] * f);
     }
 
     /// <summary>Salinity of the layer at a depth; ice outside every layer is pure.</summary>
     public double SalinityGPerKg(double depthM)
     {
         ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
-        foreach (var l in layers)
+        foreach (var l in _layers)
         {
             if (depthM >= l.TopDepthM && depthM <= l.BottomDepthM) return l.SalinityGPerKg;
         }
@@ -131,7 +131,7 @@ public sealed class IceShell
     public double DebrisVolumeFraction(double depthM)
     {
         ValidRange.Require(depthM, 0.0, ThicknessM, nameof(depthM), "m", Model);
-        foreach (var b in debrisBands)
+        foreach (var b in _debrisBands)
         {
             if (depthM >= b.TopDepthM && depthM <= b.BottomDepthM) return b.DebrisVolumeFraction;
         }
@@ -149,7 +149,7 @@ public sealed class IceShell
         ValidRange.Require(toDepthM, fromDepthM, ThicknessM, nameof(toDepthM), "m", Model);
         ValidRange.Require(depositPorosity, 0.0, 0.95, nameof(depositPorosity), "", Model);
         var volume = 0.0;
-        foreach (var b in debrisBands)
+        foreach (var b in _debrisBands)
         {
             var overlap = Math.Min(toDepthM, b.BottomDepthM) - Math.Max(fromDepthM, b.TopDepthM);
             if (overlap > 0) volume += overlap * b.DebrisVolumeFraction;

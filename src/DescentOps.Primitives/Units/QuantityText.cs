@@ -72,7 +72,8 @@ public static class QuantityText
             return $"'{text}' is not a {dimensionName}: unit symbols are case-sensitive, '{unit}' is not '{neighbour}' (units: {Examples(dimension)})";
         }
 
-        var other = UnitCatalog.WithSymbol(unit).FirstOrDefault();
+        var others = UnitCatalog.WithSymbol(unit);
+        var other = others.Count > 0 ? others[0] : null;
         var what = other is null ? "" : $": '{unit}' measures {Words(other.Dimension)}";
         return $"'{text}' is not a {dimensionName}{what} (units: {Examples(dimension)})";
     }

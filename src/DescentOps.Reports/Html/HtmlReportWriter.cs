@@ -1,8 +1,6 @@
 using System.Globalization;
 using DescentOps.Records;
-using DescentOps.Journal;
 using DescentOps.Reports.Plotting;
-using DescentOps.Records.Kinds;
 
 namespace DescentOps.Reports.Html;
 

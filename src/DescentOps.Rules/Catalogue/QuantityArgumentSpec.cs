@@ -1,5 +1,4 @@
 using DescentOps.Primitives.Units;
-using DescentOps.Rules.Units;
 
 namespace DescentOps.Rules.Catalogue;
 

@@ -211,7 +211,7 @@ internal static partial class LanderLoader
     }
 
     /// <summary>A view's field path as the file's: a lander's own section under the lander, a fault at its place in the whole list.</summary>
-    private static string Translate(string path, int lander, IReadOnlySet<string> own, IReadOnlyList<int> faultIndices)
+    private static string Translate(string path, int lander, HashSet<string> own, List<int> faultIndices)
     {
         var fault = FaultIndex().Match(path);
         if (fault.Success)

@@ -680,7 +680,7 @@ public static class ScenarioLoader
     }
 
     /// <summary>Depth intervals of the shell: top above bottom, inside the shell, and none overlapping another.</summary>
-    private static void CheckIntervals(IReadOnlyList<BoundSection> sections, IReadOnlyList<(double Top, double Bottom)> intervals, string path, double thicknessM, List<ScenarioError> errors)
+    private static void CheckIntervals(IReadOnlyList<BoundSection> sections, List<(double Top, double Bottom)> intervals, string path, double thicknessM, List<ScenarioError> errors)
     {
         for (var i = 0; i < intervals.Count; i++)
         {

@@ -78,7 +78,7 @@ internal sealed partial class YamlBinder
         _ => throw new InvalidOperationException($"No binding for {field.GetType().Name}."),
     };
 
-    private IReadOnlyList<BoundSection>? BindList(YamlNode node, ListField spec, string path)
+    private List<BoundSection>? BindList(YamlNode node, ListField spec, string path)
     {
         if (node is not YamlSequenceNode sequence)
         {
@@ -110,7 +110,7 @@ internal sealed partial class YamlBinder
         return items;
     }
 
-    private object? BindQuantity(YamlNode node, QuantityField spec, string path)
+    private double? BindQuantity(YamlNode node, QuantityField spec, string path)
     {
         if (Scalar(node, path, $"a quantity with a unit ({spec.Kind.ExampleUnits()})") is not { } text) return null;
         if (!QuantityParser.TryParseSi(spec.Kind, text, out var si, out var error))
@@ -122,7 +122,7 @@ internal sealed partial class YamlBinder
         return CheckRange(node, path, si, spec.MinSi, spec.MaxSi, spec.MinExclusive, spec.Kind.SiSymbol()) ? si : null;
     }
 
-    private object? BindNumber(YamlNode node, NumberField spec, string path)
+    private double? BindNumber(YamlNode node, NumberField spec, string path)
     {
         if (Scalar(node, path, "a number") is not { } text) return null;
         if (!StrictNumber.TryParse(text, out var value, out var error))
@@ -134,7 +134,7 @@ internal sealed partial class YamlBinder
         return CheckRange(node, path, value, spec.Min, spec.Max, false, "") ? value : null;
     }
 
-    private object? BindInteger(YamlNode node, IntegerField spec, string path)
+    private long? BindInteger(YamlNode node, IntegerField spec, string path)
     {
         if (Scalar(node, path, "a whole number") is not { } text) return null;
         if (!long.TryParse(text, NumberStyles.Integer, CultureInfo.InvariantCulture, out var value))

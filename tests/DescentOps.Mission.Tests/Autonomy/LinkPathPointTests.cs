@@ -1,7 +1,5 @@
 using DescentOps.Mission.Autonomy;
 using DescentOps.Records.Kinds;
-using DescentOps.Scenarios;
-using DescentOps.Scenarios.Loading;
 using DescentOps.Tests.Shared;
 
 namespace DescentOps.Mission.Tests.Autonomy;

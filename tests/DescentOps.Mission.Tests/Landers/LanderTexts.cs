@@ -87,19 +87,22 @@ internal static class LanderTexts
 
         """;
 
+    private static readonly System.Text.CompositeFormat SharedFormat = System.Text.CompositeFormat.Parse(Shared);
+    private static readonly System.Text.CompositeFormat BrackFaultFormat = System.Text.CompositeFormat.Parse(BrackFault);
+
     private static string Run(double days) => $"run:\n  seed: 20261203\n  until: {days.ToString(System.Globalization.CultureInfo.InvariantCulture)} d\n";
 
     /// <summary>One lander alone in the single-lander format.</summary>
     public static string Single(string site, string parts, bool withFault, double days) =>
-        string.Format(System.Globalization.CultureInfo.InvariantCulture, Shared, site) + parts + (withFault ? string.Format(System.Globalization.CultureInfo.InvariantCulture, BrackFault, "") : "") + Run(days);
+        string.Format(System.Globalization.CultureInfo.InvariantCulture, SharedFormat, site) + parts + (withFault ? string.Format(System.Globalization.CultureInfo.InvariantCulture, BrackFaultFormat, "") : "") + Run(days);
 
     /// <summary>Tarn Flats and Brack Hollow in one scenario; the fault strikes brack.</summary>
     public static string Two(double days, string extra = "") =>
-        string.Format(System.Globalization.CultureInfo.InvariantCulture, Shared, "Tarn Flats")
+        string.Format(System.Globalization.CultureInfo.InvariantCulture, SharedFormat, "Tarn Flats")
         + "landers:\n"
         + Lander("tarn", "Tarn Flats", "12 deg", "0 deg", TarnParts)
         + Lander("brack", "Brack Hollow", "-30 deg", "40 deg", BrackParts)
-        + string.Format(System.Globalization.CultureInfo.InvariantCulture, BrackFault, "    lander: brack\n")
+        + string.Format(System.Globalization.CultureInfo.InvariantCulture, BrackFaultFormat, "    lander: brack\n")
         + extra
         + Run(days);
 

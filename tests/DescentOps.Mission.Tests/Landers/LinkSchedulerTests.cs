@@ -151,7 +151,7 @@ public sealed class LinkSchedulerTests
 
         public List<(string Lander, long Sequence, string Cause)> Lost { get; } = [];
 
-        public void Run(IReadOnlyList<(double T, string Lander)> offers, IReadOnlyList<(double T, string Lander, bool Up)> stations, double untilS)
+        public void Run(List<(double T, string Lander)> offers, IReadOnlyList<(double T, string Lander, bool Up)> stations, double untilS)
         {
             var events = offers.Select((o, i) => (o.T, Order: i, Act: (Action<SimTime>)(_ => Offer(o.Lander, o.T))))
                 .Concat(stations.Select((s, i) => (s.T, Order: offers.Count + i, Act: (Action<SimTime>)(_ => Station(s.Lander, s.Up)))))
@@ -186,11 +186,11 @@ public sealed class LinkSchedulerTests
         {
             if (up)
             {
-                State = scheduler.StationUp(State, lander);
+                State = LinkScheduler.StationUp(State, lander);
                 return;
             }
 
-            var (state, frames, _) = scheduler.StationDown(State, lander);
+            var (state, frames, _) = LinkScheduler.StationDown(State, lander);
             State = state;
             Lost.AddRange(frames.Select(f => (lander, f.Sequence, "station failed")));
         }

@@ -1,4 +1,3 @@
-using DescentOps.Records;
 
 namespace DescentOps.Mission.Tests.Onboard;
 
@@ -126,7 +125,7 @@ public sealed class OnboardCrossingRunTests
         [.. sink.OfKind("probe.telemetry").Select(r => (r.Time.SecondsSinceEpoch, CollectingSink.Field(r, "depth_m")))];
 
     /// <summary>The last frame not past the limit and the first past it.</summary>
-    private static (double T0, double D0, double T1, double D1) Bracket(IReadOnlyList<(double T, double D)> frames)
+    private static (double T0, double D0, double T1, double D1) Bracket(List<(double T, double D)> frames)
     {
         var i = frames.Select((f, k) => (f, k)).First(x => x.f.D > LimitM).k;
         return (frames[i - 1].T, frames[i - 1].D, frames[i].T, frames[i].D);

@@ -1,4 +1,3 @@
-using DescentOps.Scenarios.Loading;
 using DescentOps.Scenarios.Model;
 using DescentOps.Tests.Shared;
 

@@ -69,7 +69,7 @@ public sealed class TetherTransitionTests
     [Fact]
     public void A_relay_whose_battery_goes_flat_loses_what_it_held()
     {
-        var hold = FrameHold<TelemetryFrame>.Empty(144).Offer(Frame(7, 600))!.Offer(Frame(8, 600))!;
+        var hold = new FrameHold<TelemetryFrame>(144).Offer(Frame(7, 600))!.Offer(Frame(8, 600))!;
         var state = Component.InitialState with { Relays = [new RelayState(1, 500, SimTime.Epoch, false, hold)] };
         var context = At(0);
         var after = RelayDrops.BatteryFlat(state, 1, context);
@@ -124,7 +124,7 @@ public sealed class TetherTransitionTests
         Assert.Equal(1, held.CommandHold.Count);
 
         var context = At(0);
-        var unbuffered = broken with { CommandHold = FrameHold<Telecommand>.Empty(0) };
+        var unbuffered = broken with { CommandHold = new FrameHold<Telecommand>(0) };
         TetherRouting.CarryDown(Design, unbuffered, command, context);
         Assert.Equal("tether broken, no relay path and no buffer", Assert.Single(context.Records).Fields.Single(f => f.Name == "cause").Text);
     }

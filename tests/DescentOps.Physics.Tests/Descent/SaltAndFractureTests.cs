@@ -1,7 +1,6 @@
 using DescentOps.Physics.Descent;
 using DescentOps.Physics.Ice;
 using DescentOps.Physics.Shell;
-using DescentOps.Physics.Water;
 using Xunit;
 
 namespace DescentOps.Physics.Tests.Descent;

@@ -2,7 +2,6 @@ using DescentOps.Engine.Components;
 using DescentOps.Records;
 using DescentOps.Engine.Scheduling;
 using DescentOps.Primitives.Identity;
-using DescentOps.Primitives.Time;
 
 namespace DescentOps.Benchmarks.Phold;
 

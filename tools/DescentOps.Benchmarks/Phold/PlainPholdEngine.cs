@@ -1,6 +1,5 @@
 using DescentOps.Engine.Randomness;
 using DescentOps.Primitives.Identity;
-using DescentOps.Primitives.Time;
 
 namespace DescentOps.Benchmarks.Phold;
 

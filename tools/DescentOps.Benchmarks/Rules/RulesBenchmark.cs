@@ -10,7 +10,6 @@ using DescentOps.Rules.Catalogue;
 using DescentOps.Rules.Checking;
 using DescentOps.Rules.Evaluation;
 using DescentOps.Rules.Text;
-using DescentOps.Rules.Units;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 

@@ -1,5 +1,4 @@
 using System.CommandLine;
-using DescentOps.Physics;
 using DescentOps.Physics.Ocean;
 using DescentOps.Physics.Seawater;
 using DescentOps.Physics.Water;
