@@ -30,11 +30,11 @@ public sealed class CatalogueAgreementTests
     [Theory]
     [InlineData("default.yaml")]
     [InlineData("power-dip-load-shedding.yaml")]
-    public void The_readme_documents_every_point_rules_and_triggers_may_read_and_which_are_true_state(string scenarioName)
+    public void The_readme_documents_every_point_rules_and_triggers_may_read_and_which_are_true_state_or_ground_only(string scenarioName)
     {
         var catalogue = MissionCatalogue.For(DescentOps.Scenarios.Loading.ScenarioLoader.LoadText(BuiltInScenarios.Text(scenarioName), scenarioName));
         var rows = File.ReadAllLines(Path.Combine(RepositoryRoot.Path, "README.md"))
-            .Where(l => l.StartsWith("| `probe.", StringComparison.Ordinal))
+            .Where(l => l.StartsWith("| `probe.", StringComparison.Ordinal) || l.StartsWith("| `station.", StringComparison.Ordinal))
             .Select(l => l.Split('|', StringSplitOptions.TrimEntries))
             .ToDictionary(c => c[1].Trim('`'), c => c[4]);
         // A row written with NAME stands for one point per name the scenario gives (its bus loads); it must match some.
@@ -47,6 +47,7 @@ public sealed class CatalogueAgreementTests
         foreach (var point in catalogue.Points)
         {
             Assert.Equal(point.TrueStateOnly, rows[RowOf(point.Name)] == "triggers only");
+            Assert.Equal(point.GroundOnly, rows[RowOf(point.Name)] == "ground rules, procedures");
         }
 
         if (scenarioName == "power-dip-load-shedding.yaml")

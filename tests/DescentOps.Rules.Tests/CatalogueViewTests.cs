@@ -16,6 +16,7 @@ public sealed class CatalogueViewTests
         [
             new NumericPointSpec("probe.depth", PhysicalDimension.Length, 0.0, 5000.0),
             new NumericPointSpec("probe.lateral_drift", PhysicalDimension.Length, -5000.0, 5000.0) { TrueStateOnly = true },
+            new DiscretePointSpec("station.alive", ["yes", "no"]) { GroundOnly = true },
         ],
         [new CommandSpec(new ComponentId("probe.head"), "set_power", [new QuantityArgumentSpec("power", PhysicalDimension.Power, 0.0, 8000.0)])]);
 
@@ -29,6 +30,19 @@ public sealed class CatalogueViewTests
         Assert.Equal((DiagnosticCode.TrueStateOnly, 1, 43), (error.Code, error.Location.Line, error.Location.Column));
         Assert.True(RuleChecker.CheckSource(new RuleSource("r.dorules", Drifting), Catalogue.ForFaultTriggers()).Succeeded);
         Assert.True(RuleChecker.CheckSource(new RuleSource("r.dorules", Drifting.Replace("lateral_drift", "depth", StringComparison.Ordinal)), Catalogue).Succeeded);
+    }
+
+    [Fact]
+    public void A_ground_only_point_is_read_by_a_ground_rule_and_refused_on_board_and_in_a_fault_trigger()
+    {
+        const string Ground = "rule r { runs on ground severity low when station.alive is no then { } }";
+        Assert.True(RuleChecker.CheckSource(new RuleSource("r.dorules", Ground), Catalogue).Succeeded);
+
+        var board = Ground.Replace("on ground", "on board", StringComparison.Ordinal);
+        var error = Assert.Single(RuleChecker.CheckSource(new RuleSource("r.dorules", board), Catalogue).Errors);
+        // "rule r { runs on board severity low when " is 9 + 14 + 13 + 5 = 41 characters: the point starts at column 42.
+        Assert.Equal((DiagnosticCode.GroundOnly, 1, 42), (error.Code, error.Location.Line, error.Location.Column));
+        Assert.Equal(DiagnosticCode.GroundOnly, Assert.Single(RuleChecker.CheckSource(new RuleSource("r.dorules", Ground), Catalogue.ForFaultTriggers()).Errors).Code);
     }
 
     [Theory]

@@ -51,6 +51,9 @@ public static class MissionCatalogue
             new NumericPointSpec("probe.lateral_drift", PhysicalDimension.Length, -scenario.Shell.ThicknessM, scenario.Shell.ThicknessM) { TrueStateOnly = true },
             // Each bus load's state, as the power controller reports it (only with a power system).
             .. power is null ? [] : Probe.ProbeLoadStates.Points(power),
+            // The station as the ground hears it (Ground/StationWatch): the ground's own knowledge, for ground rules and procedures.
+            new DiscretePointSpec(Ground.StationWatch.AlivePoint, Ground.StationWatch.States) { GroundOnly = true },
+            new DiscretePointSpec(Ground.StationWatch.InViewPoint, Ground.StationWatch.States) { GroundOnly = true },
         ];
         CommandSpec[] commands =
         [

@@ -6,6 +6,7 @@ using DescentOps.Mission.Procedures;
 using DescentOps.Mission.Station;
 using DescentOps.Primitives.Time;
 using DescentOps.Rules.Compiled;
+using DescentOps.Rules.Evaluation;
 using DescentOps.Rules.Syntax;
 using DescentOps.Scenarios.Model;
 using DescentOps.Records.Kinds;
@@ -15,7 +16,10 @@ namespace DescentOps.Mission.Ground;
 /// <summary>
 /// The ground team's view of the mission: it knows only what the frames tell it, late by the tether, the station
 /// and the light time; it notices when frame numbers jump; its rules' commands go back up the same way, a light
-/// time to the station and then down the fibre, and can arrive too late.
+/// time to the station and then down the fibre, and can arrive too late. Its rules run on the frames' sampling time
+/// and are moved on only by what reaches the ground: a rule's timer that ends at a sampling instant completes with
+/// the first frame sampled then or later, never by the ground's own clock, which runs a downlink ahead of the frames
+/// still on their way (waking the rules at it would refuse those frames and fire before the ground could know).
 /// </summary>
 public sealed class GroundTeamComponent : SimComponent<GroundState>
 {
@@ -25,6 +29,9 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
     private readonly IReadOnlyList<TimedTelecommand> _timed;
     private readonly IReadOnlyList<CompiledRuleSet> _uplinks;
     private readonly ProcedureDesk _procedures;
+
+    /// <summary>How the ground hears its station; null unless a ground rule or procedure reads the station's points.</summary>
+    private readonly StationHearing? _station;
 
     /// <param name="scenario">The mission: its distance home sets the uplink.</param>
     /// <param name="rules">The mission's rules; the ground ones run here.</param>
@@ -41,6 +48,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         _timed = timed ?? [];
         _uplinks = uplinks ?? [];
         _procedures = new ProcedureDesk(procedures ?? []);
+        _station = StationHearing.IsRead(rules, _uplinks, _procedures.Procedures) ? new StationHearing(scenario) : null;
         UplinkTimesS = [.. scenario.RuleUplinks.Select(u => u.AtS)];
         UplinkOrigins = [.. scenario.RuleUplinks.Select(u => u.FieldPath)];
     }
@@ -49,7 +57,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 
     private IReadOnlyList<string> UplinkOrigins { get; }
 
-    public override GroundState InitialState => new(0, 0, 0, 0.0, null);
+    public override GroundState InitialState => new(0, 0, 0, 0.0);
 
     public override GroundState Handle(GroundState state, object message, ComponentContext context)
     {
@@ -69,7 +77,13 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                     if (_procedures.Procedures[p].StartAtS is { } startS) context.ScheduleSelf(SimDuration.FromSeconds(startS), new ProcedureDue(p), MissionPriority.Command);
                 }
 
-                return state;
+                return _station is null ? state : state with { Station = _station.Start(context) };
+            case StationCarrier carrier:
+                return HearStation(state, _station!.OnCarrier(state.Station!, carrier.On, context), carrier.On ? "carrier heard" : "carrier lost", context);
+            case StationViewEdge edge:
+                return HearStation(state, _station!.OnEdge(state.Station!, edge, context), edge.InView ? "home rose" : "home set", context);
+            case StationSilenceOver:
+                return HearStation(state with { StationSilence = null }, state.Station!.SilenceOver(context.Now), "silence past the timeout", context);
             case ProcedureDue due:
                 return Procedures(state, _procedures.Start(due.Index, _procedures.Procedures[due.Index].FieldPath + ".start_at", context.Now), context);
             case ProcedureWake:
@@ -81,17 +95,29 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
                 return UplinkRules(state, due.Index, context);
             case TelemetryFrame frame:
                 var next = Receive(state, frame, context);
+                // With the station's points read, they go with every frame, stamped with its sampling time.
+                IReadOnlyList<TelemetrySample> samples = next.Station is { } watch ? [.. FrameSamples.Of(frame), .. StationHearing.Samples(watch, frame.SampledAt)] : [.. FrameSamples.Of(frame)];
                 // The procedures see the frame before the rules can start one, so a step starts watching at the next frame.
-                next = Procedures(next, _procedures.OnFrame([.. FrameSamples.Of(frame)], context.Now), context);
-                var frameWake = Uplink(ref next, _rules.OnFrame(frame, context), state.PendingWake, context);
-                return next with { PendingWake = frameWake, RulesVersion = _rules.Version };
-            case RulesWake:
-                var woken = state;
-                var ruleWake = Uplink(ref woken, _rules.OnWake(context), null, context);
-                return woken with { PendingWake = ruleWake, RulesVersion = _rules.Version };
+                next = Procedures(next, _procedures.OnFrame(samples, context.Now), context);
+                Uplink(ref next, _rules.OnSamples(samples, context), context);
+                return next with { RulesVersion = _rules.Version };
             default:
                 throw new InvalidOperationException($"The ground team cannot handle {message.GetType().Name}.");
         }
+    }
+
+    /// <summary>
+    /// What the ground knows of its station moved on: the silence timer follows it, and a change goes to the
+    /// procedures and the rules stamped with the latest frame's sampling time.
+    /// </summary>
+    private GroundState HearStation(GroundState state, StationWatch watch, string cause, ComponentContext context)
+    {
+        var changed = StationHearing.Settle(state.Station!, watch, state.StationSilence, state.LatestSampledAt, cause, context, out var timer);
+        var next = state with { Station = watch, StationSilence = timer };
+        if (changed is null) return next;
+        next = Procedures(next, _procedures.OnFrame(changed, context.Now), context);
+        Uplink(ref next, _rules.OnSamples(changed, context), context);
+        return next with { RulesVersion = _rules.Version };
     }
 
     /// <summary>A time-tagged telecommand leaves the ground now and goes the way every ground command goes.</summary>
@@ -118,7 +144,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             RecordField.Of("board_rules", set.Rules.Count(r => r.Placement == Placement.Board)),
             RecordField.Of("uplink_s", _uplink.TotalSeconds));
         Uplink(context, new Telecommand(MissionTimeline.LoadRules(index), UplinkOrigins[index], "ground", context.Now), MissionPriority.Command);
-        return state with { PendingWake = _rules.Rearm(state.PendingWake, context, RulesWake.Instance), RulesVersion = _rules.Version };
+        return state with { RulesVersion = _rules.Version };
     }
 
     private static GroundState Receive(GroundState state, TelemetryFrame frame, ComponentContext context)
@@ -143,11 +169,12 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             LastFrame = Math.Max(state.LastFrame, frame.Sequence),
             FramesMissing = state.FramesMissing + missing,
             LastLatencyS = latency,
+            LatestSampledAt = SimTime.Max(state.LatestSampledAt, frame.SampledAt),
         };
     }
 
     /// <summary>Sends the rules' commands up, except procedure starts, which the ground takes itself (into <paramref name="state"/>).</summary>
-    private Engine.Scheduling.EventHandle? Uplink(ref GroundState state, IReadOnlyList<Telecommand> commands, Engine.Scheduling.EventHandle? pendingWake, ComponentContext context)
+    private void Uplink(ref GroundState state, IReadOnlyList<Telecommand> commands, ComponentContext context)
     {
         foreach (var command in commands)
         {
@@ -159,8 +186,6 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
 
             Uplink(context, command, MissionPriority.Command);
         }
-
-        return _rules.Rearm(pendingWake, context, RulesWake.Instance);
     }
 
     /// <summary>Journals what the procedures did, sends their steps' commands up and keeps one timer for the next step that runs out of time.</summary>

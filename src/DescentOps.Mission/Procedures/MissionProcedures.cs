@@ -25,8 +25,10 @@ public static class MissionProcedures
     /// <summary>The line of the wrapper text that holds the condition (1-based).</summary>
     private const int ConditionLine = 4;
 
+    /// <summary>The procedures' errors; with landers, each lander's (its own procedures are named under it).</summary>
     public static IReadOnlyList<ScenarioError> Errors(Scenario scenario)
     {
+        if (scenario.Landers.Count > 0) return [.. scenario.Landers.SelectMany(l => Errors(l.View)).Distinct()];
         var errors = new List<ScenarioError>();
         _ = Check(scenario, errors);
         return errors;

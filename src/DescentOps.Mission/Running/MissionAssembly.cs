@@ -28,12 +28,13 @@ public static class MissionAssembly
     {
         var timed = MissionTimeline.CompileTelecommands(scenario);
         var uplinks = MissionTimeline.CompileUplinks(scenario);
+        var procedures = Procedures.MissionProcedures.Compile(scenario);
         return
         [
             new ProbeComponent(scenario, rules, ids),
             new TetherComponent(scenario, ids),
-            new StationComponent(scenario, ids),
-            new GroundTeamComponent(scenario, rules, timed, uplinks, ids, Procedures.MissionProcedures.Compile(scenario)),
+            new StationComponent(scenario, ids, StationHearing.IsRead(rules, uplinks, procedures)),
+            new GroundTeamComponent(scenario, rules, timed, uplinks, ids, procedures),
             new OnboardAutonomyComponent(rules, timed, uplinks, ids),
             new FaultInjectorComponent(scenario, ids),
             .. scenario.Vehicles.Select(v => new VehicleComponent(v, scenario, ids)),

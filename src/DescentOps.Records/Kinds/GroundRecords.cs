@@ -5,4 +5,7 @@ public static class GroundRecords
 {
     public const string Gap = "ground.gap";
     public const string Telemetry = "ground.telemetry";
+
+    /// <summary>What the ground knows of its station changed (only when a ground rule or procedure reads it).</summary>
+    public const string StationStatus = "ground.station_status";
 }

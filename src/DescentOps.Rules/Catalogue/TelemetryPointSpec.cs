@@ -8,4 +8,10 @@ public abstract record TelemetryPointSpec(string Name)
     /// rules may not (flight software and the ground see only what is sensed).
     /// </summary>
     public bool TrueStateOnly { get; init; }
+
+    /// <summary>
+    /// What the ground alone knows (the station as the ground hears it): ground rules and procedures may read it, rules
+    /// on board and fault triggers may not.
+    /// </summary>
+    public bool GroundOnly { get; init; }
 }

@@ -20,6 +20,9 @@ public sealed class RuleChecker
     public const double MaxDurationS = 1.0e10;
 
     private readonly TelemetryCatalogue _catalogue;
+
+    /// <summary>Where the rule whose condition is being checked runs (null outside a rule).</summary>
+    private Placement? _placement;
     private readonly List<RuleDiagnostic> _diagnostics = [];
     private readonly HashSet<string> _ruleNames = new(StringComparer.Ordinal);
     private readonly HashSet<string> _rulesWithErrors;
@@ -108,7 +111,9 @@ public sealed class RuleChecker
             cooldown = checkedCooldown;
         }
 
+        _placement = rule.Placement;
         var condition = rule.Condition is null ? null : CheckCondition(rule.Condition);
+        _placement = null;
         var actions = CheckActions(rule.Actions);
         if (rule.Placement == Placement.Board)
         {
@@ -280,6 +285,12 @@ public sealed class RuleChecker
 
     private bool Readable(TelemetryPointSpec spec, NameSyntax point)
     {
+        if (spec.GroundOnly && (_placement != Placement.Ground || _catalogue.ReadsTrueState))
+        {
+            Error(DiagnosticCode.GroundOnly, point.Location, $"'{spec.Name}' is what the ground knows of the station: only ground rules and procedures may read it, not a rule on board or a fault's 'when'");
+            return false;
+        }
+
         if (!spec.TrueStateOnly || _catalogue.ReadsTrueState) return true;
         Error(DiagnosticCode.TrueStateOnly, point.Location, $"'{spec.Name}' is true state that no sensor reports: only a fault's 'when' may read it, not a rule");
         return false;

@@ -31,6 +31,7 @@ public enum DiagnosticCode
     PlacementNotAllowed,
     TrueStateOnly,
     UnknownProcedure,
+    GroundOnly,
 
     // Meaning (checker), warnings: the rule set runs, but a rule can never act.
     ContradictoryBounds,

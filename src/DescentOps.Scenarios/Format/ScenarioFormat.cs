@@ -191,6 +191,7 @@ public static class ScenarioFormat
                 new QuantityField("forwarding_delay", "Time the station takes to pass a frame on.", Duration, 0, 3600),
                 new IntegerField("frame_queue_capacity", "Most frames the station holds while it cannot send home; more are lost, counted and logged (default: no limit).", 1, 100_000_000, Required: false),
                 new IntegerField("command_queue_capacity", "Most commands held for the next window; more are lost, counted and logged (default: no limit).", 1, 1_000_000, Required: false),
+                new QuantityField("silence_timeout", "How long the ground hears nothing from the station, with home in view, before it takes the station for dead (station.alive; default 10 min).", Duration, 0, 30 * 86_400, Required: false, MinExclusive: true),
                 new SectionField("radiation", "The radiation at the site and the dose at which the station's electronics fail (omit: the station fails only by a station_failure fault).",
                 [
                     new QuantityField("dose_rate", "Unshielded dose rate at the surface, in water or ice.", AbsorbedDoseRate, 0, 1, MinExclusive: true),

@@ -94,6 +94,7 @@ internal static partial class LanderLoader
                 ? scenario.Station with { Link = link with { LatitudeRad = latitude, StartHourAngleRad = link.StartHourAngleRad + longitude, PlanetHourAngleRad = link.PlanetHourAngleRad + longitude } }
                 : scenario.Station;
             scenario = scenario with { Body = scenario.Body with { Site = lander.Text("site") }, Station = station };
+            if (own.Contains("procedures")) scenario = OwnProcedures(scenario, i);
             models.Add(new LanderModel(names[i], lander.Text("site"), latitude, longitude, scenario));
             faults.AddRange(faultIndices.Select((k, n) => (k, scenario.Faults[n])));
         }
@@ -222,6 +223,26 @@ internal static partial class LanderLoader
 
         var head = path.Split('.', '[')[0];
         return own.Contains(head) ? (lander < 0 ? "landers[]." : $"landers[{lander}].") + path : path;
+    }
+
+    /// <summary>
+    /// A lander's own procedures named by their place in the file (landers[k].procedures[i]): the checks of the
+    /// mission run on the lander's view and locate their errors, and the ground logs a timed start, by these paths.
+    /// </summary>
+    private static Scenario OwnProcedures(Scenario view, int lander)
+    {
+        var prefix = $"landers[{lander}].";
+        var locations = new Dictionary<string, SourceLocation>(view.FieldLocations, StringComparer.Ordinal);
+        foreach (var (path, at) in view.FieldLocations)
+        {
+            if (path.StartsWith("procedures", StringComparison.Ordinal)) locations[prefix + path] = at;
+        }
+
+        return view with
+        {
+            FieldLocations = locations,
+            Procedures = [.. view.Procedures.Select(p => p with { FieldPath = prefix + p.FieldPath, Steps = [.. p.Steps.Select(s => s with { FieldPath = prefix + s.FieldPath })] })],
+        };
     }
 
     private static YamlNode? Child(YamlMappingNode map, string key) =>

@@ -314,7 +314,10 @@ public static class ScenarioLoader
                 charging.Quantity("recovery_time"),
                 (charging.OptionalText("during_recovery") ?? "queue") == "queue"),
             station.OptionalInteger("frame_queue_capacity"),
-            station.OptionalInteger("command_queue_capacity"));
+            station.OptionalInteger("command_queue_capacity"))
+        {
+            SilenceTimeoutS = station.OptionalQuantity("silence_timeout") ?? StationModel.DefaultSilenceTimeoutS,
+        };
     }
 
     /// <summary>A vehicle; a missing speed or propulsion power reads as 0 here and is refused by the consistency check.</summary>

@@ -13,4 +13,11 @@ public sealed record StationModel(
     SurfaceDwellModel? Dwell = null,
     StationChargingModel? Charging = null,
     long? FrameQueueCapacity = null,
-    long? CommandQueueCapacity = null);
+    long? CommandQueueCapacity = null)
+{
+    /// <summary>The default silence before the ground takes the station for dead: a rule of thumb of ours.</summary>
+    public const double DefaultSilenceTimeoutS = 600.0;
+
+    /// <summary>How long the ground hears nothing from the station, with home in view, before it takes it for dead.</summary>
+    public double SilenceTimeoutS { get; init; } = DefaultSilenceTimeoutS;
+}
