@@ -55,4 +55,24 @@ public sealed class CampaignCoverageTests
         Assert.Contains("<h2>Procedure branches</h2>", page, StringComparison.Ordinal);
         Assert.Contains("procedure branches taken in some run: ", stdout, StringComparison.Ordinal);
     }
+
+    [Fact]
+    public async Task A_three_lander_campaigns_rule_coverage_names_every_landers_rules_as_check_coverage_does()
+    {
+        var scenario = LanderCampaignScenario.File();
+        var dir = CampaignFixture.TempDir();
+        Assert.Equal(0, await CampaignFixture.CliAsync("campaign", scenario, "--runs", "3", "--seed", "5", "--output", dir));
+        using var store = CampaignStore.Open(Path.Combine(dir, "campaign.sqlite"));
+        foreach (var run in store.Runs())
+        {
+            // The top level's rule and Fellside Rise's own, each once though every lander runs the first.
+            Assert.Equal(["slow-descent-watch", "fell-stall-watch"], run.RulesActed.Select(r => r.Rule));
+            var log = Path.Combine(dir, $"run{run.Index}.jsonl");
+            Assert.Equal(0, await CampaignFixture.CliAsync("campaign", "log", dir, "--run", run.Index.ToString(CultureInfo.InvariantCulture), "--output", log));
+            var (exit, printed, stderr) = await CampaignFixture.CliOutputAsync("check", scenario, "--coverage", log);
+            Assert.True(exit == 0, printed + stderr);
+            var silent = run.RulesActed.Where(r => !r.Acted).Select(r => r.Rule).ToList();
+            Assert.Contains($"{2 - silent.Count} of 2 rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}", printed, StringComparison.Ordinal);
+        }
+    }
 }

@@ -180,7 +180,6 @@ public static class CheckCommand
     private static int Coverage(Scenario scenario, string logPath)
     {
         if (!File.Exists(logPath)) throw new FileNotFoundException($"no such file: {logPath}", logPath);
-        var rules = MissionRules.Compile(scenario);
         var procedures = Mission.Running.PreparedRun.CoveredProcedures(scenario);
         var tally = new Mission.Running.CoverageTally();
         using (var reader = Journal.JournalReader.Open(logPath))
@@ -188,7 +187,7 @@ public static class CheckCommand
             foreach (var e in reader.ReadAll().OfType<Journal.EventEntry>()) tally.Observe(e.Kind, e.Data);
         }
 
-        var acted = tally.Rules(rules.Rules.Select(r => r.Name));
+        var acted = tally.Rules(Mission.Running.PreparedRun.CoveredRules(scenario));
         var silent = acted.Where(r => !r.Acted).Select(r => r.Rule).ToList();
         Console.Out.WriteLine($"{logPath}: {acted.Count - silent.Count} of {acted.Count} rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}");
         foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(tally.BranchCounts(procedures))) Console.Out.WriteLine($"  {line}");
