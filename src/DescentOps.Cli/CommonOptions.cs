@@ -1,4 +1,5 @@
 using System.CommandLine;
+using DescentOps.Mission.Running;
 
 namespace DescentOps.Cli;
 
@@ -17,6 +18,10 @@ public static class CommonOptions
     public static Option<bool> Json() =>
         new("--json") { Description = "Print one JSON object on stdout (snake_case names, SI values, null for a missing value) instead of text." };
 
-    /// <summary>A log argument.</summary>
-    public static Argument<string> Log(string description) => new("LOG") { Description = description };
+    /// <summary>A log argument, named <c>LOG</c> unless a command takes two.</summary>
+    public static Argument<string> Log(string description, string name = "LOG") => new(name) { Description = description };
+
+    /// <summary><c>--kernel</c>/<c>-k</c>: which kernel runs the mission; actors unless asked otherwise.</summary>
+    public static Option<KernelChoice> Kernel(string description) =>
+        new("--kernel", "-k") { Description = description, DefaultValueFactory = _ => KernelChoice.Actors, HelpName = "actors|sequential" };
 }

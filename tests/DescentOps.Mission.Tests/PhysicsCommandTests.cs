@@ -377,6 +377,19 @@ public sealed class PhysicsCommandTests
     }
 
     [Fact]
+    public async Task A_refused_value_of_a_plain_option_is_reported_under_that_options_name()
+    {
+        // pH and the spreading exponent come from plain (unitless) options; the models refuse pH outside 7.7 to 8.3
+        // (the fit's range, Francois and Garrison 1982) and a spreading exponent outside 1 to 2.
+        var (exit, _, stderr) = await RunAsync("acoustic", "--frequency", "10 kHz", "--range", "1 km", "--temperature", "275 K", "--salinity", "35", "--depth", "100 m", "--ph", "9");
+        Assert.Equal(3, exit); // ExitCode.InvalidInput
+        Assert.Contains("descentops physics acoustic: --ph: ", stderr, StringComparison.Ordinal);
+        var (spreadExit, _, spreadError) = await RunAsync("acoustic", "--frequency", "10 kHz", "--range", "1 km", "--temperature", "275 K", "--salinity", "35", "--depth", "100 m", "--spreading", "3");
+        Assert.Equal(3, spreadExit);
+        Assert.Contains("descentops physics acoustic: --spreading: ", spreadError, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public async Task Light_time_is_distance_over_the_speed_of_light()
     {
         // 1 au = 149 597 870 700 m (IAU 2012, exact); over c = 299 792 458 m/s that is 499.004 783 836 s.

@@ -13,8 +13,8 @@ public static class DiffCommand
 {
     public static Command Create()
     {
-        var aArgument = new Argument<string>("LOG-A") { Description = "The first run's log." };
-        var bArgument = new Argument<string>("LOG-B") { Description = "The second run's log." };
+        var aArgument = CommonOptions.Log("The first run's log.", "LOG-A");
+        var bArgument = CommonOptions.Log("The second run's log.", "LOG-B");
         var jsonOption = CommonOptions.Json();
         var command = new Command("diff", "Compare two runs: first divergence, outcome and summary figures, and the events one has more of.") { aArgument, bArgument, jsonOption };
         command.SetAction(parse =>
@@ -25,15 +25,7 @@ public static class DiffCommand
             LogGate.Open(a);
             LogGate.Open(b);
             var progress = new ProgressLine("  diff ");
-            JournalDiff diff;
-            try
-            {
-                diff = JournalDiff.Compare(a, b, share => progress.Fraction(share, "of both logs read"));
-            }
-            finally
-            {
-                progress.Done();
-            }
+            var diff = progress.Around(() => JournalDiff.Compare(a, b, share => progress.Fraction(share, "of both logs read")));
 
             if (parse.GetValue(jsonOption)) WriteJson(diff, a, b);
             else Print(diff, a, b);

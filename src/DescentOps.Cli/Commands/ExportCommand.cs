@@ -24,14 +24,7 @@ public static class ExportCommand
             // One progress line for the whole command: the verification reads the log once, the export once (sqlite) or
             // twice (csv), so the verification is given about a third of the bar.
             var progress = new ProgressLine("  export ");
-            try
-            {
-                LogGate.Open(path, share => progress.Fraction(0.3 * share, "verifying the log"));
-            }
-            finally
-            {
-                progress.Done();
-            }
+            progress.Around(() => LogGate.Open(path, share => progress.Fraction(0.3 * share, "verifying the log")));
 
             var output = parse.GetValue(outputOption);
             var force = parse.GetValue(forceOption);
@@ -48,15 +41,7 @@ public static class ExportCommand
                     throw new OutputRefusedException($"{folder} already holds an export; refusing to replace it (add --force to replace it, or name another folder).");
                 }
 
-                CsvExportResult csv;
-                try
-                {
-                    csv = CsvExport.Write(path, folder, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported"));
-                }
-                finally
-                {
-                    progress.Done();
-                }
+                var csv = progress.Around(() => CsvExport.Write(path, folder, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported")));
 
                 Console.Out.WriteLine($"export: {Path.GetFullPath(csv.EventsPath)} ({csv.Events} events), {Path.GetFullPath(csv.TelemetryPath)} ({csv.TelemetryRows} rows)");
             }
@@ -65,15 +50,7 @@ public static class ExportCommand
                 // A database gathers runs, so an existing one is added to, not replaced; but never the log itself.
                 var database = output ?? SqliteExport.DefaultPath(path);
                 if (OutputPaths.SameFile(database, path)) throw new OutputRefusedException($"{database} is also an input of this command; refusing to write over it.");
-                SqliteExportResult sqlite;
-                try
-                {
-                    sqlite = SqliteExport.Write(path, database, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported"));
-                }
-                finally
-                {
-                    progress.Done();
-                }
+                var sqlite = progress.Around(() => SqliteExport.Write(path, database, share => progress.Fraction(0.3 + 0.7 * share, "of the log exported")));
 
                 var how = sqlite.Replaced ? "replaced the same run already there as" : "added as";
                 Console.Out.WriteLine($"export: {Path.GetFullPath(database)}: {how} run {sqlite.RunId} ({sqlite.Events} events, {sqlite.Fields} fields{(sqlite.TruncatedAtLine is { } at ? $", truncated at line {at}" : "")})");

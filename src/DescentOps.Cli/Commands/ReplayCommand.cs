@@ -16,7 +16,7 @@ public static class ReplayCommand
     public static Command Create()
     {
         var logArgument = CommonOptions.Log("The event log to re-run and compare.");
-        var kernelOption = new Option<KernelChoice>("--kernel", "-k") { Description = "actors (default) or sequential.", DefaultValueFactory = _ => KernelChoice.Actors, HelpName = "actors|sequential" };
+        var kernelOption = CommonOptions.Kernel("actors (default) or sequential.");
         var jsonOption = CommonOptions.Json();
         var command = new Command("replay", "Re-run a logged run from its manifest (scenario, seed, limit) and compare the new log with it line by line.")
         {

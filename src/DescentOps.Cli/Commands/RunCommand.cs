@@ -40,12 +40,7 @@ public static class RunCommand
         var logOption = CommonOptions.Output("Where to write the event log (default: logs/<scenario>-seed<N>.jsonl, or -2, -3... if that is taken).");
         var forceOption = CommonOptions.Force();
         var jsonOption = CommonOptions.Json();
-        var kernelOption = new Option<KernelChoice>("--kernel", "-k")
-        {
-            Description = "actors (default) or sequential: both write the same log; sequential is the reference.",
-            DefaultValueFactory = _ => KernelChoice.Actors,
-            HelpName = "actors|sequential",
-        };
+        var kernelOption = CommonOptions.Kernel("actors (default) or sequential: both write the same log; sequential is the reference.");
 
         var noLogLimitOption = new Option<bool>(NoLogLimitOption)
         {
@@ -144,8 +139,8 @@ public static class RunCommand
         }
 
         wall.Stop();
-        if (json) WriteJson(scenario, seed, untilS, summary, wall.Elapsed, path);
-        else PrintSummary(scenario, summary, wall.Elapsed, path);
+        if (json) RunSummaryOutput.WriteJson(Console.Out, scenario, seed, untilS, summary, wall.Elapsed, path);
+        else RunSummaryOutput.WriteText(Console.Out, scenario, summary, wall.Elapsed, path);
         return (int)(summary.Outcome.Kind switch
         {
             RunOutcomeKind.Completed => ExitCode.Ok,
@@ -153,89 +148,4 @@ public static class RunCommand
             _ => ExitCode.MissionNotCompleted,
         });
     }
-
-    private static void WriteJson(Scenario scenario, long seed, double untilS, MissionSummary s, TimeSpan wall, string path) => JsonOutput.Write(w =>
-    {
-        w.WriteString("scenario", scenario.Name);
-        w.WriteString("source", scenario.SourceName);
-        w.WriteNumber("seed", seed);
-        w.Number("until_s", untilS);
-        w.WriteString("outcome", s.Outcome.Kind.ToString());
-        w.WriteString("reason", s.Outcome.Reason);
-        w.Number("simulated_time_s", s.FinalTimeS);
-        w.Number("breakthrough_time_s", s.BreakthroughTimeS);
-        w.Number("final_depth_m", s.FinalDepthM);
-        w.Number("shell_thickness_m", scenario.Shell.ThicknessM);
-        w.Number("energy_used_j", s.EnergyUsedJ);
-        w.WriteNumber("faults_injected", s.FaultsInjected);
-        w.WriteNumber("frames_sent", s.FramesSent);
-        w.WriteNumber("frames_received_on_ground", s.FramesReceivedOnGround);
-        w.WriteNumber("frames_lost", s.FramesLost);
-        w.WriteNumber("vehicle_profiles", s.VehicleProfiles);
-        w.WriteNumber("component_failures", s.ComponentFailures);
-        w.WriteNumber("events_delivered", s.EventsDelivered);
-        w.WriteNumber("records_written", s.RecordsWritten);
-        w.Number("wall_time_s", wall.TotalSeconds);
-        w.WriteString("log", path);
-        w.WriteStartArray("faults");
-        foreach (var f in s.Faults)
-        {
-            w.WriteStartObject();
-            w.WriteString("fault", f.Fault);
-            w.WriteString("kind", f.Kind);
-            w.Number("start_s", f.StartS);
-            w.Number("detected_after_s", f.DetectedAfterS);
-            w.Number("first_action_after_s", f.FirstActionAfterS);
-            w.Number("recovered_after_s", f.RecoveredAfterS);
-            w.WriteString("recovery", f.Recovery.ToString());
-            w.WriteEndObject();
-        }
-
-        w.WriteEndArray();
-    });
-
-    private static void PrintSummary(Scenario scenario, MissionSummary s, TimeSpan wall, string path)
-    {
-        var c = CultureInfo.InvariantCulture;
-        var rows = new (string, string)[]
-        {
-            ("outcome", $"{s.Outcome.Kind}: {s.Outcome.Reason}"),
-            ("simulated time", Days(s.FinalTimeS)),
-            ("time to breakthrough", s.BreakthroughTimeS is { } b ? Days(b) : "not reached"),
-            ("final depth", string.Create(c, $"{s.FinalDepthM:F1} m of {scenario.Shell.ThicknessM:F0} m")),
-            ("energy used", string.Create(c, $"{s.EnergyUsedJ / 3.6e9:F2} MWh ({s.EnergyUsedJ:F0} J)")),
-            ("faults injected", s.FaultsInjected.ToString(c)),
-            ("telemetry frames", string.Create(c, $"{s.FramesSent} sent = {s.FramesReceivedOnGround} received on ground + {s.FramesLost} lost + {s.FramesHeldOrInFlight} held or in flight at the end")),
-            ("time stopped", string.Create(c, $"{Hours(s.TimeStoppedS)} (longest {Hours(s.LongestStopS)}, frozen in {Hours(s.TimeFrozenS)})")),
-            ("time blind", Hours(s.TimeBlindS) + " (the ground saw nothing of the probe)"),
-            ("most frames held", s.FramesHeldMax.ToString(c)),
-            ("vehicles lost", s.VehiclesLost.ToString(c)),
-            ("vehicle profiles", s.VehicleProfiles.ToString(c)),
-            ("component failures", s.ComponentFailures.ToString(c)),
-            ("events", string.Create(c, $"{s.EventsDelivered} delivered, {s.RecordsWritten} logged")),
-            ("wall time", string.Create(c, $"{wall.TotalSeconds:F2} s")),
-            ("speed-up", string.Create(c, $"{s.FinalTimeS / Math.Max(wall.TotalSeconds, 1e-6):F0} x real time")),
-            ("event log", path),
-        };
-        foreach (var (label, value) in rows) Console.Out.WriteLine($"  {label,-22}{value}");
-        foreach (var criterion in s.Criteria)
-        {
-            Console.Out.WriteLine(string.Create(c, $"  criterion {criterion.Name,-13}{(criterion.Passed ? "met" : "NOT met")}: {criterion.Requirement} (measured {(criterion.Value is { } v ? v.ToString("G6", c) : "none")})"));
-        }
-
-        if (s.Criteria.Count > 0) Console.Out.WriteLine($"  {"success",-22}{(s.Success ? "yes" : "no")}");
-        foreach (var f in s.Faults)
-        {
-            Console.Out.WriteLine(string.Create(c, $"  fault {f.Fault} ({f.Kind}, at {f.StartS / 86400:F3} d): detected {After(f.DetectedAfterS)}, first action {After(f.FirstActionAfterS)}, recovered {After(f.RecoveredAfterS)} [{f.Recovery}]"));
-        }
-    }
-
-    private static string After(double? seconds) =>
-        seconds is { } s ? string.Create(CultureInfo.InvariantCulture, $"after {s / 3600:F2} h") : "never";
-
-    private static string Hours(double seconds) =>
-        string.Create(CultureInfo.InvariantCulture, $"{seconds / 3600:F2} h");
-
-    private static string Days(double seconds) =>
-        string.Create(CultureInfo.InvariantCulture, $"{seconds / 86400:F3} d ({seconds:F0} s)");
 }

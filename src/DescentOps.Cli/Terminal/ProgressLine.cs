@@ -45,6 +45,31 @@ public sealed class ProgressLine
         _shownWidth = 0;
     }
 
+    /// <summary>Runs <paramref name="work"/> and clears the line after it, also when it throws; its result.</summary>
+    public T Around<T>(Func<T> work)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        try
+        {
+            return work();
+        }
+        finally
+        {
+            Done();
+        }
+    }
+
+    /// <summary>Runs <paramref name="work"/> and clears the line after it, also when it throws.</summary>
+    public void Around(Action work)
+    {
+        ArgumentNullException.ThrowIfNull(work);
+        Around(() =>
+        {
+            work();
+            return true;
+        });
+    }
+
     /// <summary>"ETA 1 min 20 s" from the time spent and the share done; "ETA --" until there is a pace to go by.</summary>
     public static string Eta(TimeSpan elapsed, double fraction)
     {

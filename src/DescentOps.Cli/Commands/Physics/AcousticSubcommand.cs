@@ -46,10 +46,10 @@ internal static class AcousticSubcommand
             frequency.Option, range.Option, temperature.Option, salinity.Option, depth.Option, formula, ph, spreading,
             sourceLevel.Option, noiseLevel.Option, threshold.Option, directivity.Option, bandwidth.Option, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["frequencyHz"] = frequency.Name, ["temperatureK"] = temperature.Name, ["practicalSalinity"] = salinity.Name, ["depthM"] = depth.Name,
-            ["pH"] = "--ph", ["rangeM"] = range.Name, ["spreadingExponent"] = "--spreading", ["BandwidthHz"] = bandwidth.Name,
+            { "frequencyHz", frequency }, { "temperatureK", temperature }, { "practicalSalinity", salinity }, { "depthM", depth },
+            { "pH", ph }, { "rangeM", range }, { "spreadingExponent", spreading }, { "BandwidthHz", bandwidth },
         };
         command.SetAction(parse => PhysicsAction.Run("acoustic", parse, json, p =>
         {

@@ -41,11 +41,11 @@ internal static class DescentSubcommand
         {
             radius.Option, length.Option, headPower.Option, temperature.Option, pressure.Option, wallPower.Option, mass.Option, gravity.Option, gap.Option, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["RadiusM"] = radius.Name, ["LengthM"] = length.Name, ["MassKg"] = mass.Name, ["geometry"] = mass.Name,
-            ["headPowerW"] = headPower.Name, ["wallPowerW"] = wallPower.Name, ["farFieldTemperatureK"] = temperature.Name,
-            ["pressurePa"] = pressure.Name, ["gravityMPerS2"] = gravity.Name, ["designGapM"] = gap.Name,
+            { "RadiusM", radius }, { "LengthM", length }, { "MassKg", mass }, { "geometry", mass },
+            { "headPowerW", headPower }, { "wallPowerW", wallPower }, { "farFieldTemperatureK", temperature },
+            { "pressurePa", pressure }, { "gravityMPerS2", gravity }, { "designGapM", gap },
         };
         command.SetAction(parse => PhysicsAction.Run("descent", parse, json, p =>
         {

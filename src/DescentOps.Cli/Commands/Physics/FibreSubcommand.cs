@@ -36,12 +36,12 @@ internal static class FibreSubcommand
             length.Option, wavelength.Option, attenuation, splices, spliceLoss.Option, connectors, connectorLoss.Option, bendLoss.Option,
             packLoss.Option, rotaryLoss.Option, ageing.Option, transmitter.Option, receiver.Option, penalty.Option, required.Option, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["LengthM"] = length.Name, ["wavelengthM"] = wavelength.Name, ["AttenuationDbPerKm"] = "--attenuation", ["SpliceCount"] = "--splices",
-            ["ConnectorCount"] = "--connectors", ["SpliceLossDb"] = spliceLoss.Name, ["ConnectorLossDb"] = connectorLoss.Name,
-            ["BendLossDb"] = bendLoss.Name, ["PackLossDb"] = packLoss.Name, ["RotaryJointLossDb"] = rotaryLoss.Name,
-            ["AgeingAllowanceDb"] = ageing.Name, ["PenaltyDb"] = penalty.Name,
+            { "LengthM", length }, { "wavelengthM", wavelength }, { "AttenuationDbPerKm", attenuation }, { "SpliceCount", splices },
+            { "ConnectorCount", connectors }, { "SpliceLossDb", spliceLoss }, { "ConnectorLossDb", connectorLoss },
+            { "BendLossDb", bendLoss }, { "PackLossDb", packLoss }, { "RotaryJointLossDb", rotaryLoss },
+            { "AgeingAllowanceDb", ageing }, { "PenaltyDb", penalty },
         };
         command.SetAction(parse => PhysicsAction.Run("fibre", parse, json, p =>
         {

@@ -38,10 +38,10 @@ internal static class GliderSubcommand
         {
             buoyancy.Option, angle.Option, gravity.Option, hotel.Option, battery.Option, pressure.Option, density.Option, pump, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["netHeavinessKg"] = buoyancy.Name, ["glidePathAngleRad"] = angle.Name, ["gravityMPerS2"] = gravity.Name,
-            ["pumpEfficiency"] = "--pump-efficiency", ["absolutePressurePa"] = pressure.Name,
+            { "netHeavinessKg", buoyancy }, { "glidePathAngleRad", angle }, { "gravityMPerS2", gravity },
+            { "pumpEfficiency", pump }, { "absolutePressurePa", pressure },
         };
         command.SetAction(parse => PhysicsAction.Run("glider", parse, json, p =>
         {

@@ -21,7 +21,7 @@ internal static class IceSubcommand
         {
             temperature.Option, pressure.Option, fit, json,
         };
-        var map = new Dictionary<string, string> { ["temperatureK"] = temperature.Name, ["pressurePa"] = pressure.Name };
+        var map = new ParameterOptions { { "temperatureK", temperature }, { "pressurePa", pressure } };
         command.SetAction(parse => PhysicsAction.Run("ice", parse, json, p =>
         {
             var t = temperature.Value(p);

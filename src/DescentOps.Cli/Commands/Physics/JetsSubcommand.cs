@@ -30,10 +30,10 @@ internal static class JetsSubcommand
         {
             power.Option, hole.Option, speed.Option, temperature.Option, melting.Option, radius.Option, length.Option, minimum.Option, pump.Option, efficiency, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["jetHeatW"] = power.Name, ["holeRadiusM"] = hole.Name, ["speedMPerS"] = speed.Name, ["probeRadiusM"] = radius.Name, ["probeLengthM"] = length.Name,
-            ["minimumHoleRadiusM"] = minimum.Name, ["efficiency"] = "--efficiency", ["farFieldTemperatureK"] = temperature.Name,
+            { "jetHeatW", power }, { "holeRadiusM", hole }, { "speedMPerS", speed }, { "probeRadiusM", radius }, { "probeLengthM", length },
+            { "minimumHoleRadiusM", minimum }, { "efficiency", efficiency }, { "farFieldTemperatureK", temperature },
         };
         command.SetAction(parse => PhysicsAction.Run("jets", parse, json, p =>
         {

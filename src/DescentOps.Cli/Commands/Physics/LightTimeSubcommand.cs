@@ -15,7 +15,7 @@ internal static class LightTimeSubcommand
         {
             distance.Option, json,
         };
-        var map = new Dictionary<string, string> { ["distanceM"] = distance.Name };
+        var map = new ParameterOptions { { "distanceM", distance } };
         command.SetAction(parse => PhysicsAction.Run("light-time", parse, json, p =>
         {
             var d = distance.Value(p);

@@ -17,7 +17,7 @@ internal static class PhysicsAction
     /// <param name="json">The subcommand's --json option.</param>
     /// <param name="compute">Reads the options and evaluates the models.</param>
     /// <param name="optionsByParameter">Physics parameter names mapped to the options that feed them, so a refusal names the option too.</param>
-    public static int Run(string subcommand, ParseResult parse, Option<bool> json, Func<ParseResult, PhysicsReport> compute, IReadOnlyDictionary<string, string>? optionsByParameter = null)
+    public static int Run(string subcommand, ParseResult parse, Option<bool> json, Func<ParseResult, PhysicsReport> compute, ParameterOptions? optionsByParameter = null)
     {
         ArgumentNullException.ThrowIfNull(parse);
         ArgumentNullException.ThrowIfNull(compute);
@@ -37,12 +37,12 @@ internal static class PhysicsAction
     }
 
     /// <summary>The model's own sentence, without the runtime's "(Parameter 'x')" and "Actual value was" additions.</summary>
-    internal static string Describe(ArgumentOutOfRangeException exception, IReadOnlyDictionary<string, string>? optionsByParameter)
+    internal static string Describe(ArgumentOutOfRangeException exception, ParameterOptions? optionsByParameter)
     {
         if (exception is ModelRangeException refusal)
         {
             // The range is data: the sentence is formatted from it, and the option is found by the quantity's name.
-            return optionsByParameter is not null && optionsByParameter.TryGetValue(refusal.Range.Quantity, out var named)
+            return optionsByParameter is not null && optionsByParameter.TryGetOption(refusal.Range.Quantity, out var named)
                 ? $"{named}: {refusal.Sentence}"
                 : refusal.Sentence;
         }
@@ -50,7 +50,7 @@ internal static class PhysicsAction
         var message = exception.Message.Split('\n')[0].TrimEnd('\r');
         var marker = message.LastIndexOf(" (Parameter '", StringComparison.Ordinal);
         if (marker >= 0) message = message[..marker];
-        if (exception.ParamName is { } parameter && optionsByParameter is not null && optionsByParameter.TryGetValue(parameter, out var option))
+        if (exception.ParamName is { } parameter && optionsByParameter is not null && optionsByParameter.TryGetOption(parameter, out var option))
         {
             return $"{option}: {message}";
         }

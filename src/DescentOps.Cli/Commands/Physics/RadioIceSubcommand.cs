@@ -29,10 +29,10 @@ internal static class RadioIceSubcommand
         {
             temperature.Option, distance.Option, frequency.Option, parameters, hydrogen, chloride, ammonium, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["temperatureK"] = temperature.Name, ["distanceM"] = distance.Name, ["frequencyHz"] = frequency.Name,
-            ["HydrogenIonMolPerM3"] = "--acidity", ["ChlorideMolPerM3"] = "--chloride", ["AmmoniumMolPerM3"] = "--ammonium",
+            { "temperatureK", temperature }, { "distanceM", distance }, { "frequencyHz", frequency },
+            { "HydrogenIonMolPerM3", hydrogen }, { "ChlorideMolPerM3", chloride }, { "AmmoniumMolPerM3", ammonium },
         };
         command.SetAction(parse => PhysicsAction.Run("radio-ice", parse, json, p =>
         {

@@ -32,7 +32,7 @@ internal static class RefreezeSubcommand
         {
             gap.Option, temperature.Option, melting.Option, geometry, radius.Option, exposure.Option, json,
         };
-        var map = new Dictionary<string, string> { ["gapM"] = gap.Name, ["iceTemperatureK"] = temperature.Name, ["meltingTemperatureK"] = melting.Name, ["radiusM"] = radius.Name, ["exposureTimeS"] = exposure.Name };
+        var map = new ParameterOptions { { "gapM", gap }, { "iceTemperatureK", temperature }, { "meltingTemperatureK", melting }, { "radiusM", radius }, { "exposureTimeS", exposure } };
         command.SetAction(parse => PhysicsAction.Run("refreeze", parse, json, p =>
         {
             var chosen = p.GetValue(geometry);

@@ -34,10 +34,10 @@ internal static class SeawaterSubcommand
         {
             salinity.Option, pressure.Option, temperature.Option, standard, terrestrialDepth.Option, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["practicalSalinity"] = salinity.Name, ["seaPressurePa"] = pressure.Name, ["temperatureK"] = temperature.Name, ["earthDepthM"] = terrestrialDepth.Name,
-            ["absolute salinity"] = salinity.Name, ["sea pressure"] = pressure.Name, ["temperature"] = temperature.Name,
+            { "practicalSalinity", salinity }, { "seaPressurePa", pressure }, { "temperatureK", temperature }, { "earthDepthM", terrestrialDepth },
+            { "absolute salinity", salinity }, { "sea pressure", pressure }, { "temperature", temperature },
         };
         command.SetAction(parse => PhysicsAction.Run("seawater", parse, json, p =>
         {

@@ -32,10 +32,10 @@ internal static class StationSubcommand
         {
             rate.Option, model, median.Option, sigma, characteristic.Option, shape, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["doseRateGyPerS"] = rate.Name, ["medianDoseGy"] = median.Name, ["logStandardDeviation"] = "--log-sd",
-            ["characteristicDoseGy"] = characteristic.Name, ["shape"] = "--shape",
+            { "doseRateGyPerS", rate }, { "medianDoseGy", median }, { "logStandardDeviation", sigma },
+            { "characteristicDoseGy", characteristic }, { "shape", shape },
         };
         command.SetAction(parse => PhysicsAction.Run("station", parse, json, p =>
         {

@@ -32,11 +32,11 @@ internal static class VehicleSubcommand
         {
             speed.Option, propulsive.Option, battery.Option, hotel.Option, diameter.Option, drag, efficiency, density.Option, json,
         };
-        var map = new Dictionary<string, string>
+        var map = new ParameterOptions
         {
-            ["speedMPerS"] = speed.Name, ["propulsivePowerW"] = propulsive.Name, ["batteryEnergyJ"] = battery.Name, ["HotelPowerW"] = hotel.Name,
-            ["FrontalAreaM2"] = diameter.Name, ["DragCoefficient"] = "--drag-coefficient", ["PropulsiveEfficiency"] = "--efficiency",
-            ["waterDensityKgPerM3"] = density.Name,
+            { "speedMPerS", speed }, { "propulsivePowerW", propulsive }, { "batteryEnergyJ", battery }, { "HotelPowerW", hotel },
+            { "FrontalAreaM2", diameter }, { "DragCoefficient", drag }, { "PropulsiveEfficiency", efficiency },
+            { "waterDensityKgPerM3", density },
         };
         command.SetAction(parse => PhysicsAction.Run("vehicle", parse, json, p =>
         {
