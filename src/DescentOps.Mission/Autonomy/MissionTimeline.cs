@@ -20,6 +20,8 @@ public static class MissionTimeline
 
     public static IReadOnlyList<ScenarioError> Errors(Scenario scenario)
     {
+        // Each lander's telecommands are checked against its own mission (the view the run compiles them from).
+        if (scenario.Landers.Count > 0) return [.. scenario.Landers.SelectMany(l => Errors(l.View)).Distinct()];
         var errors = new List<ScenarioError>();
         _ = Telecommands(scenario, errors);
         _ = Uplinks(scenario, errors);

@@ -95,6 +95,7 @@ internal static partial class LanderLoader
                 : scenario.Station;
             scenario = scenario with { Body = scenario.Body with { Site = lander.Text("site") }, Station = station };
             if (own.Contains("procedures")) scenario = OwnProcedures(scenario, i);
+            if (own.Contains("telecommands")) scenario = OwnTelecommands(scenario, i);
             models.Add(new LanderModel(names[i], lander.Text("site"), latitude, longitude, scenario));
             faults.AddRange(faultIndices.Select((k, n) => (k, scenario.Faults[n])));
         }
@@ -243,6 +244,13 @@ internal static partial class LanderLoader
             FieldLocations = locations,
             Procedures = [.. view.Procedures.Select(p => p with { FieldPath = prefix + p.FieldPath, Steps = [.. p.Steps.Select(s => s with { FieldPath = prefix + s.FieldPath })] })],
         };
+    }
+
+    /// <summary>A lander's own telecommands named by their place in the file (landers[k].telecommands[i]), as its procedures are.</summary>
+    private static Scenario OwnTelecommands(Scenario view, int lander)
+    {
+        var prefix = $"landers[{lander}].";
+        return view with { Telecommands = [.. view.Telecommands.Select(t => t with { FieldPath = prefix + t.FieldPath })] };
     }
 
     private static YamlNode? Child(YamlMappingNode map, string key) =>
