@@ -45,11 +45,12 @@ public sealed class PreparedRun
         return summary;
     }
 
-    /// <summary>The rules of the scenario, or of every lander (each name once, in the landers' order).</summary>
+    /// <summary>The rules of the scenario, or of every lander and then the mission's own (each name once, in the landers' order).</summary>
     public static IReadOnlyList<string> CoveredRules(Scenario scenario) =>
         scenario.Landers.Count == 0
             ? [.. Autonomy.MissionRules.Compile(scenario).Rules.Select(r => r.Name)]
-            : [.. scenario.Landers.SelectMany(l => Autonomy.MissionRules.Compile(l.View).Rules.Select(r => r.Name)).Distinct()];
+            : [.. scenario.Landers.SelectMany(l => Autonomy.MissionRules.Compile(l.View).Rules.Select(r => r.Name))
+                .Concat(Autonomy.MissionDeskRules.Compile(scenario).Rules.Select(r => r.Name)).Distinct()];
 
     /// <summary>The procedures of the scenario, or of every lander (each name once, the first lander's first).</summary>
     public static IReadOnlyList<Procedures.CompiledProcedure> CoveredProcedures(Scenario scenario)

@@ -131,6 +131,22 @@ public sealed class MissionRulesTests
     }
 
     [Fact]
+    public async Task Coverage_of_a_run_lists_the_mission_rules_with_the_landers_rules()
+    {
+        var folder = TestFolders.New();
+        await File.WriteAllTextAsync(Path.Combine(folder, "s.yaml"), TestScenario.BuiltIn(Name).AddSection(Comparing).Text);
+        // Exit 4: the run ends at its time limit without completing the mission (README's table).
+        var (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, "run", "s.yaml", "--until", "2 d", "--log", "run.jsonl");
+        Assert.True(exit == 4, stdout + stderr);
+        (exit, stdout, stderr) = await InProcessTool.RunAsync(folder, "check", "s.yaml", "--coverage", "run.jsonl");
+        Assert.True(exit == 0, stdout + stderr);
+        // The landers' two rules (slow-descent-watch for tarn and brack, fell-stall-watch) and the mission's one.
+        Assert.Matches(@"run\.jsonl: \d of 3 rules acted", stdout);
+        var neverActed = stdout.Split('\n')[0].Split("never acted:") is [_, var list] ? list : "";
+        Assert.DoesNotContain("fell-falls-behind", neverActed);
+    }
+
+    [Fact]
     public void Mission_rules_without_landers_are_refused_at_their_line()
     {
         var single = TestScenario.Default.AddSection(Comparing);
