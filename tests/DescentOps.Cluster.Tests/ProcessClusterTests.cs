@@ -21,9 +21,10 @@ public sealed class ProcessClusterTests
 
         var port = ClusterFixture.FreePort();
         var join = $"127.0.0.1:{port}";
-        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "1", "--output", clustered, "--verbose"]); // its log is shown only if the test fails
-        using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "2"); // two slots: it holds a run whenever it is killed
-        using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
+        var patient = ClusterFixture.PatientAkkaFile(); // a starved heartbeat must not down a live member; the killed one is still found lost
+        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--akka-config", patient, "--listen", join, "--jobs", "1", "--output", clustered, "--verbose"]); // its log is shown only if the test fails
+        using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "2", "--akka-config", patient); // two slots: it holds a run whenever it is killed
+        using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1", "--akka-config", patient);
 
         // Mid-campaign: both workers have joined and four more runs are stored since, so the doomed one is at work (with
         // two slots it then always holds runs, and the campaign cannot end before the cluster downs it).
