@@ -62,7 +62,7 @@ internal static class ClusterFixture
     {
         private readonly CancellationTokenSource _stop = new();
 
-        /// <param name="akkaConfig">HOCON over the node's settings; <see cref="PatientAkka"/> when not given.</param>
+        /// <summary>Joins the campaign node at <paramref name="port"/>; Akka settings <see cref="PatientAkka"/> unless others are given.</summary>
         public Worker(int port, int slots = 1, JoinSecret? secret = null, string toolVersion = "", string? akkaConfig = null)
         {
             var setup = new WorkerSetup("in-process", toolVersion.Length == 0 ? ToolInfo.Version : toolVersion, slots, secret, PlanOf, n => { lock (Notices) Notices.Add(n); });
