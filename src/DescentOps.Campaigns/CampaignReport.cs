@@ -108,17 +108,36 @@ public static class CampaignReport
         }
 
         Line("<h2>Rule coverage</h2>");
-        Line("<table><thead><tr><th>variant</th><th>rule</th><th>runs in which it fired</th></tr></thead><tbody>");
+        Line("<p>Runs in which each rule fired, and in which it acted (fired, escalated or continued), as <code>descentops check SCENARIO --coverage LOG</code> reads one run's log.</p>");
+        Line("<table><thead><tr><th>variant</th><th>rule</th><th>runs in which it fired</th><th>runs in which it acted</th></tr></thead><tbody>");
         foreach (var v in summary["variants"]!.AsArray())
         {
-            foreach (var (rule, count) in v!["rules_fired_in_runs"]!.AsObject())
+            var actedIn = v!["rules_acted_in_runs"]?.AsObject();
+            foreach (var (rule, count) in v["rules_fired_in_runs"]!.AsObject())
             {
                 var n = count!.GetValue<int>();
-                Line($"<tr><td>{E(v["name"]!.GetValue<string>())}</td><td>{E(rule)}</td><td class=\"n\">{(n == 0 ? "<strong>never</strong>" : n.ToString(c))}</td></tr>");
+                var a = actedIn?[rule]?.GetValue<int>() ?? 0;
+                Line($"<tr><td>{E(v["name"]!.GetValue<string>())}</td><td>{E(rule)}</td><td class=\"n\">{Never(n)}</td><td class=\"n\">{Never(a)}</td></tr>");
             }
         }
 
         Line("</tbody></table>");
+        if (summary["variants"]!.AsArray().Any(v => v!["procedure_branches"]?.AsArray().Count > 0))
+        {
+            Line("<h2>Procedure branches</h2>");
+            Line("<p>Each step's branches (every step can pass; a step that waits can be late; a step with a check can fail) and the runs that took each at least once.</p>");
+            Line("<table><thead><tr><th>variant</th><th>procedure</th><th>step</th><th>branch</th><th>runs that took it</th><th>times taken</th></tr></thead><tbody>");
+            foreach (var v in summary["variants"]!.AsArray())
+            {
+                foreach (var branch in v!["procedure_branches"]!.AsArray())
+                {
+                    Line($"<tr><td>{E(v["name"]!.GetValue<string>())}</td><td>{E(branch!["procedure"]!.GetValue<string>())}</td><td>{E(branch["step"]!.GetValue<string>())}</td><td>{E(branch["branch"]!.GetValue<string>())}</td><td class=\"n\">{Never(branch["runs"]!.GetValue<int>())}</td><td class=\"n\">{branch["taken"]}</td></tr>");
+                }
+            }
+
+            Line("</tbody></table>");
+        }
+
         Line("<h2>Cautions</h2>");
         foreach (var paragraph in Cautions.Paragraphs) Line($"<p>{E(paragraph)}</p>");
         Line("<footer><p>Made by DescentOps from campaign.sqlite; figures come from the stored runs alone.</p></footer>");
@@ -295,6 +314,8 @@ public static class CampaignReport
         var start = svg.IndexOf("<svg", StringComparison.Ordinal);
         return $"<figure class=\"plot\">{(start >= 0 ? svg[start..] : svg)}</figure>";
     }
+
+    private static string Never(int runs) => runs == 0 ? "<strong>never</strong>" : runs.ToString(CultureInfo.InvariantCulture);
 
     private static string Rate(JsonNode? node) => node is null ? "-" : node.GetValue<double>().ToString("P1", CultureInfo.InvariantCulture);
 

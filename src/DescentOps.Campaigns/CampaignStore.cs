@@ -11,12 +11,13 @@ namespace DescentOps.Campaigns;
 /// (each lander's figures) and <c>lander_criteria</c> (the criteria judged on each lander). A run is keyed by (variant, run_index):
 /// a result already stored is never stored again, so a resumed or repeated run cannot be counted twice. Thread-safe:
 /// workers hand results in from any thread.
-/// Layouts: 1 had no lander tables; 2 adds <c>landers</c> and <c>lander_criteria</c>. A layout-1 store is brought to
-/// layout 2 when opened (the tables are added, empty: runs stored before have no lander rows).
+/// Layouts: 1 had no lander tables; 2 adds <c>landers</c> and <c>lander_criteria</c>; 3 adds <c>rule_coverage</c> and
+/// <c>procedure_branches</c>. An older store is brought to layout 3 when opened (the tables are added, empty: runs stored
+/// before have no rows in them).
 /// </summary>
 public sealed class CampaignStore : IDisposable
 {
-    public const int LayoutVersion = 2;
+    public const int LayoutVersion = 3;
 
     private readonly SqliteConnection _connection;
     private readonly Lock _gate = new();
@@ -30,14 +31,12 @@ public sealed class CampaignStore : IDisposable
         var store = new CampaignStore(connection);
         store.Execute("PRAGMA journal_mode = WAL; PRAGMA synchronous = NORMAL;");
         var version = Convert.ToInt64(store.Scalar("PRAGMA user_version"), CultureInfo.InvariantCulture);
-        if (version == 0)
+        if (version is >= 0 and < LayoutVersion)
         {
-            store.Execute(Schema + LanderTables);
-            store.Execute($"PRAGMA user_version = {LayoutVersion}");
-        }
-        else if (version == 1)
-        {
-            store.Execute(LanderTables);
+            // Each layout step's tables, added in order: a new store gets them all.
+            if (version == 0) store.Execute(Schema);
+            if (version <= 1) store.Execute(LanderTables);
+            if (version <= 2) store.Execute(CoverageTables);
             store.Execute($"PRAGMA user_version = {LayoutVersion}");
         }
         else if (version != LayoutVersion)
@@ -81,6 +80,14 @@ public sealed class CampaignStore : IDisposable
           PRIMARY KEY (variant, run_index, lander));
         CREATE TABLE lander_criteria (variant TEXT NOT NULL, run_index INTEGER NOT NULL, lander TEXT NOT NULL, criterion TEXT NOT NULL, requirement TEXT NOT NULL, value REAL, passed INTEGER NOT NULL,
           PRIMARY KEY (variant, run_index, lander, criterion));
+        """;
+
+    /// <summary>Layout 3: whether each rule acted in a run, and how often each procedure branch was taken.</summary>
+    private const string CoverageTables = """
+        CREATE TABLE rule_coverage (variant TEXT NOT NULL, run_index INTEGER NOT NULL, rule TEXT NOT NULL, acted INTEGER NOT NULL,
+          PRIMARY KEY (variant, run_index, rule));
+        CREATE TABLE procedure_branches (variant TEXT NOT NULL, run_index INTEGER NOT NULL, ordinal INTEGER NOT NULL, procedure TEXT NOT NULL, step TEXT NOT NULL, branch TEXT NOT NULL, taken INTEGER NOT NULL,
+          PRIMARY KEY (variant, run_index, ordinal));
         """;
 
     /// <summary>The campaign's settings; empty for a new database.</summary>
@@ -183,6 +190,17 @@ public sealed class CampaignStore : IDisposable
                 }
             }
 
+            foreach (var rule in run.RulesActed)
+            {
+                Insert(transaction, "INSERT OR REPLACE INTO rule_coverage VALUES ($v,$i,$r,$a)", ("$v", run.Variant), ("$i", run.Index), ("$r", rule.Rule), ("$a", rule.Acted ? 1 : 0));
+            }
+
+            for (var k = 0; k < run.Branches.Count; k++)
+            {
+                var b = run.Branches[k];
+                Insert(transaction, "INSERT INTO procedure_branches VALUES ($v,$i,$k,$p,$s,$b,$n)", ("$v", run.Variant), ("$i", run.Index), ("$k", k), ("$p", b.Procedure), ("$s", b.Step), ("$b", b.Branch), ("$n", b.Taken));
+            }
+
             transaction.Commit();
             return true;
         }
@@ -193,7 +211,7 @@ public sealed class CampaignStore : IDisposable
     {
         lock (_gate)
         {
-            foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings", "landers", "lander_criteria" })
+            foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings", "landers", "lander_criteria", "rule_coverage", "procedure_branches" })
             {
                 Execute($"DELETE FROM {table} WHERE run_index >= {index.ToString(CultureInfo.InvariantCulture)}");
             }
@@ -210,6 +228,8 @@ public sealed class CampaignStore : IDisposable
             var faults = Group("SELECT variant, run_index, fault, kind, start_s, detected_after_s, first_action_after_s, recovered_after_s, recovery FROM fault_measures ORDER BY variant, run_index, ordinal",
                 r => new FaultMeasure(r.GetString(2), r.GetString(3), r.GetDouble(4), N(r, 5), N(r, 6), N(r, 7), r.GetString(8)));
             var firings = Group("SELECT variant, run_index, rule, firings FROM rule_firings ORDER BY variant, run_index, rowid", r => (r.GetString(2), r.GetInt32(3)));
+            var acted = Group("SELECT variant, run_index, rule, acted FROM rule_coverage ORDER BY variant, run_index, rowid", r => new RuleCoverage(r.GetString(2), r.GetInt64(3) != 0));
+            var branches = Group("SELECT variant, run_index, procedure, step, branch, taken FROM procedure_branches ORDER BY variant, run_index, ordinal", r => new BranchCoverage(r.GetString(2), r.GetString(3), r.GetString(4), r.GetInt32(5)));
             var landerCriteria = Group("SELECT variant, run_index, lander, criterion, requirement, value, passed FROM lander_criteria ORDER BY variant, run_index, rowid",
                 r => (Lander: r.GetString(2), Result: new CriterionResult(r.GetString(3), r.GetString(4), N(r, 5), r.GetInt64(6) != 0)));
             var landers = Group("SELECT * FROM landers ORDER BY variant, run_index, ordinal", r => new LanderSummary(
@@ -230,6 +250,8 @@ public sealed class CampaignStore : IDisposable
                     reader.GetInt32(16), reader.GetInt32(17), reader.GetString(18),
                     inputs.GetValueOrDefault(key) ?? [], criteria.GetValueOrDefault(key) ?? [], faults.GetValueOrDefault(key) ?? [], firings.GetValueOrDefault(key) ?? [])
                 {
+                    RulesActed = acted.GetValueOrDefault(key) ?? [],
+                    Branches = branches.GetValueOrDefault(key) ?? [],
                     Landers = [.. (landers.GetValueOrDefault(key) ?? []).Select(l => l with { Criteria = [.. (landerCriteria.GetValueOrDefault(key) ?? []).Where(c => c.Lander == l.Lander).Select(c => c.Result)] })],
                 });
             }

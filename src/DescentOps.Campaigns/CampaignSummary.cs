@@ -7,7 +7,8 @@ namespace DescentOps.Campaigns;
 /// <summary>
 /// The campaign's answer, computed from the stored runs alone (so a resumed campaign and an uninterrupted one agree):
 /// per variant the success rate with its Wilson interval, breakthrough-time quantiles with distribution-free intervals,
-/// criteria passes, fault measures and rule coverage; per pair of variants on common seeds the paired table, the exact
+/// criteria passes, fault measures, rule coverage (runs in which each rule fired, and acted) and procedure-branch
+/// coverage (runs that took each branch); per pair of variants on common seeds the paired table, the exact
 /// McNemar p-value, the Newcombe interval of the difference and the runs where they disagree.
 /// </summary>
 public static class CampaignSummary
@@ -102,6 +103,29 @@ public static class CampaignSummary
             ["rules_fired_in_runs"] = firedIn,
             ["rules_never_fired"] = new JsonArray([.. rules.Where(r => firedIn[r]!.GetValue<int>() == 0).Select(r => (JsonNode?)r)]),
         };
+        var acted = new JsonObject();
+        foreach (var rule in runs.SelectMany(r => r.RulesActed).Select(a => a.Rule).Distinct())
+        {
+            acted[rule] = runs.Count(r => r.RulesActed.Any(a => a.Rule == rule && a.Acted));
+        }
+
+        node["rules_acted_in_runs"] = acted;
+        var branches = new JsonArray();
+        foreach (var branch in runs.SelectMany(r => r.Branches).Select(b => (b.Procedure, b.Step, b.Branch)).Distinct())
+        {
+            var taken = runs.SelectMany(r => r.Branches.Where(b => (b.Procedure, b.Step, b.Branch) == branch)).ToList();
+            branches.Add(new JsonObject
+            {
+                ["procedure"] = branch.Procedure,
+                ["step"] = branch.Step,
+                ["branch"] = branch.Branch,
+                ["runs"] = taken.Count(b => b.Taken > 0),
+                ["taken"] = taken.Sum(b => (long)b.Taken),
+            });
+        }
+
+        node["procedure_branches"] = branches;
+
         // Only scenarios with landers have the key, so a single-lander campaign's summary is what it always was.
         if (runs.Any(r => r.Landers.Count > 0)) node["landers"] = Landers(runs);
         return node;

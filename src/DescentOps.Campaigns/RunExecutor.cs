@@ -56,6 +56,8 @@ public static class RunExecutor
             [.. summary.RuleNames.Distinct().Select(r => (r, summary.RuleFirings.GetValueOrDefault(r)))])
         {
             Landers = summary.Landers,
+            RulesActed = summary.RulesActed,
+            Branches = summary.Branches,
         };
     }
 

@@ -6,7 +6,8 @@ namespace DescentOps.Campaigns;
 /// What a campaign keeps of one run: the outcome, the summary figures, the drawn inputs, each criterion, each fault's
 /// measures, each rule's firings, and the summary line's chain value (which a regenerated log must end with).
 /// Keyed by (variant, index): a result that arrives twice is the same result. A scenario with landers adds each lander's
-/// own figures and verdicts (<see cref="Landers"/>).
+/// own figures and verdicts (<see cref="Landers"/>); every run says which rules acted and which procedure branches it
+/// took (<see cref="RulesActed"/>, <see cref="Branches"/>).
 /// </summary>
 public sealed record RunRecord(
     string Variant,
@@ -35,4 +36,10 @@ public sealed record RunRecord(
 {
     /// <summary>Each lander's figures and criteria, in the scenario's order; empty for a scenario without landers.</summary>
     public IReadOnlyList<LanderSummary> Landers { get; init; } = [];
+
+    /// <summary>Each rule of the run's rule set with whether it acted (fired, escalated or continued).</summary>
+    public IReadOnlyList<RuleCoverage> RulesActed { get; init; } = [];
+
+    /// <summary>Every branch of the run's procedures with how often the run took it.</summary>
+    public IReadOnlyList<BranchCoverage> Branches { get; init; } = [];
 }

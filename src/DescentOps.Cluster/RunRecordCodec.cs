@@ -40,7 +40,9 @@ public static class RunRecordCodec
 
         if (record is null || record.Variant is null || record.Outcome is null || record.Reason is null || record.SummaryChain is null
             || record.Inputs is null || record.Criteria is null || record.Faults is null || record.RuleFirings is null
-            || record.Landers is null || record.Landers.Any(l => l is null || l.Lander is null || l.Criteria is null))
+            || record.Landers is null || record.Landers.Any(l => l is null || l.Lander is null || l.Criteria is null)
+            || record.RulesActed is null || record.RulesActed.Any(r => r?.Rule is null)
+            || record.Branches is null || record.Branches.Any(b => b?.Procedure is null || b.Step is null || b.Branch is null))
         {
             throw new InvalidDataException("a run record with missing fields");
         }

@@ -16,6 +16,7 @@ public static class CampaignTables
             ("runs", "variant, run_index"), ("inputs", "variant, run_index, path"), ("criteria", "variant, run_index, criterion"),
             ("fault_measures", "variant, run_index, ordinal"), ("rule_firings", "variant, run_index, rule"),
             ("landers", "variant, run_index, ordinal"), ("lander_criteria", "variant, run_index, lander, criterion"),
+            ("rule_coverage", "variant, run_index, rule"), ("procedure_branches", "variant, run_index, ordinal"),
         })
         {
             using var command = connection.CreateCommand();

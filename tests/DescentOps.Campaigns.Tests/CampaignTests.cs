@@ -38,7 +38,7 @@ public sealed class CampaignTests
         Assert.Equal(0, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "5", "--seed", "5", "--versus", CampaignFixture.NoBoost, "--output", cut));
 
         // As a killed process leaves it: some runs committed (each run is one transaction), no summary written.
-        foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings" })
+        foreach (var table in new[] { "runs", "inputs", "criteria", "fault_measures", "rule_firings", "landers", "lander_criteria", "rule_coverage", "procedure_branches" })
         {
             CampaignFixture.Execute(cut, $"DELETE FROM {table} WHERE run_index >= 2 OR (variant = 'no-boost' AND run_index = 1)");
         }

@@ -85,6 +85,27 @@ public sealed class LanderCampaignTests
     }
 
     [Fact]
+    public void A_variants_fault_for_one_lander_acts_in_a_campaign_with_drawn_inputs()
+    {
+        var scenario = ScenarioLoader.LoadText(LanderCampaignScenario.Text, "three-landers-campaign.yaml");
+        const string change = """
+            add_faults:
+              - name: cairn-dies
+                lander: tarn
+                kind: station_failure
+                at: 2 d
+            """;
+        var variant = new CampaignVariant("cairn-dies", change);
+        var plan = new CampaignPlan(scenario, [CampaignVariant.Baseline, variant], 5, scenario.Run.UntilS, "test-build", Engine.Randomness.RandomStream.AlgorithmName);
+        var baseline = RunExecutor.Execute(plan, plan.Spec(CampaignVariant.BaselineName, 0));
+        var changed = RunExecutor.Execute(plan, plan.Spec("cairn-dies", 0));
+        Assert.Equal(baseline.Inputs, changed.Inputs); // the same draws
+        Assert.False(baseline.Landers.Single(l => l.Lander == "tarn").StationDead);
+        Assert.True(changed.Landers.Single(l => l.Lander == "tarn").StationDead); // the added fault reached the lander's own components
+        Assert.Contains(changed.Faults, f => f.Fault == "cairn-dies");
+    }
+
+    [Fact]
     public async Task A_single_lander_campaign_has_no_lander_rows_or_keys()
     {
         var dir = CampaignFixture.TempDir();
@@ -93,25 +114,28 @@ public sealed class LanderCampaignTests
         Assert.DoesNotContain("\"landers\"", summary, StringComparison.Ordinal);
         Assert.DoesNotContain("Per lander", File.ReadAllText(Path.Combine(dir, "report.html")), StringComparison.Ordinal);
         var dump = CampaignFixture.Dump(dir);
-        Assert.Contains("landers\nlander_criteria\n", dump, StringComparison.Ordinal); // both tables empty
+        Assert.Contains("landers\nlander_criteria\nrule_coverage\n", dump, StringComparison.Ordinal); // both lander tables empty
     }
 
     [Fact]
-    public async Task A_layout_1_store_is_brought_to_layout_2_and_keeps_its_runs()
+    public async Task A_layout_1_store_is_brought_to_the_present_layout_and_keeps_its_runs()
     {
         var dir = CampaignFixture.TempDir();
         Assert.Equal(0, await CampaignFixture.CliAsync("campaign", CampaignFixture.Scenario, "--runs", "2", "--seed", "4", "--output", dir));
         var before = CampaignFixture.Dump(dir);
-        // Layout 1 as it was: the same tables without the lander ones.
-        CampaignFixture.Execute(dir, "DROP TABLE landers; DROP TABLE lander_criteria; PRAGMA user_version = 1;");
+        // Layout 1 as it was: the same tables without the lander and coverage ones (which a single-lander run without
+        // procedures fills with its rules only: they go, and come back empty).
+        CampaignFixture.Execute(dir, "DROP TABLE landers; DROP TABLE lander_criteria; DROP TABLE rule_coverage; DROP TABLE procedure_branches; PRAGMA user_version = 1;");
         using (var store = CampaignStore.Open(Path.Combine(dir, "campaign.sqlite")))
         {
             Assert.Equal(2, store.Runs().Count);
         }
 
-        Assert.Equal(before, CampaignFixture.Dump(dir));
-        CampaignFixture.Execute(dir, "PRAGMA user_version = 3;");
-        Assert.Contains("layout 3", Assert.Throws<InvalidDataException>(() => CampaignStore.Open(Path.Combine(dir, "campaign.sqlite"))).Message, StringComparison.Ordinal);
+        var after = CampaignFixture.Dump(dir);
+        Assert.Equal(before[..before.IndexOf("rule_coverage\n", StringComparison.Ordinal)], after[..after.IndexOf("rule_coverage\n", StringComparison.Ordinal)]);
+        Assert.EndsWith("rule_coverage\nprocedure_branches\n", after, StringComparison.Ordinal);
+        CampaignFixture.Execute(dir, $"PRAGMA user_version = {CampaignStore.LayoutVersion + 1};");
+        Assert.Contains($"layout {CampaignStore.LayoutVersion + 1}", Assert.Throws<InvalidDataException>(() => CampaignStore.Open(Path.Combine(dir, "campaign.sqlite"))).Message, StringComparison.Ordinal);
     }
 
     [Theory]

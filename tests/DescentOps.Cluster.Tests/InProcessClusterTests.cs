@@ -55,6 +55,29 @@ public sealed class InProcessClusterTests
     }
 
     [Fact]
+    public async Task A_clustered_campaign_gives_the_local_campaigns_coverage_table()
+    {
+        var local = ClusterFixture.TempDir();
+        var clustered = ClusterFixture.TempDir();
+        var common = new[] { "campaign", DescentOps.Campaigns.Tests.CoverageCampaignScenario.File(), "--runs", "8", "--seed", "3" };
+        var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
+        Assert.True(exit == 0, stderr);
+
+        var port = ClusterFixture.FreePort();
+        await using var worker = new ClusterFixture.Worker(port, slots: 2);
+        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        Assert.True(clusterExit == 0, stdout + clusterErr);
+        Assert.Equal(8, worker.Counters.RunsDone);
+
+        var summary = File.ReadAllText(Path.Combine(local, "summary.json"));
+        Assert.Equal(summary, File.ReadAllText(Path.Combine(clustered, "summary.json")));
+        Assert.Contains("\"procedure_branches\"", summary, StringComparison.Ordinal);
+        var dump = ClusterFixture.Dump(local);
+        Assert.Equal(dump, ClusterFixture.Dump(clustered));
+        Assert.Equal(64, dump.Split('\n').SkipWhile(l => l != "procedure_branches").Skip(1).Count(l => l.Length > 0)); // 8 runs x 8 branches
+    }
+
+    [Fact]
     public async Task A_precision_stop_ends_a_clustered_campaign_where_it_ends_a_local_one()
     {
         var local = ClusterFixture.TempDir();

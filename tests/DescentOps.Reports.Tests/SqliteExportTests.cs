@@ -64,6 +64,50 @@ public sealed class SqliteExportTests(RunLogs logs)
     }
 
     [Fact]
+    public void Each_event_of_a_three_lander_log_carries_its_lander_and_a_version_1_database_is_filled_in()
+    {
+        var log = Path.Combine(RepositoryFiles.Root, "tests", "golden", "three-landers-shared-link.jsonl");
+        var database = logs.File("landers.sqlite");
+        SqliteExport.Write(log, database);
+
+        // The log read here as plain JSON: each event's lander is its data's "lander" member, written first by runs with landers.
+        var expected = new Dictionary<long, string?>();
+        foreach (var line in File.ReadLines(log))
+        {
+            var node = System.Text.Json.Nodes.JsonNode.Parse(line)!;
+            if (node["type"]!.GetValue<string>() != "event") continue;
+            var leading = node["data"]!.AsObject().FirstOrDefault();
+            expected[node["seq"]!.GetValue<long>()] = leading.Key == "lander" ? leading.Value!.GetValue<string>() : null;
+        }
+
+        void Check(string db)
+        {
+            var rows = Query(db, "SELECT seq, lander FROM events ORDER BY seq");
+            Assert.Equal(expected.Count, rows.Count);
+            Assert.All(rows, r => Assert.Equal(expected[(long)r["seq"]!], (string?)r["lander"]));
+        }
+
+        Check(database);
+        Assert.Equal(["brack", "fell", "tarn"], Query(database, "SELECT DISTINCT lander FROM events WHERE lander IS NOT NULL ORDER BY lander").Select(r => (string)r["lander"]!));
+        Assert.Contains(expected.Values, v => v is null); // the shared link's own records and the run's belong to no lander
+
+        // A database of version 1 (no lander column) gets the column, filled from the fields it already holds.
+        using (var old = new SqliteConnection(new SqliteConnectionStringBuilder { DataSource = database, Pooling = false }.ToString()))
+        {
+            old.Open();
+            using var command = old.CreateCommand();
+            command.CommandText = "ALTER TABLE events DROP COLUMN lander; PRAGMA user_version = 1;";
+            command.ExecuteNonQuery();
+        }
+
+        SqliteExport.Write(logs.DefaultLog, database);
+        Assert.Equal(2L, Query(database, "PRAGMA user_version").Single()["user_version"]);
+        Assert.Empty(Query(database, "SELECT seq FROM events WHERE run_id = (SELECT MAX(run_id) FROM runs) AND lander IS NOT NULL"));
+        var first = Query(database, "SELECT seq, lander FROM events WHERE run_id = (SELECT MIN(run_id) FROM runs) ORDER BY seq");
+        Assert.All(first, r => Assert.Equal(expected[(long)r["seq"]!], (string?)r["lander"]));
+    }
+
+    [Fact]
     public void Readme_documents_the_tables_indexes_and_the_example_query()
     {
         var section = RepositoryFiles.Normalized(RepositoryFiles.ReadmeSection("Reports and exports"));

@@ -354,6 +354,20 @@ public static class CampaignCommand
             foreach (var (criterion, passed) in v["criteria_passed"]!.AsObject()) Console.Out.WriteLine($"    criterion {criterion}: met in {passed} run(s)");
             var never = v["rules_never_fired"]!.AsArray();
             if (never.Count > 0) Console.Out.WriteLine($"    rules that never fired: {string.Join(", ", never.Select(n => n!.GetValue<string>()))}");
+            if (v["procedure_branches"] is JsonArray { Count: > 0 } branches)
+            {
+                var untaken = branches.Where(b => b!["runs"]!.GetValue<int>() == 0).Select(b => $"{b!["procedure"]}/{b["step"]} {b["branch"]}").ToList();
+                Console.Out.WriteLine($"    procedure branches taken in some run: {branches.Count - untaken.Count} of {branches.Count}{(untaken.Count == 0 ? "" : $"; never: {string.Join(", ", untaken)}")}");
+            }
+
+            if (v["landers"] is JsonArray landers)
+            {
+                foreach (var l in landers)
+                {
+                    var lci = l!["success_ci95"]!.AsArray();
+                    Console.Out.WriteLine(string.Create(c, $"    lander {l["name"]!.GetValue<string>(),-12} {l["successes"]}/{l["runs"]} succeeded (95 % {lci[0]!.GetValue<double>():P1} to {lci[1]!.GetValue<double>():P1}); reached the ocean {l["reached_ocean"]}, stalled {l["stalled"]}, station dead {l["station_dead"]}"));
+                }
+            }
         }
 
         foreach (var p in summary["pairs"]!.AsArray())

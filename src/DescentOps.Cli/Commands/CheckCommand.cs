@@ -180,31 +180,17 @@ public static class CheckCommand
     private static int Coverage(Scenario scenario, string logPath)
     {
         if (!File.Exists(logPath)) throw new FileNotFoundException($"no such file: {logPath}", logPath);
-        var rules = MissionRules.Compile(scenario);
-        var procedures = Mission.Procedures.MissionProcedures.Compile(scenario);
-        var acted = new HashSet<string>(StringComparer.Ordinal);
-        var verdicts = new List<(string Procedure, string Step, Mission.Procedures.StepVerdict Verdict)>();
+        var procedures = Mission.Running.PreparedRun.CoveredProcedures(scenario);
+        var tally = new Mission.Running.CoverageTally();
         using (var reader = Journal.JournalReader.Open(logPath))
         {
-            foreach (var e in reader.ReadAll().OfType<Journal.EventEntry>())
-            {
-                string Text(string name) => e.Data.Where(f => f.Name == name).Select(f => f.Text).FirstOrDefault() ?? "";
-                Mission.Procedures.StepVerdict? verdict = e.Kind switch
-                {
-                    Records.Kinds.ProcedureRecords.StepPassed => Mission.Procedures.StepVerdict.Passed,
-                    Records.Kinds.ProcedureRecords.StepFailed => Mission.Procedures.StepVerdict.Failed,
-                    Records.Kinds.ProcedureRecords.StepLate => Mission.Procedures.StepVerdict.Late,
-                    _ => null,
-                };
-                if (verdict is { } v) verdicts.Add((Text("procedure"), Text("step"), v));
-                else if (e.Kind is Records.Kinds.RuleRecords.Fired or Records.Kinds.RuleRecords.Escalated or Records.Kinds.RuleRecords.Continued) acted.Add(Text("rule"));
-            }
+            foreach (var e in reader.ReadAll().OfType<Journal.EventEntry>()) tally.Observe(e.Kind, e.Data);
         }
 
-        var names = rules.Rules.Select(r => r.Name).ToList();
-        var silent = names.Where(n => !acted.Contains(n)).ToList();
-        Console.Out.WriteLine($"{logPath}: {names.Count - silent.Count} of {names.Count} rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}");
-        foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(Mission.Procedures.ProcedureCoverage.Of(procedures, verdicts))) Console.Out.WriteLine($"  {line}");
+        var acted = tally.Rules(Mission.Running.PreparedRun.CoveredRules(scenario));
+        var silent = acted.Where(r => !r.Acted).Select(r => r.Rule).ToList();
+        Console.Out.WriteLine($"{logPath}: {acted.Count - silent.Count} of {acted.Count} rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}");
+        foreach (var line in Mission.Procedures.ProcedureCoverage.Lines(tally.BranchCounts(procedures))) Console.Out.WriteLine($"  {line}");
         return (int)ExitCode.Ok;
     }
 

@@ -55,6 +55,12 @@ public sealed record MissionSummary(
     /// <summary>Each lander's own figures, in the scenario's order; empty for a scenario without a landers list.</summary>
     public IReadOnlyList<LanderSummary> Landers { get; init; } = [];
 
+    /// <summary>Each rule of the run's rule set with whether it acted (fired, escalated or continued).</summary>
+    public IReadOnlyList<RuleCoverage> RulesActed { get; init; } = [];
+
+    /// <summary>Every branch of the run's procedures with how often it was taken.</summary>
+    public IReadOnlyList<BranchCoverage> Branches { get; init; } = [];
+
     /// <summary>A run succeeds when it completes and meets every criterion.</summary>
     public bool Success => Outcome.Kind == RunOutcomeKind.Completed && Criteria.All(c => c.Passed);
 

@@ -12,6 +12,7 @@ public sealed class MissionSummarySink : IJournalSink
     private readonly IJournalSink _next;
     private readonly FaultMeasures _faultMeasures;
     private readonly SummaryTally _mission = new();
+    private readonly CoverageTally _coverage = new();
     private readonly List<(string Lander, SummaryTally Tally)> _landers;
 
     public MissionSummarySink(IJournalSink next)
@@ -34,6 +35,7 @@ public sealed class MissionSummarySink : IJournalSink
         _next.Write(record);
         _faultMeasures.Observe(record);
         _mission.Observe(record);
+        _coverage.Observe(record.Kind, record.Fields);
         if (_landers.Count > 0 && LanderOf(record) is { } lander)
         {
             foreach (var (name, tally) in _landers)
@@ -42,6 +44,12 @@ public sealed class MissionSummarySink : IJournalSink
             }
         }
     }
+
+    /// <summary>The rules whose acting the summary reports (<see cref="MissionSummary.RulesActed"/>).</summary>
+    public IReadOnlyList<string> CoveredRules { get; init; } = [];
+
+    /// <summary>The procedures whose branches the summary reports (<see cref="MissionSummary.Branches"/>).</summary>
+    public IReadOnlyList<Procedures.CompiledProcedure> CoveredProcedures { get; init; } = [];
 
     public MissionSummary Summarize(RunResult result)
     {
@@ -72,6 +80,8 @@ public sealed class MissionSummarySink : IJournalSink
             VehiclesLost = _mission.Figures.VehiclesLost,
             RuleFirings = new Dictionary<string, int>(_mission.Figures.RuleFirings, StringComparer.Ordinal),
             Landers = [.. _landers.Select(l => Lander(l.Lander, l.Tally))],
+            RulesActed = _coverage.Rules(CoveredRules),
+            Branches = _coverage.Branches(CoveredProcedures),
         };
     }
 

@@ -36,9 +36,27 @@ public sealed class PreparedRun
     {
         var rulePoints = Rules.Rules.ToDictionary(r => r.Name, r => (IReadOnlyList<string>)[.. r.Condition.Points], StringComparer.Ordinal);
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
-        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)]);
+        var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)])
+        {
+            CoveredRules = Scenario.Landers.Count == 0 ? [.. Rules.Rules.Select(r => r.Name)] : CoveredRules(Scenario),
+            CoveredProcedures = CoveredProcedures(Scenario),
+        };
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
         return summary;
+    }
+
+    /// <summary>The rules of the scenario, or of every lander (each name once, in the landers' order).</summary>
+    public static IReadOnlyList<string> CoveredRules(Scenario scenario) =>
+        scenario.Landers.Count == 0
+            ? [.. Autonomy.MissionRules.Compile(scenario).Rules.Select(r => r.Name)]
+            : [.. scenario.Landers.SelectMany(l => Autonomy.MissionRules.Compile(l.View).Rules.Select(r => r.Name)).Distinct()];
+
+    /// <summary>The procedures of the scenario, or of every lander (each name once, the first lander's first).</summary>
+    public static IReadOnlyList<Procedures.CompiledProcedure> CoveredProcedures(Scenario scenario)
+    {
+        if (scenario.Landers.Count == 0) return Procedures.MissionProcedures.Compile(scenario);
+        var seen = new HashSet<string>(StringComparer.Ordinal);
+        return [.. scenario.Landers.SelectMany(l => Procedures.MissionProcedures.Compile(l.View)).Where(p => seen.Add(p.Name))];
     }
 
     /// <summary>The summary with what the sink cannot know: the drawn inputs, the rule set, and the criteria judged.</summary>

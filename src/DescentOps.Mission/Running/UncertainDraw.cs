@@ -53,7 +53,19 @@ public static class UncertainDraw
         // Telecommands: the text's own (with any drawn times) and those a change added; rule uplinks only come from a change.
         var added = scenario.Telecommands.Where(t => t.FieldPath.StartsWith("add_telecommands", StringComparison.Ordinal));
         var telecommands = drawn.Telecommands.Concat(added).OrderBy(t => t.AtS).ToList();
-        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults, Telecommands = telecommands, RuleUplinks = scenario.RuleUplinks }, values);
+        // A lander's components are built from its view: keep each view's changes the same way.
+        var landers = drawn.Landers.Count == scenario.Landers.Count
+            ? [.. drawn.Landers.Select((l, k) => l with { View = Kept(scenario.Landers[k].View, l.View) })]
+            : drawn.Landers;
+        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults, Telecommands = telecommands, RuleUplinks = scenario.RuleUplinks, Landers = landers }, values);
+    }
+
+    /// <summary>A drawn scenario with what a change did to the given one after loading kept: rules, faults, added telecommands, uplinks.</summary>
+    private static Scenario Kept(Scenario given, Scenario drawn)
+    {
+        var faults = given.Faults.Select(f => drawn.Faults.FirstOrDefault(d => d.Name == f.Name && d.Kind == f.Kind) is { } d ? d : f).ToList();
+        var added = given.Telecommands.Where(t => t.FieldPath.StartsWith("add_telecommands", StringComparison.Ordinal));
+        return drawn with { Rules = given.Rules, Faults = faults, Telecommands = [.. drawn.Telecommands.Concat(added).OrderBy(t => t.AtS)], RuleUplinks = given.RuleUplinks };
     }
 
     /// <summary>The journal record of the draws, at the start of the run.</summary>

@@ -72,8 +72,8 @@ public static class SqliteExport
         var runId = (long)Scalar(db, transaction, "SELECT last_insert_rowid()")!;
 
         using var insertEvent = Command(db, transaction,
-            "INSERT INTO events (run_id, seq, t_s, source, kind, severity, data_json) VALUES ($run, $seq, $t, $source, $kind, $severity, $data)",
-            "$run", "$seq", "$t", "$source", "$kind", "$severity", "$data");
+            "INSERT INTO events (run_id, seq, t_s, source, kind, severity, data_json, lander) VALUES ($run, $seq, $t, $source, $kind, $severity, $data, $lander)",
+            "$run", "$seq", "$t", "$source", "$kind", "$severity", "$data", "$lander");
         using var insertField = Command(db, transaction,
             "INSERT INTO event_fields (run_id, seq, name, number, integer, text) VALUES ($run, $seq, $name, $number, $integer, $text)",
             "$run", "$seq", "$name", "$number", "$integer", "$text");
@@ -98,6 +98,7 @@ public static class SqliteExport
             insertEvent.Parameters["$kind"].Value = e.Kind;
             insertEvent.Parameters["$severity"].Value = e.Severity.ToString().ToLowerInvariant();
             insertEvent.Parameters["$data"].Value = DataJson.Of(e.Data);
+            insertEvent.Parameters["$lander"].Value = e.Data.Count > 0 && e.Data[0].Name == "lander" && e.Data[0].Text is { } lander ? lander : DBNull.Value;
             insertEvent.ExecuteNonQuery();
             insertField.Parameters["$seq"].Value = e.Sequence;
             foreach (var f in e.Data)
@@ -149,7 +150,11 @@ public static class SqliteExport
     {
         var version = (long)Scalar(db, null, "PRAGMA user_version")!;
         var tables = (long)Scalar(db, null, "SELECT COUNT(*) FROM sqlite_master WHERE type = 'table'")!;
-        if (version != SqliteSchema.Version && (version != 0 || tables != 0))
+        if (version == 1)
+        {
+            foreach (var statement in Statements(SqliteSchema.FromVersion1)) Execute(db, null, statement);
+        }
+        else if (version != SqliteSchema.Version && (version != 0 || tables != 0))
         {
             throw new InvalidDataException($"The database has layout version {version} (or unrelated tables), not DescentOps export version {SqliteSchema.Version}; export into a new file.");
         }

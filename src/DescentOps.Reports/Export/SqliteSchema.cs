@@ -10,7 +10,9 @@ namespace DescentOps.Reports.Export;
 /// figures (as JSON), how many events were exported, and whether the log was truncated and at which line. A run
 /// is identified by scenario SHA-256, seed, tool version and the manifest line's chain value (which differs
 /// whenever any manifest byte does); exporting the same run again replaces its rows under the same run_id.</item>
-/// <item><c>events</c>: one row per event, its data as a JSON object in <c>data_json</c>.</item>
+/// <item><c>events</c>: one row per event, its data as a JSON object in <c>data_json</c>, and the lander it belongs to
+/// (<c>lander</c>: the event's <c>lander</c> field, which a run with landers writes first; NULL for a single-lander log
+/// and for shared records about no lander).</item>
 /// <item><c>event_fields</c>: one row per data field of each event. <c>number</c> holds every finite numeric
 /// value (integers too, as REAL) so one column answers "max depth"; <c>integer</c> holds integer and boolean
 /// values exactly (booleans as 0 and 1); <c>text</c> holds text values and the spelling of NaN and the
@@ -19,8 +21,18 @@ namespace DescentOps.Reports.Export;
 /// </remarks>
 public static class SqliteSchema
 {
-    /// <summary>Stored in <c>PRAGMA user_version</c>; a database with another layout is refused, not altered.</summary>
-    public const int Version = 1;
+    /// <summary>
+    /// Stored in <c>PRAGMA user_version</c>. Version 2 added <c>events.lander</c>; a version-1 database is brought to 2
+    /// when exported into (the column added and filled from each event's <c>lander</c> field in <c>event_fields</c>);
+    /// any other layout is refused, not altered.
+    /// </summary>
+    public const int Version = 2;
+
+    /// <summary>The step from version 1: the column, filled from the fields already stored.</summary>
+    public const string FromVersion1 = """
+        ALTER TABLE events ADD COLUMN lander TEXT;
+        UPDATE events SET lander = (SELECT f.text FROM event_fields f WHERE f.run_id = events.run_id AND f.seq = events.seq AND f.name = 'lander' LIMIT 1);
+        """;
 
     public const string Create = """
         CREATE TABLE IF NOT EXISTS runs (
@@ -52,6 +64,7 @@ public static class SqliteSchema
             kind      TEXT NOT NULL,
             severity  TEXT NOT NULL,
             data_json TEXT NOT NULL,
+            lander    TEXT,
             PRIMARY KEY (run_id, seq)
         );
         CREATE TABLE IF NOT EXISTS event_fields (

@@ -156,12 +156,17 @@ public static class ScenarioLoader
         var faults = added.Select((f, i) => FaultReader.Read(f, $"add_faults[{i}]", errors)).OfType<FaultModel>().ToList();
         if (errors.Count > 0) throw new ScenarioException(errors);
         var rules = root.OptionalText("rules") is null ? null : Rules(root, text);
+        var telecommands = root.List("add_telecommands");
+        var uplinks = root.List("uplink_rules");
         return new ScenarioChange(sourceName, text, faults, [.. root.List("remove_faults").Select(f => f.Text("name"))], rules)
         {
             FieldLocations = locations,
-            AddTelecommands = Telecommands(root.List("add_telecommands"), "add_telecommands"),
+            AddTelecommands = Telecommands(telecommands, "add_telecommands"),
             AddFaultLanders = [.. added.Select(f => f.OptionalText("lander"))],
-            RuleUplinks = [.. root.List("uplink_rules").Select((u, i) => new RuleUplinkModel(u.Quantity("at"), Rules(u, text), $"uplink_rules[{i}]")).OrderBy(u => u.AtS)],
+            RuleUplinks = [.. uplinks.Select((u, i) => new RuleUplinkModel(u.Quantity("at"), Rules(u, text), $"uplink_rules[{i}]")).OrderBy(u => u.AtS)],
+            TimedLanders = telecommands.Select((t, i) => ($"add_telecommands[{i}]", t.OptionalText("lander")))
+                .Concat(uplinks.Select((u, i) => ($"uplink_rules[{i}]", u.OptionalText("lander"))))
+                .Where(x => x.Item2 is not null).ToDictionary(x => x.Item1, x => x.Item2!, StringComparer.Ordinal),
         };
     }
 

@@ -18,6 +18,12 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
     /// <summary>The lander each added fault names (<c>lander:</c>), in the order of <see cref="AddFaults"/>; null where none is named.</summary>
     public IReadOnlyList<string?> AddFaultLanders { get; init; } = [];
 
+    /// <summary>
+    /// The lander each added telecommand and uplink names, by its field path in the change file
+    /// (<c>add_telecommands[0]</c>, <c>uplink_rules[1]</c>); an entry without <c>lander:</c> is absent.
+    /// </summary>
+    public IReadOnlyDictionary<string, string> TimedLanders { get; init; } = new Dictionary<string, string>();
+
     /// <summary>The earliest instant the change acts at by its own times (telecommands and uplinks), if it gives any.</summary>
     public double? EarliestTimedActionS =>
         AddTelecommands.Select(t => (double?)t.AtS).Concat(RuleUplinks.Select(u => (double?)u.AtS)).Min();
@@ -30,6 +36,11 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
         if (named.Lander is not null)
         {
             throw Refused($"add_faults[{named.Index}].lander", $"the parent scenario has no 'landers' list, so there is no lander '{named.Lander}' to name");
+        }
+
+        if (TimedLanders.OrderBy(t => t.Key, StringComparer.Ordinal).FirstOrDefault() is { Key: not null } timed)
+        {
+            throw Refused(timed.Key + ".lander", $"the parent scenario has no 'landers' list, so there is no lander '{timed.Value}' to name");
         }
 
         var missing = RemoveFaults.Select((n, i) => (Name: n, Index: i)).FirstOrDefault(r => parent.Faults.All(f => f.Name != r.Name));
@@ -62,14 +73,23 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
     }
 
     /// <summary>
-    /// A change to a scenario with landers: each added fault goes to the lander it names (the only one when there is
-    /// one), removed faults leave the lander that had them, and a rules block replaces every lander's rules.
+    /// A change to a scenario with landers: each added fault, telecommand and rule uplink goes to the lander it names (the
+    /// only one when there is one), removed faults leave the lander that had them, and a rules block replaces every
+    /// lander's rules. An uplink replaces the rules of its lander only.
     /// </summary>
     private Scenario ApplyToLanders(Scenario parent)
     {
-        if (AddTelecommands.Count > 0) throw Refused("add_telecommands", "a branch of a scenario with landers cannot add telecommands yet: a telecommand names no lander");
-        if (RuleUplinks.Count > 0) throw Refused("uplink_rules", "a branch of a scenario with landers cannot uplink rules yet: an uplink names no lander");
         var names = parent.Landers.Select(l => l.Name).ToList();
+        string TimedTarget(string fieldPath, string what)
+        {
+            var lander = TimedLanders.GetValueOrDefault(fieldPath);
+            if (lander is null && names.Count > 1) throw Refused(fieldPath + ".lander", $"with several landers an added {what} names its lander ({string.Join(", ", names)})");
+            lander ??= names[0];
+            return names.Contains(lander) ? lander : throw Refused(fieldPath + ".lander", $"the parent scenario has no lander named '{lander}'");
+        }
+
+        var telecommandTargets = AddTelecommands.Select(t => TimedTarget(t.FieldPath, "telecommand")).ToList();
+        var uplinkTargets = RuleUplinks.Select(u => TimedTarget(u.FieldPath, "rule uplink")).ToList();
         var targets = new List<string>();
         for (var i = 0; i < AddFaults.Count; i++)
         {
@@ -104,11 +124,32 @@ public sealed record ScenarioChange(string Name, string Text, IReadOnlyList<Faul
             {
                 Faults = [.. l.View.Faults.Where(f => !RemoveFaults.Contains(f.Name)), .. AddFaults.Where((_, i) => targets[i] == l.Name)],
                 Rules = Rules ?? l.View.Rules,
+                Telecommands = [.. l.View.Telecommands.Concat(AddTelecommands.Where((_, i) => telecommandTargets[i] == l.Name)).OrderBy(t => t.AtS)],
+                RuleUplinks = [.. l.View.RuleUplinks.Concat(RuleUplinks.Where((_, i) => uplinkTargets[i] == l.Name)).OrderBy(u => u.AtS)],
             },
         }).ToList();
-        return parent with { Faults = [.. kept, .. AddFaults], Rules = Rules ?? parent.Rules, Landers = landers };
+        // The top level stands for the first lander (as the loader made it), so it carries that lander's timed parts.
+        return parent with
+        {
+            Faults = [.. kept, .. AddFaults],
+            Rules = Rules ?? parent.Rules,
+            Landers = landers,
+            Telecommands = landers[0].View.Telecommands,
+            RuleUplinks = landers[0].View.RuleUplinks,
+        };
     }
 
-    private Loading.ScenarioException Refused(string fieldPath, string message) =>
-        new([new Loading.ScenarioError(FieldLocations.TryGetValue(fieldPath, out var at) ? at : new Loading.SourceLocation(Name, 1, 1), fieldPath, message)]);
+    /// <summary>A located refusal: at the field, or at the nearest enclosing field the file has (an omitted <c>lander</c> at its entry).</summary>
+    private Loading.ScenarioException Refused(string fieldPath, string message)
+    {
+        for (var path = fieldPath; path.Length > 0; path = path.Contains('.', StringComparison.Ordinal) ? path[..path.LastIndexOf('.')] : "")
+        {
+            if (FieldLocations.TryGetValue(path, out var at)) return new([new Loading.ScenarioError(at, fieldPath, message)]);
+            // An entry is placed by its first field.
+            var inside = FieldLocations.Where(l => l.Key.StartsWith(path + ".", StringComparison.Ordinal)).Select(l => l.Value).OrderBy(l => l.Line).ThenBy(l => l.Column).ToList();
+            if (inside.Count > 0) return new([new Loading.ScenarioError(inside[0], fieldPath, message)]);
+        }
+
+        return new([new Loading.ScenarioError(new Loading.SourceLocation(Name, 1, 1), fieldPath, message)]);
+    }
 }
