@@ -156,6 +156,7 @@ public sealed class RehearsalServer : IAsyncDisposable
         _app.MapPost("/api/faults", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _session.OfferFault)));
         _app.MapPost("/api/commands", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _session.OfferCommand)));
         _app.MapPost("/api/pace", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _session.OfferPace)));
+        _app.MapPost("/api/steps", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _session.OfferStep)));
         _app.MapPost("/api/marks", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _session.OfferMark)));
         _app.MapPost("/api/end", (Func<HttpContext, Task<IResult>>)(c => InputAsync(c, _ => _session.End(), bodyRequired: false)));
     }

@@ -19,8 +19,8 @@ namespace DescentOps.Rehearsal;
 /// Where the people of a rehearsal reach into the simulation. Every input is journaled at the instant it is handled
 /// (<c>operator.input</c>, with its number, kind and body), which is all a replay needs to give it again. A fault goes
 /// to the fault injector, a clear too; a telecommand goes up from the ground to the station a light time away, as the
-/// ground team's own commands do, under the origin <c>console-N</c>; an end stops the run; pace changes and marks are
-/// only journaled.
+/// ground team's own commands do, under the origin <c>console-N</c>; an answer to a procedure's step goes to the
+/// ground team at once (the console is on the ground); an end stops the run; pace changes and marks are only journaled.
 /// </summary>
 public sealed class OperatorDeskComponent : SimComponent<OperatorDeskState>
 {
@@ -48,6 +48,8 @@ public sealed class OperatorDeskComponent : SimComponent<OperatorDeskState>
         switch (message)
         {
             case RunStarted:
+                // People are at the console: the ground's procedures wait for them on steps that ask for confirmation.
+                context.Schedule(MissionIds.Ground, SimDuration.Zero, PeopleAtConsole.Instance, MissionPriority.Command);
                 return state;
             case OperatorInput input:
                 context.Record("operator.input", Severity.Notice,
@@ -82,6 +84,9 @@ public sealed class OperatorDeskComponent : SimComponent<OperatorDeskState>
                     RecordField.Of("origin", origin),
                     RecordField.Of("uplink_s", _uplink.TotalSeconds));
                 context.Schedule(MissionIds.Station, _uplink, new Telecommand(command, origin, "ground", context.Now), MissionPriority.Command);
+                return state;
+            case OperatorInputKind.Step:
+                context.Schedule(MissionIds.Ground, SimDuration.Zero, StepAnswer.Parse(input), MissionPriority.Command);
                 return state;
             case OperatorInputKind.End:
                 context.StopRun(RunOutcomeKind.TimeLimit, "the rehearsal was ended at the console");

@@ -20,4 +20,7 @@ public enum OperatorInputKind
 
     /// <summary>The session ended.</summary>
     End,
+
+    /// <summary>A person confirmed or skipped a procedure's step that asked for it.</summary>
+    Step,
 }

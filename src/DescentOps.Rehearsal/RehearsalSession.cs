@@ -151,6 +151,10 @@ public sealed class RehearsalSession
         return Queue(OperatorInputKind.Command, new JsonObject { ["text"] = text }.ToJsonString());
     });
 
+    /// <summary>A person's answer to a procedure's step: <c>{"procedure", "step", "answer": "confirm"|"skip", "by"}</c>.</summary>
+    public InputResult OfferStep(JsonObject body) => Offer(() =>
+        StepAnswer.Check(body, Scenario, out var canonical) is { } error ? InputResult.Bad(error) : Queue(OperatorInputKind.Step, canonical));
+
     public InputResult OfferPace(JsonObject body) => Offer(() =>
     {
         var canonical = new JsonObject();

@@ -3,6 +3,7 @@ using System.Globalization;
 using System.Text;
 using System.Text.Json;
 using DescentOps.Records;
+using DescentOps.Records.Kinds;
 using DescentOps.Mission;
 using DescentOps.Mission.Messages;
 using DescentOps.Primitives.Identity;
@@ -21,6 +22,9 @@ public sealed class SessionView : IJournalSink
 {
     private readonly SessionFeed _feed;
     private readonly IReadOnlyList<RuleLimit> _limits;
+    /// <summary>The fields of a procedure record the team's page shows, when the record has them.</summary>
+    private static readonly string[] ProcedureFields = ["command", "evidence", "by", "next", "outcome", "reason"];
+
     private readonly List<(SimTime At, string Json)> _unlearned = [];
 
     public SessionView(SessionFeed feed, IReadOnlyList<RuleLimit> limits)
@@ -66,6 +70,26 @@ public sealed class SessionView : IJournalSink
         if (record.Severity >= Severity.Notice || record.Kind.StartsWith("fault.", StringComparison.Ordinal))
         {
             _feed.Add(false, EventJson(record, t, "truth-event"));
+        }
+
+        if (ProcedureStatus(record) is { } procedureStatus)
+        {
+            // The team's own procedures, learned at once (the ground runs them): step, status, evidence, deadline.
+            Tell(record, Json(w =>
+            {
+                w.WriteString("type", "procedure");
+                w.WriteNumber("at", t);
+                w.WriteString("procedure", Text(record, "procedure"));
+                w.WriteString("step", Text(record, "step"));
+                w.WriteString("status", procedureStatus);
+                w.WriteBoolean("awaiting", record.Kind == ProcedureRecords.StepAwaitsAnswer);
+                foreach (var name in ProcedureFields)
+                {
+                    if (record.Fields.Any(f => f.Name == name)) w.WriteString(name, Text(record, name));
+                }
+
+                if (record.Fields.FirstOrDefault(f => f.Name == "late_at_s") is { Name: not null } late) w.WriteNumber("late_at", late.Number);
+            }));
         }
 
         if (CommandStatus(record) is { } status)
@@ -143,6 +167,22 @@ public sealed class SessionView : IJournalSink
             _unlearned.Add((record.Time, json));
         }
     }
+
+    /// <summary>What a procedure record says of its step, in the console's words; null for other records.</summary>
+    private static string? ProcedureStatus(JournalRecord record) => record.Kind switch
+    {
+        ProcedureRecords.Started => "started",
+        ProcedureRecords.StepStarted => "running",
+        ProcedureRecords.StepAwaitsAnswer => "waiting for confirmation",
+        ProcedureRecords.StepConfirmed => "confirmed",
+        ProcedureRecords.StepSkipped => "skipped",
+        ProcedureRecords.StepPassed => "passed",
+        ProcedureRecords.StepFailed => "failed",
+        ProcedureRecords.StepLate => "late",
+        ProcedureRecords.AnswerIgnored => "answer ignored",
+        ProcedureRecords.Finished => "finished",
+        _ => null,
+    };
 
     private static string? CommandStatus(JournalRecord record)
     {

@@ -12,6 +12,9 @@ public sealed record GroundState(long FramesReceived, long LastFrame, long Frame
     /// <summary>The timer of the next procedure step that runs out of time.</summary>
     public EventHandle? ProcedureWake { get; init; }
 
+    /// <summary>Whether people at a rehearsal console answer the procedure steps that ask for confirmation.</summary>
+    public bool PeopleAnswer { get; init; }
+
     /// <summary>What the ground knows of its station; null unless a ground rule or procedure reads it.</summary>
     public StationWatch? Station { get; init; }
 

@@ -85,7 +85,11 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
             case StationSilenceOver:
                 return HearStation(state with { StationSilence = null }, state.Station!.SilenceOver(context.Now), "silence past the timeout", context);
             case ProcedureDue due:
-                return Procedures(state, _procedures.Start(due.Index, _procedures.Procedures[due.Index].FieldPath + ".start_at", context.Now), context);
+                return Procedures(state, _procedures.Start(due.Index, _procedures.Procedures[due.Index].FieldPath + ".start_at", context.Now, state.PeopleAnswer), context);
+            case PeopleAtConsole:
+                return state with { PeopleAnswer = true };
+            case ProcedureStepAnswer answer:
+                return Procedures(state, _procedures.Answer(answer.Procedure, answer.Step, answer.Confirmed, answer.By, answer.Number, context.Now), context);
             case ProcedureWake:
                 return Procedures(state with { ProcedureWake = null }, _procedures.OnWake(context.Now), context);
             case TimedTelecommandDue due:
@@ -180,7 +184,7 @@ public sealed class GroundTeamComponent : SimComponent<GroundState>
         {
             if (StartProcedureAction.ProcedureOf(command.Command) is { } procedure)
             {
-                state = Procedures(state, _procedures.Start(_procedures.IndexOf(procedure), command.Origin, context.Now), context);
+                state = Procedures(state, _procedures.Start(_procedures.IndexOf(procedure), command.Origin, context.Now, state.PeopleAnswer), context);
                 continue;
             }
 

@@ -17,6 +17,9 @@ public sealed record CompiledStep(
     int OnPass,
     int OnFail)
 {
+    /// <summary>Whether a person confirms (or skips) the step before its command goes.</summary>
+    public bool Confirm { get; init; }
+
     public const int Done = -1;
     public const int Abort = -2;
 

@@ -109,7 +109,7 @@ public static class MissionProcedures
         var onPass = Goto(scenario, step.OnPass, index + 1 < procedure.Steps.Count ? index + 1 : CompiledStep.Done, stepNames, step.FieldPath + ".on_pass", procedure.Name, errors);
         var onFail = Goto(scenario, step.OnFail, CompiledStep.Abort, stepNames, step.FieldPath + ".on_fail", procedure.Name, errors);
         if (errors.Count > before) return null;
-        return new CompiledStep(step.Name, send, wait, step.WithinS is { } s ? SimDuration.FromSeconds(s) : null, check, onPass, onFail);
+        return new CompiledStep(step.Name, send, wait, step.WithinS is { } s ? SimDuration.FromSeconds(s) : null, check, onPass, onFail) { Confirm = step.Confirm };
     }
 
     private static int Goto(Scenario scenario, string? target, int byDefault, Dictionary<string, int> steps, string fieldPath, string procedure, List<ScenarioError> errors)

@@ -12,7 +12,7 @@ namespace DescentOps.Mission.Procedures;
 public sealed class ProcedureDesk
 {
     private readonly IReadOnlyList<CompiledProcedure> _procedures;
-    private readonly List<(int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time)> _inputs = [];
+    private readonly List<(int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time, DeskAnswer? Answer)> _inputs = [];
     private ProcedureRun?[] _runs;
     private ProcedureWatch?[] _watches;
 
@@ -56,16 +56,21 @@ public sealed class ProcedureDesk
         foreach (var input in _inputs) Take(input);
     }
 
-    /// <summary>Starts procedure <paramref name="index"/> now, unless it is running.</summary>
-    public IReadOnlyList<ProcedureOutput> Start(int index, string by, SimTime now) => Record((index, by, null, now));
+    /// <summary>Starts procedure <paramref name="index"/> now, unless it is running; with <paramref name="peopleAnswer"/>, people confirm its steps.</summary>
+    public IReadOnlyList<ProcedureOutput> Start(int index, string by, SimTime now, bool peopleAnswer = false) =>
+        Record((index, by, null, now, peopleAnswer ? DeskAnswer.PeopleAnswer : null));
 
     /// <summary>A frame reached the ground: every running step's watch sees it.</summary>
-    public IReadOnlyList<ProcedureOutput> OnFrame(IReadOnlyList<TelemetrySample> samples, SimTime now) => Record((-1, null, samples, now));
+    public IReadOnlyList<ProcedureOutput> OnFrame(IReadOnlyList<TelemetrySample> samples, SimTime now) => Record((-1, null, samples, now, null));
 
     /// <summary>Time has come to <paramref name="now"/>: steps whose time ran out are late.</summary>
-    public IReadOnlyList<ProcedureOutput> OnWake(SimTime now) => Record((-1, null, null, now));
+    public IReadOnlyList<ProcedureOutput> OnWake(SimTime now) => Record((-1, null, null, now, null));
 
-    private List<ProcedureOutput> Record((int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time) input)
+    /// <summary>A person at the console confirmed or skipped a step; it counts only if that step waits for an answer.</summary>
+    public IReadOnlyList<ProcedureOutput> Answer(string procedure, string step, bool confirmed, string by, long number, SimTime now) =>
+        Record((IndexOf(procedure), by, null, now, new DeskAnswer(procedure, step, confirmed, number)));
+
+    private List<ProcedureOutput> Record((int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time, DeskAnswer? Answer) input)
     {
         // A frame or a wake with no step watching changes nothing: it is not kept, so a quiet desk costs no memory.
         if (input.By is null && !_watches.Any(w => w is not null)) return [];
@@ -73,10 +78,11 @@ public sealed class ProcedureDesk
         return Take(input);
     }
 
-    private List<ProcedureOutput> Take((int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time) input)
+    private List<ProcedureOutput> Take((int Procedure, string? By, IReadOnlyList<TelemetrySample>? Samples, SimTime Time, DeskAnswer? Answer) input)
     {
         var outputs = new List<ProcedureOutput>();
         var now = input.Time;
+        if (input.Answer is { Procedure: not null } answer && input.By is { } who) return Answer(input.Procedure, answer, who, now);
         if (input.By is { } by)
         {
             var i = input.Procedure;
@@ -86,7 +92,7 @@ public sealed class ProcedureDesk
                 return outputs;
             }
 
-            Apply(i, ProcedureRunner.Start(_procedures[i], by, now), outputs);
+            Apply(i, ProcedureRunner.Start(_procedures[i], by, now, input.Answer is not null), outputs);
             return outputs;
         }
 
@@ -107,6 +113,25 @@ public sealed class ProcedureDesk
         return outputs;
     }
 
+    private List<ProcedureOutput> Answer(int index, DeskAnswer answer, string by, SimTime now)
+    {
+        var outputs = new List<ProcedureOutput>();
+        var run = index >= 0 ? _runs[index] : null;
+        var reason = index < 0 ? "no such procedure"
+            : run is not { IsRunning: true } ? "the procedure is not running"
+            : _procedures[index].Steps[run.Step].Name != answer.Step ? $"the procedure is at step '{_procedures[index].Steps[run.Step].Name}'"
+            : !run.AwaitingAnswer ? "the step does not wait for an answer"
+            : null;
+        if (reason is not null)
+        {
+            outputs.Add(new ProcedureAnswerIgnored(now, answer.Procedure!, answer.Step, by, answer.Number, reason));
+            return outputs;
+        }
+
+        Apply(index, ProcedureRunner.Answer(_procedures[index], run!, answer.Confirmed, by, answer.Number, now), outputs);
+        return outputs;
+    }
+
     /// <summary>Takes a transition: a step that starts watching gets a fresh watch; a finished run none.</summary>
     private void Apply(int index, ProcedureTransition transition, List<ProcedureOutput> outputs)
     {
@@ -119,6 +144,6 @@ public sealed class ProcedureDesk
         }
 
         var step = _procedures[index].Steps[transition.Run.Step];
-        if (transition.Run.IsRunning && step.Watches && _watches[index] is null) _watches[index] = new ProcedureWatch(step);
+        if (transition.Run.IsRunning && !transition.Run.AwaitingAnswer && step.Watches && _watches[index] is null) _watches[index] = new ProcedureWatch(step);
     }
 }

@@ -40,6 +40,30 @@ public static class ProcedureJournal
                     context.Record(ProcedureRecords.StepStarted, Severity.Info, fields);
                     if (step.Send is { } send) commands.Add(new Telecommand(send, $"procedure {step.Procedure}, step {step.Step}", "ground", context.Now));
                     break;
+                case StepAwaitsAnswer awaits:
+                    context.Record(ProcedureRecords.StepAwaitsAnswer, Severity.Notice,
+                        RecordField.Of("procedure", awaits.Procedure),
+                        RecordField.Of("step", awaits.Step),
+                        RecordField.Of("command", awaits.Send?.ToString() ?? ""));
+                    break;
+                case StepAnswered answered:
+                    context.Record(answered.Confirmed ? ProcedureRecords.StepConfirmed : ProcedureRecords.StepSkipped, Severity.Notice,
+                        RecordField.Of("procedure", answered.Procedure),
+                        RecordField.Of("step", answered.Step),
+                        RecordField.Of("by", answered.By),
+                        RecordField.Of("input", answered.Number));
+                    break;
+                case ProcedureAnswerIgnored ignored:
+                    context.Record(ProcedureRecords.AnswerIgnored, Severity.Warning,
+                        RecordField.Of("procedure", ignored.Procedure),
+                        RecordField.Of("step", ignored.Step),
+                        RecordField.Of("by", ignored.By),
+                        RecordField.Of("input", ignored.Number),
+                        RecordField.Of("reason", ignored.Reason));
+                    break;
+                case StepEnded { Verdict: StepVerdict.Skipped }:
+                    // The skip is the answer's record (who and when); the step has no verdict of its own to log.
+                    break;
                 case StepEnded ended:
                     context.Record(KindOf(ended.Verdict), ended.Verdict == StepVerdict.Passed ? Severity.Info : Severity.Warning,
                         RecordField.Of("procedure", ended.Procedure),

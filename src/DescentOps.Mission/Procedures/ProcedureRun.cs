@@ -10,4 +10,10 @@ namespace DescentOps.Mission.Procedures;
 public sealed record ProcedureRun(string Procedure, int Step, SimTime StepStartedAt, SimTime? Deadline, ProcedureOutcome? Outcome, int EnteredThisInstant)
 {
     public bool IsRunning => Outcome is null;
+
+    /// <summary>Whether people at a console answer the steps that ask for confirmation (else the team confirms at once).</summary>
+    public bool PeopleAnswer { get; init; }
+
+    /// <summary>Whether the step waits for a person to confirm or skip it (its command not yet sent).</summary>
+    public bool AwaitingAnswer { get; init; }
 }

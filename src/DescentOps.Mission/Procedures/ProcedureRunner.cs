@@ -13,12 +13,33 @@ public static class ProcedureRunner
 {
     public const string LoopReason = "its steps go round without waiting for anything";
 
-    /// <summary>Starts <paramref name="procedure"/> at its first step.</summary>
-    public static ProcedureTransition Start(CompiledProcedure procedure, string by, SimTime now)
+    /// <summary>The name under which the team confirms steps in a run without a console.</summary>
+    public const string Team = "team (no console)";
+
+    /// <summary>
+    /// Starts <paramref name="procedure"/> at its first step. With <paramref name="peopleAnswer"/> (a console), steps that
+    /// ask for confirmation wait for a person; without, the team confirms them at once.
+    /// </summary>
+    public static ProcedureTransition Start(CompiledProcedure procedure, string by, SimTime now, bool peopleAnswer = false)
     {
         var outputs = new List<ProcedureOutput> { new ProcedureStarted(now, procedure.Name, by) };
-        var run = new ProcedureRun(procedure.Name, 0, now, null, null, 0);
+        var run = new ProcedureRun(procedure.Name, 0, now, null, null, 0) { PeopleAnswer = peopleAnswer };
         return new(Enter(procedure, run, 0, now, outputs), outputs);
+    }
+
+    /// <summary>
+    /// A person confirmed the step that waits for an answer (its command goes now and its wait begins, late at now plus
+    /// 'within'), or skipped it (its command never goes; the procedure goes where a pass goes).
+    /// </summary>
+    public static ProcedureTransition Answer(CompiledProcedure procedure, ProcedureRun run, bool confirmed, string by, long number, SimTime now)
+    {
+        if (!run.IsRunning || !run.AwaitingAnswer) throw new InvalidOperationException($"procedure '{run.Procedure}' step {run.Step} waits for no answer");
+        var step = procedure.Steps[run.Step];
+        var outputs = new List<ProcedureOutput> { new StepAnswered(now, procedure.Name, step.Name, confirmed, by, number) };
+        run = run with { AwaitingAnswer = false };
+        if (confirmed) return new(Begin(procedure, run, run.Step, now, outputs), outputs);
+        outputs.Add(new StepEnded(now, procedure.Name, step.Name, StepVerdict.Skipped, "", now - run.StepStartedAt, NameOf(procedure, step.OnPass)));
+        return new(Enter(procedure, run, step.OnPass, now, outputs), outputs);
     }
 
     /// <summary>The step's wait ended on a frame: it passes when its check held (or it has none), and fails when not.</summary>
@@ -66,13 +87,30 @@ public static class ProcedureRunner
             }
 
             var step = procedure.Steps[index];
-            var deadline = step.Watches && step.Within is { } within ? now + within : (SimTime?)null;
-            outputs.Add(new StepStarted(now, procedure.Name, step.Name, step.Send, deadline));
-            run = run with { Step = index, StepStartedAt = now, Deadline = deadline, EnteredThisInstant = entered };
-            if (step.Watches) return run;
+            run = run with { Step = index, StepStartedAt = now, Deadline = null, EnteredThisInstant = entered };
+            if (step.Confirm && run.PeopleAnswer)
+            {
+                outputs.Add(new StepAwaitsAnswer(now, procedure.Name, step.Name, step.Send));
+                return run with { AwaitingAnswer = true };
+            }
+
+            if (step.Confirm) outputs.Add(new StepAnswered(now, procedure.Name, step.Name, true, Team, 0));
+            if (step.Watches) return Begin(procedure, run, index, now, outputs);
+            outputs.Add(new StepStarted(now, procedure.Name, step.Name, step.Send, null));
             outputs.Add(new StepEnded(now, procedure.Name, step.Name, StepVerdict.Passed, "", SimDuration.Zero, NameOf(procedure, step.OnPass)));
             index = step.OnPass;
         }
+    }
+
+    /// <summary>The step's command goes and its wait begins; a step that watches nothing passes at once and goes on.</summary>
+    private static ProcedureRun Begin(CompiledProcedure procedure, ProcedureRun run, int index, SimTime now, List<ProcedureOutput> outputs)
+    {
+        var step = procedure.Steps[index];
+        var deadline = step.Watches && step.Within is { } within ? now + within : (SimTime?)null;
+        outputs.Add(new StepStarted(now, procedure.Name, step.Name, step.Send, deadline));
+        if (step.Watches) return run with { Deadline = deadline };
+        outputs.Add(new StepEnded(now, procedure.Name, step.Name, StepVerdict.Passed, "", now - run.StepStartedAt, NameOf(procedure, step.OnPass)));
+        return Enter(procedure, run, step.OnPass, now, outputs);
     }
 
     /// <summary>The name a goto target is written with.</summary>
@@ -89,6 +127,7 @@ public static class ProcedureRunner
         StepVerdict.Passed => "passed",
         StepVerdict.Failed => "failed",
         StepVerdict.Late => "late",
+        StepVerdict.Skipped => "skipped",
         _ => throw new ArgumentOutOfRangeException(nameof(verdict), verdict, "a verdict without a word"),
     };
 }

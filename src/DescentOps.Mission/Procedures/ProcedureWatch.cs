@@ -40,7 +40,9 @@ public sealed class ProcedureWatch : IDisposable
         }
 
         _outputs.Clear();
-        var ended = _step.WaitFor is null ? samples.Count > 0 : waitEvidence is not null;
+        // Without a wait, the check is judged on the first frame that carries what it reads (not, say, on the station's
+        // status alone, which the ground gives between frames).
+        var ended = _step.WaitFor is null ? samples.Any(s => _step.Expect!.Condition.Points.Contains(s.Point, StringComparer.Ordinal)) : waitEvidence is not null;
         if (!ended) return (false, false, "");
         var held = _step.Expect is null || _checkHolds;
         IEnumerable<TelemetrySample> evidence = waitEvidence ?? [];

@@ -6,4 +6,7 @@ public enum StepVerdict
     Passed,
     Failed,
     Late,
+
+    /// <summary>A person skipped the step: its command never went, and the procedure goes on as if it passed.</summary>
+    Skipped,
 }

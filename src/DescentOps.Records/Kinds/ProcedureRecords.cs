@@ -16,4 +16,16 @@ public static class ProcedureRecords
     public const string StepLate = "procedure.step_late";
 
     public const string Finished = "procedure.finished";
+
+    /// <summary>A step that asks for confirmation waits for a person at the console (its command not yet sent).</summary>
+    public const string StepAwaitsAnswer = "procedure.step_awaits_answer";
+
+    /// <summary>Who confirmed a step, and by which console input; its command goes now.</summary>
+    public const string StepConfirmed = "procedure.step_confirmed";
+
+    /// <summary>Who skipped a step, and by which console input; its command never goes.</summary>
+    public const string StepSkipped = "procedure.step_skipped";
+
+    /// <summary>An answer for a step that was not waiting for one (it had ended, or another step runs).</summary>
+    public const string AnswerIgnored = "procedure.answer_ignored";
 }

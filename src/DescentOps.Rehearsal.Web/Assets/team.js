@@ -33,6 +33,36 @@
     }
     return row;
   }
+  // One row per procedure: its current step, what became of it, the evidence, when it is late, and the answer buttons.
+  const procedures = document.querySelector("#procedures tbody");
+  function showProcedure(p) {
+    let row = procedures.querySelector('tr[data-procedure="' + p.procedure + '"]');
+    if (!row) {
+      row = C.el("tr", { "data-procedure": p.procedure }, C.el("td", {}, p.procedure), C.el("td", { class: "step" }), C.el("td", { class: "status" }),
+        C.el("td", { class: "evidence" }), C.el("td", { class: "late" }), C.el("td", { class: "answer" }));
+      procedures.append(row);
+    }
+    if (p.status === "answer ignored") { C.say("step-msg", "answer to " + p.step + " ignored: " + p.reason, false); return; }
+    if (p.step) row.querySelector(".step").textContent = p.step;
+    const status = row.querySelector(".status");
+    status.textContent = p.status + (p.by ? " by " + p.by : "") + (p.outcome ? " (" + p.outcome + ")" : "") + " · " + C.time(p.at);
+    status.setAttribute("data-status", p.status);
+    if (p.evidence !== undefined) row.querySelector(".evidence").textContent = p.evidence;
+    if (p.status === "running" || p.status === "waiting for confirmation") row.querySelector(".late").textContent = p.late_at === undefined ? "—" : C.time(p.late_at);
+    const answer = row.querySelector(".answer");
+    answer.replaceChildren();
+    if (p.awaiting) {
+      for (const [word, label] of [["confirm", "Confirm"], ["skip", "Skip"]]) {
+        const b = C.el("button", { class: word === "skip" ? "quiet" : "", "data-answer": word }, label + (word === "confirm" && p.command ? ": " + p.command : ""));
+        b.addEventListener("click", async () => {
+          const r = await C.post("/api/steps", { procedure: p.procedure, step: p.step, answer: word, by: document.getElementById("answer-by").value });
+          C.say("step-msg", r.status === 202 ? "answer " + r.number + " handed to the ground" : (r.error || "refused (" + r.status + ")"), r.status === 202);
+          if (r.status === 202) answer.replaceChildren();
+        });
+        answer.append(b);
+      }
+    }
+  }
   C.stream("team", (item) => {
     switch (item.type) {
       case "status":
@@ -49,6 +79,9 @@
         break;
       case "event":
         C.logLine(events, item.at, item.source + " · " + item.kind + " · " + item.text + (item.learned > item.at ? " (learned " + C.time(item.learned) + ")" : ""), "sev-" + item.severity);
+        break;
+      case "procedure":
+        showProcedure(item);
         break;
       case "command": {
         const row = commandRow(item.number, item.command);

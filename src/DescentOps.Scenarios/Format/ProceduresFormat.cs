@@ -25,6 +25,7 @@ public static class ProceduresFormat
         new TextField("expect", "A condition in the rule language checked on the frame that ended the wait (or on the first frame after the step started): the step passes if it holds, fails if not.", Required: false),
         new TextField("on_pass", "The step to go to when this one passes: a step name, 'done' or 'abort' (default: the next step, 'done' after the last).", Required: false),
         new TextField("on_fail", "The step to go to when this one fails or is late: a step name, 'done' or 'abort' (default: 'abort').", Required: false),
+        new ChoiceField("confirm", "true: a person at the rehearsal console confirms the step before its command goes (or skips it, going on as if it passed); in a run without a console the team confirms at once (default false).", ["true", "false"], Required: false),
     ]);
 
     public static ListField Section { get; } = new("procedures",

@@ -18,7 +18,7 @@ internal static class ProceduresReader
                 s.OptionalText("expect"),
                 s.OptionalText("on_pass"),
                 s.OptionalText("on_fail"),
-                $"procedures[{i}].steps[{k}]"))],
+                $"procedures[{i}].steps[{k}]") { Confirm = s.OptionalText("confirm") == "true" })],
             $"procedures[{i}]")),
     ];
 }

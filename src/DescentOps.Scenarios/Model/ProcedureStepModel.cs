@@ -12,4 +12,8 @@ public sealed record ProcedureStepModel(
     string? Expect,
     string? OnPass,
     string? OnFail,
-    string FieldPath);
+    string FieldPath)
+{
+    /// <summary>Whether a person confirms (or skips) the step before its command goes.</summary>
+    public bool Confirm { get; init; }
+}

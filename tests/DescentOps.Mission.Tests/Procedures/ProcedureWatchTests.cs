@@ -31,6 +31,25 @@ public sealed class ProcedureWatchTests
     }
 
     [Fact]
+    public void A_check_without_a_wait_is_judged_on_the_first_frame_carrying_its_points_not_on_the_stations_status_alone()
+    {
+        var step = ProcedureFixtures.Compile("""
+            procedures:
+              - name: look
+                steps:
+                  - name: check-head
+                    expect: probe.head_power above 1 kW
+                    within: 1 h
+            """).Steps[0];
+        using var watch = new ProcedureWatch(step);
+        var status = new TelemetrySample("station.alive", SimTime.FromSecondsSinceEpoch(600), new DiscreteValue("no"));
+
+        Assert.False(watch.OnFrame([status]).Ended);
+        var (ended, held, _) = watch.OnFrame(Frame(1200, "Melting", 2000));
+        Assert.True(ended && held);
+    }
+
+    [Fact]
     public void A_check_that_does_not_hold_on_the_frame_that_ends_the_wait_fails_with_the_readings_seen()
     {
         using var watch = new ProcedureWatch(Recover.Steps[1]); // expect probe.head_power above 1 kW
