@@ -15,7 +15,9 @@ public sealed class ProcessClusterTests
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();
-        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "36", "--seed", "17" };
+        // 72 runs: after the kill, enough work remains that the patient failure detector (15 s, then the split-brain
+        // resolver's 5 s) finds the killed worker lost before the campaign could end by redoing its runs as idle duplicates.
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "72", "--seed", "17" };
         var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
         Assert.True(exit == 0, stderr);
 
