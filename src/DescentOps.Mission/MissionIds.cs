@@ -15,5 +15,8 @@ public static class MissionIds
     /// <summary>The link home several landers share (none in a single-lander scenario).</summary>
     public static ComponentId LinkHome { get; } = new("link-home");
 
+    /// <summary>The ground's desk for the mission's own rules across landers (only with a scenario's mission_rules).</summary>
+    public static ComponentId MissionDesk { get; } = new("mission-desk");
+
     public static ComponentId Vehicle(string name) => new("vehicle-" + name);
 }

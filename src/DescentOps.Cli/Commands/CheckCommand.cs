@@ -81,6 +81,14 @@ public static class CheckCommand
                     rules = result.Succeeded ? result.RuleSet?.Rules.Count ?? 0 : 0;
                 }
 
+                // The mission's own rules across landers, against every lander's qualified points and targets; the field is named.
+                if (errors.Count == 0 && !scenario.MissionRules.IsEmpty)
+                {
+                    var result = MissionDeskRules.Check(scenario);
+                    Collect(result, l => $"{scenario.MissionRules.InFile(l.Line, l.Column)}: field 'mission_rules'", errors, warnings);
+                    rules += result.Succeeded ? result.RuleSet?.Rules.Count ?? 0 : 0;
+                }
+
                 // Time-tagged telecommands are checked as a rule's send is.
                 foreach (var error in MissionTimeline.Errors(scenario)) errors.Add(new Finding("", "", error.ToString()));
 

@@ -38,6 +38,7 @@ public static class MissionRules
         // With landers, every lander's rules are compiled now, so a bad rule of any lander stops the run before it starts;
         // the scenario's own rules are its first lander's.
         foreach (var lander in scenario.Landers.Skip(1)) _ = Compile(lander.View);
+        _ = MissionDeskRules.Compile(scenario);
         if (scenario.Rules.IsEmpty) return Empty;
         var result = Check(scenario);
         if (result.RuleSet is { } rules) return rules;

@@ -21,6 +21,9 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
     private readonly Dictionary<string, LanderIds> _ids;
     private readonly SimDuration _lightTime;
 
+    /// <summary>Whether the mission desk hears every frame too (the scenario has mission rules).</summary>
+    private readonly bool _desk;
+
     public LinkHomeComponent(Scenario scenario)
         : base(MissionIds.LinkHome, FailurePolicy.AbortRun)
     {
@@ -29,6 +32,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
         _scheduler = new LinkScheduler(specs, link.Channels, link.Policy, link.Priority, link.Policy == LinkPolicy.ContactPlan ? new ContactPlan(link.Windows, link.RepeatS) : null);
         _ids = scenario.Landers.ToDictionary(l => l.Name, l => LanderIds.For(l.Name), StringComparer.Ordinal);
         _lightTime = SimDuration.FromSeconds(LightTime.OneWayS(scenario.Body.DistanceToGroundM));
+        _desk = !scenario.MissionRules.IsEmpty;
     }
 
     public override LinkHomeState InitialState => _scheduler.Start();
@@ -84,6 +88,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
             var after = --behind[sent.Lander];
             var onAir = sent.End - sent.Start;
             context.Schedule(_ids[sent.Lander].Ground, onAir + _lightTime, sent.Frame, MissionPriority.Telemetry);
+            if (_desk) context.Schedule(MissionIds.MissionDesk, onAir + _lightTime, new LanderFrame(sent.Lander, sent.Frame), MissionPriority.Telemetry);
             context.Record(LinkRecords.Sent, Severity.Debug,
             [
                 RecordField.Of("lander", sent.Lander),

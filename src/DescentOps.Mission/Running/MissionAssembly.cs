@@ -20,7 +20,13 @@ public static class MissionAssembly
     public static IReadOnlyList<ISimComponent> Components(Scenario scenario, Rules.Compiled.CompiledRuleSet rules)
     {
         if (scenario.Landers.Count == 0) return Lander(scenario, rules, LanderIds.Single);
-        return [.. scenario.Landers.SelectMany(l => Lander(l.View, MissionRules.Compile(l.View), LanderIds.For(l.Name))), new LinkHome.LinkHomeComponent(scenario)];
+        var desk = MissionDeskRules.Compile(scenario);
+        return
+        [
+            .. scenario.Landers.SelectMany(l => Lander(l.View, MissionRules.Compile(l.View), LanderIds.For(l.Name))),
+            new LinkHome.LinkHomeComponent(scenario),
+            .. desk.Rules.Count == 0 ? Array.Empty<ISimComponent>() : [new MissionDeskComponent(desk)],
+        ];
     }
 
     /// <summary>The components of one lander: alone, with the fixed ids; one of several, with its own.</summary>

@@ -25,10 +25,26 @@ public sealed class TelemetryCatalogue
     public bool ReadsTrueState { get; private init; }
 
     /// <summary>The same points and commands, read as a fault trigger reads them: true state allowed.</summary>
-    public TelemetryCatalogue ForFaultTriggers() => new(_points.Values, _commands.Values) { ReadsTrueState = true, Procedures = Procedures };
+    public TelemetryCatalogue ForFaultTriggers() => new(_points.Values, _commands.Values) { ReadsTrueState = true, Procedures = Procedures, Landers = Landers };
 
     /// <summary>The procedures a ground rule may start (by name).</summary>
     public IReadOnlySet<string> Procedures { get; init; } = new HashSet<string>(StringComparer.Ordinal);
+
+    /// <summary>
+    /// The landers whose points and targets this catalogue names as "LANDER/point" (a mission's own rules across its
+    /// landers); empty for one lander's catalogue. A name with a slash and another prefix is an unknown lander.
+    /// </summary>
+    public IReadOnlySet<string> Landers { get; init; } = new HashSet<string>(StringComparer.Ordinal);
+
+    /// <summary>The lander a "LANDER/name" names when it is not one of <see cref="Landers"/>; null otherwise.</summary>
+    public string? UnknownLanderOf(string name)
+    {
+        if (Landers.Count == 0) return null;
+        var at = name.IndexOf('/', StringComparison.Ordinal);
+        if (at < 0) return null;
+        var lander = name[..at];
+        return Landers.Contains(lander) ? null : lander;
+    }
 
     public TelemetryPointSpec? FindPoint(string name) => _points.GetValueOrDefault(name);
 

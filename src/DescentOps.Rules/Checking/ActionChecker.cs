@@ -68,6 +68,10 @@ internal sealed class ActionChecker
                 _diagnostics.Error(DiagnosticCode.UnknownCommand, send.Command.Location,
                     $"'{send.Target.Text}' has no command '{send.Command.Text}'; it accepts {string.Join(", ", _catalogue.CommandsOf(send.Target.Text))}");
             }
+            else if (_catalogue.UnknownLanderOf(send.Target.Text) is { } lander)
+            {
+                _diagnostics.Error(DiagnosticCode.UnknownLander, send.Target.Location, $"unknown lander '{lander}' in '{send.Target.Text}'; the landers are {string.Join(", ", _catalogue.Landers.Order(StringComparer.Ordinal))}");
+            }
             else
             {
                 _diagnostics.Error(DiagnosticCode.UnknownCommand, send.Target.Location, $"unknown command target '{send.Target.Text}'");

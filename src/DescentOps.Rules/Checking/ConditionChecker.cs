@@ -119,6 +119,27 @@ internal sealed class ConditionChecker
                 return threshold is null ? null : new StepCondition(spec.Name, threshold);
             }
 
+            case DifferenceCheckSyntax difference:
+            {
+                var left = NumericPoint(difference.Left);
+                var right = NumericPoint(difference.Right);
+                if (left is null || right is null)
+                {
+                    return null;
+                }
+
+                if (left.Dimension != right.Dimension)
+                {
+                    _diagnostics.Error(DiagnosticCode.UnitMismatch, difference.Right.Location,
+                        $"'{left.Name}' is a {QuantityDimension.Of(left.Dimension)}, but '{right.Name}' is a {QuantityDimension.Of(right.Dimension)}: only points of one dimension can be taken from each other");
+                    return null;
+                }
+
+                // A difference of two temperatures is a difference (5 °C is 5 K), as a step's is.
+                var threshold = CheckThreshold(difference.Threshold, QuantityDimension.Of(left.Dimension), isDifference: true, $"'{left.Name}' minus '{right.Name}'");
+                return threshold is null ? null : new DifferenceCondition(left.Name, right.Name, threshold);
+            }
+
             case AllOfSyntax all:
             {
                 var operands = all.Operands.Select(Check).ToArray();
@@ -190,8 +211,16 @@ internal sealed class ConditionChecker
         return false;
     }
 
-    private void UnknownPoint(NameSyntax point) =>
+    private void UnknownPoint(NameSyntax point)
+    {
+        if (_catalogue.UnknownLanderOf(point.Text) is { } lander)
+        {
+            _diagnostics.Error(DiagnosticCode.UnknownLander, point.Location, $"unknown lander '{lander}' in '{point.Text}'; the landers are {string.Join(", ", _catalogue.Landers.Order(StringComparer.Ordinal))}");
+            return;
+        }
+
         _diagnostics.Error(DiagnosticCode.UnknownPoint, point.Location, $"unknown telemetry point '{point.Text}'");
+    }
 
     private Threshold? CheckThreshold(ThresholdSyntax threshold, QuantityDimension dimension, bool isDifference, string what)
     {

@@ -45,8 +45,8 @@ public sealed class RuleEvaluator : IObserver<TelemetrySample>, IDisposable
                     _pointIsNumeric[rate.Point] = true;
                     retention[rate.Point] = Math.Max(retention.GetValueOrDefault(rate.Point), rate.Window.Ticks);
                     break;
-                case LimitCondition or StepCondition:
-                    _pointIsNumeric[condition.Points.First()] = true;
+                case LimitCondition or StepCondition or DifferenceCondition:
+                    foreach (var point in condition.Points) _pointIsNumeric[point] = true;
                     break;
             }
         }

@@ -164,6 +164,13 @@ internal sealed class ConditionParser
             return new StateCheckSyntax(name, _cursor.ExpectName("discrete value", allowKeyword: true), negated, start.Location);
         }
 
+        if (_cursor.Current.IsWord("minus"))
+        {
+            _cursor.Next();
+            var right = _cursor.ExpectName("telemetry point after 'minus'");
+            return new DifferenceCheckSyntax(name, right, ParseThreshold(right), start.Location);
+        }
+
         return new LimitCheckSyntax(name, ParseThreshold(name), start.Location);
     }
 
@@ -196,7 +203,7 @@ internal sealed class ConditionParser
             : null;
         if (kind is not { } comparison)
         {
-            throw _cursor.Fail(DiagnosticCode.UnexpectedToken, keyword.Location, $"expected 'above', 'below', 'inside', 'outside' or 'is' after '{point.Text}', found {keyword.Describe()}");
+            throw _cursor.Fail(DiagnosticCode.UnexpectedToken, keyword.Location, $"expected 'above', 'below', 'inside', 'outside', 'is' or 'minus' after '{point.Text}', found {keyword.Describe()}");
         }
 
         _cursor.Next();

@@ -19,7 +19,7 @@ public sealed class RuleParser
         "rule", "runs", "on", "board", "ground", "severity", "priority", "cooldown", "starts", "disabled", "enabled",
         "when", "then", "escalate", "after", "send", "wait", "enable", "disable", "start", "exclusive", "autonomy",
         "and", "or", "not", "above", "below", "inside", "outside", "to", "is", "rate", "of", "over", "step",
-        "for", "samples", "time", "since", "latched",
+        "for", "samples", "time", "since", "latched", "minus",
     };
 
     private static readonly HashSet<string> TopLevelKeywords = new(StringComparer.Ordinal) { "rule", "exclusive", "autonomy" };

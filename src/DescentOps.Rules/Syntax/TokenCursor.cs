@@ -104,7 +104,7 @@ internal sealed class TokenCursor
 
         if (!IsValidName(token.Text))
         {
-            throw Fail(DiagnosticCode.InvalidName, token.Location, $"'{token.Text}' is not a valid {what}: a name starts with a letter and holds letters, digits, '_', '-' and '.'");
+            throw Fail(DiagnosticCode.InvalidName, token.Location, $"'{token.Text}' is not a valid {what}: a name starts with a letter and holds letters, digits, '_', '-', '.' and '/' (a lander's name and a slash before a point or target)");
         }
 
         if (!allowKeyword && RuleParser.IsKeyword(token.Text))
@@ -117,7 +117,7 @@ internal sealed class TokenCursor
     }
 
     private static bool IsValidName(string text) =>
-        text.Length > 0 && char.IsAsciiLetter(text[0]) && text.All(c => char.IsAsciiLetterOrDigit(c) || c is '_' or '-' or '.');
+        text.Length > 0 && char.IsAsciiLetter(text[0]) && text.All(c => char.IsAsciiLetterOrDigit(c) || c is '_' or '-' or '.' or '/');
 
     public T ExpectChoice<T>(string what, params (string Word, T Value)[] choices)
     {

@@ -32,6 +32,7 @@ public enum DiagnosticCode
     TrueStateOnly,
     UnknownProcedure,
     GroundOnly,
+    UnknownLander,
 
     // Meaning (checker), warnings: the rule set runs, but a rule can never act.
     ContradictoryBounds,

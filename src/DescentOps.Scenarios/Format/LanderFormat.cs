@@ -41,6 +41,9 @@ public static class LanderFormat
     private const double Day = 86_400;
     private const double Year = 365.25 * Day;
 
+    /// <summary>The mission's own rules, across its landers (with landers only; they run on the ground).</summary>
+    public static TextField MissionRules { get; } = new("mission_rules", "With landers: ground rules of the mission as a whole, in the rule language ('mission_rules: |' then indented lines); they name a lander's points and targets as LANDER/point, may take one point from another ('fell/probe.depth minus tarn/probe.depth above 20 m'), and run at the ground on every lander's frames as they arrive.", Required: false);
+
     /// <summary><paramref name="root"/> with the landers list inserted before the faults, and the lander's own sections optional at the top.</summary>
     public static SectionField Attach(SectionField root)
     {
@@ -57,7 +60,7 @@ public static class LanderFormat
         var fields = new List<FieldSpec>();
         foreach (var field in root.Fields)
         {
-            if (field.Name == "faults") fields.AddRange([landers, LinkHome]);
+            if (field.Name == "faults") fields.AddRange([landers, LinkHome, MissionRules]);
             fields.Add(RequiredSections.Contains(field.Name) ? field with { Required = false } : field);
         }
 

@@ -41,6 +41,11 @@ internal static partial class LanderLoader
             errors.Add(new ScenarioError(shared.Location, "link_home", "the link home is shared among landers: this scenario has no 'landers' list"));
         }
 
+        if (root.OptionalText("mission_rules") is not null)
+        {
+            errors.Add(new ScenarioError(root.LocationOf("mission_rules"), "mission_rules", "mission rules watch and compare landers: this scenario has no 'landers' list (its own rules go in 'rules')"));
+        }
+
         if (root.OptionalSection("station")?.OptionalSection("link") is { } link && link.OptionalQuantity("latitude") is null)
         {
             errors.Add(new ScenarioError(link.Location, "station.link.latitude", "missing required field (the station's latitude)"));
@@ -71,7 +76,7 @@ internal static partial class LanderLoader
             foreach (var (key, value) in rootMap.Children)
             {
                 var name = (key as YamlScalarNode)?.Value ?? "";
-                if (name is "landers" or "faults" or "uncertain" or "criteria" || own.Contains(name)) continue;
+                if (name is "landers" or "faults" or "uncertain" or "criteria" or "mission_rules" || own.Contains(name)) continue;
                 view.Add(key, value);
             }
 
@@ -107,6 +112,7 @@ internal static partial class LanderLoader
             Faults = [.. faults.OrderBy(x => x.Index).Select(x => x.Fault)],
             Landers = models,
             LinkHome = linkHome,
+            MissionRules = ScenarioLoader.Rules(root, text, "mission_rules"),
             FieldLocations = locations,
         };
         whole = Campaign.CampaignSections.Read(whole, root, text, errors);

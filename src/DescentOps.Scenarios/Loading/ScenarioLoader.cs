@@ -226,11 +226,11 @@ public static class ScenarioLoader
         return root;
     }
 
-    /// <summary>The rules block with its place in the file: a block scalar's text starts on the line after 'rules: |'.</summary>
-    private static RulesSource Rules(BoundSection root, string text)
+    /// <summary>A rules block (<paramref name="key"/>) with its place in the file: a block scalar's text starts on the line after 'rules: |'.</summary>
+    internal static RulesSource Rules(BoundSection root, string text, string key = "rules")
     {
-        if (root.OptionalText("rules") is not { } rules) return RulesSource.None;
-        var at = root.LocationOf("rules");
+        if (root.OptionalText(key) is not { } rules) return RulesSource.None;
+        var at = root.LocationOf(key);
         var lines = text.Split('\n');
         var valueLine = at.Line - 1 < lines.Length ? lines[at.Line - 1] : "";
         var startsBlock = at.Column - 1 < valueLine.Length && valueLine[at.Column - 1] is '|' or '>';

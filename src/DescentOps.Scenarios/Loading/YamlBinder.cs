@@ -164,7 +164,7 @@ internal sealed partial class YamlBinder
     {
         if (Scalar(node, path, "text") is not { } text) return null;
         // A name, identifier or word is one line: "Wendlow\n" from a block scalar would name a different probe in every log.
-        if (spec.Name is not ("description" or "rules" or "when") && text.AsSpan().IndexOfAny('\n', '\r') >= 0)
+        if (spec.Name is not ("description" or "rules" or "mission_rules" or "when") && text.AsSpan().IndexOfAny('\n', '\r') >= 0)
         {
             Error(node, path, $"'{text.ReplaceLineEndings("\\n")}' holds a line break; this field is one line of text");
             return null;

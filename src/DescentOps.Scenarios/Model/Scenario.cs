@@ -53,6 +53,12 @@ public sealed record Scenario(
     /// <summary>The link home the landers share; null without landers.</summary>
     public LinkHomeModel? LinkHome { get; init; }
 
+    /// <summary>
+    /// The mission's own ground rules across its landers (the <c>mission_rules</c> section; with landers only): they read
+    /// and command a lander's points and targets as "LANDER/name". Empty when the scenario has none.
+    /// </summary>
+    public RulesSource MissionRules { get; init; } = RulesSource.None;
+
     /// <summary>The place of <paramref name="fieldPath"/>, or of its nearest enclosing field, or the file's start.</summary>
     public Loading.SourceLocation LocationOf(string fieldPath)
     {

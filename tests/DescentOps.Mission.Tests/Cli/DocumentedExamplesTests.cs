@@ -76,6 +76,29 @@ public sealed partial class DocumentedExamplesTests
         }
     }
 
+    [Theory]
+    [InlineData("src/DescentOps.Rules/LANGUAGE.md")]
+    [InlineData("README.md")]
+    public async Task Every_mission_rules_example_passes_check_in_the_scenario_it_names(string document)
+    {
+        // A YAML example holding a 'mission_rules: |' section names its built-in scenario on its first line; the
+        // section is added to that scenario before its run section, and the whole goes through check.
+        var examples = Blocks(document).Where(b => b.Lang == "yaml" && b.Body.Contains("\nmission_rules: |\n", StringComparison.Ordinal)).ToArray();
+        Assert.NotEmpty(examples);
+        var folder = ToolProcess.NewTempDirectory();
+        for (var i = 0; i < examples.Length; i++)
+        {
+            const string ScenarioMark = "# scenario: ";
+            var body = examples[i].Body;
+            Assert.StartsWith(ScenarioMark, body);
+            var firstLineEnd = body.IndexOf('\n', StringComparison.Ordinal);
+            var scenario = TestScenario.BuiltIn(body[ScenarioMark.Length..firstLineEnd].Trim()).AddSection(body[(firstLineEnd + 1)..]);
+            var file = Path.Combine(folder, $"mission-{i + 1}.yaml");
+            await File.WriteAllTextAsync(file, scenario.Text);
+            await AssertChecksClean(folder, file);
+        }
+    }
+
     [Fact]
     public async Task The_readme_fault_conditions_pass_check_in_the_default_scenario()
     {

@@ -25,6 +25,7 @@ internal abstract class ConditionMonitor
         StateCondition state => new StateMonitor(state),
         RateCondition rate => new RateMonitor(rate),
         StepCondition step => new StepMonitor(step),
+        DifferenceCondition difference => new DifferenceMonitor(difference),
         AllOfCondition all => new AllOfMonitor(all.Operands.Select(Build).ToArray()),
         AnyOfCondition any => new AnyOfMonitor(any.Operands.Select(Build).ToArray()),
         NotCondition not => new NotMonitor(Build(not.Operand)),
