@@ -21,6 +21,22 @@ internal static class ClusterFixture
     /// <summary>Hang guard for anything that waits on a cluster: generous, never a timing assertion.</summary>
     public static readonly TimeSpan Guard = TimeSpan.FromSeconds(120);
 
+    /// <summary>
+    /// Akka settings for tests that wait on real membership: a member may miss heartbeats for 15 s (the tool's own
+    /// default is 4 s) before it is unreachable. Two cores shared by several test runs can starve a node's heartbeats
+    /// for seconds; a worker downed for that would redo runs and break the exact counts these tests check. A worker
+    /// that is really gone (killed) is still found lost, only later.
+    /// </summary>
+    public const string PatientAkka = "akka.cluster.failure-detector.acceptable-heartbeat-pause = 15s";
+
+    /// <summary><see cref="PatientAkka"/> as a file for <c>--akka-config</c>.</summary>
+    public static string PatientAkkaFile()
+    {
+        var path = Path.Combine(TempDir(), "patient.hocon");
+        File.WriteAllText(path, PatientAkka);
+        return path;
+    }
+
     public static CampaignPlan Plan(long seed, string toolVersion = "test-build")
     {
         var scenario = ScenarioLoader.LoadFile(Scenario);
@@ -46,10 +62,20 @@ internal static class ClusterFixture
     {
         private readonly CancellationTokenSource _stop = new();
 
+        /// <summary>Joins the campaign node at <paramref name="port"/>; Akka settings <see cref="PatientAkka"/> unless others are given.</summary>
         public Worker(int port, int slots = 1, JoinSecret? secret = null, string toolVersion = "", string? akkaConfig = null)
         {
             var setup = new WorkerSetup("in-process", toolVersion.Length == 0 ? ToolInfo.Version : toolVersion, slots, secret, PlanOf, n => { lock (Notices) Notices.Add(n); });
-            Running = Task.Run(() => WorkerNode.RunAsync(setup, new NodeAddress("127.0.0.1", port), new NodeAddress("127.0.0.1", 0), Counters, false, _ => { }, _stop.Token, akkaConfig));
+            Running = Task.Run(() => WorkerNode.RunAsync(setup, new NodeAddress("127.0.0.1", port), new NodeAddress("127.0.0.1", 0), Counters, false, _ => { }, _stop.Token, akkaConfig ?? PatientAkka));
+        }
+
+        /// <summary>True once the campaign node has welcomed this worker.</summary>
+        public bool Welcomed
+        {
+            get
+            {
+                lock (Notices) return Notices.Any(n => n.StartsWith("joined the campaign as ", StringComparison.Ordinal));
+            }
         }
 
         public WorkerCounters Counters { get; } = new();

@@ -23,7 +23,7 @@ public sealed class InProcessClusterTests
         var port = ClusterFixture.FreePort();
         await using var a = new ClusterFixture.Worker(port);
         await using var b = new ClusterFixture.Worker(port, slots: 2);
-        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
         Assert.True(clusterExit == 0, stdout + clusterErr);
 
         Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
@@ -44,7 +44,7 @@ public sealed class InProcessClusterTests
 
         var port = ClusterFixture.FreePort();
         await using var worker = new ClusterFixture.Worker(port, slots: 2);
-        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
         Assert.True(clusterExit == 0, stdout + clusterErr);
         Assert.Equal(6, worker.Counters.RunsDone); // every run crossed the wire
 
@@ -89,7 +89,7 @@ public sealed class InProcessClusterTests
 
         var port = ClusterFixture.FreePort();
         await using var worker = new ClusterFixture.Worker(port);
-        (exit, stdout, stderr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "1", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+        (exit, stdout, stderr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "1", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
         Assert.True(exit == 0, stdout + stderr);
         Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
         Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
@@ -98,41 +98,58 @@ public sealed class InProcessClusterTests
     [Fact]
     public async Task A_worker_that_joins_late_gets_work()
     {
-        var dir = ClusterFixture.TempDir();
-        var port = ClusterFixture.FreePort();
-        // The command runs synchronously on its caller's thread: give it one of its own.
-        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "60", "--seed", "3", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
-        await using var first = new ClusterFixture.Worker(port);
-        await ClusterFixture.Until(() => first.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
-        Assert.False(campaign.IsCompleted, "the campaign ended before the second worker could join");
-        await using var late = new ClusterFixture.Worker(port);
-        var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
-        Assert.True(exit == 0, stdout + stderr);
-        Assert.True(late.Counters.RunsDone > 0, $"the late worker ran nothing; the first ran {first.Counters.RunsDone}\n{stdout}");
-        Assert.Equal(60, first.Counters.RunsDone + late.Counters.RunsDone);
-        Assert.Equal(60, ClusterFixture.StoredRuns(dir));
+        // A loaded machine can hold the late worker's join back until the first worker has done every run; that attempt
+        // shows nothing (the late worker was never welcomed) and is made again, at most three times. A late worker that
+        // was welcomed and got no work fails the test at once.
+        for (var attempt = 1; ; attempt++)
+        {
+            var dir = ClusterFixture.TempDir();
+            var port = ClusterFixture.FreePort();
+            // The command runs synchronously on its caller's thread: give it one of its own.
+            var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "60", "--seed", "3", "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
+            await using var first = new ClusterFixture.Worker(port);
+            await ClusterFixture.Until(() => first.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
+            Assert.False(campaign.IsCompleted, "the campaign ended before the second worker could join");
+            await using var late = new ClusterFixture.Worker(port);
+            var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
+            Assert.True(exit == 0, stdout + stderr);
+            if (!late.Welcomed && attempt < 3) continue;
+            Assert.True(late.Welcomed, $"the late worker was not welcomed in three attempts\n{stdout}");
+            Assert.True(late.Counters.RunsDone > 0, $"the late worker ran nothing; the first ran {first.Counters.RunsDone}\n{stdout}");
+            Assert.Equal(60, first.Counters.RunsDone + late.Counters.RunsDone);
+            Assert.Equal(60, ClusterFixture.StoredRuns(dir));
+            return;
+        }
     }
 
     [Fact]
     public async Task A_stopped_worker_hands_back_its_run_and_another_finishes_it()
     {
-        var dir = ClusterFixture.TempDir();
-        var port = ClusterFixture.FreePort();
-        var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "20", "--seed", "43", "--cluster", "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
-        var stopping = new ClusterFixture.Worker(port);
-        // A worker with one slot asks again the moment a run ends, so while runs remain it always holds one.
-        await ClusterFixture.Until(() => stopping.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
-        Assert.False(campaign.IsCompleted, "the campaign ended before the worker could be stopped");
-        await stopping.DisposeAsync(); // as Ctrl-C: coordinated shutdown, whose first task hands back
-        Assert.Equal(1, stopping.Counters.HandedBack);
+        // A worker with one slot asks again the moment a run ends, so while runs remain it nearly always holds one; on a
+        // loaded machine the stop can fall between a result and the next assignment. That attempt hands back nothing
+        // (checked: the campaign still ends whole) and is made again, at most three times.
+        for (var attempt = 1; ; attempt++)
+        {
+            var dir = ClusterFixture.TempDir();
+            var port = ClusterFixture.FreePort();
+            var campaign = Task.Run(() => ClusterFixture.CliAsync("campaign", ClusterFixture.Scenario, "--runs", "20", "--seed", "43", "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", dir));
+            var stopping = new ClusterFixture.Worker(port);
+            await ClusterFixture.Until(() => stopping.Counters.RunsDone >= 2 || campaign.IsCompleted, "the first worker's second run");
+            Assert.False(campaign.IsCompleted, "the campaign ended before the worker could be stopped");
+            await stopping.DisposeAsync(); // as Ctrl-C: coordinated shutdown, whose first task hands back
+            Assert.InRange(stopping.Counters.HandedBack, 0, 1); // one slot: never more than one run held
 
-        await using var other = new ClusterFixture.Worker(port);
-        var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
-        Assert.True(exit == 0, stdout + stderr);
-        Assert.Matches(@"worker w1 handed back run \d+ of baseline", stdout);
-        Assert.Contains("worker w1 left", stdout, StringComparison.Ordinal);
-        Assert.Equal(20, ClusterFixture.StoredRuns(dir));
-        Assert.Equal(20, stopping.Counters.RunsDone + other.Counters.RunsDone); // the handed-back run was done once, by the other
+            await using var other = new ClusterFixture.Worker(port);
+            var (exit, stdout, stderr) = await campaign.WaitAsync(ClusterFixture.Guard);
+            Assert.True(exit == 0, stdout + stderr);
+            Assert.Contains("worker w1 left", stdout, StringComparison.Ordinal);
+            Assert.Equal(20, ClusterFixture.StoredRuns(dir));
+            Assert.Equal(20, stopping.Counters.RunsDone + other.Counters.RunsDone); // a handed-back run is done once, by the other
+            if (stopping.Counters.HandedBack == 0 && attempt < 3) continue;
+            Assert.Equal(1, stopping.Counters.HandedBack);
+            Assert.Matches(@"worker w1 handed back run \d+ of baseline", stdout);
+            return;
+        }
     }
 
     [Fact]

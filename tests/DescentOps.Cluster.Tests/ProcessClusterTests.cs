@@ -15,15 +15,18 @@ public sealed class ProcessClusterTests
     {
         var local = ClusterFixture.TempDir();
         var clustered = ClusterFixture.TempDir();
-        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "36", "--seed", "17" };
+        // 72 runs: after the kill, enough work remains that the patient failure detector (15 s, then the split-brain
+        // resolver's 5 s) finds the killed worker lost before the campaign could end by redoing its runs as idle duplicates.
+        var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "72", "--seed", "17" };
         var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
         Assert.True(exit == 0, stderr);
 
         var port = ClusterFixture.FreePort();
         var join = $"127.0.0.1:{port}";
-        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--listen", join, "--jobs", "1", "--output", clustered, "--verbose"]); // its log is shown only if the test fails
-        using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "2"); // two slots: it holds a run whenever it is killed
-        using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1");
+        var patient = ClusterFixture.PatientAkkaFile(); // a starved heartbeat must not down a live member; the killed one is still found lost
+        using var node = new ToolProcess(clustered, [.. common, "--cluster", "--akka-config", patient, "--listen", join, "--jobs", "1", "--output", clustered, "--verbose"]); // its log is shown only if the test fails
+        using var doomed = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "2", "--akka-config", patient); // two slots: it holds a run whenever it is killed
+        using var stopping = new ToolProcess(clustered, "worker", "--join", join, "--jobs", "1", "--akka-config", patient);
 
         // Mid-campaign: both workers have joined and four more runs are stored since, so the doomed one is at work (with
         // two slots it then always holds runs, and the campaign cannot end before the cluster downs it).

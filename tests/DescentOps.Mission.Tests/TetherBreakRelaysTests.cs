@@ -132,7 +132,12 @@ public sealed class TetherBreakRelaysTests
         Assert.Single(sink.OfKind("relay.none_left"));
 
         // So the probe meets the ocean at full head power, where the ground wanted 4 kW.
-        double HeadAtBreakthrough(CollectingSink s) => CollectingSink.Field(s.OfKind("probe.telemetry").Last(r => r.Time < s.OfKind("probe.breakthrough").Single().Time), "head_power_w");
+        static double HeadAtBreakthrough(CollectingSink s)
+        {
+            var breakthrough = s.OfKind("probe.breakthrough").Single().Time; // once: inside the predicate it was a scan per frame
+            return CollectingSink.Field(s.OfKind("probe.telemetry").Last(r => r.Time < breakthrough), "head_power_w");
+        }
+
         Assert.Equal(4000.0, HeadAtBreakthrough(withSink));
         Assert.Equal(6000.0, HeadAtBreakthrough(sink));
         Assert.True(withRelays.FramesReceivedOnGround - summary.FramesReceivedOnGround >= afterBreak.Count - 4);
