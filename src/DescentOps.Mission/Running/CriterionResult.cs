@@ -36,8 +36,8 @@ public sealed record CriterionResult(string Name, string Requirement, double? Va
             return new CriterionResult(c.Name, c.Requirement, value, c.IsMetBy(value));
         })];
 
-    /// <summary>The value of a run measure on one lander's figures.</summary>
-    public static double? MeasureOf(string measure, LanderSummary s) => measure switch
+    /// <summary>The value of a run measure (see <see cref="CriterionMeasure.All"/>).</summary>
+    public static double? MeasureOf(string measure, IRunFigures s) => measure switch
     {
         "breakthrough" => s.BreakthroughTimeS,
         "final_depth" => s.FinalDepthM,
@@ -50,23 +50,6 @@ public sealed record CriterionResult(string Name, string Requirement, double? Va
         "time_blind" => s.TimeBlindS,
         "vehicles_lost" => s.VehiclesLost,
         "faults_unrecovered" => s.FaultsUnrecovered,
-        _ => throw new ArgumentOutOfRangeException(nameof(measure), measure, "not a run measure"),
-    };
-
-    /// <summary>The value of a run measure (see <see cref="CriterionMeasure.All"/>).</summary>
-    public static double? MeasureOf(string measure, MissionSummary s) => measure switch
-    {
-        "breakthrough" => s.BreakthroughTimeS,
-        "final_depth" => s.FinalDepthM,
-        "energy_used" => s.EnergyUsedJ,
-        "frames_lost" => s.FramesLost,
-        "frames_held" => s.FramesHeldMax,
-        "time_stopped" => s.TimeStoppedS,
-        "longest_stop" => s.LongestStopS,
-        "time_frozen" => s.TimeFrozenS,
-        "time_blind" => s.TimeBlindS,
-        "vehicles_lost" => s.VehiclesLost,
-        "faults_unrecovered" => s.Faults.Count(f => f.HasRecoveryMeasure && f.RecoveredAfterS is null),
         _ => throw new ArgumentOutOfRangeException(nameof(measure), measure, "not a run measure"),
     };
 }

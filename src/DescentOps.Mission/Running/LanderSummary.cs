@@ -21,7 +21,7 @@ public sealed record LanderSummary(
     int VehiclesLost,
     int FaultsUnrecovered,
     bool Stalled,
-    bool StationDead)
+    bool StationDead) : IRunFigures
 {
     /// <summary>The criteria judged on this lander's figures (those naming it, and those asked of every or any lander).</summary>
     public IReadOnlyList<CriterionResult> Criteria { get; init; } = [];

@@ -18,7 +18,7 @@ public sealed record MissionSummary(
     long EventsDelivered,
     long RecordsWritten,
     int ComponentFailures,
-    IReadOnlyList<FaultMeasure> Faults)
+    IReadOnlyList<FaultMeasure> Faults) : IRunFigures
 {
     /// <summary>Frames sent that the ground has neither received nor lost when the run ends: held in a buffer or queue, or on their way.</summary>
     public long FramesHeldOrInFlight => FramesSent - FramesReceivedOnGround - FramesLost;
@@ -39,6 +39,9 @@ public sealed record MissionSummary(
     public long FramesHeldMax { get; init; }
 
     public int VehiclesLost { get; init; }
+
+    /// <inheritdoc />
+    public int FaultsUnrecovered => Faults.Count(f => f.HasRecoveryMeasure && f.RecoveredAfterS is null);
 
     /// <summary>Firings per rule (rules that never fired are absent).</summary>
     public IReadOnlyDictionary<string, int> RuleFirings { get; init; } = new Dictionary<string, int>();
