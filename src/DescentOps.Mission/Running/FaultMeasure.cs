@@ -1,3 +1,5 @@
+using System.Text.Json.Serialization;
+
 namespace DescentOps.Mission.Running;
 
 /// <summary>
@@ -9,4 +11,8 @@ public sealed record FaultMeasure(string Fault, string Kind, double StartS, doub
 {
     /// <summary>False for faults with no physical recovery to measure (sensor faults); a broken fibre has one, and never meets it.</summary>
     public bool HasRecoveryMeasure { get; init; } = true;
+
+    /// <summary>A fault with a physical recovery to measure that had not recovered when the run ended (derived, so not sent on the wire).</summary>
+    [JsonIgnore]
+    public bool Unrecovered => HasRecoveryMeasure && RecoveredAfterS is null;
 }

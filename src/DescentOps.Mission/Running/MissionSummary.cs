@@ -41,7 +41,7 @@ public sealed record MissionSummary(
     public int VehiclesLost { get; init; }
 
     /// <inheritdoc />
-    public int FaultsUnrecovered => Faults.Count(f => f.HasRecoveryMeasure && f.RecoveredAfterS is null);
+    public int FaultsUnrecovered => Faults.Count(f => f.Unrecovered);
 
     /// <summary>Firings per rule (rules that never fired are absent).</summary>
     public IReadOnlyDictionary<string, int> RuleFirings { get; init; } = new Dictionary<string, int>();

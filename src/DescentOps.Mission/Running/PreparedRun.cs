@@ -85,6 +85,6 @@ public sealed class PreparedRun
     private int Unrecovered(MissionSummary summary, string lander)
     {
         var own = Scenario.Landers.First(l => l.Name == lander).View.Faults.Select(f => f.Name).ToHashSet(StringComparer.Ordinal);
-        return summary.Faults.Count(f => own.Contains(f.Fault) && f.HasRecoveryMeasure && f.RecoveredAfterS is null);
+        return summary.Faults.Count(f => own.Contains(f.Fault) && f.Unrecovered);
     }
 }
