@@ -39,21 +39,7 @@ public static class DiffCommand
         w.WriteString("a", a);
         w.WriteString("b", b);
         w.WriteBoolean("identical", diff.Identical);
-        if (diff.FirstEventDivergence is { } d)
-        {
-            w.WriteStartObject("first_divergence");
-            w.WriteNumber("line", d.Line);
-            w.Number("time_a_s", d.TimeA);
-            w.Number("time_b_s", d.TimeB);
-            w.Text("event_a", d.LineA);
-            w.Text("event_b", d.LineB);
-            w.WriteEndObject();
-        }
-        else
-        {
-            w.WriteNull("first_divergence");
-        }
-
+        w.Divergence("first_divergence", diff.FirstEventDivergence);
         w.Text("outcome_a", diff.SummaryA?.Summary.OutcomeKind);
         w.Text("outcome_b", diff.SummaryB?.Summary.OutcomeKind);
         var fieldsA = diff.SummaryA?.Summary.Data ?? [];

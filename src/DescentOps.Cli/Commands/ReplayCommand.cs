@@ -75,20 +75,7 @@ public static class ReplayCommand
                 w.Number("truncated_at_line", logged.IsTruncated ? logged.Integrity.FirstBadLine : null);
                 w.WriteString("log_tool_version", manifest.ToolVersion);
                 w.WriteString("tool_version", ToolInfo.Version);
-                if (found is { } d)
-                {
-                    w.WriteStartObject("divergence");
-                    w.WriteNumber("line", d.Line);
-                    w.Number("time_in_log_s", d.TimeA);
-                    w.Number("time_in_rerun_s", d.TimeB);
-                    w.Text("log_line", d.LineA);
-                    w.Text("rerun_line", d.LineB);
-                    w.WriteEndObject();
-                }
-                else
-                {
-                    w.WriteNull("divergence");
-                }
+                w.Divergence("divergence", found);
             });
             return (int)(found is null ? ExitCode.Ok : ExitCode.RunsDiffer);
         }
