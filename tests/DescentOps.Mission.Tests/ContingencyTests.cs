@@ -22,7 +22,7 @@ public sealed class ContingencyTests
     [Fact]
     public async Task A_frozen_in_probe_is_freed_sooner_by_the_wall_boost_rule()
     {
-        var (withRules, sinkWith) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
+        var (_, withRules, sinkWith, _) = await SharedRuns.OfBuiltInAsync("stall-wall-boost.yaml");
         var (withoutRules, sinkWithout) = await RunAsync(MissionHarness.WithoutRules(Text("stall-wall-boost.yaml")), "without.yaml");
 
         Assert.Equal(RunOutcomeKind.Completed, withRules.Outcome.Kind);
@@ -40,9 +40,9 @@ public sealed class ContingencyTests
     [Fact]
     public async Task The_summary_measures_detection_action_and_recovery_of_the_stall()
     {
-        var (summary, sink) = await RunAsync(Text("stall-wall-boost.yaml"), "with.yaml");
+        var (scenario, summary, sink, _) = await SharedRuns.OfBuiltInAsync("stall-wall-boost.yaml");
         var measure = Assert.Single(summary.Faults);
-        var frameS = ScenarioLoader.LoadText(Text("stall-wall-boost.yaml"), "with.yaml").Probe.TelemetryIntervalS;
+        var frameS = scenario.Probe.TelemetryIntervalS;
 
         // Computed: the trip at day 20 falls on a frame boundary and the gap freezes within seconds (Stefan time
         // logged by the probe), so the first frame that shows FrozenIn is one 10-minute interval later; the
@@ -65,7 +65,7 @@ public sealed class ContingencyTests
         Assert.Contains(crossCheck, better);
         var naive = better.Replace(crossCheck, "when probe.velocity below 0.7 m/h and probe.depth above 20 m", StringComparison.Ordinal);
 
-        var (betterSummary, betterSink) = await RunAsync(better, "better.yaml");
+        var (_, betterSummary, betterSink, _) = await SharedRuns.OfBuiltInAsync("stuck-velocity-sensor.yaml");
         var (naiveSummary, naiveSink) = await RunAsync(naive, "naive.yaml");
 
         // The stuck sensor keeps reporting the speed of day 14, so the naive rule never sees the slow-down.
@@ -133,7 +133,7 @@ public sealed class ContingencyTests
     [Fact]
     public async Task A_failed_head_segment_turns_the_probe_past_its_limit_unless_a_rule_steers_back()
     {
-        var (steered, steeredSink) = await RunAsync(Text("tilt-steering.yaml"), "steered.yaml");
+        var (_, steered, steeredSink, _) = await SharedRuns.OfBuiltInAsync("tilt-steering.yaml");
         var (unsteered, unsteeredSink) = await RunAsync(MissionHarness.WithoutRules(Text("tilt-steering.yaml")), "unsteered.yaml");
 
         Assert.Equal(RunOutcomeKind.Completed, steered.Outcome.Kind);

@@ -10,8 +10,9 @@ public sealed class DeterminismTests
     [Fact]
     public async Task The_same_seed_twice_in_one_process_gives_byte_identical_logs()
     {
+        // The run other tests share, made earlier in this process (or now), and a run of this test's own.
+        var first = (await SharedRuns.OfDefaultAsync(KernelChoice.Actors)).Journal;
         var scenario = BuiltInScenarios.Default();
-        var first = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
         var second = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
         Assert.True(first.Length > 1_000_000, "the default run should log a whole descent");
         Assert.Equal(first, second);
@@ -20,17 +21,15 @@ public sealed class DeterminismTests
     [Fact]
     public async Task The_actor_kernel_writes_the_same_log_as_the_sequential_reference()
     {
-        var scenario = BuiltInScenarios.Default();
-        var actors = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
-        var sequential = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Sequential);
+        var actors = (await SharedRuns.OfDefaultAsync(KernelChoice.Actors)).Journal;
+        var sequential = (await SharedRuns.OfDefaultAsync(KernelChoice.Sequential)).Journal;
         Assert.Equal(sequential, actors);
     }
 
     [Fact]
     public async Task A_separate_process_writes_the_same_bytes()
     {
-        var scenario = BuiltInScenarios.Default();
-        var inProcess = await MissionHarness.JournalBytesAsync(scenario, scenario.Run.Seed, KernelChoice.Actors);
+        var inProcess = (await SharedRuns.OfDefaultAsync(KernelChoice.Actors)).Journal;
 
         var folder = ToolProcess.NewTempDirectory();
         var log = Path.Combine(folder, "run.jsonl");
@@ -43,9 +42,8 @@ public sealed class DeterminismTests
     [Fact]
     public async Task A_different_seed_changes_the_draws_and_so_the_events()
     {
-        var scenario = BuiltInScenarios.Default();
-        var a = EventLines(await MissionHarness.JournalBytesAsync(scenario, 1, KernelChoice.Sequential));
-        var b = EventLines(await MissionHarness.JournalBytesAsync(scenario, 2, KernelChoice.Sequential));
+        var a = EventLines((await SharedRuns.OfDefaultAsync(seed: 1)).Journal);
+        var b = EventLines((await SharedRuns.OfDefaultAsync(seed: 2)).Journal);
 
         // The descent itself draws nothing, so the logs agree until the vehicles' first randomized leg...
         var firstDifference = Enumerable.Range(0, Math.Min(a.Count, b.Count)).First(i => a[i] != b[i]);

@@ -143,8 +143,7 @@ public sealed class MissionBehaviourTests
     [Fact]
     public async Task Ground_latency_is_fibre_plus_station_plus_light_time()
     {
-        var scenario = DescentOps.Scenarios.BuiltInScenarios.Default();
-        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        var (scenario, _, sink, _) = await SharedRuns.OfDefaultAsync();
         var frame = sink.OfKind("ground.telemetry").First(r => CollectingSink.IntegerField(r, "frame") == 1000);
 
         // Computed: depth / fibre signal speed + station forwarding delay + distance / c (c exact by SI).

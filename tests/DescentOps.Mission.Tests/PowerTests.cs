@@ -33,7 +33,7 @@ public sealed class PowerTests
     [Fact]
     public async Task Shedding_keeps_the_head_melting_through_the_dip_and_without_the_rule_the_probe_freezes_in()
     {
-        var (shed, shedSink) = await RunAsync(Text, "with.yaml");
+        var (_, shed, shedSink, _) = await SharedRuns.OfBuiltInAsync(ScenarioName);
         var (unshed, unshedSink) = await RunAsync(MissionHarness.WithoutRules(Text), "without.yaml");
 
         // With the rule: it fires on the first frame of the dip and the pump goes off by command. The bus shed the
@@ -72,8 +72,7 @@ public sealed class PowerTests
     [Fact]
     public async Task The_energy_bookkeeping_balances_on_every_frame()
     {
-        var scenario = ScenarioLoader.LoadText(Text, "with.yaml");
-        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        var (scenario, _, sink, _) = await SharedRuns.OfBuiltInAsync(ScenarioName);
         var capacityJ = new ProbePowerSystem(scenario.Power!, scenario.Probe).Battery!.EffectiveCapacityJ;
         var initialSoc = scenario.Power!.Battery!.InitialStateOfCharge;
         var frames = sink.OfKind("probe.telemetry").ToList();

@@ -6,7 +6,6 @@ using DescentOps.Journal.Comparison;
 using DescentOps.Journal.Querying;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
-using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Mission.Tests;
 
@@ -19,8 +18,8 @@ public sealed class ReplayAndQueryTests
     [MemberData(nameof(ScenarioFiles))]
     public async Task Every_scenario_replays_identically(string name)
     {
-        var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(name), name);
-        var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
+        // The sequential kernel's run (shared with the tests that read it) replayed by the actor kernel, in full.
+        var log = await (await SharedRuns.OfBuiltInAsync(name)).WriteLogAsync();
 
         var logged = LoggedRun.Open(log);
         var comparison = await LogReplay.CompareAsync(logged, KernelChoice.Actors);
@@ -48,8 +47,7 @@ public sealed class ReplayAndQueryTests
     [Fact]
     public async Task An_edited_log_is_refused_for_replay()
     {
-        var scenario = BuiltInScenarios.Default();
-        var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
+        var log = await (await SharedRuns.OfDefaultAsync()).WriteLogAsync();
         var lines = await File.ReadAllLinesAsync(log);
         lines[10] = lines[10].Replace("\"t\":", "\"t\":9", StringComparison.Ordinal);
         await File.WriteAllTextAsync(log, string.Join('\n', lines) + "\n");
@@ -61,8 +59,7 @@ public sealed class ReplayAndQueryTests
     [Fact]
     public async Task A_truncated_log_replays_its_intact_prefix()
     {
-        var scenario = BuiltInScenarios.Default();
-        var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
+        var log = await (await SharedRuns.OfDefaultAsync()).WriteLogAsync();
         var bytes = await File.ReadAllBytesAsync(log);
         await File.WriteAllBytesAsync(log, bytes[..(bytes.Length / 3)]);
 
@@ -77,9 +74,8 @@ public sealed class ReplayAndQueryTests
     [Fact]
     public async Task Diff_of_a_run_with_itself_is_empty_and_with_another_seed_names_the_first_vehicle_draw()
     {
-        var scenario = BuiltInScenarios.Default();
-        var a = await WriteLogAsync(1, 1, scenario);
-        var b = await WriteLogAsync(2, 2, scenario);
+        var a = await (await SharedRuns.OfDefaultAsync(seed: 1)).WriteLogAsync();
+        var b = await (await SharedRuns.OfDefaultAsync(seed: 2)).WriteLogAsync();
 
         Assert.True(JournalDiff.Compare(a, a).Identical);
         var diff = JournalDiff.Compare(a, b);
@@ -94,9 +90,10 @@ public sealed class ReplayAndQueryTests
     [Fact]
     public async Task Event_filters_return_exactly_the_matching_lines()
     {
-        var scenario = BuiltInScenarios.Default();
-        var log = await WriteLogAsync(scenario.Run.Seed, scenario.Run.Seed, scenario);
-        var (_, sink) = await MissionHarness.RunAsync(scenario);
+        // The log and the in-memory records of one run.
+        var run = await SharedRuns.OfDefaultAsync();
+        var log = await run.WriteLogAsync();
+        var sink = run.Sink;
 
         // Day 40 to 41 of the tether and the probe's telemetry, computed from the in-memory records.
         var filter = new EventFilter(["probe.telemetry", "tether."], [], FromS: 40 * 86400.0, ToS: 41 * 86400.0);

@@ -15,8 +15,7 @@ public sealed class RoughShellTests
     [Fact]
     public async Task Steering_rules_bring_the_probe_through_and_without_them_the_same_faults_lose_it()
     {
-        var scenario = ScenarioLoader.LoadText(Text, "rough-shell.yaml");
-        var (steered, sink) = await MissionHarness.RunAsync(scenario);
+        var (scenario, steered, sink, _) = await SharedRuns.OfBuiltInAsync("rough-shell.yaml");
         var (unsteered, sinkWithout) = await MissionHarness.RunAsync(ScenarioLoader.LoadText(MissionHarness.WithoutRules(Text), "without.yaml"));
 
         Assert.Equal(RunOutcomeKind.Completed, steered.Outcome.Kind);

@@ -36,9 +36,7 @@ public sealed class StationTests
     [Fact]
     public async Task The_station_dies_by_dose_before_breakthrough_and_the_ground_goes_blind()
     {
-        var text = Text(ScenarioName);
-        var scenario = ScenarioLoader.LoadText(text, ScenarioName);
-        var (summary, sink) = await MissionHarness.RunAsync(scenario);
+        var (scenario, summary, sink, _) = await SharedRuns.OfBuiltInAsync(ScenarioName);
 
         // Electronics dose rate, computed from the scenario: 5 Gy/d at the surface; behind 3 cm of ice the electron share
         // 0.9 falls off over 2 cm and the photon share 0.1 over 15.37 cm (loader defaults); silicon takes

@@ -16,7 +16,11 @@ namespace DescentOps.Mission.Tests;
 public sealed class TetherBreakRelaysTests
 {
     private const string Name = "tether-break-relays.yaml";
-    private static readonly Lazy<Task<(MissionSummary Summary, CollectingSink Sink)>> WithRelaysRun = new(() => MissionHarness.RunAsync(Load(BuiltInScenarios.Text(Name))));
+    private static async Task<(MissionSummary Summary, CollectingSink Sink)> WithRelaysAsync()
+    {
+        var run = await SharedRuns.OfBuiltInAsync(Name);
+        return (run.Summary, run.Sink);
+    }
 
     private static Scenario Load(string text) => ScenarioLoader.LoadText(text, Name);
 
@@ -38,7 +42,7 @@ public sealed class TetherBreakRelaysTests
     public async Task Relays_carry_every_frame_home_after_the_break_and_the_ground_rule_acts()
     {
         var scenario = Load(BuiltInScenarios.Text(Name));
-        var (summary, sink) = await WithRelaysRun.Value;
+        var (summary, sink) = await WithRelaysAsync();
 
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
         var broken = sink.OfKind("tether.broken").Single();
@@ -71,7 +75,7 @@ public sealed class TetherBreakRelaysTests
     [Fact]
     public async Task While_the_warm_ice_relay_is_out_the_probe_holds_its_frames_and_sends_them_when_it_returns()
     {
-        var (_, sink) = await WithRelaysRun.Value;
+        var (_, sink) = await WithRelaysAsync();
         var failed = sink.OfKind("relay.failed").Single();
         var down = sink.OfKind("relay.path_down").Single();
         var up = sink.OfKind("relay.path_up").Last();
@@ -96,7 +100,7 @@ public sealed class TetherBreakRelaysTests
     [Fact]
     public async Task Each_relay_reaches_less_far_than_the_one_above_it_as_the_ice_warms()
     {
-        var (_, sink) = await WithRelaysRun.Value;
+        var (_, sink) = await WithRelaysAsync();
         var drops = sink.OfKind("relay.dropped").ToList();
         Assert.Equal(5, drops.Count); // 4 planned (every 500 m above 2500 m) and 1 by the on-board rule
         for (var i = 1; i < drops.Count; i++)
@@ -111,7 +115,7 @@ public sealed class TetherBreakRelaysTests
     [Fact]
     public async Task Without_relays_the_same_break_leaves_the_ground_blind_loses_frames_and_the_ground_rule_never_acts()
     {
-        var (withRelays, withSink) = await WithRelaysRun.Value;
+        var (withRelays, withSink) = await WithRelaysAsync();
         var (summary, sink) = await MissionHarness.RunAsync(Load(WithoutRelays()));
 
         var broken = sink.OfKind("tether.broken").Single();

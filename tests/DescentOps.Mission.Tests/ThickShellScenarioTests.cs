@@ -1,8 +1,6 @@
 using DescentOps.Engine.Running;
 using DescentOps.Physics.Seawater;
-using DescentOps.Scenarios;
 using DescentOps.Scenarios.Envelope;
-using DescentOps.Scenarios.Loading;
 
 namespace DescentOps.Mission.Tests;
 
@@ -16,10 +14,9 @@ public sealed class ThickShellScenarioTests
     [Fact]
     public async Task The_thick_shell_runs_to_completion_with_its_vehicles_in_the_cold_high_pressure_ocean()
     {
-        var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text("thick-shell-deep-ocean.yaml"), "thick-shell-deep-ocean.yaml");
+        var (scenario, summary, sink, _) = await SharedRuns.OfBuiltInAsync("thick-shell-deep-ocean.yaml");
         Assert.True(scenario.Shell.ThicknessM >= 20_000);
 
-        var (summary, sink) = await MissionHarness.RunAsync(scenario);
 
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
         Assert.Equal(0, summary.ComponentFailures);

@@ -2,7 +2,6 @@ using DescentOps.Engine.Running;
 using DescentOps.Physics.Acoustics;
 using DescentOps.Physics.Ocean;
 using DescentOps.Records;
-using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
 using DescentOps.Tests.Shared;
 
@@ -28,7 +27,7 @@ public sealed class VehicleScenarioTests
     [Fact]
     public async Task A_vehicle_drifts_out_of_acoustic_range_keeps_its_data_and_delivers_it_when_back()
     {
-        var (summary, sink) = await RunAsync(BuiltInScenarios.Text(Drift), Drift);
+        var (_, summary, sink, _) = await SharedRuns.OfBuiltInAsync(Drift);
 
         Assert.Equal(RunOutcomeKind.Completed, summary.Outcome.Kind);
         var link = sink.OfKind("vehicle.acoustic_link").Single();
@@ -62,7 +61,7 @@ public sealed class VehicleScenarioTests
     [Fact]
     public async Task The_link_budget_in_the_log_is_the_Francois_Garrison_absorption_at_the_scenario_values()
     {
-        var (_, sink) = await RunAsync(BuiltInScenarios.Text(Drift), Drift);
+        var (_, _, sink, _) = await SharedRuns.OfBuiltInAsync(Drift);
         var link = sink.OfKind("vehicle.acoustic_link").Single();
 
         // Computed here from the scenario's values: 34 g/kg read as reference salinity (S_P = 34·35/35.16504),
@@ -85,7 +84,7 @@ public sealed class VehicleScenarioTests
     [Fact]
     public async Task A_vehicle_that_cannot_make_headway_against_the_current_is_lost_to_a_flat_battery()
     {
-        var (summary, sink) = await RunAsync(BuiltInScenarios.Text(Flat), Flat);
+        var (_, summary, sink, _) = await SharedRuns.OfBuiltInAsync(Flat);
 
         var lost = sink.OfKind("vehicle.lost").Single();
         Assert.Equal("vehicle-wisp-2", lost.Source.Name);
@@ -124,7 +123,7 @@ public sealed class VehicleScenarioTests
     {
         foreach (var name in new[] { Drift, Flat })
         {
-            var (_, sink) = await RunAsync(BuiltInScenarios.Text(name), name);
+            var (_, _, sink, _) = await SharedRuns.OfBuiltInAsync(name);
             var accounts = sink.OfKind("vehicle.energy").ToList();
             Assert.NotEmpty(accounts);
             foreach (var account in accounts)
@@ -139,7 +138,7 @@ public sealed class VehicleScenarioTests
     [Fact]
     public async Task Vehicles_without_the_new_fields_write_only_the_original_records()
     {
-        var (_, sink) = await MissionHarness.RunAsync(BuiltInScenarios.Default());
+        var (_, _, sink, _) = await SharedRuns.OfDefaultAsync();
         var kinds = sink.Records.Where(r => r.Source.Name.StartsWith("vehicle-", StringComparison.Ordinal)).Select(r => r.Kind).ToHashSet();
         Assert.Equal(["vehicle.profile", "vehicle.released", "vehicle.task_complete"], kinds.Order(StringComparer.Ordinal));
     }

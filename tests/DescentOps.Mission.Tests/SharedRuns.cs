@@ -1,0 +1,58 @@
+using System.Collections.Concurrent;
+using DescentOps.Cli.Commands;
+using DescentOps.Cli.Running;
+using DescentOps.Journal;
+using DescentOps.Mission.Running;
+using DescentOps.Scenarios;
+using DescentOps.Scenarios.Loading;
+using DescentOps.Scenarios.Model;
+
+namespace DescentOps.Mission.Tests;
+
+/// <summary>
+/// Whole runs of unchanged built-in scenarios, each made once per test process and shared by the tests that only read
+/// it: its journal bytes exactly as <c>descentops run</c> writes them, its records and its summary. Sharing is sound
+/// because the same binary, scenario, seed and kernel give the same bytes, which <see cref="DeterminismTests"/> and
+/// <see cref="GoldenLogTests"/> check with runs of their own. A test that changes a scenario runs it itself.
+/// </summary>
+internal static class SharedRuns
+{
+    private static readonly ConcurrentDictionary<(string Name, long? Seed, KernelChoice Kernel), Lazy<Task<SharedRun>>> Runs = new();
+
+    /// <summary>The built-in scenario <paramref name="name"/> (e.g. <c>default.yaml</c>), loaded as the command line loads it, run to its own limit.</summary>
+    public static Task<SharedRun> OfBuiltInAsync(string name, KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
+        Runs.GetOrAdd((name, seed, kernel), key => new Lazy<Task<SharedRun>>(() => RunAsync(key.Name, key.Seed, key.Kernel))).Value;
+
+    /// <summary>The built-in default scenario's shared run.</summary>
+    public static Task<SharedRun> OfDefaultAsync(KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
+        OfBuiltInAsync(BuiltInScenarios.DefaultName, kernel, seed);
+
+    private static async Task<SharedRun> RunAsync(string name, long? seed, KernelChoice kernel)
+    {
+        var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(name), "builtin:" + name);
+        var manifest = RunCommand.ManifestFor(scenario, seed ?? scenario.Run.Seed, scenario.Run.UntilS);
+        var sink = new CollectingSink();
+        using var stream = new MemoryStream();
+        MissionSummary summary;
+        using (var writer = JournalWriter.Create(stream, manifest))
+        {
+            summary = await JournaledRun.RunAsync(scenario, manifest, writer, kernel, observer: sink);
+        }
+
+        return new SharedRun(scenario, summary, sink, stream.ToArray());
+    }
+}
+
+/// <summary>One shared run: read it, never change it (<see cref="JournalCopy"/> gives bytes of one's own).</summary>
+internal sealed record SharedRun(Scenario Scenario, MissionSummary Summary, CollectingSink Sink, byte[] Journal)
+{
+    public byte[] JournalCopy() => [.. Journal];
+
+    /// <summary>The journal written to a new file in a temporary folder that cleans up; its path.</summary>
+    public async Task<string> WriteLogAsync(string fileName = "run.jsonl")
+    {
+        var path = Path.Combine(ToolProcess.NewTempDirectory(), fileName);
+        await File.WriteAllBytesAsync(path, Journal);
+        return path;
+    }
+}
