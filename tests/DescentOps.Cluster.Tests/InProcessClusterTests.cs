@@ -15,22 +15,29 @@ public sealed class InProcessClusterTests
     public async Task A_clustered_campaign_gives_the_local_campaigns_summary_and_tables()
     {
         var local = ClusterFixture.TempDir();
-        var clustered = ClusterFixture.TempDir();
         var common = new[] { "campaign", ClusterFixture.Scenario, "--runs", "6", "--seed", "11", "--versus", ClusterFixture.NoBoost };
         var (exit, _, stderr) = await ClusterFixture.CliAsync([.. common, "--jobs", "2", "--output", local]);
         Assert.True(exit == 0, stderr);
 
-        var port = ClusterFixture.FreePort();
-        await using var a = new ClusterFixture.Worker(port);
-        await using var b = new ClusterFixture.Worker(port, slots: 2);
-        var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
-        Assert.True(clusterExit == 0, stdout + clusterErr);
+        // A loaded machine can hold one worker's join back until the other has done every run; that attempt cannot show
+        // both joins, so it is made again (at most three times); every check applies to the attempt that counts.
+        for (var attempt = 1; ; attempt++)
+        {
+            var clustered = ClusterFixture.TempDir();
+            var port = ClusterFixture.FreePort();
+            await using var b = new ClusterFixture.Worker(port, slots: 2); // the one whose join line is checked starts first
+            await using var a = new ClusterFixture.Worker(port);
+            var (clusterExit, stdout, clusterErr) = await ClusterFixture.CliAsync([.. common, "--cluster", "--akka-config", ClusterFixture.PatientAkkaFile(), "--listen", $"127.0.0.1:{port}", "--jobs", "0", "--output", clustered]).WaitAsync(ClusterFixture.Guard);
+            Assert.True(clusterExit == 0, stdout + clusterErr);
+            if (!(a.Welcomed && b.Welcomed) && attempt < 3) continue;
 
-        Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
-        Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
-        Assert.Equal(12, a.Counters.RunsDone + b.Counters.RunsDone); // --jobs 0: the campaign node ran none itself
-        Assert.Contains("joined with 2 slot(s)", stdout, StringComparison.Ordinal);
-        Assert.Contains($"listening on 127.0.0.1:{port}", stdout, StringComparison.Ordinal);
+            Assert.Equal(File.ReadAllText(Path.Combine(local, "summary.json")), File.ReadAllText(Path.Combine(clustered, "summary.json")));
+            Assert.Equal(ClusterFixture.Dump(local), ClusterFixture.Dump(clustered));
+            Assert.Equal(12, a.Counters.RunsDone + b.Counters.RunsDone); // --jobs 0: the campaign node ran none itself
+            Assert.Contains("joined with 2 slot(s)", stdout, StringComparison.Ordinal);
+            Assert.Contains($"listening on 127.0.0.1:{port}", stdout, StringComparison.Ordinal);
+            break;
+        }
     }
 
     [Fact]
