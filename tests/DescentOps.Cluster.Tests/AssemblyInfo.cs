@@ -1,4 +1,6 @@
 using Xunit;
 
-// Clusters and processes compete for two cores; one test at a time keeps each one's run short and its guards far away.
-[assembly: CollectionBehavior(DisableTestParallelization = true)]
+// Two test collections at a time: the campaign-node-and-workers processes (ProcessClusterTests), which mostly wait on
+// real failure detectors, beside the clusters made in this process (InProcessClusterCollection), one of each at a time
+// so that each keeps its runs short and its guards far away. The pure tests fill in.
+[assembly: CollectionBehavior(MaxParallelThreads = 2)]

@@ -9,6 +9,7 @@ using Xunit;
 namespace DescentOps.Cluster.Tests;
 
 /// <summary>Clusters of several actor systems in this process, on loopback; every wait has a hang guard.</summary>
+[Collection(InProcessClusterCollection.Name)]
 public sealed class InProcessClusterTests
 {
     [Fact]

@@ -6,6 +6,7 @@ using Xunit;
 namespace DescentOps.Cluster.Tests;
 
 /// <summary>The README's transport security, exercised: Akka.Remote's TLS settings given through <c>--akka-config</c>.</summary>
+[Collection(InProcessClusterCollection.Name)]
 public sealed class TlsClusterTests
 {
     [Fact]
