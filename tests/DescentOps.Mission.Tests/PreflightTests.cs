@@ -10,6 +10,7 @@ namespace DescentOps.Mission.Tests;
 /// almost certainly a mistake is a warning. Each case below ran to "internal error" (exit 1) or a failed component
 /// (exit 5) before the preflight, and passed <c>check</c>.
 /// </summary>
+[Collection(Cli.InProcessCliCollection.Name)] // the command line in process, with the console captured
 public sealed class PreflightTests
 {
     private static string DefaultWith(string line, string replacement)
@@ -72,10 +73,10 @@ public sealed class PreflightTests
     {
         var folder = ToolProcess.NewTempDirectory();
         await File.WriteAllTextAsync(Path.Combine(folder, "warm.yaml"), DefaultWith("surface_temperature: 132 K", "surface_temperature: 273.15 K"));
-        var (checkExit, checkOut, _) = await ToolProcess.RunAsync(folder, "check", "warm.yaml");
+        var (checkExit, checkOut, _) = await InProcessTool.RunAsync(folder, "check", "warm.yaml");
         Assert.Equal(3, checkExit); // ExitCode.InvalidInput
         Assert.Contains("field 'shell.surface_temperature'", checkOut, StringComparison.Ordinal);
-        var (runExit, _, runErr) = await ToolProcess.RunAsync(folder, "run", "warm.yaml", "--log", "out/warm.jsonl");
+        var (runExit, _, runErr) = await InProcessTool.RunAsync(folder, "run", "warm.yaml", "--log", "out/warm.jsonl");
         Assert.Equal(3, runExit);
         Assert.Contains("field 'shell.surface_temperature'", runErr, StringComparison.Ordinal);
         Assert.False(Directory.Exists(Path.Combine(folder, "out")));
@@ -88,13 +89,13 @@ public sealed class PreflightTests
         var folder = ToolProcess.NewTempDirectory();
         var text = DefaultWith("telemetry_interval: 10 min", "telemetry_interval: 1 s").Replace("until: 400 d", "until: 365000 d", StringComparison.Ordinal);
         await File.WriteAllTextAsync(Path.Combine(folder, "endless.yaml"), text);
-        var (exit, _, stderr) = await ToolProcess.RunAsync(folder, "run", "endless.yaml", "--log", "out/endless.jsonl");
+        var (exit, _, stderr) = await InProcessTool.RunAsync(folder, "run", "endless.yaml", "--log", "out/endless.jsonl");
         Assert.Equal(2, exit); // ExitCode.UsageError: the remedy is an option
         Assert.Contains("--no-log-limit", stderr, StringComparison.Ordinal);
         Assert.Contains("TB", stderr, StringComparison.Ordinal);
         Assert.False(Directory.Exists(Path.Combine(folder, "out")));
 
-        var (checkExit, checkOut, _) = await ToolProcess.RunAsync(folder, "check", "endless.yaml");
+        var (checkExit, checkOut, _) = await InProcessTool.RunAsync(folder, "check", "endless.yaml");
         Assert.Equal(0, checkExit);
         Assert.Contains("field 'run.until': the log may grow to 22.1 TB", checkOut, StringComparison.Ordinal);
     }
@@ -108,7 +109,7 @@ public sealed class PreflightTests
     public async Task A_number_that_could_be_misread_on_the_command_line_is_a_usage_error_naming_the_option(string command, string option, string value, string words)
     {
         var arguments = command.Split(' ').Concat([option, value]).ToArray();
-        var (exit, _, stderr) = await ToolProcess.RunAsync(ToolProcess.NewTempDirectory(), arguments);
+        var (exit, _, stderr) = await InProcessTool.RunAsync(ToolProcess.NewTempDirectory(), arguments);
         Assert.Equal(2, exit); // ExitCode.UsageError
         Assert.Contains(option + ":", stderr, StringComparison.Ordinal);
         Assert.Contains(words, stderr, StringComparison.Ordinal);
