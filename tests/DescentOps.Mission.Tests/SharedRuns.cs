@@ -5,7 +5,6 @@ using DescentOps.Journal;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
-using DescentOps.Scenarios.Model;
 
 namespace DescentOps.Mission.Tests;
 
@@ -40,19 +39,5 @@ internal static class SharedRuns
         }
 
         return new SharedRun(scenario, summary, sink, stream.ToArray());
-    }
-}
-
-/// <summary>One shared run: read it, never change it (<see cref="JournalCopy"/> gives bytes of one's own).</summary>
-internal sealed record SharedRun(Scenario Scenario, MissionSummary Summary, CollectingSink Sink, byte[] Journal)
-{
-    public byte[] JournalCopy() => [.. Journal];
-
-    /// <summary>The journal written to a new file in a temporary folder that cleans up; its path.</summary>
-    public async Task<string> WriteLogAsync(string fileName = "run.jsonl")
-    {
-        var path = Path.Combine(ToolProcess.NewTempDirectory(), fileName);
-        await File.WriteAllBytesAsync(path, Journal);
-        return path;
     }
 }
