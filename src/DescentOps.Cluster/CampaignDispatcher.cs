@@ -188,7 +188,7 @@ public sealed class CampaignDispatcher : ReceiveActor
         foreach (var (worker, key) in _ledger.Dispatch())
         {
             _byId[worker].Tell(new Assign(key.Variant, key.Index, _setup.Plan.Spec(key.Variant, key.Index).Seed));
-            _log.Info("run {0} of {1} assigned to worker {2}", key.Index, key.Variant, worker); // shown with --verbose
+            if (_log.IsInfoEnabled) _log.Info("run {0} of {1} assigned to worker {2}", key.Index, key.Variant, worker); // with --verbose
         }
 
         if (_ledger.Finished && _finished.TrySetResult())

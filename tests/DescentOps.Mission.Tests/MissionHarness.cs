@@ -33,14 +33,21 @@ internal static class MissionHarness
     }
 
     /// <summary>The complete journal bytes of a run, exactly as <c>descentops run</c> writes them.</summary>
-    public static async Task<byte[]> JournalBytesAsync(Scenario scenario, long seed, KernelChoice kernel)
+    public static async Task<byte[]> JournalBytesAsync(Scenario scenario, long seed, KernelChoice kernel) =>
+        (await RecordAsync(scenario, seed, kernel)).Journal;
+
+    /// <summary>A whole run as <c>descentops run</c> makes it, to its limit: journal bytes, records and summary at once.</summary>
+    public static async Task<RecordedRun> RecordAsync(Scenario scenario, long seed, KernelChoice kernel)
     {
+        var manifest = RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS);
+        var sink = new CollectingSink();
         using var stream = new MemoryStream();
-        using (var writer = JournalWriter.Create(stream, RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS)))
+        MissionSummary summary;
+        using (var writer = JournalWriter.Create(stream, manifest))
         {
-            await JournaledRun.RunAsync(scenario, RunCommand.ManifestFor(scenario, seed, scenario.Run.UntilS), writer, kernel);
+            summary = await JournaledRun.RunAsync(scenario, manifest, writer, kernel, observer: sink);
         }
 
-        return stream.ToArray();
+        return new RecordedRun(scenario, summary, sink, stream.ToArray());
     }
 }

@@ -1,7 +1,4 @@
 using System.Collections.Concurrent;
-using DescentOps.Cli.Commands;
-using DescentOps.Cli.Running;
-using DescentOps.Journal;
 using DescentOps.Mission.Running;
 using DescentOps.Scenarios;
 using DescentOps.Scenarios.Loading;
@@ -16,28 +13,19 @@ namespace DescentOps.Mission.Tests;
 /// </summary>
 internal static class SharedRuns
 {
-    private static readonly ConcurrentDictionary<(string Name, long? Seed, KernelChoice Kernel), Lazy<Task<SharedRun>>> Runs = new();
+    private static readonly ConcurrentDictionary<(string Name, long? Seed, KernelChoice Kernel), Lazy<Task<RecordedRun>>> Runs = new();
 
     /// <summary>The built-in scenario <paramref name="name"/> (e.g. <c>default.yaml</c>), loaded as the command line loads it, run to its own limit.</summary>
-    public static Task<SharedRun> OfBuiltInAsync(string name, KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
-        Runs.GetOrAdd((name, seed, kernel), key => new Lazy<Task<SharedRun>>(() => RunAsync(key.Name, key.Seed, key.Kernel))).Value;
+    public static Task<RecordedRun> OfBuiltInAsync(string name, KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
+        Runs.GetOrAdd((name, seed, kernel), key => new Lazy<Task<RecordedRun>>(() => RunAsync(key.Name, key.Seed, key.Kernel))).Value;
 
     /// <summary>The built-in default scenario's shared run.</summary>
-    public static Task<SharedRun> OfDefaultAsync(KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
+    public static Task<RecordedRun> OfDefaultAsync(KernelChoice kernel = KernelChoice.Sequential, long? seed = null) =>
         OfBuiltInAsync(BuiltInScenarios.DefaultName, kernel, seed);
 
-    private static async Task<SharedRun> RunAsync(string name, long? seed, KernelChoice kernel)
+    private static Task<RecordedRun> RunAsync(string name, long? seed, KernelChoice kernel)
     {
         var scenario = ScenarioLoader.LoadText(BuiltInScenarios.Text(name), "builtin:" + name);
-        var manifest = RunCommand.ManifestFor(scenario, seed ?? scenario.Run.Seed, scenario.Run.UntilS);
-        var sink = new CollectingSink();
-        using var stream = new MemoryStream();
-        MissionSummary summary;
-        using (var writer = JournalWriter.Create(stream, manifest))
-        {
-            summary = await JournaledRun.RunAsync(scenario, manifest, writer, kernel, observer: sink);
-        }
-
-        return new SharedRun(scenario, summary, sink, stream.ToArray());
+        return MissionHarness.RecordAsync(scenario, seed ?? scenario.Run.Seed, kernel);
     }
 }
