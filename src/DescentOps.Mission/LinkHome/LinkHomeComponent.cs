@@ -24,7 +24,9 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
     /// <summary>Whether the mission desk hears every frame too (the scenario has mission rules).</summary>
     private readonly bool _desk;
 
-    public LinkHomeComponent(Scenario scenario)
+    /// <param name="scenario">A scenario with landers and its shared link.</param>
+    /// <param name="missionDesk">Whether the run has a mission desk (mission rules that compiled to at least one rule), which gets every lander's frames.</param>
+    public LinkHomeComponent(Scenario scenario, bool missionDesk)
         : base(MissionIds.LinkHome, FailurePolicy.AbortRun)
     {
         var link = scenario.LinkHome ?? throw new ArgumentException("A shared link home belongs to a scenario with landers.", nameof(scenario));
@@ -32,7 +34,7 @@ public sealed class LinkHomeComponent : SimComponent<LinkHomeState>
         _scheduler = new LinkScheduler(specs, link.Channels, link.Policy, link.Priority, link.Policy == LinkPolicy.ContactPlan ? new ContactPlan(link.Windows, link.RepeatS) : null);
         _ids = scenario.Landers.ToDictionary(l => l.Name, l => LanderIds.For(l.Name), StringComparer.Ordinal);
         _lightTime = SimDuration.FromSeconds(LightTime.OneWayS(scenario.Body.DistanceToGroundM));
-        _desk = !scenario.MissionRules.IsEmpty;
+        _desk = missionDesk;
     }
 
     public override LinkHomeState InitialState => _scheduler.Start();

@@ -21,11 +21,12 @@ public static class MissionAssembly
     {
         if (scenario.Landers.Count == 0) return Lander(scenario, rules, LanderIds.Single);
         var desk = MissionDeskRules.Compile(scenario);
+        var hasDesk = desk.Rules.Count > 0; // a section of comments alone compiles to no rule, and then there is no desk to feed
         return
         [
             .. scenario.Landers.SelectMany(l => Lander(l.View, MissionRules.Compile(l.View), LanderIds.For(l.Name))),
-            new LinkHome.LinkHomeComponent(scenario),
-            .. desk.Rules.Count == 0 ? Array.Empty<ISimComponent>() : [new MissionDeskComponent(desk)],
+            new LinkHome.LinkHomeComponent(scenario, hasDesk),
+            .. hasDesk ? [new MissionDeskComponent(desk)] : Array.Empty<ISimComponent>(),
         ];
     }
 

@@ -29,6 +29,19 @@ public sealed class MissionRulesTests
     private static string Lander(JournalRecord r) => CollectingSink.TextField(r, "lander");
 
     [Fact]
+    public async Task A_mission_rules_section_of_comments_alone_runs_without_a_desk()
+    {
+        // It parses to no rule, so there is no mission desk; before, the shared link still sent it every frame and the
+        // run stopped on "sent LanderFrame to unknown component".
+        var loaded = TestScenario.BuiltIn(Name).AddSection("mission_rules: |\n  # the mission's own rules come later\n").Load();
+        var (summary, sink) = await MissionHarness.RunAsync(loaded with { Run = loaded.Run with { UntilS = 6 * Hour } });
+
+        Assert.Equal(0, summary.ComponentFailures);
+        Assert.NotEmpty(sink.OfKind(GroundRecords.Telemetry));
+        Assert.DoesNotContain(sink.Records, r => r.Source.Name == "mission-desk");
+    }
+
+    [Fact]
     public async Task A_comparing_rule_fires_when_the_frame_that_makes_the_difference_reaches_the_ground_and_its_command_goes_to_the_named_lander()
     {
         var loaded = TestScenario.BuiltIn(Name).AddSection(Comparing).Load();
