@@ -74,5 +74,11 @@ public sealed class CampaignCoverageTests
             var silent = run.RulesActed.Where(r => !r.Acted).Select(r => r.Rule).ToList();
             Assert.Contains($"{2 - silent.Count} of 2 rules acted{(silent.Count == 0 ? "" : $"; never acted: {string.Join(", ", silent)}")}", printed, StringComparison.Ordinal);
         }
+
+        // The firing counts and the report's coverage table name the same rules as the coverage: every lander's, not the
+        // first lander's alone (before, Fellside Rise's own rule had no row).
+        var variant = JsonNode.Parse(File.ReadAllText(Path.Combine(dir, "summary.json")))!["variants"]![0]!;
+        Assert.Equal(["slow-descent-watch", "fell-stall-watch"], variant["rules_fired_in_runs"]!.AsObject().Select(p => p.Key));
+        Assert.Equal(["slow-descent-watch", "fell-stall-watch"], variant["rules_acted_in_runs"]!.AsObject().Select(p => p.Key));
     }
 }

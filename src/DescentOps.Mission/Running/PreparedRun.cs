@@ -16,6 +16,7 @@ public sealed class PreparedRun
         Scenario = scenario;
         Rules = rules;
         Inputs = inputs;
+        RuleNames = scenario.Landers.Count == 0 ? [.. rules.Rules.Select(r => r.Name)] : CoveredRules(scenario);
     }
 
     /// <summary>The scenario with this seed's drawn values written in.</summary>
@@ -24,6 +25,9 @@ public sealed class PreparedRun
     public CompiledRuleSet Rules { get; }
 
     public IReadOnlyList<DrawnInput> Inputs { get; }
+
+    /// <summary>Every rule of the run, each name once (<see cref="CoveredRules"/>): the sink's coverage and the summary's rule names both.</summary>
+    public IReadOnlyList<string> RuleNames { get; }
 
     public static PreparedRun For(Scenario scenario, long seed)
     {
@@ -38,7 +42,7 @@ public sealed class PreparedRun
         var detectedBy = Scenario.Faults.Where(f => f.DetectedBy.Count > 0).GroupBy(f => f.Name).ToDictionary(g => g.Key, g => g.First().DetectedBy, StringComparer.Ordinal);
         var summary = new MissionSummarySink(Scenario.Landers.Count > 0 ? new LanderTagSink(journal) : journal, new FaultMeasures(rulePoints, detectedBy), [.. Scenario.Landers.Select(l => l.Name)])
         {
-            CoveredRules = Scenario.Landers.Count == 0 ? [.. Rules.Rules.Select(r => r.Name)] : CoveredRules(Scenario),
+            CoveredRules = RuleNames,
             CoveredProcedures = CoveredProcedures(Scenario),
         };
         if (Inputs.Count > 0) summary.Write(UncertainDraw.Record(Inputs));
@@ -66,7 +70,7 @@ public sealed class PreparedRun
         var figures = summary with
         {
             Inputs = Inputs,
-            RuleNames = [.. Rules.Rules.Select(r => r.Name)],
+            RuleNames = RuleNames,
             Landers = [.. summary.Landers.Select(l => l with { FaultsUnrecovered = Unrecovered(summary, l.Lander) })],
         };
         var completed = summary.Outcome.Kind == Engine.Running.RunOutcomeKind.Completed;
