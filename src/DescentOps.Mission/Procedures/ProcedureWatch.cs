@@ -16,11 +16,13 @@ public sealed class ProcedureWatch : IDisposable
     private readonly RuleEvaluator _evaluator;
     private readonly List<RuleOutput> _outputs = [];
     private readonly Dictionary<string, TelemetrySample> _lastSeen = new(StringComparer.Ordinal);
+    private readonly HashSet<string> _checkPoints;
     private bool _checkHolds;
 
     public ProcedureWatch(CompiledStep step)
     {
         _step = step;
+        _checkPoints = new HashSet<string>(step.Expect?.Condition.Points ?? [], StringComparer.Ordinal); // listed once, read on every frame
         CompiledRule[] rules = [.. new[] { step.WaitFor, step.Expect }.OfType<CompiledRule>()];
         _evaluator = new RuleEvaluator(new CompiledRuleSet(null, rules, []), new RuleScheduler());
         _evaluator.Outputs.Subscribe(_outputs.Add);
@@ -42,7 +44,7 @@ public sealed class ProcedureWatch : IDisposable
         _outputs.Clear();
         // Without a wait, the check is judged on the first frame that carries what it reads (not, say, on the station's
         // status alone, which the ground gives between frames).
-        var ended = _step.WaitFor is null ? samples.Any(s => _step.Expect!.Condition.Points.Contains(s.Point, StringComparer.Ordinal)) : waitEvidence is not null;
+        var ended = _step.WaitFor is null ? samples.Any(s => _checkPoints.Contains(s.Point)) : waitEvidence is not null;
         if (!ended) return (false, false, "");
         var held = _step.Expect is null || _checkHolds;
         IEnumerable<TelemetrySample> evidence = waitEvidence ?? [];

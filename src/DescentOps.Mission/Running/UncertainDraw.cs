@@ -47,20 +47,19 @@ public static class UncertainDraw
         var patched = ScenarioPatch.Apply(scenario.SourceText, [.. values.Select(v => (v.Path, v.Text))]);
         var drawn = ScenarioLoader.LoadText(patched, scenario.SourceName);
         // The text is the scenario as written; a variant or a branch changed the rules, the fault list, the telecommands
-        // and the rule uplinks after loading. Keep those changes: the rules as given, the faults in the given list, each
-        // with its drawn values if it has any.
-        var faults = scenario.Faults.Select(f => drawn.Faults.FirstOrDefault(d => d.Name == f.Name && d.Kind == f.Kind) is { } d ? d : f).ToList();
-        // Telecommands: the text's own (with any drawn times) and those a change added; rule uplinks only come from a change.
-        var added = scenario.Telecommands.Where(t => t.FieldPath.StartsWith("add_telecommands", StringComparison.Ordinal));
-        var telecommands = drawn.Telecommands.Concat(added).OrderBy(t => t.AtS).ToList();
-        // A lander's components are built from its view: keep each view's changes the same way.
+        // and the rule uplinks after loading: those changes are kept (Kept), here and in each lander's view, from which
+        // its components are built.
         var landers = drawn.Landers.Count == scenario.Landers.Count
             ? [.. drawn.Landers.Select((l, k) => l with { View = Kept(scenario.Landers[k].View, l.View) })]
             : drawn.Landers;
-        return (drawn with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Rules = scenario.Rules, Faults = faults, Telecommands = telecommands, RuleUplinks = scenario.RuleUplinks, Landers = landers }, values);
+        return (Kept(scenario, drawn) with { SourceText = scenario.SourceText, Uncertain = scenario.Uncertain, Landers = landers }, values);
     }
 
-    /// <summary>A drawn scenario with what a change did to the given one after loading kept: rules, faults, added telecommands, uplinks.</summary>
+    /// <summary>
+    /// A drawn scenario with what a change did to the given one after loading kept: the rules as given, the faults in the
+    /// given list (each with its drawn values if it has any), the text's telecommands (with any drawn times) and those a
+    /// change added, and the rule uplinks (which only a change gives).
+    /// </summary>
     private static Scenario Kept(Scenario given, Scenario drawn)
     {
         var faults = given.Faults.Select(f => drawn.Faults.FirstOrDefault(d => d.Name == f.Name && d.Kind == f.Kind) is { } d ? d : f).ToList();
